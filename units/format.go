@@ -69,16 +69,21 @@ func (s System) In(v float64, d Dimension) (float64, string) {
 	return v / u.factor, sym
 }
 
-// format writes v (SI base units) in the SI display unit of d, in the
-// shortest decimal form that parses back to the same float64.
+// format writes v (SI base units) in the SI display unit of d.
 func format(v float64, d Dimension) string {
 	x, sym := SI.In(v, d)
 	return formatNumber(x) + " " + sym
 }
 
-// formatNumber writes x in the shortest form that round-trips, in fixed
-// notation for ordinary magnitudes.
+// formatNumber writes x rounded to 13 significant digits (so that
+// 52.5 ft reads "16.002 m", not "16.002000000000002 m"), in fixed notation
+// for ordinary magnitudes. Rounding to 13 digits keeps the relative error
+// of a round trip through Parse below 5e-13.
 func formatNumber(x float64) string {
+	r, err := strconv.ParseFloat(strconv.FormatFloat(x, 'g', 13, 64), 64)
+	if err == nil {
+		x = r
+	}
 	a := math.Abs(x)
 	if a == 0 || (a >= 1e-4 && a < 1e15) {
 		return strconv.FormatFloat(x, 'f', -1, 64)

@@ -1,0 +1,32 @@
+// Package qult is a module of reference-checked routines for the axial
+// design of single piles and drilled shafts.
+//
+// A foundation engineer starts from a borehole log (layers, groundwater,
+// strength and stiffness) and a column load, and must end with a pile type,
+// diameter and length that survive review: tip and shaft resistance layer by
+// layer under effective stress, several accepted methods compared, a design
+// basis applied, and every number traceable to an input, an equation and a
+// published source. The packages, from the lowest floor up (an import only
+// points down):
+//
+//	units    typed quantities in SI base units; SI and US customary parsing and display
+//	cite     published sources as data
+//	phase    three-phase relations of one soil element
+//	bearing  tip resistance: bearing-capacity factors and unit tip resistance
+//	shaft    unit shaft resistance: β, α and λ methods, with limits
+//	profile  the ground: layers, groundwater, total and effective vertical stress
+//
+// # Units
+//
+// Every quantity is a typed float64 in an SI base unit (m, m², m³, Pa, N,
+// N/m, N/m³, rad). Conversion happens only at the edges: build quantities
+// by multiplying a number by a unit constant (600*units.Millimetre), read
+// them with accessors (q.KPa(), l.Feet()), and parse text with units.Parse.
+//
+// # Cautions
+//
+// qult is for qualified engineers. Its results must be checked against the
+// local codes of practice, the site investigation and load tests; the
+// methods it implements carry the limitations stated in their sources. It is
+// not a substitute for the judgement of a licensed professional engineer.
+package qult
