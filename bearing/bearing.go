@@ -150,10 +150,14 @@ func rangeErr(method, field string, v float64, unit, rng string) error {
 
 func finite(x float64) bool { return !math.IsNaN(x) && !math.IsInf(x, 0) }
 
+// degEps absorbs the round-off of converting degrees to radians and back,
+// so that a range edge such as 20 deg is inside the range.
+const degEps = 1e-9
+
 // checkPhi checks lo ≤ φ′ ≤ hi (degrees).
 func checkPhi(id string, phi units.Angle, lo, hi float64) error {
 	d := phi.Degrees()
-	if !finite(d) || d < lo || d > hi {
+	if !finite(d) || d < lo-degEps || d > hi+degEps {
 		return rangeErr(id, "phi", d, "deg", num(lo)+" to "+num(hi)+" deg")
 	}
 	return nil

@@ -95,7 +95,7 @@ func (b Berezantzev) Nq(phi units.Angle, ld float64, clamp bool) (nq float64, cl
 	if !finite(d) {
 		return 0, false, rangeErr(b.ID(), "phi", d, "deg", "23 to 39 deg")
 	}
-	if d < 23 || d > 39 {
+	if d < 23-degEps || d > 39+degEps {
 		if !clamp {
 			return 0, false, rangeErr(b.ID(), "phi", d, "deg", "23 to 39 deg (Berezantzev chart); set Clamp to read at the edge")
 		}

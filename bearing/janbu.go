@@ -41,7 +41,7 @@ func (j Janbu) eta() (units.Angle, error) {
 		return 90 * units.Degree, nil
 	}
 	d := j.Eta.Degrees()
-	if !finite(d) || d < 60 || d > 105 {
+	if !finite(d) || d < 60-degEps || d > 105+degEps {
 		return 0, rangeErr(j.ID(), "eta", d, "deg", "60 to 105 deg (0 for 90 deg)")
 	}
 	return j.Eta, nil

@@ -85,7 +85,7 @@ func (m Meyerhof) NqStar(phi units.Angle, clamp bool) (nq float64, clamped bool,
 	if !finite(d) {
 		return 0, false, rangeErr(m.ID(), "phi", d, "deg", "20 to 45 deg")
 	}
-	if d < 20 || d > 45 {
+	if d < 20-degEps || d > 45+degEps {
 		if !clamp {
 			return 0, false, rangeErr(m.ID(), "phi", d, "deg", "20 to 45 deg (Meyerhof chart); set Clamp to read at the edge")
 		}

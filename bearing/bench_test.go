@@ -1,0 +1,45 @@
+package bearing
+
+import (
+	"testing"
+
+	"github.com/qultgeo/qult/units"
+)
+
+// BenchmarkTipFactors evaluates every method at one input: a sand of our
+// own invention at a 20 m tip (no published value is checked here).
+func BenchmarkTipFactors(b *testing.B) {
+	in := Input{Phi: deg(34), Q: 180 * units.Kilopascal, C: 2 * units.Kilopascal, Su: 60 * units.Kilopascal,
+		Ir: 90, L: 20, D: 0.6, N60: 30}
+	methods := append(append(Drained(), Undrained()...), Janbu{Eta: deg(75)}, GivenNq{Nq: 50}, GivenNc{Nc: 9})
+	for _, m := range methods {
+		name := m.ID()
+		if j, ok := m.(Janbu); ok && j.Eta != 0 {
+			name += "-eta75"
+		}
+		b.Run(name, func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, err := m.Tip(in); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+	b.Run("compare", func(b *testing.B) {
+		b.ReportAllocs()
+		for b.Loop() {
+			Compare(in)
+		}
+	})
+}
+
+func TestTipAllocatesNothing(t *testing.T) {
+	// Hot-path requirement (DESIGN.md, principle 8; no published value).
+	in := Input{Phi: deg(34), Q: 180 * units.Kilopascal, Su: 60 * units.Kilopascal, Ir: 90, L: 20, D: 0.6, N60: 30}
+	for _, m := range append(append(Drained(), Undrained()...), GivenNq{Nq: 50}, GivenNc{Nc: 9}) {
+		if n := testing.AllocsPerRun(100, func() { _, _ = m.Tip(in) }); n != 0 {
+			t.Errorf("%s: %g allocations per call, want 0", m.ID(), n)
+		}
+	}
+}
