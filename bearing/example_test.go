@@ -1,0 +1,73 @@
+package bearing_test
+
+import (
+	"fmt"
+
+	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/units"
+)
+
+// A bored pile of our own invention ending in dense sand: φ′ = 36°,
+// q′ = 160 kPa at the tip. Meyerhof's limit governs.
+func ExampleMeyerhof_Tip() {
+	in := bearing.Input{Phi: 36 * units.Degree, Q: 160 * units.Kilopascal}
+	r, err := bearing.Meyerhof{}.Tip(in)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Printf("Nq* = %.1f, q′·Nq* = %.0f kPa, limit = %.0f kPa, qp = %.0f kPa (%s)\n",
+		r.Nq, r.Unlimited.KPa(), r.Limit.KPa(), r.Qp.KPa(), r.Flags)
+	// Output:
+	// Nq* = 168.0, q′·Nq* = 26880 kPa, limit = 6103 kPa, qp = 6103 kPa (limit governs)
+}
+
+// Vesic's method needs the rigidity of the sand; here Ir is given and
+// the soil is taken as incompressible (Δ = 0), values of our own.
+func ExampleVesic_Tip() {
+	in := bearing.Input{Phi: 30 * units.Degree, Q: 200 * units.Kilopascal, Ir: 100}
+	r, err := bearing.Vesic{}.Tip(in)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Printf("Irr = %.0f, σ′o = %.1f kPa, Nσ* = %.2f, qp = %.0f kPa\n", r.Irr, r.Sigma.KPa(), r.Nq, r.Qp.KPa())
+	// Output:
+	// Irr = 100, σ′o = 133.3 kPa, Nσ* = 51.02, qp = 6803 kPa
+}
+
+// A chart read outside its range is an error unless the caller opts in.
+func ExampleBerezantzev_Tip() {
+	in := bearing.Input{Phi: 42 * units.Degree, Q: 150 * units.Kilopascal, L: 15, D: 0.5}
+	_, err := bearing.Berezantzev{}.Tip(in)
+	fmt.Println(err)
+	in.Clamp = true
+	r, _ := bearing.Berezantzev{}.Tip(in)
+	fmt.Printf("Nq = %.1f, qp = %.0f kPa (%s)\n", r.Nq, r.Qp.KPa(), r.Flags)
+	// Output:
+	// bearing: berezantzev: phi: 42 deg is outside 23 to 39 deg (Berezantzev chart); set Clamp to read at the edge
+	// Nq = 200.2, qp = 30030 kPa (clamped to chart edge)
+}
+
+// Compare lists every applicable method for one tip, as the factors tool
+// does. The soil and pile are our own example.
+func ExampleCompare() {
+	in := bearing.Input{Phi: 33 * units.Degree, Q: 120 * units.Kilopascal, Ir: 60, L: 16, D: 0.6, N60: 28}
+	for _, row := range bearing.Compare(in) {
+		if row.Err != nil {
+			fmt.Printf("%-15s %v\n", row.ID, row.Err)
+			continue
+		}
+		fmt.Printf("%-15s factor %7.2f  qp %6.0f kPa\n", row.ID, row.Factor, row.Result.Qp.KPa())
+	}
+	// Output:
+	// meyerhof        factor   96.00  qp   3117 kPa
+	// vesic           factor   54.20  qp   4143 kPa
+	// berezantzev     factor   58.69  qp   7043 kPa
+	// janbu           factor   26.09  qp   3131 kPa
+	// api-sand-1      factor   12.00  qp   1440 kPa
+	// api-sand-2      factor   20.00  qp   2400 kPa
+	// api-sand-3      factor   40.00  qp   4800 kPa
+	// api-sand-4      factor   50.00  qp   6000 kPa
+	// shaft-n60-sand  factor    0.00  qp   1609 kPa
+}
