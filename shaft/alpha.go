@@ -133,7 +133,7 @@ func (m AlphaChart) Unit(p Point) (Result, error) {
 		return Result{}, &RangeError{Method: id, Field: "su/pa", Value: r, Min: 0, Max: last, Open: true}
 	}
 	fs := units.Stress(a) * p.Su
-	return Result{Fs: fs, Unlimited: fs, SigmaV: p.SigmaV, Alpha: a, Psi: r, Flags: fl}, nil
+	return Result{Fs: fs, Unlimited: fs, Alpha: a, Psi: r, Flags: fl}, nil
 }
 
 // AlphaDrilled is the α of O'Neill & Reese (1999) for drilled shafts in
@@ -176,7 +176,7 @@ func (m AlphaDrilled) Unit(p Point) (Result, error) {
 		a = 0.55 - 0.1*(r-1.5)
 	}
 	fs := units.Stress(a) * p.Su
-	return Result{Fs: fs, Unlimited: fs, SigmaV: p.SigmaV, Alpha: a, Psi: r}, nil
+	return Result{Fs: fs, Unlimited: fs, Alpha: a, Psi: r}, nil
 }
 
 // AlphaGiven is the α method with α given, 0 to 1.5:
@@ -198,7 +198,7 @@ func (g AlphaGiven) Unit(p Point) (Result, error) {
 		return Result{}, err
 	}
 	fs := units.Stress(g.Alpha) * p.Su
-	return Result{Fs: fs, Unlimited: fs, SigmaV: p.SigmaV, Alpha: g.Alpha}, nil
+	return Result{Fs: fs, Unlimited: fs, Alpha: g.Alpha}, nil
 }
 
 // tpm1996 is the source of the α tabulation reproduced by Das.

@@ -6,7 +6,7 @@ import (
 	"github.com/qultgeo/qult/units"
 )
 
-// benchPoint is an invented point for timing: a clay-over-sand setting with
+// benchPoint is an invented point for timing (no published source needed): a clay-over-sand setting with
 // every field any method reads.
 var benchPoint = Point{SigmaV: 120 * kPa, Depth: 12 * units.Metre, Phi: d(33), OCR: 2,
 	Su: 60 * kPa, Diameter: 600 * units.Millimetre, N60: 12}

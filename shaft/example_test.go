@@ -26,7 +26,7 @@ func ExampleBeta() {
 }
 
 // A driven pipe pile in a firm clay at 14 m depth by the API α method, with a
-// given cap. The numbers are an invented scenario.
+// given cap. The numbers are an invented scenario (no published source).
 func ExampleAlphaAPI() {
 	m := shaft.Capped{Method: shaft.AlphaAPI{}, Limit: shaft.LimitGiven{Fs: 35 * units.Kilopascal}}
 	r, err := m.Unit(shaft.Point{SigmaV: 110 * units.Kilopascal, Su: 55 * units.Kilopascal})
@@ -41,7 +41,7 @@ func ExampleAlphaAPI() {
 }
 
 // The λ method works on a whole embedded length from the mean σ′v and mean
-// su over it. The numbers are an invented scenario.
+// su over it. The numbers are an invented scenario (no published source).
 func ExampleLambda() {
 	r, err := shaft.Lambda{}.Average(25*units.Metre, 120*units.Kilopascal, 60*units.Kilopascal)
 	if err != nil {

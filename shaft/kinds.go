@@ -24,9 +24,10 @@ const (
 	DrivenHighDisplacement                         // driven, high displacement (closed pipe, precast)
 )
 
-var installationIDs = [...]string{"", "jetted", "bored", "driven-low-displacement", "driven-high-displacement"}
+var installationIDs = [...]string{"", "jetted", "bored", "driven-low", "driven-high"}
 
-// String returns our identifier, such as "bored".
+// String returns our identifier: "jetted", "bored", "driven-low" or
+// "driven-high" (the same identifiers as the pile package uses).
 func (i Installation) String() string {
 	if int(i) < len(installationIDs) && i != 0 {
 		return installationIDs[i]

@@ -51,10 +51,14 @@ func (p Point) ocr() float64 {
 	return p.OCR
 }
 
-// pa returns the atmospheric pressure with 0 read as 100 kPa.
+// DefaultPa is the atmospheric pressure used when Point.Pa is zero: 100 kPa,
+// the round value used with the α tabulation and the drilled-shaft α.
+const DefaultPa = 100 * units.Kilopascal
+
+// pa returns the atmospheric pressure with 0 read as DefaultPa.
 func (p Point) pa() units.Stress {
 	if p.Pa == 0 {
-		return 100 * units.Kilopascal
+		return DefaultPa
 	}
 	return p.Pa
 }
@@ -65,7 +69,7 @@ func (p Point) pa() units.Stress {
 type Result struct {
 	Fs         units.Stress // unit shaft resistance, after any limit
 	Unlimited  units.Stress // unit shaft resistance before any limit
-	SigmaV     units.Stress // σ′v used (after any critical-depth hold)
+	SigmaV     units.Stress // σ′v used (after any critical-depth hold); 0 where the method does not read σ′v
 	K          float64      // lateral earth pressure coefficient on the shaft
 	K0         float64      // at-rest coefficient, where K is a ratio of it
 	Kp         float64      // passive coefficient, where K is a ratio of it
