@@ -17,6 +17,9 @@ type Method interface {
 	ID() string
 	// Equation returns the rule on one line, such as "qp = q′·Nq*".
 	Equation() string
+	// Range returns the inputs the method accepts, on one line, such as
+	// "φ′ 20 to 45 deg (chart); q′ ≥ 0".
+	Range() string
 	cite.Cited
 }
 

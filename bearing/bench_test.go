@@ -6,6 +6,8 @@ import (
 	"github.com/qultgeo/qult/units"
 )
 
+// Input values here are our own invention; no published source is checked.
+//
 // BenchmarkTipFactors evaluates every method at one input: a sand of our
 // own invention at a 20 m tip (no published value is checked here).
 func BenchmarkTipFactors(b *testing.B) {

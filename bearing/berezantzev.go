@@ -85,6 +85,11 @@ func (Berezantzev) Refs() []cite.Ref {
 		{Source: cite.TomlinsonWoodward2008, Where: "Berezantzev's Nq chart"}}
 }
 
+// Range returns the inputs Berezantzev accepts.
+func (Berezantzev) Range() string {
+	return "φ′ 23 to 39 deg, L/D ≥ 4 (chart; L/D above 25 reads the 25 row); q′ ≥ 0"
+}
+
 var snip1985 = cite.Source{Key: "snip-2.02.03-85", Authors: "Gosstroy USSR", Year: 1985,
 	Title: "SNiP 2.02.03-85 Pile Foundations", Publication: "Building Norms and Rules, Moscow"}
 

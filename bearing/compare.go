@@ -4,6 +4,7 @@ package bearing
 type Row struct {
 	ID       string  // method identifier
 	Equation string  // the method's equation
+	Range    string  // the inputs the method accepts
 	Factor   float64 // the principal factor: Nq (or Nσ*) for drained methods, Nc for undrained; 0 for SPT
 	Result   Result  // the full result; zero when Err is not nil
 	Err      error   // why the method could not be applied, or nil
@@ -45,7 +46,7 @@ func Compare(in Input) []Row {
 	rows := make([]Row, 0, len(methods))
 	for _, m := range methods {
 		r, err := m.Tip(in)
-		row := Row{ID: m.ID(), Equation: m.Equation(), Result: r, Err: err}
+		row := Row{ID: m.ID(), Equation: m.Equation(), Range: m.Range(), Result: r, Err: err}
 		if err == nil {
 			row.Factor = r.Nq
 			if r.Nq == 0 {

@@ -1,5 +1,8 @@
 package bearing_test
 
+// The soils and piles in these examples are our own invention; no
+// published source is checked here (the reference tests do that).
+
 import (
 	"fmt"
 

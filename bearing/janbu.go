@@ -36,6 +36,9 @@ func (Janbu) Refs() []cite.Ref {
 	return []cite.Ref{{Source: cite.Janbu1976}, {Source: cite.Das2019, Where: "Janbu's method for pile tips"}}
 }
 
+// Range returns the inputs Janbu accepts.
+func (Janbu) Range() string { return "φ′ 0 to 50 deg; η′ 60 to 105 deg; q′, c′ ≥ 0" }
+
 func (j Janbu) eta() (units.Angle, error) {
 	if j.Eta == 0 {
 		return 90 * units.Degree, nil

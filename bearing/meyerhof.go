@@ -75,8 +75,10 @@ func (Meyerhof) Refs() []cite.Ref {
 	return []cite.Ref{{Source: cite.Meyerhof1976, Where: "Fig. 5 and limit Eq."}, {Source: cite.Das2019, Where: "table of interpolated Nq* (pile foundations)"}}
 }
 
-// Range returns the chart's range of φ′.
-func (Meyerhof) Range() (lo, hi units.Angle) { return 20 * units.Degree, 45 * units.Degree }
+// Range returns the inputs Meyerhof accepts.
+func (Meyerhof) Range() string {
+	return "φ′ 20 to 45 deg (chart); q′, c′ ≥ 0; pa 50 to 150 kPa"
+}
 
 // NqStar returns Meyerhof's Nq* at φ′ and whether φ′ was clamped to the
 // chart; outside 20 to 45 deg it is an error unless clamp is true.

@@ -51,6 +51,9 @@ func (APISand) Refs() []cite.Ref {
 	return []cite.Ref{{Source: cite.API2011, Where: "Table 1, design parameters for cohesionless siliceous soil"}}
 }
 
+// Range returns the inputs APISand accepts.
+func (APISand) Range() string { return "class 1 to 4; q′ ≥ 0" }
+
 // Tip returns the API unit tip resistance.
 func (a APISand) Tip(in Input) (Result, error) {
 	if a.Class < 1 || a.Class > 4 {
@@ -87,6 +90,9 @@ func (ShaftSand) Refs() []cite.Ref {
 		{Source: cite.Brown2010, Where: "tip resistance in cohesionless soil"}}
 }
 
+// Range returns the inputs ShaftSand accepts.
+func (ShaftSand) Range() string { return "N60 0 to 200 (limit governs above 50)" }
+
 // Tip returns the unit tip resistance from N60.
 func (s ShaftSand) Tip(in Input) (Result, error) {
 	if !finite(in.N60) || in.N60 < 0 || in.N60 > 200 {
@@ -113,6 +119,9 @@ func (Skempton) Equation() string { return "qp = 9·su" }
 func (Skempton) Refs() []cite.Ref {
 	return []cite.Ref{{Source: cite.Skempton1951, Where: "Nc for deep circular and square bases"}}
 }
+
+// Range returns the inputs Skempton accepts.
+func (Skempton) Range() string { return "su > 0" }
 
 // Tip returns 9·su.
 func (s Skempton) Tip(in Input) (Result, error) {
@@ -143,6 +152,11 @@ func (GivenNq) Equation() string { return "qp = min(c′·Nc + q′·Nq, limit),
 
 // Refs returns no published source: the values are the engineer's.
 func (GivenNq) Refs() []cite.Ref { return nil }
+
+// Range returns the inputs GivenNq accepts.
+func (GivenNq) Range() string {
+	return "Nq 1 to 1e4; Nc 0 to 1e4; limit ≥ 0 (0 none); q′, c′ ≥ 0"
+}
 
 // Tip returns the unit tip resistance from the given factors.
 func (g GivenNq) Tip(in Input) (Result, error) {
@@ -185,6 +199,9 @@ func (GivenNc) Equation() string { return "qp = Nc·su, Nc given" }
 
 // Refs returns no published source: the value is the engineer's.
 func (GivenNc) Refs() []cite.Ref { return nil }
+
+// Range returns the inputs GivenNc accepts.
+func (GivenNc) Range() string { return "Nc 1 to 100; su > 0" }
 
 // Tip returns Nc·su.
 func (g GivenNc) Tip(in Input) (Result, error) {

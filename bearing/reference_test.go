@@ -18,11 +18,17 @@ import (
 //     significant figures).
 //   - Das, B.M. (2019). Principles of Foundation Engineering, interpolated
 //     values of Meyerhof's Nq* (values at 20, 25, …, 45 deg read, as listed
-//     in REFERENCES.md; 1-degree values from memory).
+//     in REFERENCES.md; 1-degree values from memory). The recalled
+//     1-degree values agree, value for value, with an independent
+//     transcription of Das's table ("Tabla 11.5", 7th ed. numbering) found
+//     in a public repository: a secondary check, not the book itself.
 //   - O'Neill & Reese (1999), tip in cohesionless soil, as reproduced in
 //     the OpenBrIM documentation "Drilled Shaft Sand QZ (Reese and
 //     O'Neill)": qu = 0.6·N tsf for N ≤ 50, else 30 tsf (read).
-//   - API RP 2GEO (2011), Table 1 (from memory).
+//   - API RP 2GEO (2011), Table 1 (from memory). The same Nq and q_L by
+//     soil description are given in the documentation of the groundhog
+//     library (Stuyts), function API_unit_end_bearing_sand_rp2geo, a
+//     secondary reproduction that agrees with the values recalled here.
 //   - SNiP 2.02.03-85, Table 6, Berezantzev's α2 and α3 (from memory).
 
 // closedTol is the tolerance on a closed form against a printed value.
@@ -473,8 +479,8 @@ func TestIdentifiersUnique(t *testing.T) {
 			t.Errorf("identifier %q used twice", m.ID())
 		}
 		seen[m.ID()] = true
-		if m.Equation() == "" {
-			t.Errorf("%s: empty equation", m.ID())
+		if m.Equation() == "" || m.Range() == "" {
+			t.Errorf("%s: empty equation or range", m.ID())
 		}
 		if _, given := m.(GivenNq); !given {
 			if _, given := m.(GivenNc); !given && len(m.Refs()) == 0 {

@@ -34,6 +34,11 @@ func (Vesic) Refs() []cite.Ref {
 	return []cite.Ref{{Source: cite.Vesic1977}, {Source: cite.Das2019, Where: "Vesic's method for pile tips"}}
 }
 
+// Range returns the inputs Vesic accepts.
+func (Vesic) Range() string {
+	return "φ′ 0 to 50 deg; q′, c′ ≥ 0; K0 0.1 to 4; Ir 1 to 1e5; Δ 0 to 0.5"
+}
+
 // VesicNsigma returns Vesic's Nσ* for φ′ from 0 to 50 deg and Irr ≥ 1 (see
 // Vesic for the formula). It is 1 at φ′ = 0.
 func VesicNsigma(phi units.Angle, irr float64) (float64, error) {
@@ -159,6 +164,9 @@ func (VesicUndrained) Equation() string {
 func (VesicUndrained) Refs() []cite.Ref {
 	return []cite.Ref{{Source: cite.Vesic1977}, {Source: cite.Das2019, Where: "Vesic's method for pile tips, φ = 0"}}
 }
+
+// Range returns the inputs VesicUndrained accepts.
+func (VesicUndrained) Range() string { return "su > 0; Ir 1 to 1e5; Δ 0 to 0.5" }
 
 // Tip returns Vesic's undrained unit tip resistance.
 func (v VesicUndrained) Tip(in Input) (Result, error) {
