@@ -16,9 +16,9 @@ import (
 //	q_l = 0.5·pa·Nq*·tanφ′            (limiting unit tip resistance)
 //	Nc* = (Nq* − 1)·cotφ′
 //
-// Nq*(φ′) is read from Meyerhof's chart for deep foundations (Meyerhof
-// 1976, Fig. 5) in the 1-degree tabulation of Das (2019), chapter on pile foundations,
-// for φ′ from 20 to 45 deg. Between the tabulated angles, ln Nq* is
+// Nq*(φ′) is read from Meyerhof's (1976) chart of Nq* for deep
+// foundations in the 1-degree tabulation of Das (2019), chapter on pile
+// foundations, for φ′ from 20 to 45 deg. Between the tabulated angles, ln Nq* is
 // interpolated by a monotone cubic (Fritsch-Butland), because Nq* grows
 // roughly exponentially with φ′; the interpolation passes through every
 // tabulated value. Reading tolerance: the tabulation reads the chart to
@@ -72,7 +72,7 @@ func (Meyerhof) Equation() string {
 
 // Refs returns Meyerhof (1976) and Das's tabulation.
 func (Meyerhof) Refs() []cite.Ref {
-	return []cite.Ref{{Source: cite.Meyerhof1976, Where: "Fig. 5 and limit Eq."}, {Source: cite.Das2019, Where: "table of interpolated Nq* (pile foundations)"}}
+	return []cite.Ref{{Source: cite.Meyerhof1976, Where: "Nq* chart for deep foundations; limiting point resistance"}, {Source: cite.Das2019, Where: "table of interpolated Nq* (pile foundations)"}}
 }
 
 // Range returns the inputs Meyerhof accepts.

@@ -48,7 +48,7 @@ func (a APISand) Equation() string { return "qp = min(q′·Nq, q_L), Nq and q_L
 
 // Refs returns API RP 2GEO (2011).
 func (APISand) Refs() []cite.Ref {
-	return []cite.Ref{{Source: cite.API2011, Where: "Table 1, design parameters for cohesionless siliceous soil"}}
+	return []cite.Ref{{Source: cite.API2011, Where: "design parameters for cohesionless siliceous soil"}}
 }
 
 // Range returns the inputs APISand accepts.

@@ -10,7 +10,7 @@ import (
 )
 
 // Property tests. The properties are those of the published methods:
-// bearing-capacity factors grow with φ′ (Meyerhof 1976, Fig. 5; Vesic
+// bearing-capacity factors grow with φ′ (Meyerhof 1976, Nq* chart; Vesic
 // 1977; Janbu 1976; Prandtl-Reissner), Vesic's Nσ* grows with Irr (Vesic
 // 1977), and Berezantzev's Nq does not grow with L/D (Berezantzev et al.
 // 1961, the αT reduction).

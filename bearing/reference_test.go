@@ -14,8 +14,9 @@ import (
 //     Janbu's and Vesic's equations" (read from a reproduction of the table;
 //     two decimals). Bowles's Vesic N′q is Nσ* with the 3/(3 − sinφ′) term.
 //   - Look, B. (2007). Handbook of Geotechnical Investigation and Design
-//     Tables, Taylor & Francis, Table 21.5 (Vesic Nc, Nq, Nγ; read, three
-//     significant figures).
+//     Tables, Taylor & Francis, Table 21.5 (Vesic Nc, Nq, Nγ; read from a
+//     reproduction of the page, three significant figures; the edition
+//     holding that table number is not confirmed).
 //   - Das, B.M. (2019). Principles of Foundation Engineering, interpolated
 //     values of Meyerhof's Nq* (values at 20, 25, …, 45 deg read, as listed
 //     in REFERENCES.md; 1-degree values from memory). The recalled
@@ -25,7 +26,8 @@ import (
 //   - O'Neill & Reese (1999), tip in cohesionless soil, as reproduced in
 //     the OpenBrIM documentation "Drilled Shaft Sand QZ (Reese and
 //     O'Neill)": qu = 0.6·N tsf for N ≤ 50, else 30 tsf (read).
-//   - API RP 2GEO (2011), Table 1 (from memory). The same Nq and q_L by
+//   - API RP 2GEO (2011), table of design parameters for cohesionless
+//     siliceous soil (from memory; table number not confirmed). The same Nq and q_L by
 //     soil description are given in the documentation of the groundhog
 //     library (Stuyts), function API_unit_end_bearing_sand_rp2geo, a
 //     secondary reproduction that agrees with the values recalled here.
@@ -366,7 +368,7 @@ func TestBerezantzevFromMemory(t *testing.T) {
 }
 
 func TestAPISandFromMemory(t *testing.T) {
-	// API RP 2GEO (2011), Table 1 (from memory): Nq 12/20/40/50 and limits
+	// API RP 2GEO (2011), sand table (from memory): Nq 12/20/40/50 and limits
 	// 3/5/10/12 MPa.
 	cases := []struct {
 		class      int
