@@ -491,3 +491,90 @@ func TestIdentifiersUnique(t *testing.T) {
 		}
 	}
 }
+
+func TestBadInputNamesField(t *testing.T) {
+	// Each bad input must come back as a RangeError naming its field
+	// (DESIGN.md, principle 5; the accepted ranges are those documented on
+	// each method, no published value is involved).
+	kPa := units.Kilopascal
+	cases := []struct {
+		m     Tip
+		in    Input
+		field string
+	}{
+		{Meyerhof{}, Input{Phi: deg(30), Q: -1 * kPa}, "q"},
+		{Meyerhof{}, Input{Phi: deg(30), Q: kPa, Pa: 20 * kPa}, "pa"},
+		{Meyerhof{}, Input{Phi: deg(30), Q: kPa, C: units.Stress(math.NaN())}, "c"},
+		{Vesic{}, Input{Phi: deg(30), Q: kPa}, "ir"},
+		{Vesic{}, Input{Phi: deg(30), Q: kPa, Ir: 50, K0: 9}, "k0"},
+		{Vesic{}, Input{Phi: deg(30), Q: kPa, Ir: 50, Delta: 0.9}, "delta"},
+		{Vesic{}, Input{Phi: deg(30), Q: kPa, Ir: 0.5}, "ir"},
+		{Vesic{}, Input{Phi: deg(60), Q: kPa, Ir: 50}, "phi"},
+		{Vesic{}, Input{Phi: deg(30), Q: kPa, G: -1}, "g"},
+		{VesicUndrained{}, Input{Su: 0, Ir: 50}, "su"},
+		{VesicUndrained{}, Input{Su: 50 * kPa, Ir: 1.5, Delta: 0.5}, "irr"},
+		{Janbu{}, Input{Phi: deg(30), Q: units.Stress(math.Inf(1))}, "q"},
+		{Berezantzev{}, Input{Phi: deg(30), Q: kPa}, "l, d"},
+		{ShaftSand{}, Input{N60: -3}, "n60"},
+		{GivenNq{Nq: 20, Nc: -1}, Input{Q: kPa}, "nc"},
+		{GivenNq{Nq: 20, Limit: -1}, Input{Q: kPa}, "limit"},
+		{GivenNc{Nc: 200}, Input{Su: kPa}, "nc"},
+	}
+	for _, c := range cases {
+		_, err := c.m.Tip(c.in)
+		re, ok := err.(*RangeError)
+		if !ok || re.Field != c.field || re.Method != c.m.ID() || re.Range == "" {
+			t.Errorf("%s with %+v: err %v, want a RangeError on %q", c.m.ID(), c.in, err, c.field)
+		}
+	}
+	// Shallow factors and Vesic's factor functions refuse φ′ and Irr out of range.
+	if _, err := PrandtlNq(deg(-1)); err == nil {
+		t.Error("PrandtlNq(−1 deg): want an error")
+	}
+	if _, err := VesicNsigma(deg(30), 0.5); err == nil {
+		t.Error("VesicNsigma(Irr 0.5): want an error")
+	}
+	if _, err := VesicNc(deg(51), 10); err == nil {
+		t.Error("VesicNc(51 deg): want an error")
+	}
+}
+
+func TestCompareRows(t *testing.T) {
+	// Which methods apply (package doc; no published value): drained set
+	// without the SPT method when N60 is 0, undrained set when su > 0.
+	rows := Compare(Input{Phi: deg(30), Q: 100 * units.Kilopascal, Su: 50 * units.Kilopascal, Ir: 50, L: 10, D: 0.5})
+	var ids []string
+	for _, r := range rows {
+		ids = append(ids, r.ID)
+		if r.Err != nil {
+			t.Errorf("%s: %v", r.ID, r.Err)
+		}
+	}
+	want := []string{"meyerhof", "vesic", "berezantzev", "janbu", "api-sand-1", "api-sand-2", "api-sand-3", "api-sand-4", "nc9", "vesic-undrained"}
+	if len(ids) != len(want) {
+		t.Fatalf("ids %v, want %v", ids, want)
+	}
+	for i := range want {
+		if ids[i] != want[i] {
+			t.Fatalf("ids %v, want %v", ids, want)
+		}
+	}
+	// Factor is Nq for drained rows (Meyerhof's 56.7 at 30 deg, Das 2019,
+	// read) and Nc for undrained rows (9, Skempton 1951).
+	if rows[0].Factor != 56.7 && relErr(rows[0].Factor, 56.7) > 1e-9 {
+		t.Errorf("meyerhof factor %g, want 56.7 (Das 2019)", rows[0].Factor)
+	}
+	if rows[8].Factor != 9 {
+		t.Errorf("nc9 factor %g, want 9 (Skempton 1951)", rows[8].Factor)
+	}
+	// An SPT-only input gives the drilled-shaft row alone; an error row
+	// keeps its reason.
+	rows = Compare(Input{N60: 20})
+	if len(rows) != 1 || rows[0].ID != "shaft-n60-sand" || rows[0].Err != nil {
+		t.Errorf("N60 only: %+v", rows)
+	}
+	rows = Compare(Input{Phi: deg(50), Q: units.Kilopascal})
+	if rows[0].Err == nil {
+		t.Error("φ′ = 50 deg: Meyerhof row should carry its chart-range error")
+	}
+}
