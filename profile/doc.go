@@ -59,7 +59,10 @@
 //     OCR [1, 100], Dr (0, 1] as a fraction, N60 (0, 300], E and G (0, ∞),
 //     ν (0, 0.5], Ir [1, ∞). E, G and ν are not cross-checked.
 //   - Unit weights must lie in (0, 35 kN/m³]; γw in [9, 10.5] kN/m³ (fresh
-//     to sea water; 62.4 pcf is 9.80 kN/m³). Surcharge ≥ 0.
+//     to sea water; 62.4 pcf is 9.80 kN/m³). Surcharge in [0, 100 MPa];
+//     pore pressures at points within ±100 MPa; the profile no deeper than
+//     10 km and free water no higher than 12 km: limits far beyond practice
+//     that catch unit slips and keep every stress finite.
 //   - Negative effective stress anywhere in the profile is an error naming
 //     the depth.
 //   - Validation reports every problem it finds, joined with errors.Join,

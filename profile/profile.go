@@ -68,6 +68,9 @@ const (
 	minGammaW     = 9 * units.KilonewtonPerCubicMetre
 	maxGammaW     = 10.5 * units.KilonewtonPerCubicMetre
 	maxPhi        = 50 * units.Degree
+	maxDepth      = 10 * units.Kilometre   // deeper than any pile: a unit slip
+	maxHead       = 12 * units.Kilometre   // free water above ground: the deepest ocean
+	maxStress     = 100 * units.Megapascal // surcharge and |u| at points
 )
 
 func finite(x float64) bool { return !math.IsNaN(x) && !math.IsInf(x, 0) }
@@ -92,14 +95,14 @@ func New(spec Spec) (*Profile, error) {
 		c.add("water_unit_weight", "%s is outside [%s, %s]", units.UnitWeight(p.gw), minGammaW, maxGammaW)
 		p.gw = float64(phase.WaterUnitWeight) // to go on checking the rest
 	}
-	if !finite(p.waterDepth) {
-		c.add("water_depth", "%v is not a finite number", p.waterDepth)
+	if !finite(p.waterDepth) || p.waterDepth < -float64(maxHead) {
+		c.add("water_depth", "%s is outside [%s, ∞)", spec.WaterDepth, -maxHead)
 	}
 	if p.noWater && p.waterDepth != 0 {
 		c.add("water_depth", "%s is given for a site marked no_water", spec.WaterDepth)
 	}
-	if !finite(p.surcharge) || p.surcharge < 0 {
-		c.add("surcharge", "%s is outside [0, ∞)", spec.Surcharge)
+	if !finite(p.surcharge) || p.surcharge < 0 || p.surcharge > float64(maxStress) {
+		c.add("surcharge", "%s is outside [0, %s]", spec.Surcharge, maxStress)
 	}
 	for i, pt := range spec.PorePressures {
 		path := fmt.Sprintf("pore_pressures[%d]", i)
@@ -108,8 +111,8 @@ func New(spec Spec) (*Profile, error) {
 		} else if i > 0 && !(pt.Depth > spec.PorePressures[i-1].Depth) {
 			c.add(path+".depth", "%s is not below the previous point at %s", pt.Depth, spec.PorePressures[i-1].Depth)
 		}
-		if !finite(float64(pt.U)) {
-			c.add(path+".u", "%v is not a finite number", float64(pt.U))
+		if !finite(float64(pt.U)) || math.Abs(float64(pt.U)) > float64(maxStress) {
+			c.add(path+".u", "%s is outside [%s, %s]", pt.U, -maxStress, maxStress)
 		}
 	}
 	if len(spec.Layers) == 0 {
@@ -125,6 +128,11 @@ func New(spec Spec) (*Profile, error) {
 		return nil, errors.Join(c.errs...)
 	}
 	p.precompute(spec.PorePressures)
+	for i := range p.sig {
+		if !finite(p.sig[i]) || !finite(p.dsig[i]) || !finite(p.u[i]) || !finite(p.du[i]) {
+			return nil, &FieldError{Path: "layers", Msg: fmt.Sprintf("the stresses below %s are not finite numbers", units.Length(p.breaks[i]))}
+		}
+	}
 	if err := p.checkEffective(); err != nil {
 		return nil, err
 	}
@@ -147,8 +155,8 @@ func (p *Profile) resolveGeometry(ls []LayerSpec, c *collector) bool {
 				ok = false
 				continue
 			}
-			if !finite(float64(bottom)) || !(bottom > top) {
-				c.add(path+".bottom", "%s is outside (%s, ∞): it must be below the top", bottom, top)
+			if !finite(float64(bottom)) || !(bottom > top) || bottom > maxDepth {
+				c.add(path+".bottom", "%s is outside (%s, %s]: it must be below the top", bottom, top, maxDepth)
 				ok = false
 				continue
 			}
@@ -174,6 +182,11 @@ func (p *Profile) resolveGeometry(ls []LayerSpec, c *collector) bool {
 				continue
 			}
 			top, bottom = prev, prev+l.Thickness
+			if bottom > maxDepth {
+				c.add(path+".thickness", "%s takes the profile to %s, past the limit of %s", l.Thickness, bottom, maxDepth)
+				ok = false
+				continue
+			}
 		}
 		p.layers[i].Top, p.layers[i].Bottom = top, bottom
 		prev = bottom
