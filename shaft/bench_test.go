@@ -23,6 +23,7 @@ func benchMethods() []Unit {
 		BetaGiven{Beta: 0.3},
 		Burland{},
 		DrilledSand{},
+		DrilledSandK0{},
 		APIBeta{Class: DenseSand},
 		AlphaAPI{},
 		AlphaChart{},

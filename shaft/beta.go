@@ -376,3 +376,46 @@ func (m DrilledSand) Unit(p Point) (Result, error) {
 	fs := units.Stress(beta) * p.SigmaV
 	return Result{Fs: fs, Unlimited: fs, SigmaV: p.SigmaV, Beta: beta, Flags: fl}, nil
 }
+
+// DrilledSandK0 is the β of Brown et al. (2010, FHWA GEC 10) for drilled
+// shafts in cohesionless soil, from the at-rest coefficient of Mayne &
+// Kulhawy (1982) with δ = φ′ and K0 held to at most Kp:
+//
+//	K0 = (1 − sin φ′)·(σ′p/σ′v)^(sin φ′) ≤ tan²(45° + φ′/2)
+//	β = K0·tan φ′,  fs = β·σ′v
+//
+// Point.OCR carries σ′p/σ′v. The Kp cap is recalled, not read (see the
+// package doc). It reads σ′v (0 to 20 MPa), φ′ (above 0°, at most 50°) and
+// σ′p/σ′v (1 to 100; 0 reads as 1). BoundApplied is set when Kp governs.
+type DrilledSandK0 struct{}
+
+func (DrilledSandK0) ID() string { return "beta-drilled-k0" }
+func (DrilledSandK0) Equation() string {
+	return "fs = K0·tan φ′·σ′v, K0 = (1 − sin φ′)·(σ′p/σ′v)^sin φ′ ≤ Kp"
+}
+func (DrilledSandK0) Valid() string {
+	return "0° < φ′ ≤ 50°, 1 ≤ σ′p/σ′v ≤ 100, 0 ≤ σ′v ≤ 20 MPa"
+}
+func (DrilledSandK0) Refs() []cite.Ref {
+	return []cite.Ref{{Source: cite.Brown2010, Where: "ch. 13, β method for cohesionless soil"}, {Source: cite.MayneKulhawy1982}}
+}
+func (m DrilledSandK0) Unit(p Point) (Result, error) {
+	if err := checkSigmaV(m.ID(), p.SigmaV); err != nil {
+		return Result{}, err
+	}
+	k0, err := k0OCR(m.ID(), p)
+	if err != nil {
+		return Result{}, err
+	}
+	t := math.Tan(math.Pi/4 + float64(p.Phi)/2)
+	kp := t * t
+	k := k0
+	var fl Flags
+	if k > kp {
+		k, fl = kp, BoundApplied
+	}
+	beta := k * p.Phi.Tan()
+	fs := units.Stress(beta) * p.SigmaV
+	return Result{Fs: fs, Unlimited: fs, SigmaV: p.SigmaV, K: k, K0: k0, Kp: kp, Delta: p.Phi, DeltaRatio: 1,
+		Beta: beta, Flags: fl}, nil
+}

@@ -25,6 +25,7 @@
 //	beta-given         BetaGiven      fs = β·σ′v
 //	beta-burland       Burland        β = (1 − sin φ′)·tan φ′·OCR^0.5 (Burland 1973)
 //	beta-drilled-sand  DrilledSand    β = 1.5 − 0.135·√(z/ft), O'Neill & Reese (1999), GEC 10
+//	beta-drilled-k0    DrilledSandK0  β = (1 − sin φ′)(σ′p/σ′v)^sin φ′·tan φ′ ≤ Kp·tan φ′, GEC 10
 //	beta-api           APIBeta        fs = min(β·σ′v, fL) by API RP 2GEO sand class
 //	alpha-api          AlphaAPI       α = 0.5·ψ^−0.5 or 0.5·ψ^−0.25, α ≤ 1 (API RP 2GEO)
 //	alpha-chart        AlphaChart     α from the α–su/pa table (Das after Terzaghi, Peck & Mesri)
@@ -71,7 +72,8 @@
 // Some published values here were recalled rather than read in the source,
 // and are marked so in the tests: Kulhawy's (1984) K/K0 and δ/φ′ ranges, the
 // API RP 2GEO β and fL by sand class, the α tabulation and the λ tabulation
-// as presented by Das, and the N60/15 reduction of the drilled-shaft β. The
+// as presented by Das, the N60/15 reduction of the drilled-shaft β, and the
+// cap K0 ≤ Kp of the GEC 10 K0 form. The
 // drilled-shaft β form with its bounds, the drilled-shaft α and the API α
 // were confirmed in secondary presentations (see the tests).
 package shaft

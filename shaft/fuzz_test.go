@@ -18,6 +18,7 @@ func fuzzMethods(q float64) []Unit {
 		BetaGiven{Beta: q},
 		Burland{},
 		DrilledSand{},
+		DrilledSandK0{},
 		APIBeta{Class: SandClass(int(math.Abs(math.Mod(q, 6))))},
 		AlphaAPI{},
 		AlphaChart{},
@@ -42,7 +43,7 @@ func finite(v ...float64) bool {
 // Inf or negative fs returned without an error.
 func FuzzUnitShaft(f *testing.F) {
 	// Seeds: ordinary values (σ′v, z, φ′, OCR, su in kPa, D, N60, pa in kPa,
-	// parameter), edges and non-numbers. Numbers are invented for coverage.
+	// parameter), edges and non-numbers. Numbers are invented for coverage (no published source).
 	f.Add(100.0, 10.0, 32.0, 1.0, 50.0, 0.6, 20.0, 0.0, 0.8)
 	f.Add(0.0, 0.0, 0.0, 0.0, 0.0, 0.0, 0.0, 0.0, 0.0)
 	f.Add(1e-300, 300.0, 50.0, 100.0, 5000.0, 10.0, 100.0, 120.0, 3.0)

@@ -27,6 +27,7 @@ func TestPropBetaProportional(t *testing.T) {
 			Beta{K: KOverKp{Ratio: 0.3}, Delta: DeltaGiven{Delta: d(25)}},
 			Burland{},
 			DrilledSand{},
+			DrilledSandK0{},
 			APIBeta{Class: VeryDenseSand}, // below its limit only, checked below
 		}
 		for _, m := range ms {

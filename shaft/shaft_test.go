@@ -169,6 +169,14 @@ func TestUnitMethods(t *testing.T) {
 		// N60 = 9 < 15: β = (9/15)·0.825 = 0.495 (reduction from memory).
 		{"drilled sand loose", DrilledSand{}, Point{SigmaV: 100 * kPa, Depth: 25 * units.Foot, N60: 9},
 			49.5, 0.495, beta, 0, 1e-9, "O'Neill & Reese (1999) N60/15 reduction, from memory"},
+		// Brown et al. (2010, GEC 10) β = (1 − sin φ′)(σ′p/σ′v)^sin φ′·tan φ′,
+		// closed form: φ′ = 30°, σ′p/σ′v = 4: K0 = 0.5·2 = 1, β = tan 30° = 0.5773503.
+		{"drilled k0", DrilledSandK0{}, Point{SigmaV: 100 * kPa, Phi: d(30), OCR: 4},
+			57.735027, 0.57735027, beta, 0, 1e-7, "Brown et al. (2010) GEC 10, closed form"},
+		// σ′p/σ′v = 100 at 30°: K0 = 0.5·10 = 5 > Kp = 3, so K = 3 (cap from
+		// memory), β = 3·tan 30° = 1.7320508.
+		{"drilled k0 kp cap", DrilledSandK0{}, Point{SigmaV: 10 * kPa, Phi: d(30), OCR: 100},
+			17.320508, 1.7320508, beta, BoundApplied, 1e-7, "Brown et al. (2010) GEC 10, Kp cap from memory"},
 		// API RP 2GEO (2011) α: ψ = 1 gives 0.5·1 = 0.5.
 		{"api alpha psi 1", AlphaAPI{}, Point{SigmaV: 50 * kPa, Su: 50 * kPa}, 25, 0.5, alpha, 0, 1e-12, "API RP 2GEO (2011), closed form"},
 		// ψ = 0.5: 0.5·0.5^−0.5 = 0.7071068.
@@ -411,7 +419,7 @@ func TestMethodsDescribed(t *testing.T) {
 func allMethods() []Method {
 	return []Method{KGiven{K: 1}, KJaky{}, KMayneKulhawy{}, KOverK0{Ratio: 1}, KOverKp{Ratio: 0.5},
 		DeltaGiven{}, DeltaOverPhi{Ratio: 1}, Beta{K: KJaky{}, Delta: DeltaOverPhi{Ratio: 1}}, BetaGiven{},
-		Burland{}, DrilledSand{}, APIBeta{Class: DenseSand}, AlphaAPI{}, AlphaChart{}, AlphaDrilled{}, AlphaGiven{},
+		Burland{}, DrilledSand{}, DrilledSandK0{}, APIBeta{Class: DenseSand}, AlphaAPI{}, AlphaChart{}, AlphaDrilled{}, AlphaGiven{},
 		Lambda{}, LimitGiven{Fs: kPa}, LimitAPI{Class: DenseSand}, CriticalDepth{Ratio: 10},
 		Capped{Method: AlphaAPI{}, Limit: LimitGiven{Fs: kPa}}}
 }
