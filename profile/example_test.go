@@ -15,7 +15,7 @@ const (
 	m    = units.Metre
 )
 
-// siteLog is an invented four-layer log (a river-terrace site of our own):
+// siteLog (source: our own scenario) is an invented four-layer log (a river-terrace site of our own):
 // two layers given as dry unit weight with void ratio, two as water content
 // with Gs; water table 2 m down.
 func siteLog() profile.Spec {

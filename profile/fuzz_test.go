@@ -9,7 +9,8 @@ import (
 
 // FuzzProfile builds two-layer profiles from arbitrary numbers (seeds are
 // invented) and queries them: New and the queries must never panic, and a
-// query without error must return finite stresses.
+// query without error must return finite stresses. Source of the seeds: our
+// own invention.
 func FuzzProfile(f *testing.F) {
 	f.Add(3.0, 5.0, 18.0, 20.0, 19.0, 2.0, 10.0, 4.0, 30.0, 6.5, 0.6, 0.3, 2.7, false)
 	f.Add(1.0, 1.0, 0.0, 0.0, 0.0, -3.0, 0.0, 0.0, 0.0, 2.0, 0.7, 0.0, 0.0, true)

@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"slices"
+	"strings"
 
 	"github.com/qultgeo/qult/phase"
 	"github.com/qultgeo/qult/units"
@@ -337,12 +338,37 @@ func (p *Profile) resolveWeights(path string, l *Layer, ls LayerSpec, geometryOK
 			}
 		}
 	}
+	if errors.As(err, &ie) {
+		var fields []string
+		for q, name := range specFields {
+			if ie.Closers.Has(q) || ie.Pair.Has(q) {
+				fields = append(fields, name)
+			}
+		}
+		slices.Sort(fields)
+		msg := "the phase data given do not fix the unit weights"
+		if len(fields) > 0 {
+			join := " or "
+			if ie.Closers == 0 {
+				join = " and "
+			}
+			msg += "; give also " + strings.Join(fields, join)
+		}
+		c.errs = append(c.errs, &FieldError{Path: path, Msg: msg, Err: err})
+		return
+	}
 	if err != nil {
 		c.errs = append(c.errs, &FieldError{Path: path, Msg: err.Error(), Err: err})
 		return
 	}
 	l.Basis |= BasisPhase
 	l.UnitWeight, l.SaturatedUnitWeight, l.SubmergedUnitWeight = st.Gamma, st.GammaSat, st.GammaSub
+}
+
+// specFields names the LayerSpec field of each phase quantity it has.
+var specFields = map[phase.Quantity]string{
+	phase.Gs: "gs", phase.E: "void_ratio", phase.W: "water_content", phase.S: "saturation",
+	phase.Gamma: "unit_weight", phase.GammaD: "dry_unit_weight", phase.GammaSat: "saturated_unit_weight",
 }
 
 // porePressure evaluates the pore-pressure rule at z (the value below z

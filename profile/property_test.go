@@ -10,7 +10,8 @@ import (
 
 // The property tests compare the package with itself under transformations
 // that must not change any stress (closed-form invariants of σv = Σγ·Δz):
-// no published values are involved.
+// no published values are involved (source: the closed form above; drawn
+// ranges are our own).
 
 type genLayer struct {
 	t, gAbove, gSat float64 // m, kN/m³

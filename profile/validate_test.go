@@ -53,7 +53,7 @@ func TestValidation(t *testing.T) {
 			[]string{"layers[0]", "γd", "15.2"}},
 		{"phase insufficient", Spec{Layers: []LayerSpec{
 			{Thickness: 3 * m, Drainage: Drained, Phi: 30 * units.Degree, VoidRatio: 0.6}}},
-			[]string{"layers[0]", "give"}},
+			[]string{"layers[0]", "give also", "gs"}},
 		{"bad points", Spec{PorePressures: []PorePoint{{2 * m, 0}, {1 * m, 5 * kPa}}, Layers: []LayerSpec{sand(3 * m)}},
 			[]string{"pore_pressures[1].depth"}},
 		{"water with no_water", Spec{NoWater: true, WaterDepth: 2 * m, Layers: []LayerSpec{sand(3 * m)}},
