@@ -1,0 +1,360 @@
+package pile
+
+import (
+	"fmt"
+	"math"
+
+	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/units"
+)
+
+// Capacity is the axial capacity of the pile with its tip at one depth.
+type Capacity struct {
+	TipDepth units.Length // depth of the tip below ground
+	UnitTip  units.Stress // qp after limits and the layered rule (net of σ′v with WeightNet)
+	Tip      units.Force  // Qp on the area of the governing plug mode
+	Shaft    units.Force  // Qs in compression, on the perimeter(s) of that mode
+	Weight   units.Force  // W′, the pile's effective weight (buoyant below water)
+	// Compression is Rc = Qp + Qs, less W′ with WeightGross.
+	Compression units.Force
+	// TensionShaft is the shaft resistance in tension (outer perimeter,
+	// and the inner one when Pile.Plug is Unplugged) times the tension
+	// factor; Tension is Rt = TensionShaft + W′.
+	TensionShaft units.Force
+	Tension      units.Force
+	// DesignCompression and DesignTension apply the multipliers of the
+	// analysis' design case (equal to Compression and Tension without one).
+	DesignCompression units.Force
+	DesignTension     units.Force
+	Plugged           bool // the plugged mode governs (always true for solid sections)
+	Flags             Flags
+}
+
+// sums are the running integrals along the shaft from the head.
+type sums struct {
+	outer   float64 // ∫ fs dz, N/m, over layers not using λ
+	design  float64 // ∫ fShaft·fs dz
+	tension float64 // ∫ fTension·fs dz
+	// λ layers: ∫σ′v dz, ∫su dz and their length.
+	lamSig, lamSu, lamLen float64
+	lamF, lamFt           float64 // design multipliers of the λ method
+	lamVal                float64 // a λ given instead of the table, 0 for none
+	weight                float64 // W′ of the pile down to here, N
+	flags                 Flags
+}
+
+// Capacity returns the capacity of the pile with its tip at the pile's
+// own tip depth. It allocates nothing.
+func (a *Analysis) Capacity() (Capacity, error) {
+	return a.CapacityAt(a.pile.Tip())
+}
+
+// CapacityAt returns the capacity with the tip at depth tip (the head stays
+// where the pile puts it). It allocates nothing.
+func (a *Analysis) CapacityAt(tip units.Length) (Capacity, error) {
+	head := float64(a.pile.HeadDepth)
+	t := float64(tip)
+	if !(t > head) || t > float64(a.prof.Depth()) {
+		return Capacity{}, fmt.Errorf("pile: tip depth %v: want below the head (%v) and within the profile (to %v)", tip, a.pile.HeadDepth, a.prof.Depth())
+	}
+	var s sums
+	if err := a.addShaft(&s, head, t); err != nil {
+		return Capacity{}, err
+	}
+	return a.finish(&s, t)
+}
+
+// addShaft adds the shaft from z0 to z1 (z0 < z1) to s, split at every
+// split depth between.
+func (a *Analysis) addShaft(s *sums, z0, z1 float64) error {
+	// first split above or at z0
+	lo, hi := 0, len(a.splits)
+	for lo < hi {
+		m := (lo + hi) / 2
+		if a.splits[m] <= z0 {
+			lo = m + 1
+		} else {
+			hi = m
+		}
+	}
+	top := z0
+	for k := lo; top < z1; k++ {
+		bot := z1
+		if k < len(a.splits) && a.splits[k] < z1 {
+			bot = a.splits[k]
+		}
+		if bot > top {
+			if err := a.segment(s, top, bot); err != nil {
+				return err
+			}
+		}
+		top = bot
+	}
+	return nil
+}
+
+// inZone reports whether depth z lies in a zone without shaft friction.
+func (a *Analysis) inZone(z float64) bool {
+	for _, zn := range a.methods.NoShaft {
+		if z > float64(zn.Top) && z < float64(zn.Bottom) {
+			return true
+		}
+	}
+	return false
+}
+
+// segment integrates one segment [z0, z1] that lies in one layer and
+// crosses no split.
+func (a *Analysis) segment(s *sums, z0, z1 float64) error {
+	li, err := a.prof.LayerAt(units.Length(z0))
+	if err != nil {
+		return err
+	}
+	lp := &a.plans[li]
+	zm := (z0 + z1) / 2
+	h := z1 - z0
+	// σ′v at the ends, from the top and the midpoint so that a pore
+	// pressure jump at z1 is not picked up.
+	sa, err := a.prof.EffectiveStress(units.Length(z0))
+	if err != nil {
+		return err
+	}
+	sm, err := a.prof.EffectiveStress(units.Length(zm))
+	if err != nil {
+		return err
+	}
+	s0, s1 := float64(sa), 2*float64(sm)-float64(sa)
+	// Weight of this length of pile.
+	s.weight += a.pileWeight(z0, z1)
+	if lp.noShaft || a.inZone(zm) {
+		return nil
+	}
+	if a.zc > 0 && z0 >= a.zc {
+		s0, s1 = a.svc, a.svc
+		s.flags |= CriticalDepthApplied
+	}
+	if lp.lambda {
+		s.lamSig += (s0 + s1) / 2 * h
+		s.lamSu += float64(lp.suAt(units.Length(z0))+lp.suAt(units.Length(z1))) / 2 * h
+		s.lamLen += h
+		s.lamF, s.lamFt, s.lamVal = lp.fShaft, lp.fTension, lp.lamVal
+		return nil
+	}
+	var q float64
+	switch lp.kind {
+	case kindBeta:
+		v, capped := linearIntegral(lp.coef, s0, s1, float64(lp.cap), h)
+		q = v
+		if capped {
+			s.flags |= ShaftLimit
+		}
+		s.flags |= shaftFlags(lp.flags)
+	case kindAlpha:
+		v, capped := linearIntegral(lp.coef, float64(lp.suAt(units.Length(z0))), float64(lp.suAt(units.Length(z1))), float64(lp.cap), h)
+		q = v
+		if capped {
+			s.flags |= ShaftLimit
+		}
+		s.flags |= shaftFlags(lp.flags)
+	default:
+		v, fl, err := a.quad(lp, z0, z1, s0, s1, 0)
+		if err != nil {
+			return fmt.Errorf("layers[%d] (%s).shaft at %.3g to %.3g m: %w", li, lp.layer.Name, z0, z1, err)
+		}
+		q = v
+		s.flags |= fl
+	}
+	s.outer += q
+	s.design += lp.fShaft * q
+	s.tension += lp.fTension * q
+	return nil
+}
+
+// pileWeight returns the effective weight of the pile between depths z0
+// and z1: γp·A above the water table and (γp − γw)·A below it, with A the
+// material area.
+func (a *Analysis) pileWeight(z0, z1 float64) float64 {
+	if a.pile.UnitWeight == 0 {
+		return 0
+	}
+	g := float64(a.pile.UnitWeight)
+	gw := float64(a.prof.WaterUnitWeight())
+	zw, wet := a.prof.WaterDepth()
+	if !wet || float64(zw) >= z1 {
+		return g * a.mat * (z1 - z0)
+	}
+	if float64(zw) <= z0 {
+		return (g - gw) * a.mat * (z1 - z0)
+	}
+	return g*a.mat*(float64(zw)-z0) + (g-gw)*a.mat*(z1-float64(zw))
+}
+
+// finish adds the λ part and the tip, and assembles the capacity.
+func (a *Analysis) finish(s *sums, t float64) (Capacity, error) {
+	c := Capacity{TipDepth: units.Length(t)}
+	outer, design, tension := s.outer, s.design, s.tension
+	if s.lamLen > 0 {
+		L := t - float64(a.pile.HeadDepth)
+		var fav float64
+		if s.lamVal > 0 {
+			fav = s.lamVal * (s.lamSig + 2*s.lamSu) / s.lamLen
+		} else {
+			r, err := a.lambda.Average(units.Length(L), units.Stress(s.lamSig/s.lamLen), units.Stress(s.lamSu/s.lamLen))
+			if err != nil {
+				return Capacity{}, fmt.Errorf("shaft (λ method): %w", err)
+			}
+			fav = float64(r.Fav)
+			s.flags |= shaftFlags(r.Flags)
+		}
+		q := fav * s.lamLen
+		outer += q
+		design += s.lamF * q
+		tension += s.lamFt * q
+	}
+	tr, err := a.tipAt(t)
+	if err != nil {
+		return Capacity{}, err
+	}
+	qp := tr.qp
+	if a.methods.SelfWeight == WeightNet {
+		qp = max(0, qp-tr.sigma)
+	}
+	c.UnitTip = units.Stress(qp)
+	c.Flags = s.flags | tr.flags
+	tf := a.tension.Value
+	c.Weight = units.Force(s.weight)
+	// Modes: plugged (gross area, outer perimeter) and unplugged (material
+	// area, outer plus inner perimeter).
+	plTip, plShaft := qp*a.gross, outer*a.outer
+	plDes := tr.f*qp*a.gross + design*a.outer
+	c.Plugged = true
+	c.Tip, c.Shaft = units.Force(plTip), units.Force(plShaft)
+	desC := plDes
+	tenShaft, tenDes := tf*outer*a.outer, tf*tension*a.outer
+	if a.pile.Section.CanPlug() {
+		unTip, unShaft := qp*a.mat, outer*(a.outer+a.inner)
+		unDes := tr.f*qp*a.mat + design*(a.outer+a.inner)
+		useUn := a.pile.Plug == Unplugged || (a.pile.Plug == PlugLesser && unTip+unShaft < plTip+plShaft)
+		if useUn {
+			c.Plugged = false
+			c.Tip, c.Shaft = units.Force(unTip), units.Force(unShaft)
+			desC = unDes
+			if a.pile.Plug == PlugLesser {
+				c.Flags |= UnpluggedGoverns
+			}
+		}
+		if a.pile.Plug == Unplugged {
+			tenShaft, tenDes = tf*outer*(a.outer+a.inner), tf*tension*(a.outer+a.inner)
+		}
+	}
+	c.Compression = c.Tip + c.Shaft
+	if a.methods.SelfWeight == WeightGross {
+		c.Compression -= c.Weight
+		desC -= s.weight
+	}
+	c.TensionShaft = units.Force(tenShaft)
+	c.Tension = c.TensionShaft + c.Weight
+	c.DesignCompression = units.Force(desC)
+	c.DesignTension = units.Force(tenDes + s.weight)
+	return c, nil
+}
+
+// tipResult is the unit tip resistance at a depth with what made it.
+type tipResult struct {
+	layer int
+	in    bearing.Input
+	res   bearing.Result
+	qp    float64 // after limits and the layered rule
+	sigma float64 // σ′v at the tip
+	f     float64 // design multiplier of the tip method
+	upper float64 // the upper layer's qp where the layered rule applied
+	flags Flags
+}
+
+// tipInput returns the tip input for layer plan lp at depth z.
+func (a *Analysis) tipInput(lp *layerPlan, z float64) (bearing.Input, error) {
+	sv, err := a.prof.EffectiveStress(units.Length(z))
+	if err != nil {
+		return bearing.Input{}, err
+	}
+	in := bearing.Input{
+		Phi: lp.phi, C: lp.c, Q: sv, K0: lp.k0, Ir: lp.layer.Ir, G: lp.layer.G,
+		L: units.Length(z), D: units.Length(a.size), N60: lp.layer.N60, Clamp: a.methods.Clamp,
+	}
+	if lp.layer.HasSu {
+		zz := min(max(units.Length(z), lp.layer.Top), lp.layer.Bottom)
+		in.Su = lp.suAt(zz)
+	}
+	return in, nil
+}
+
+// tipAt returns the unit tip resistance with the tip at depth z.
+func (a *Analysis) tipAt(z float64) (tipResult, error) {
+	li, err := a.prof.LayerAt(units.Length(z))
+	if err != nil {
+		return tipResult{}, err
+	}
+	lp := &a.plans[li]
+	in, err := a.tipInput(lp, z)
+	if err != nil {
+		return tipResult{}, err
+	}
+	r, err := lp.tip.Tip(in)
+	if err != nil {
+		return tipResult{}, fmt.Errorf("layers[%d] (%s).tip at %.4g m: %w", li, lp.layer.Name, z, err)
+	}
+	out := tipResult{layer: li, in: in, res: r, qp: float64(r.Qp), sigma: float64(in.Q), f: lp.fTip}
+	out.flags |= tipFlags(r.Flags)
+	d := a.size
+	top := float64(lp.layer.Top)
+	// Meyerhof's (1976) rule: less than 10D into a stronger layer, the tip
+	// resistance grows linearly from the weaker layer's value.
+	if a.methods.LayeredTip && li > 0 && z-top < 10*d {
+		up := &a.plans[li-1]
+		uin, err := a.tipInput(up, z)
+		if err != nil {
+			return tipResult{}, err
+		}
+		ur, err := up.tip.Tip(uin)
+		if err != nil {
+			return tipResult{}, fmt.Errorf("layers[%d] (%s).tip (layered-tip rule, at %.4g m): %w", li-1, up.layer.Name, z, err)
+		}
+		if float64(ur.Qp) < out.qp {
+			out.upper = float64(ur.Qp)
+			out.qp = out.upper + (out.qp-out.upper)*(z-top)/(10*d)
+			out.flags |= LayeredTip
+		}
+	}
+	if z-top < d && li > 0 || float64(lp.layer.Bottom)-z < d && li < len(a.plans)-1 {
+		out.flags |= TipNearBoundary
+	}
+	// A weaker layer within WeakBelow diameters below the tip.
+	for k := li + 1; k < len(a.plans) && float64(a.plans[k].layer.Top) < z+a.weakBelow*d; k++ {
+		lk := &a.plans[k]
+		kin, err := a.tipInput(lk, float64(lk.layer.Top))
+		if err != nil {
+			return tipResult{}, err
+		}
+		kr, err := lk.tip.Tip(kin)
+		if err != nil || float64(kr.Qp) < out.qp {
+			out.flags |= WeakBelow
+			break
+		}
+	}
+	if math.IsNaN(out.qp) || math.IsInf(out.qp, 0) {
+		return tipResult{}, fmt.Errorf("layers[%d] (%s).tip: no finite resistance at %.4g m", li, lp.layer.Name, z)
+	}
+	return out, nil
+}
+
+// tipFlags maps the bearing package's warnings onto ours.
+func tipFlags(f bearing.Flags) Flags {
+	var out Flags
+	if f&bearing.LimitGoverns != 0 {
+		out |= TipLimit
+	}
+	if f&bearing.Clamped != 0 {
+		out |= ChartEdge
+	}
+	return out
+}

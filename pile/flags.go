@@ -1,0 +1,63 @@
+package pile
+
+import "strings"
+
+// Flags are warnings raised by an analysis, as a bitmask so that the
+// capacity path allocates nothing. Breakdown turns them into messages.
+type Flags uint16
+
+const (
+	// ShaftLimit: a limiting unit shaft friction capped fs somewhere.
+	ShaftLimit Flags = 1 << iota
+	// CriticalDepthApplied: σ′v was held at its value at the critical depth
+	// below it.
+	CriticalDepthApplied
+	// BoundApplied: a method's published bound replaced its raw value.
+	BoundApplied
+	// ChartEdge: a chart was read at its edge because Methods.Clamp is set.
+	ChartEdge
+	// TipLimit: the tip method's limiting resistance governs.
+	TipLimit
+	// LayeredTip: the tip is less than ten diameters into a stronger layer
+	// and Meyerhof's (1976) rule reduced it.
+	LayeredTip
+	// WeakBelow: a layer within Methods.WeakBelow diameters below the tip
+	// gives a lower unit tip resistance than the bearing layer.
+	WeakBelow
+	// UnpluggedGoverns: the unplugged mode (annulus tip plus internal
+	// friction) gives less than the plugged mode and was used.
+	UnpluggedGoverns
+	// TipNearBoundary: the tip lies within one diameter of a layer boundary.
+	TipNearBoundary
+)
+
+var flagText = [...]string{
+	"a limiting unit shaft friction governs",
+	"σ′v held constant below the critical depth",
+	"a published bound of a method replaced its raw value",
+	"a chart was read at its edge (clamping was asked for)",
+	"the limiting unit tip resistance governs",
+	"tip less than 10 diameters into a stronger layer: Meyerhof's (1976) transition applied",
+	"a weaker layer lies within a few diameters below the tip",
+	"the unplugged mode governs",
+	"the tip lies within one diameter of a layer boundary",
+}
+
+// Messages returns one sentence per set flag.
+func (f Flags) Messages() []string {
+	var out []string
+	for i, t := range flagText {
+		if f&(1<<i) != 0 {
+			out = append(out, t)
+		}
+	}
+	return out
+}
+
+// String joins the messages with "; ", or returns "none".
+func (f Flags) String() string {
+	if f == 0 {
+		return "none"
+	}
+	return strings.Join(f.Messages(), "; ")
+}

@@ -1,0 +1,473 @@
+package pile
+
+import (
+	"errors"
+	"fmt"
+	"math"
+
+	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/cite"
+	"github.com/qultgeo/qult/profile"
+	"github.com/qultgeo/qult/shaft"
+	"github.com/qultgeo/qult/units"
+)
+
+// Pile is one pile: its section, where it sits, how it is installed.
+type Pile struct {
+	Section Section
+	// Length is the pile length from head to tip, > 0.
+	Length units.Length
+	// HeadDepth is the depth of the pile head below the ground surface, ≥ 0.
+	HeadDepth    units.Length
+	Installation Installation
+	// Surface is the shaft's interface for the default δ/φ′; zero picks
+	// the default for the section and installation (see DefaultSurface).
+	Surface shaft.Surface
+	// Plug says how an open pipe or H-section mobilises tip and shaft.
+	Plug Plug
+	// Modulus is Young's modulus of the pile material (used by settlement
+	// analyses; not by capacity). Zero means not given.
+	Modulus units.Stress
+	// UnitWeight is the unit weight of the pile material, for its
+	// self-weight; zero means the pile's weight is not counted.
+	UnitWeight units.UnitWeight
+}
+
+// Tip returns the tip depth below ground, HeadDepth + Length.
+func (p Pile) Tip() units.Length { return p.HeadDepth + p.Length }
+
+// DefaultSurface returns the interface used for δ/φ′ when Pile.Surface is
+// zero: rough concrete for bored and augered piles (concrete cast against
+// soil), rough steel for steel pipes and H-sections, and smooth concrete
+// for driven solid sections (precast). These are our defaults within
+// Kulhawy's (1984) categories; give Pile.Surface to choose another.
+func DefaultSurface(sec Section, inst Installation) shaft.Surface {
+	switch {
+	case inst == Bored || inst == Augered:
+		return shaft.RoughConcrete
+	case sec.Shape == ClosedPipe || sec.Shape == OpenPipe || sec.Shape == HSection:
+		return shaft.RoughSteel
+	default:
+		return shaft.SmoothConcrete
+	}
+}
+
+// shaftInstallation maps an installation to Kulhawy's (1984) K/K0
+// categories: augered (CFA) piles are taken as bored.
+func shaftInstallation(i Installation) shaft.Installation {
+	switch i {
+	case DrivenHigh:
+		return shaft.DrivenHighDisplacement
+	case DrivenLow:
+		return shaft.DrivenLowDisplacement
+	case Jetted:
+		return shaft.Jetted
+	default:
+		return shaft.Bored
+	}
+}
+
+// SelfWeight says how the pile's own weight enters compression capacity.
+type SelfWeight int
+
+const (
+	// WeightIgnored, the default, takes Rc = Qp + Qs: the pile's weight is
+	// taken to balance the overburden it displaces at the tip, as Das
+	// (2019, §12.5) and most hand methods assume.
+	WeightIgnored SelfWeight = iota
+	// WeightNet takes Rc = (qp − σ′v,tip)·Ab + Qs: the net tip
+	// resistance, with the pile's weight ignored.
+	WeightNet
+	// WeightGross takes Rc = Qp + Qs − W′: the gross tip resistance with
+	// the pile's effective (buoyant below water) weight subtracted.
+	WeightGross
+)
+
+var weightIDs = [...]string{WeightIgnored: "ignored", WeightNet: "net", WeightGross: "gross"}
+
+// String returns "ignored", "net" or "gross".
+func (w SelfWeight) String() string {
+	if w >= 0 && int(w) < len(weightIDs) {
+		return weightIDs[w]
+	}
+	return fmt.Sprintf("SelfWeight(%d)", int(w))
+}
+
+// ParseSelfWeight reads "ignored", "net" or "gross".
+func ParseSelfWeight(s string) (SelfWeight, error) {
+	for w := WeightIgnored; w <= WeightGross; w++ {
+		if weightIDs[w] == s {
+			return w, nil
+		}
+	}
+	return 0, fmt.Errorf("self_weight %q: want ignored, net or gross", s)
+}
+
+// TensionFactor multiplies the compression unit shaft resistance to give
+// the resistance in tension (uplift).
+type TensionFactor struct {
+	Name  string  // identifier: "same", or "given"
+	Value float64 // the factor, (0, 1]
+	Refs  []cite.Ref
+}
+
+// TensionSame takes the same unit shaft friction in tension as in
+// compression, as API RP 2GEO (2011) does for piles in clay and sand (from
+// memory: the API sand and clay rules carry no reduction for load
+// direction). Design bases then apply their own tension factors
+// (EN 1997-1 γs;t, AASHTO φup).
+func TensionSame() TensionFactor {
+	return TensionFactor{Name: "same", Value: 1,
+		Refs: []cite.Ref{{Source: cite.API2011, Where: "axial pile capacity, shaft friction in tension"}}}
+}
+
+// LayerMethods overrides the methods for one layer. A nil field keeps the
+// default for the layer's drainage class.
+type LayerMethods struct {
+	Tip   bearing.Tip
+	Shaft shaft.Unit
+	// Lambda selects the λ method for this layer's shaft (undrained
+	// layers only); LambdaValue, if > 0, is a λ given instead of read
+	// from the table.
+	Lambda      bool
+	LambdaValue float64
+	// NoShaft marks the layer as carrying no shaft friction (fill that will
+	// settle, a layer cased off).
+	NoShaft bool
+}
+
+// Zone is a depth range along the pile that carries no shaft friction: a
+// length below the head, a scour or disturbed zone, a casing.
+type Zone struct {
+	Top, Bottom units.Length // depths below ground, Top < Bottom
+}
+
+// Methods chooses the methods of an analysis. A nil method takes the
+// default:
+//
+//	TipDrained      bearing.Meyerhof{} (driven), bearing.Meyerhof{} (bored)
+//	TipUndrained    bearing.Skempton{} (Nc = 9)
+//	ShaftDrained    shaft.Beta{K: Kulhawy K/K0 by installation, δ: Kulhawy δ/φ′ by surface}
+//	ShaftUndrained  shaft.AlphaAPI{} (driven), shaft.AlphaDrilled{} (bored, augered)
+type Methods struct {
+	TipDrained     bearing.Tip
+	TipUndrained   bearing.Tip
+	ShaftDrained   shaft.Unit
+	ShaftUndrained shaft.Unit
+	// UndrainedLambda selects the λ method for every undrained layer.
+	UndrainedLambda bool
+	// Layers overrides methods layer by layer, by layer index; it may be
+	// shorter than the profile.
+	Layers []LayerMethods
+	// CriticalDepth, if > 0, is the ratio n of the critical depth zc = n·D
+	// below which σ′v is held constant for shaft friction (5 to 50).
+	CriticalDepth float64
+	// NoShaft lists depth ranges that carry no shaft friction.
+	NoShaft []Zone
+	// Tension is the factor on shaft resistance in tension; the zero value
+	// means TensionSame.
+	Tension TensionFactor
+	// SelfWeight says how the pile's weight enters compression.
+	SelfWeight SelfWeight
+	// LayeredTip turns on Meyerhof's (1976) rule for a tip less than ten
+	// diameters into a stronger layer; true by default through
+	// DefaultMethods. WeakBelow, the depth below the tip searched for a
+	// weaker layer, in diameters; 0 means 3.
+	LayeredTip bool
+	WeakBelow  float64
+	// Clamp lets chart methods read outside their charts at the edge (a
+	// warning is raised) instead of failing.
+	Clamp bool
+}
+
+// DefaultMethods returns the defaults described on Methods, with
+// Meyerhof's layered-tip rule on.
+func DefaultMethods() Methods { return Methods{LayeredTip: true} }
+
+// Options adjust an analysis for a design case.
+type Options struct {
+	// Case, if not nil, supplies resistance multipliers (by method
+	// identifier) and soil factors; the analysis then also reports design
+	// resistances. Nil means characteristic values only.
+	Case *Case
+}
+
+// lambdaID is the identifier under which design bases find a factor for
+// the λ method.
+const lambdaID = "lambda"
+
+// layerPlan is one layer's resolved methods and parameters.
+type layerPlan struct {
+	layer   profile.Layer
+	phi     units.Angle  // φ′ after soil factors
+	c       units.Stress // c′ after soil factors
+	su0     units.Stress // su at top after soil factors
+	su1     units.Stress // su at bottom after soil factors
+	k0      float64      // (1 − sinφ′)·OCR^sinφ′ for Vesic's σ′o
+	tip     bearing.Tip
+	shaft   shaft.Unit
+	lambda  bool
+	lamVal  float64
+	noShaft bool
+	// design multipliers
+	fTip, fShaft, fTension float64
+	// closed-form integration (see classify)
+	kind  int
+	coef  float64
+	cap   units.Stress
+	flags shaft.Flags
+}
+
+// Analysis is a prepared pile-in-profile calculation. NewAnalysis resolves
+// the methods of every layer and the depths at which the shaft is split;
+// Capacity then computes without allocating.
+type Analysis struct {
+	prof      *profile.Profile
+	pile      Pile
+	methods   Methods
+	plans     []layerPlan
+	splits    []float64 // sorted depths where the shaft is split (profile breaks, zc, zones)
+	zc        float64   // critical depth, 0 for none
+	svc       float64   // σ′v at the critical depth
+	size      float64   // section size D
+	outer     float64   // outer perimeter
+	inner     float64   // inner perimeter
+	gross     float64   // gross area
+	mat       float64   // material area
+	lambda    shaft.Lambda
+	tension   TensionFactor
+	useCase   bool
+	cs        Case
+	weakBelow float64
+}
+
+// Validate checks the pile's geometry and installation.
+func (p Pile) Validate() error {
+	var errs []error
+	if err := p.Section.Validate("pile.section"); err != nil {
+		errs = append(errs, err)
+	}
+	if !(p.Length > 0) || math.IsInf(float64(p.Length), 0) {
+		errs = append(errs, fmt.Errorf("pile.length: %v is outside (0, ∞) m", p.Length))
+	}
+	if !(p.HeadDepth >= 0) || math.IsInf(float64(p.HeadDepth), 0) {
+		errs = append(errs, fmt.Errorf("pile.head_depth: %v is outside 0 to ∞ m", p.HeadDepth))
+	}
+	if p.Installation < DrivenHigh || p.Installation > Jetted {
+		errs = append(errs, fmt.Errorf("pile.installation: %d: want one of driven-high, driven-low, bored, augered, jetted", int(p.Installation)))
+	}
+	if p.Plug < PlugLesser || p.Plug > Unplugged {
+		errs = append(errs, fmt.Errorf("pile.plug: %d: want lesser, plugged or unplugged", int(p.Plug)))
+	}
+	if !(p.UnitWeight >= 0) || p.UnitWeight > 100*units.KilonewtonPerCubicMetre {
+		errs = append(errs, fmt.Errorf("pile.unit_weight: %v is outside 0 to 100 kN/m3", p.UnitWeight))
+	}
+	if !(p.Modulus >= 0) || math.IsInf(float64(p.Modulus), 0) {
+		errs = append(errs, fmt.Errorf("pile.youngs_modulus: %v is outside 0 to ∞ kPa", p.Modulus))
+	}
+	return errors.Join(errs...)
+}
+
+// NewAnalysis prepares the analysis of pile p in profile prof with methods
+// m. The pile tip must lie within the profile.
+func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analysis, error) {
+	if prof == nil {
+		return nil, errors.New("pile: NewAnalysis: nil profile")
+	}
+	if err := p.Validate(); err != nil {
+		return nil, err
+	}
+	if p.Tip() > prof.Depth() {
+		return nil, fmt.Errorf("pile.length: tip at %v is below the bottom of the ground profile at %v; extend the profile or shorten the pile", p.Tip(), prof.Depth())
+	}
+	a := &Analysis{prof: prof, pile: p, methods: m}
+	if opt != nil && opt.Case != nil {
+		a.useCase = true
+		a.cs = *opt.Case
+	} else {
+		a.cs = Case{TanPhi: 1, Su: 1}
+	}
+	if !(a.cs.TanPhi >= 1) || !(a.cs.Su >= 1) || math.IsInf(a.cs.TanPhi, 0) || math.IsInf(a.cs.Su, 0) {
+		return nil, fmt.Errorf("design: soil factors on tanφ′ (%g) and su (%g) must be 1 or more", a.cs.TanPhi, a.cs.Su)
+	}
+	a.size = float64(p.Section.Size())
+	a.outer = float64(p.Section.OuterPerimeter())
+	a.inner = float64(p.Section.InnerPerimeter())
+	a.gross = float64(p.Section.GrossArea())
+	a.mat = float64(p.Section.MaterialArea())
+	a.lambda = shaft.Lambda{Extrapolate: m.Clamp}
+	a.tension = m.Tension
+	if a.tension.Name == "" {
+		a.tension = TensionSame()
+	}
+	if !(a.tension.Value > 0 && a.tension.Value <= 1) {
+		return nil, fmt.Errorf("methods.tension_factor: %g is outside (0, 1]", a.tension.Value)
+	}
+	a.weakBelow = m.WeakBelow
+	if a.weakBelow == 0 {
+		a.weakBelow = 3
+	}
+	if !(a.weakBelow > 0 && a.weakBelow <= 20) {
+		return nil, fmt.Errorf("methods.weak_below: %g diameters is outside (0, 20]", m.WeakBelow)
+	}
+	if len(m.Layers) > prof.NumLayers() {
+		return nil, fmt.Errorf("methods.layers: %d entries for a profile of %d layers", len(m.Layers), prof.NumLayers())
+	}
+	if m.CriticalDepth != 0 {
+		zc, err := (shaft.CriticalDepth{Ratio: m.CriticalDepth}).Depth(p.Section.Size())
+		if err != nil {
+			return nil, fmt.Errorf("methods.critical_depth: %w", err)
+		}
+		a.zc = float64(zc)
+		if zc >= prof.Depth() {
+			a.zc = 0 // below the profile: it never governs
+		} else {
+			svc, err := prof.EffectiveStress(zc)
+			if err != nil {
+				return nil, err
+			}
+			a.svc = float64(svc)
+		}
+	}
+	var errs []error
+	for i := 0; i < prof.NumLayers(); i++ {
+		lp, err := a.plan(i)
+		if err == nil {
+			err = a.classify(i, &lp)
+		}
+		if err != nil {
+			errs = append(errs, err)
+		}
+		a.plans = append(a.plans, lp)
+	}
+	for i, z := range m.NoShaft {
+		if !(z.Top >= 0 && z.Bottom > z.Top) || math.IsInf(float64(z.Bottom), 0) {
+			errs = append(errs, fmt.Errorf("methods.no_shaft[%d]: from %v to %v: want 0 ≤ top < bottom", i, z.Top, z.Bottom))
+		}
+	}
+	if err := errors.Join(errs...); err != nil {
+		return nil, err
+	}
+	// Split depths: the profile's breaks, the critical depth, the zones.
+	for _, b := range prof.Breaks() {
+		a.splits = append(a.splits, float64(b))
+	}
+	if a.zc > 0 {
+		a.splits = append(a.splits, a.zc)
+	}
+	for _, z := range m.NoShaft {
+		a.splits = append(a.splits, float64(z.Top), float64(z.Bottom))
+	}
+	a.splits = sortUnique(a.splits)
+	return a, nil
+}
+
+func sortUnique(x []float64) []float64 {
+	// insertion sort: the list is short and nearly sorted
+	for i := 1; i < len(x); i++ {
+		for j := i; j > 0 && x[j] < x[j-1]; j-- {
+			x[j], x[j-1] = x[j-1], x[j]
+		}
+	}
+	out := x[:0]
+	for i, v := range x {
+		if i == 0 || v != out[len(out)-1] {
+			out = append(out, v)
+		}
+	}
+	return out
+}
+
+// plan resolves layer i's methods and factored parameters.
+func (a *Analysis) plan(i int) (layerPlan, error) {
+	l := a.prof.Layer(i)
+	m := a.methods
+	path := fmt.Sprintf("layers[%d] (%s)", i, l.Name)
+	lp := layerPlan{layer: l}
+	// Soil factors (EN 1997-1 M2): tanφ′d = tanφ′/γφ, c′d = c′/γc, sud = su/γcu.
+	lp.phi = units.Atan(l.Phi.Tan() / a.cs.TanPhi)
+	lp.c = l.Cohesion / units.Stress(a.cs.TanPhi)
+	lp.su0 = l.SuTop / units.Stress(a.cs.Su)
+	lp.su1 = l.SuBottom / units.Stress(a.cs.Su)
+	ocr := l.OCR
+	if ocr == 0 {
+		ocr = 1
+	}
+	if l.Phi > 0 {
+		s := lp.phi.Sin()
+		lp.k0 = (1 - s) * math.Pow(ocr, s)
+	}
+	var over LayerMethods
+	if i < len(m.Layers) {
+		over = m.Layers[i]
+	}
+	drained := l.Drainage == profile.Drained
+	// Tip.
+	switch {
+	case over.Tip != nil:
+		lp.tip = over.Tip
+	case drained && m.TipDrained != nil:
+		lp.tip = m.TipDrained
+	case drained:
+		lp.tip = bearing.Meyerhof{}
+	case m.TipUndrained != nil:
+		lp.tip = m.TipUndrained
+	default:
+		lp.tip = bearing.Skempton{}
+	}
+	// Shaft.
+	lp.noShaft = over.NoShaft
+	switch {
+	case over.Shaft != nil:
+		lp.shaft = over.Shaft
+	case over.Lambda || (!drained && m.UndrainedLambda):
+		if drained {
+			return lp, fmt.Errorf("%s.shaft: the λ method applies to undrained layers only", path)
+		}
+		lp.lambda = true
+		lp.lamVal = over.LambdaValue
+		if over.LambdaValue != 0 && !(over.LambdaValue > 0 && over.LambdaValue <= 1) {
+			return lp, fmt.Errorf("%s.shaft.lambda: %g is outside (0, 1]", path, over.LambdaValue)
+		}
+	case drained && m.ShaftDrained != nil:
+		lp.shaft = m.ShaftDrained
+	case drained:
+		k, err := shaft.KOverK0For(shaftInstallation(a.pile.Installation))
+		if err != nil {
+			return lp, fmt.Errorf("%s.shaft: %w", path, err)
+		}
+		surf := a.pile.Surface
+		if surf == 0 {
+			surf = DefaultSurface(a.pile.Section, a.pile.Installation)
+		}
+		d, err := shaft.DeltaOverPhiFor(surf)
+		if err != nil {
+			return lp, fmt.Errorf("%s.shaft: %w", path, err)
+		}
+		lp.shaft = shaft.Beta{K: k, Delta: d}
+	case m.ShaftUndrained != nil:
+		lp.shaft = m.ShaftUndrained
+	case a.pile.Installation == Bored || a.pile.Installation == Augered:
+		lp.shaft = shaft.AlphaDrilled{}
+	default:
+		lp.shaft = shaft.AlphaAPI{}
+	}
+	// Design multipliers.
+	lp.fTip, lp.fShaft, lp.fTension = 1, 1, 1
+	if a.useCase {
+		sid := lambdaID
+		if !lp.lambda {
+			sid = lp.shaft.ID()
+		}
+		lp.fTip = factor(a.cs.Tip, lp.tip.ID())
+		lp.fShaft = factor(a.cs.Shaft, sid)
+		lp.fTension = factor(a.cs.Tension, sid)
+		if lp.fTip == 0 {
+			return lp, fmt.Errorf("%s: design case %s has no resistance factor for tip method %q", path, a.cs.Name, lp.tip.ID())
+		}
+		if lp.fShaft == 0 || lp.fTension == 0 {
+			return lp, fmt.Errorf("%s: design case %s has no resistance factor for shaft method %q", path, a.cs.Name, sid)
+		}
+	}
+	return lp, nil
+}
