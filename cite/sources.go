@@ -28,6 +28,10 @@ var (
 		Title: "Drilled Shafts: Construction Procedures and Design Methods", Publication: "FHWA-IF-99-025, Federal Highway Administration, Washington DC"}
 	Brown2010 = Source{Key: "fhwa-gec10-2010", Authors: "Brown, D.A., Turner, J.P., Castelli, R.J.", Year: 2010,
 		Title: "Drilled Shafts: Construction Procedures and LRFD Design Methods", Publication: "FHWA-NHI-10-016, Geotechnical Engineering Circular No. 10, Federal Highway Administration, Washington DC"}
+	Brown2018 = Source{Key: "fhwa-gec10-2018", Authors: "Brown, D.A., Turner, J.P., Castelli, R.J., Loehr, E.J.", Year: 2018,
+		Title: "Drilled Shafts: Construction Procedures and Design Methods", Publication: "FHWA-NHI-18-024, Geotechnical Engineering Circular No. 10, Federal Highway Administration, Washington DC"}
+	BondHarris2008 = Source{Key: "bond-harris2008", Authors: "Bond, A.J., Harris, A.J.", Year: 2008,
+		Title: "Decoding Eurocode 7", Publication: "Taylor & Francis, Abingdon"}
 	Hannigan2016 = Source{Key: "fhwa-gec12-2016", Authors: "Hannigan, P.J., Rausche, F., Likins, G.E., Robinson, B.R., Becker, M.L.", Year: 2016,
 		Title: "Design and Construction of Driven Pile Foundations", Publication: "FHWA-NHI-16-009, Geotechnical Engineering Circular No. 12, Federal Highway Administration, Washington DC"}
 	Jaky1944 = Source{Key: "jaky1944", Authors: "Jaky, J.", Year: 1944,

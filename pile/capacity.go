@@ -61,34 +61,32 @@ func (a *Analysis) CapacityAt(tip units.Length) (Capacity, error) {
 	if err := a.addShaft(&s, head, t); err != nil {
 		return Capacity{}, err
 	}
-	return a.finish(&s, t)
+	var c Capacity
+	err := a.finish(&s, t, &c)
+	return c, err
 }
 
-// addShaft adds the shaft from z0 to z1 (z0 < z1) to s, split at every
-// split depth between.
+// addShaft adds the shaft from z0 to z1 (z0 < z1) to s, interval by
+// interval.
 func (a *Analysis) addShaft(s *sums, z0, z1 float64) error {
-	// first split above or at z0
-	lo, hi := 0, len(a.splits)
+	// the interval holding z0
+	lo, hi := 0, len(a.iv)-1
 	for lo < hi {
-		m := (lo + hi) / 2
-		if a.splits[m] <= z0 {
-			lo = m + 1
+		m := int(uint(lo+hi+1) >> 1)
+		if a.iv[m].top <= z0 {
+			lo = m
 		} else {
-			hi = m
+			hi = m - 1
 		}
 	}
-	top := z0
-	for k := lo; top < z1; k++ {
-		bot := z1
-		if k < len(a.splits) && a.splits[k] < z1 {
-			bot = a.splits[k]
-		}
+	for k := lo; k < len(a.iv) && a.iv[k].top < z1; k++ {
+		iv := &a.iv[k]
+		top, bot := max(z0, iv.top), min(z1, iv.bot)
 		if bot > top {
-			if err := a.segment(s, top, bot); err != nil {
+			if err := a.segment(s, iv, top, bot); err != nil {
 				return err
 			}
 		}
-		top = bot
 	}
 	return nil
 }
@@ -103,34 +101,23 @@ func (a *Analysis) inZone(z float64) bool {
 	return false
 }
 
-// segment integrates one segment [z0, z1] that lies in one layer and
-// crosses no split.
-func (a *Analysis) segment(s *sums, z0, z1 float64) error {
-	li, err := a.prof.LayerAt(units.Length(z0))
-	if err != nil {
-		return err
-	}
-	lp := &a.plans[li]
-	zm := (z0 + z1) / 2
+// segment integrates the part [z0, z1] of interval iv.
+func (a *Analysis) segment(s *sums, iv *interval, z0, z1 float64) error {
+	lp := &a.plans[iv.layer]
 	h := z1 - z0
-	// σ′v at the ends, from the top and the midpoint so that a pore
-	// pressure jump at z1 is not picked up.
-	sa, err := a.prof.EffectiveStress(units.Length(z0))
-	if err != nil {
-		return err
-	}
-	sm, err := a.prof.EffectiveStress(units.Length(zm))
-	if err != nil {
-		return err
-	}
-	s0, s1 := float64(sa), 2*float64(sm)-float64(sa)
-	// Weight of this length of pile.
+	s0, s1 := iv.sigma(z0), iv.sigma(z1)
 	s.weight += a.pileWeight(z0, z1)
-	if lp.noShaft || a.inZone(zm) {
+	if lp.noShaft || iv.noShaft {
 		return nil
 	}
-	if a.zc > 0 && z0 >= a.zc {
-		s0, s1 = a.svc, a.svc
+	if a.useCase && (lp.fShaft == 0 || lp.fTension == 0) {
+		id := lambdaID
+		if !lp.lambda {
+			id = lp.shaft.ID()
+		}
+		return fmt.Errorf("layers[%d] (%s): design case %s has no resistance factor for shaft method %q; give one", iv.layer, lp.layer.Name, a.cs.Name, id)
+	}
+	if iv.held {
 		s.flags |= CriticalDepthApplied
 	}
 	if lp.lambda {
@@ -159,7 +146,7 @@ func (a *Analysis) segment(s *sums, z0, z1 float64) error {
 	default:
 		v, fl, err := a.quad(lp, z0, z1, s0, s1, 0)
 		if err != nil {
-			return fmt.Errorf("layers[%d] (%s).shaft at %.3g to %.3g m: %w", li, lp.layer.Name, z0, z1, err)
+			return fmt.Errorf("layers[%d] (%s).shaft at %.4g to %.4g m: %w", iv.layer, lp.layer.Name, z0, z1, err)
 		}
 		q = v
 		s.flags |= fl
@@ -190,8 +177,8 @@ func (a *Analysis) pileWeight(z0, z1 float64) float64 {
 }
 
 // finish adds the λ part and the tip, and assembles the capacity.
-func (a *Analysis) finish(s *sums, t float64) (Capacity, error) {
-	c := Capacity{TipDepth: units.Length(t)}
+func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
+	*c = Capacity{TipDepth: units.Length(t)}
 	outer, design, tension := s.outer, s.design, s.tension
 	if s.lamLen > 0 {
 		L := t - float64(a.pile.HeadDepth)
@@ -201,7 +188,7 @@ func (a *Analysis) finish(s *sums, t float64) (Capacity, error) {
 		} else {
 			r, err := a.lambda.Average(units.Length(L), units.Stress(s.lamSig/s.lamLen), units.Stress(s.lamSu/s.lamLen))
 			if err != nil {
-				return Capacity{}, fmt.Errorf("shaft (λ method): %w", err)
+				return fmt.Errorf("shaft (λ method): %w", err)
 			}
 			fav = float64(r.Fav)
 			s.flags |= shaftFlags(r.Flags)
@@ -211,9 +198,9 @@ func (a *Analysis) finish(s *sums, t float64) (Capacity, error) {
 		design += s.lamF * q
 		tension += s.lamFt * q
 	}
-	tr, err := a.tipAt(t)
-	if err != nil {
-		return Capacity{}, err
+	var tr tipResult
+	if err := a.tipAt(t, &tr, nil); err != nil {
+		return err
 	}
 	qp := tr.qp
 	if a.methods.SelfWeight == WeightNet {
@@ -256,7 +243,7 @@ func (a *Analysis) finish(s *sums, t float64) (Capacity, error) {
 	c.Tension = c.TensionShaft + c.Weight
 	c.DesignCompression = units.Force(desC)
 	c.DesignTension = units.Force(tenDes + s.weight)
-	return c, nil
+	return nil
 }
 
 // tipResult is the unit tip resistance at a depth with what made it.
@@ -288,39 +275,63 @@ func (a *Analysis) tipInput(lp *layerPlan, z float64) (bearing.Input, error) {
 	return in, nil
 }
 
-// tipAt returns the unit tip resistance with the tip at depth z.
-func (a *Analysis) tipAt(z float64) (tipResult, error) {
+// tipDetail is what the breakdown shows of the tip method's evaluation.
+type tipDetail struct {
+	in  bearing.Input
+	res bearing.Result
+}
+
+// tipAt sets out to the unit tip resistance with the tip at depth z. With
+// detail nil, a layer whose tip method reduces to factors (tipModel) is
+// evaluated from them; otherwise the method is called and its input and
+// result are stored in detail (for the breakdown).
+func (a *Analysis) tipAt(z float64, out *tipResult, detail *tipDetail) error {
+	direct := detail != nil
 	li, err := a.prof.LayerAt(units.Length(z))
 	if err != nil {
-		return tipResult{}, err
+		return err
 	}
 	lp := &a.plans[li]
-	in, err := a.tipInput(lp, z)
-	if err != nil {
-		return tipResult{}, err
+	if !direct && lp.tm.ok {
+		sv, err := a.prof.EffectiveStress(units.Length(z))
+		if err != nil {
+			return err
+		}
+		var su float64
+		if lp.layer.HasSu {
+			su = float64(lp.suAt(min(max(units.Length(z), lp.layer.Top), lp.layer.Bottom)))
+		}
+		_, qp, limited := lp.tm.eval(float64(sv), su)
+		out.layer, out.qp, out.sigma, out.f, out.upper = li, qp, float64(sv), lp.fTip, 0
+		out.flags = tipFlags(lp.tm.flags)
+		if limited {
+			out.flags |= TipLimit
+		}
+	} else {
+		in, err := a.tipInput(lp, z)
+		if err != nil {
+			return err
+		}
+		r, err := lp.tip.Tip(in)
+		if err != nil {
+			return fmt.Errorf("layers[%d] (%s).tip at %.4g m: %w", li, lp.layer.Name, z, err)
+		}
+		*out = tipResult{layer: li, qp: float64(r.Qp), sigma: float64(in.Q), f: lp.fTip}
+		out.flags = tipFlags(r.Flags)
+		detail.in, detail.res = in, r
 	}
-	r, err := lp.tip.Tip(in)
-	if err != nil {
-		return tipResult{}, fmt.Errorf("layers[%d] (%s).tip at %.4g m: %w", li, lp.layer.Name, z, err)
-	}
-	out := tipResult{layer: li, in: in, res: r, qp: float64(r.Qp), sigma: float64(in.Q), f: lp.fTip}
-	out.flags |= tipFlags(r.Flags)
 	d := a.size
 	top := float64(lp.layer.Top)
 	// Meyerhof's (1976) rule: less than 10D into a stronger layer, the tip
-	// resistance grows linearly from the weaker layer's value.
+	// resistance grows linearly from the weaker layer's value, taken as the
+	// upper layer's unit tip resistance at the interface.
 	if a.methods.LayeredTip && li > 0 && z-top < 10*d {
 		up := &a.plans[li-1]
-		uin, err := a.tipInput(up, z)
-		if err != nil {
-			return tipResult{}, err
+		if up.errBot != nil {
+			return fmt.Errorf("layers[%d] (%s).tip, needed for the layered-tip rule at %.4g m: %w", li-1, up.layer.Name, top, up.errBot)
 		}
-		ur, err := up.tip.Tip(uin)
-		if err != nil {
-			return tipResult{}, fmt.Errorf("layers[%d] (%s).tip (layered-tip rule, at %.4g m): %w", li-1, up.layer.Name, z, err)
-		}
-		if float64(ur.Qp) < out.qp {
-			out.upper = float64(ur.Qp)
+		if up.qpBot < out.qp {
+			out.upper = up.qpBot
 			out.qp = out.upper + (out.qp-out.upper)*(z-top)/(10*d)
 			out.flags |= LayeredTip
 		}
@@ -328,23 +339,18 @@ func (a *Analysis) tipAt(z float64) (tipResult, error) {
 	if z-top < d && li > 0 || float64(lp.layer.Bottom)-z < d && li < len(a.plans)-1 {
 		out.flags |= TipNearBoundary
 	}
-	// A weaker layer within WeakBelow diameters below the tip.
+	// A weaker layer within WeakBelow diameters below the tip (a layer
+	// whose tip resistance cannot be evaluated counts as weaker).
 	for k := li + 1; k < len(a.plans) && float64(a.plans[k].layer.Top) < z+a.weakBelow*d; k++ {
-		lk := &a.plans[k]
-		kin, err := a.tipInput(lk, float64(lk.layer.Top))
-		if err != nil {
-			return tipResult{}, err
-		}
-		kr, err := lk.tip.Tip(kin)
-		if err != nil || float64(kr.Qp) < out.qp {
+		if a.plans[k].errTop != nil || a.plans[k].qpTop < out.qp {
 			out.flags |= WeakBelow
 			break
 		}
 	}
 	if math.IsNaN(out.qp) || math.IsInf(out.qp, 0) {
-		return tipResult{}, fmt.Errorf("layers[%d] (%s).tip: no finite resistance at %.4g m", li, lp.layer.Name, z)
+		return fmt.Errorf("layers[%d] (%s).tip: no finite resistance at %.4g m", li, lp.layer.Name, z)
 	}
-	return out, nil
+	return nil
 }
 
 // tipFlags maps the bearing package's warnings onto ours.

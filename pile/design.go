@@ -233,7 +233,10 @@ func ParseApproach(s string) (Approach, error) {
 // and the model factor γRd alone (the UK National Annex sets γRd = 1.4).
 // Installation chooses the table: A.6 driven, A.7 bored, A.8 CFA.
 type Eurocode7 struct {
-	Approach    Approach
+	Approach Approach
+	// Total divides the total resistance by γt instead of tip and shaft
+	// by γb and γs (EN 1997-1 eq. 7.6 against 7.7; both are allowed).
+	Total       bool
 	Profiles    int     // number of ground test profiles n, 0 to use the model factor alone
 	ModelFactor float64 // γRd; 0 means 1.0
 }
@@ -285,6 +288,30 @@ func Xi(n int) (xi3v, xi4v float64, err error) {
 	return xi3[i], xi4[i], nil
 }
 
+// Characteristic returns the characteristic resistance from resistances
+// calculated on n = len(cal) ground profiles, EN 1997-1 eq. 7.8:
+//
+//	Rk = min(mean(Rcal)/ξ3, min(Rcal)/ξ4)
+func Characteristic(cal []units.Force) (units.Force, error) {
+	if len(cal) == 0 {
+		return 0, fmt.Errorf("design.profiles: no calculated resistances given")
+	}
+	x3, x4, err := Xi(len(cal))
+	if err != nil {
+		return 0, err
+	}
+	sum, lo := 0.0, math.Inf(1)
+	for i, r := range cal {
+		if !(r >= 0) || math.IsInf(float64(r), 0) {
+			return 0, fmt.Errorf("design.profiles[%d]: %v is outside 0 to ∞ kN", i, r)
+		}
+		sum += float64(r)
+		lo = min(lo, float64(r))
+	}
+	mean := sum / float64(len(cal))
+	return units.Force(min(mean/x3, lo/x4)), nil
+}
+
 // Cases returns DA1-1 and DA1-2 for DA1, and one case otherwise.
 func (e Eurocode7) Cases(inst Installation) ([]Case, error) {
 	var rs rset
@@ -315,9 +342,13 @@ func (e Eurocode7) Cases(inst Installation) ([]Case, error) {
 	}
 	mk := func(name string, r int, gG, gQ, tanPhi, su float64) Case {
 		k := xi * gRd
+		gb, gs := rs.b[r], rs.s[r]
+		if e.Total {
+			gb, gs = rs.t[r], rs.t[r]
+		}
 		return Case{Name: name,
-			Tip:     map[string]float64{"": 1 / (k * rs.b[r])},
-			Shaft:   map[string]float64{"": 1 / (k * rs.s[r])},
+			Tip:     map[string]float64{"": 1 / (k * gb)},
+			Shaft:   map[string]float64{"": 1 / (k * gs)},
 			Tension: map[string]float64{"": 1 / (k * rs.st[r])},
 			// Table A.3: A1 γG = 1.35, γQ = 1.5; A2 γG = 1.0, γQ = 1.3.
 			Permanent: gG, Variable: gQ, TanPhi: tanPhi, Su: su}
@@ -334,4 +365,57 @@ func (e Eurocode7) Cases(inst Installation) ([]Case, error) {
 		return []Case{mk("DA3", 2, 1.35, 1.5, 1.25, 1.4)}, nil
 	}
 	return nil, fmt.Errorf("design.approach: %v: want DA1, DA2 or DA3", e.Approach)
+}
+
+// Method families of the AASHTO resistance factor tables, by our method
+// identifiers.
+var (
+	alphaIDs = []string{"alpha-api", "alpha-chart", "alpha-drilled", "alpha-given"}
+	betaIDs  = []string{"beta", "beta-given", "beta-burland", "beta-api", "beta-drilled-sand", "beta-drilled-k0"}
+)
+
+func family(ids []string, phi float64, into map[string]float64) {
+	for _, id := range ids {
+		into[id] = phi
+	}
+}
+
+// AASHTODrivenPiles returns the resistance factors for static analysis of
+// driven piles of AASHTO LRFD Bridge Design Specifications Table
+// 10.5.5.2.3-1 (as reproduced in FHWA GEC 12, Hannigan et al. 2016,
+// Table 7-1): side and tip in clay by the α method 0.35, β method 0.25,
+// λ method 0.40; end bearing in clay (Skempton, our "nc9") 0.40; uplift
+// α 0.25, β 0.20, λ 0.30. Strength I load factors: permanent (DC) 1.25,
+// variable (LL) 1.75. Methods for sand tips outside the table (the table's
+// sand method is Nordlund's, which qult does not implement) have no factor:
+// give them in Tip.
+func AASHTODrivenPiles() LRFD {
+	l := LRFD{Name: "aashto-driven", Tip: map[string]float64{"nc9": 0.40}, Shaft: map[string]float64{},
+		Tension: map[string]float64{}, Permanent: 1.25, Variable: 1.75,
+		Sources: []cite.Ref{{Source: cite.AASHTO2020, Where: "Table 10.5.5.2.3-1; Table 3.4.1-1, -2"},
+			{Source: cite.Hannigan2016, Where: "Table 7-1"}}}
+	family(alphaIDs, 0.35, l.Shaft)
+	family(betaIDs, 0.25, l.Shaft)
+	l.Shaft[lambdaID] = 0.40
+	family(alphaIDs, 0.25, l.Tension)
+	family(betaIDs, 0.20, l.Tension)
+	l.Tension[lambdaID] = 0.30
+	return l
+}
+
+// AASHTODrilledShafts returns the resistance factors for drilled shafts of
+// AASHTO LRFD Bridge Design Specifications Table 10.5.5.2.4-1 (as applied
+// in FHWA GEC 10, Brown et al. 2018, Appendix A): side in clay (α) 0.45,
+// tip in clay 0.40, side in sand (β) 0.55, tip in sand 0.50; uplift in
+// clay 0.35, in sand 0.45. Strength I load factors 1.25 and 1.75.
+func AASHTODrilledShafts() LRFD {
+	l := LRFD{Name: "aashto-drilled", Tip: map[string]float64{"nc9": 0.40, "shaft-n60-sand": 0.50},
+		Shaft: map[string]float64{}, Tension: map[string]float64{}, Permanent: 1.25, Variable: 1.75,
+		Sources: []cite.Ref{{Source: cite.AASHTO2020, Where: "Table 10.5.5.2.4-1; Table 3.4.1-1, -2"},
+			{Source: cite.Brown2018, Where: "Appendix A, resistance factors applied"}}}
+	family(alphaIDs, 0.45, l.Shaft)
+	family(betaIDs, 0.55, l.Shaft)
+	family(alphaIDs, 0.35, l.Tension)
+	family(betaIDs, 0.45, l.Tension)
+	return l
 }

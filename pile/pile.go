@@ -211,6 +211,11 @@ type layerPlan struct {
 	noShaft bool
 	// design multipliers
 	fTip, fShaft, fTension float64
+	// tip reduced to factors, and the tip at the layer's bottom and top
+	// (for the layered-tip rule and the weak-layer check)
+	tm             tipModel
+	qpTop, qpBot   float64
+	errTop, errBot error
 	// closed-form integration (see classify)
 	kind  int
 	coef  float64
@@ -226,7 +231,8 @@ type Analysis struct {
 	pile      Pile
 	methods   Methods
 	plans     []layerPlan
-	splits    []float64 // sorted depths where the shaft is split (profile breaks, zc, zones)
+	splits    []float64 // sorted depths where the shaft is split (profile breaks, zc, zones, kinks)
+	iv        []interval
 	zc        float64   // critical depth, 0 for none
 	svc       float64   // σ′v at the critical depth
 	size      float64   // section size D
@@ -359,6 +365,21 @@ func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analy
 		a.splits = append(a.splits, float64(z.Top), float64(z.Bottom))
 	}
 	a.splits = sortUnique(a.splits)
+	if err := a.buildIntervals(); err != nil {
+		return nil, err
+	}
+	if k := a.kinkSplits(); len(k) > 0 {
+		a.splits = sortUnique(append(a.splits, k...))
+		if err := a.buildIntervals(); err != nil {
+			return nil, err
+		}
+	}
+	for i := range a.plans {
+		lp := &a.plans[i]
+		lp.tm = a.buildTipModel(lp)
+		lp.qpTop, lp.errTop = a.directTip(lp, float64(lp.layer.Top))
+		lp.qpBot, lp.errBot = a.directTip(lp, float64(lp.layer.Bottom))
+	}
 	return a, nil
 }
 
@@ -462,12 +483,22 @@ func (a *Analysis) plan(i int) (layerPlan, error) {
 		lp.fTip = factor(a.cs.Tip, lp.tip.ID())
 		lp.fShaft = factor(a.cs.Shaft, sid)
 		lp.fTension = factor(a.cs.Tension, sid)
-		if lp.fTip == 0 {
-			return lp, fmt.Errorf("%s: design case %s has no resistance factor for tip method %q", path, a.cs.Name, lp.tip.ID())
-		}
-		if lp.fShaft == 0 || lp.fTension == 0 {
-			return lp, fmt.Errorf("%s: design case %s has no resistance factor for shaft method %q", path, a.cs.Name, sid)
-		}
+		// A missing factor is an error only where the layer is used (see
+		// segment and tipAt): a layer below the tip needs none.
 	}
 	return lp, nil
+}
+
+// directTip evaluates layer lp's tip method at depth z (clamped into the
+// layer) with the layer's own parameters.
+func (a *Analysis) directTip(lp *layerPlan, z float64) (float64, error) {
+	in, err := a.tipInput(lp, z)
+	if err != nil {
+		return 0, err
+	}
+	r, err := lp.tip.Tip(in)
+	if err != nil {
+		return 0, err
+	}
+	return float64(r.Qp), nil
 }

@@ -582,13 +582,17 @@ func (p *Profile) LayerAt(z units.Length) (int, error) {
 	if err := p.checkDepth(z); err != nil {
 		return 0, err
 	}
-	i, _ := slices.BinarySearchFunc(p.layers, z, func(l Layer, z units.Length) int {
-		if l.Bottom <= z {
-			return -1
+	// the first layer whose bottom lies below z
+	lo, hi := 0, len(p.layers)
+	for lo < hi {
+		m := int(uint(lo+hi) >> 1)
+		if p.layers[m].Bottom <= z {
+			lo = m + 1
+		} else {
+			hi = m
 		}
-		return 1
-	})
-	return min(i, len(p.layers)-1), nil
+	}
+	return min(lo, len(p.layers)-1), nil
 }
 
 // LayerAbove returns the index of the layer at depth z where, at a
@@ -598,13 +602,17 @@ func (p *Profile) LayerAbove(z units.Length) (int, error) {
 	if err := p.checkDepth(z); err != nil {
 		return 0, err
 	}
-	i, _ := slices.BinarySearchFunc(p.layers, z, func(l Layer, z units.Length) int {
-		if l.Bottom < z {
-			return -1
+	// the first layer whose bottom lies at or below z
+	lo, hi := 0, len(p.layers)
+	for lo < hi {
+		m := int(uint(lo+hi) >> 1)
+		if p.layers[m].Bottom < z {
+			lo = m + 1
+		} else {
+			hi = m
 		}
-		return 1
-	})
-	return min(i, len(p.layers)-1), nil
+	}
+	return min(lo, len(p.layers)-1), nil
 }
 
 // LayerOf returns the index of the one layer holding the segment from top

@@ -1,0 +1,95 @@
+package pile
+
+import (
+	"testing"
+
+	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/profile"
+	"github.com/qultgeo/qult/shaft"
+	"github.com/qultgeo/qult/units"
+)
+
+// benchProfile is a 10-layer profile of our own: sand and clay in turn,
+// 6.5 m each, water table at 1.5 m; sands carry Ir for Vesic's tip.
+func benchProfile(b *testing.B) *profile.Profile {
+	var ls []profile.LayerSpec
+	for i := 0; i < 10; i++ {
+		if i%2 == 0 {
+			ls = append(ls, profile.LayerSpec{Name: "sand", Thickness: 6.5 * m, Drainage: profile.Drained,
+				Phi: units.Angle(30+i) * deg, UnitWeight: 18 * kNm, SaturatedUnitWeight: 20 * kNm, Ir: 60})
+		} else {
+			ls = append(ls, profile.LayerSpec{Name: "clay", Thickness: 6.5 * m, Drainage: profile.Undrained,
+				Su: units.Stress(30+10*i) * kPa, UnitWeight: 17 * kNm, SaturatedUnitWeight: 17.5 * kNm})
+		}
+	}
+	p, err := profile.New(profile.Spec{WaterDepth: 1.5 * m, Layers: ls})
+	if err != nil {
+		b.Fatal(err)
+	}
+	return p
+}
+
+var benchAlphas = []struct {
+	name string
+	m    shaft.Unit
+}{
+	{"alpha-api", shaft.AlphaAPI{}},
+	{"alpha-chart", shaft.AlphaChart{}},
+}
+
+// BenchmarkCapacity: 10 layers, β in sand, α in clay, Vesic tip; the
+// capacity-only path.
+func BenchmarkCapacity(b *testing.B) {
+	prof := benchProfile(b)
+	p := Pile{Section: Section{Shape: Circle, Diameter: 0.6 * m}, Length: 60 * m, Installation: DrivenHigh}
+	for _, al := range benchAlphas {
+		b.Run(al.name, func(b *testing.B) {
+			a, err := NewAnalysis(prof, p, Methods{TipDrained: bearing.Vesic{}, ShaftUndrained: al.m, LayeredTip: true}, nil)
+			if err != nil {
+				b.Fatal(err)
+			}
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, err := a.Capacity(); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+}
+
+// BenchmarkCapacityWithDepth: the same profile, tip depths every 0.1 m to
+// 60 m, in one pass.
+func BenchmarkCapacityWithDepth(b *testing.B) {
+	prof := benchProfile(b)
+	p := Pile{Section: Section{Shape: Circle, Diameter: 0.6 * m}, Length: 60 * m, Installation: DrivenHigh}
+	for _, al := range benchAlphas {
+		b.Run(al.name, func(b *testing.B) {
+			a, err := NewAnalysis(prof, p, Methods{TipDrained: bearing.Vesic{}, ShaftUndrained: al.m, LayeredTip: true}, nil)
+			if err != nil {
+				b.Fatal(err)
+			}
+			rows := make([]Capacity, 0, 700)
+			b.ReportAllocs()
+			for b.Loop() {
+				var err error
+				rows, err = a.WithDepth(0.1*m, 60*m, 0.1*m, rows[:0])
+				if err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+}
+
+// TestCapacityAllocatesNothing guards the zero-allocation path.
+func TestCapacityAllocatesNothing(t *testing.T) {
+	prof := mustProfile(t, layeredSpec(siUnits, false))
+	a, err := NewAnalysis(prof, layeredPile(siUnits), Methods{TipDrained: bearing.Vesic{}, ShaftUndrained: shaft.AlphaAPI{}, LayeredTip: true}, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if n := testing.AllocsPerRun(100, func() { _, _ = a.Capacity() }); n != 0 {
+		t.Errorf("Capacity allocates %v times per run", n)
+	}
+}

@@ -1,0 +1,185 @@
+package pile
+
+import (
+	"fmt"
+
+	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/cite"
+	"github.com/qultgeo/qult/profile"
+	"github.com/qultgeo/qult/shaft"
+	"github.com/qultgeo/qult/units"
+)
+
+// Row is one shaft segment of a breakdown: a length of shaft in one layer
+// between two split depths, with every value a reviewer needs to redo it.
+type Row struct {
+	Top, Bottom units.Length
+	Layer       int
+	LayerName   string
+	Drainage    profile.Drainage
+	Method      string // shaft method identifier ("lambda" for the λ method, "none" where no friction is counted)
+	Equation    string
+	// σ′v at the top and bottom of the segment as used (held below the
+	// critical depth), and su (factored) where the layer has it.
+	SigmaTop, SigmaBottom units.Stress
+	SuTop, SuBottom       units.Stress
+	// The method's results at the top and bottom of the segment.
+	At [2]shaft.Result
+	// Integral is ∫fs dz over the segment (N/m); Perimeter the perimeter
+	// it acts on; Force = Integral·Perimeter.
+	Integral  units.ForcePerLength
+	Perimeter units.Length
+	Force     units.Force
+	Flags     Flags
+}
+
+// TipBlock is the tip of a breakdown.
+type TipBlock struct {
+	Depth     units.Length
+	Layer     int
+	LayerName string
+	Method    string
+	Equation  string
+	Input     bearing.Input
+	Result    bearing.Result
+	// Upper is the upper layer's unit tip resistance where Meyerhof's
+	// layered rule applied (0 otherwise); Qp the unit tip resistance used.
+	Upper units.Stress
+	Qp    units.Stress
+	Area  units.Area
+	Force units.Force
+	Flags Flags
+}
+
+// Breakdown is a capacity with its derivation.
+type Breakdown struct {
+	Capacity
+	Rows     []Row
+	Tip      TipBlock
+	Lambda   *shaft.LambdaResult // where the λ method was used
+	Warnings []string
+	Sources  []cite.Source
+}
+
+// Breakdown returns the capacity with the pile's own tip depth and a row
+// per shaft segment. It allocates; Capacity is the lean path.
+func (a *Analysis) Breakdown() (Breakdown, error) {
+	c, err := a.Capacity()
+	if err != nil {
+		return Breakdown{}, err
+	}
+	b := Breakdown{Capacity: c}
+	head, t := float64(a.pile.HeadDepth), float64(a.pile.Tip())
+	perim := a.outer
+	if !c.Plugged {
+		perim += a.inner
+	}
+	var all sums
+	var refs []cite.Ref
+	seen := map[string]bool{}
+	addRefs := func(id string, r []cite.Ref) {
+		if !seen[id] {
+			seen[id] = true
+			refs = append(refs, r...)
+		}
+	}
+	for k := range a.iv {
+		iv := &a.iv[k]
+		top, bot := max(head, iv.top), min(t, iv.bot)
+		if !(bot > top) {
+			continue
+		}
+		var s sums
+		if err := a.segment(&s, iv, top, bot); err != nil {
+			return Breakdown{}, err
+		}
+		li := iv.layer
+		lp := &a.plans[li]
+		row := Row{Top: units.Length(top), Bottom: units.Length(bot), Layer: li, LayerName: lp.layer.Name,
+			Drainage: lp.layer.Drainage, Perimeter: units.Length(perim), Flags: s.flags}
+		if lp.layer.HasSu {
+			row.SuTop, row.SuBottom = lp.suAt(units.Length(top)), lp.suAt(units.Length(bot))
+		}
+		s0, s1 := iv.sigma(top), iv.sigma(bot)
+		row.SigmaTop, row.SigmaBottom = units.Stress(s0), units.Stress(s1)
+		switch {
+		case lp.noShaft || iv.noShaft:
+			row.Method, row.Equation = "none", "fs = 0"
+		case lp.lambda:
+			row.Method, row.Equation = lambdaID, a.lambda.Equation()
+			addRefs(lambdaID, a.lambda.Refs())
+			all.lamSig += s.lamSig
+			all.lamSu += s.lamSu
+			all.lamLen += s.lamLen
+		default:
+			row.Method, row.Equation = lp.shaft.ID(), lp.shaft.Equation()
+			addRefs(lp.shaft.ID(), lp.shaft.Refs())
+			for j, z := range [2]float64{top, bot} {
+				sv := [2]float64{s0, s1}[j]
+				r, err := lp.shaft.Unit(a.point(lp, units.Length(z), units.Stress(sv)))
+				if err != nil {
+					return Breakdown{}, fmt.Errorf("layers[%d] (%s).shaft at %.4g m: %w", li, lp.layer.Name, z, err)
+				}
+				row.At[j] = r
+			}
+			row.Integral = units.ForcePerLength(s.outer)
+			row.Force = units.Force(s.outer * perim)
+		}
+		b.Rows = append(b.Rows, row)
+	}
+	// λ rows share the average friction of the whole λ length.
+	if all.lamLen > 0 {
+		L := units.Length(t - head)
+		var fav units.Stress
+		var lr shaft.LambdaResult
+		lamVal := 0.0
+		for i := range a.plans {
+			if a.plans[i].lambda && a.plans[i].lamVal > 0 {
+				lamVal = a.plans[i].lamVal
+			}
+		}
+		if lamVal > 0 {
+			fav = units.Stress(lamVal * (all.lamSig + 2*all.lamSu) / all.lamLen)
+			lr = shaft.LambdaResult{Fav: fav, Lambda: lamVal, Length: L,
+				SigmaV: units.Stress(all.lamSig / all.lamLen), Su: units.Stress(all.lamSu / all.lamLen)}
+		} else {
+			lr, err = a.lambda.Average(L, units.Stress(all.lamSig/all.lamLen), units.Stress(all.lamSu/all.lamLen))
+			if err != nil {
+				return Breakdown{}, err
+			}
+			fav = lr.Fav
+		}
+		b.Lambda = &lr
+		for i := range b.Rows {
+			if b.Rows[i].Method == lambdaID {
+				h := float64(b.Rows[i].Bottom - b.Rows[i].Top)
+				b.Rows[i].Integral = units.ForcePerLength(float64(fav) * h)
+				b.Rows[i].Force = units.Force(float64(fav) * h * perim)
+			}
+		}
+	}
+	var tr tipResult
+	var td tipDetail
+	if err := a.tipAt(t, &tr, &td); err != nil {
+		return Breakdown{}, err
+	}
+	lp := &a.plans[tr.layer]
+	area := a.gross
+	if !c.Plugged {
+		area = a.mat
+	}
+	b.Tip = TipBlock{Depth: units.Length(t), Layer: tr.layer, LayerName: lp.layer.Name, Method: lp.tip.ID(),
+		Equation: lp.tip.Equation(), Input: td.in, Result: td.res, Upper: units.Stress(tr.upper),
+		Qp: c.UnitTip, Area: units.Area(area), Force: c.Tip, Flags: tr.flags}
+	addRefs(lp.tip.ID(), lp.tip.Refs())
+	if a.zc > 0 {
+		addRefs("critical-depth", (shaft.CriticalDepth{}).Refs())
+	}
+	if tr.flags&LayeredTip != 0 {
+		addRefs("layered-tip", []cite.Ref{{Source: cite.Meyerhof1976, Where: "tip in a stronger layer below a weaker one"}})
+	}
+	addRefs("tension-"+a.tension.Name, a.tension.Refs)
+	b.Sources = cite.Collect(refs...)
+	b.Warnings = c.Flags.Messages()
+	return b, nil
+}
