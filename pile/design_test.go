@@ -18,11 +18,11 @@ import (
 // (A2), γQ 1.5, 1.3; Table A.4 M2 γφ′ 1.25, γcu 1.4.
 func TestEN1997Tables(t *testing.T) {
 	cases := []struct {
-		inst               Installation
-		ap                 Approach
-		name               string
+		inst                Installation
+		ap                  Approach
+		name                string
 		gb, gs, gst, gG, gQ float64
-		tanPhi, su         float64
+		tanPhi, su          float64
 	}{
 		{DrivenHigh, DA1, "DA1-1", 1.0, 1.0, 1.25, 1.35, 1.5, 1, 1},
 		{DrivenHigh, DA2, "DA2", 1.1, 1.1, 1.15, 1.35, 1.5, 1, 1},

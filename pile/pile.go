@@ -233,13 +233,13 @@ type Analysis struct {
 	plans     []layerPlan
 	splits    []float64 // sorted depths where the shaft is split (profile breaks, zc, zones, kinks)
 	iv        []interval
-	zc        float64   // critical depth, 0 for none
-	svc       float64   // σ′v at the critical depth
-	size      float64   // section size D
-	outer     float64   // outer perimeter
-	inner     float64   // inner perimeter
-	gross     float64   // gross area
-	mat       float64   // material area
+	zc        float64 // critical depth, 0 for none
+	svc       float64 // σ′v at the critical depth
+	size      float64 // section size D
+	outer     float64 // outer perimeter
+	inner     float64 // inner perimeter
+	gross     float64 // gross area
+	mat       float64 // material area
 	lambda    shaft.Lambda
 	tension   TensionFactor
 	useCase   bool
