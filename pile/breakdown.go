@@ -114,8 +114,8 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 		default:
 			row.Method, row.Equation = lp.shaft.ID(), lp.shaft.Equation()
 			addRefs(lp.shaft.ID(), lp.shaft.Refs())
-			for j, z := range [2]float64{top, bot} {
-				sv := [2]float64{s0, s1}[j]
+			for j, z := range endPoints(top, bot) {
+				sv := s0 + (s1-s0)*(z-top)/(bot-top)
 				r, err := lp.shaft.Unit(a.point(lp, units.Length(z), units.Stress(sv)))
 				if err != nil {
 					return Breakdown{}, fmt.Errorf("layers[%d] (%s).shaft at %.4g m: %w", li, lp.layer.Name, z, err)
@@ -160,7 +160,7 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 	}
 	var tr tipResult
 	var td tipDetail
-	if err := a.tipAt(t, &tr, &td); err != nil {
+	if err := a.tipAt(t, &tr, &td, -1); err != nil {
 		return Breakdown{}, err
 	}
 	lp := &a.plans[tr.layer]

@@ -5,6 +5,7 @@ import (
 	"math"
 
 	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/shaft"
 	"github.com/qultgeo/qult/units"
 )
 
@@ -41,6 +42,7 @@ type sums struct {
 	lamVal                float64 // a λ given instead of the table, 0 for none
 	weight                float64 // W′ of the pile down to here, N
 	flags                 Flags
+	k                     int // index of the interval reached, a hint for the next call
 }
 
 // Capacity returns the capacity of the pile with its tip at the pile's
@@ -69,8 +71,11 @@ func (a *Analysis) CapacityAt(tip units.Length) (Capacity, error) {
 // addShaft adds the shaft from z0 to z1 (z0 < z1) to s, interval by
 // interval.
 func (a *Analysis) addShaft(s *sums, z0, z1 float64) error {
-	// the interval holding z0
+	// the interval holding z0: the hint, or a binary search
 	lo, hi := 0, len(a.iv)-1
+	if k := s.k; k < len(a.iv) && a.iv[k].top <= z0 && z0 < a.iv[k].bot {
+		lo, hi = k, k
+	}
 	for lo < hi {
 		m := int(uint(lo+hi+1) >> 1)
 		if a.iv[m].top <= z0 {
@@ -80,6 +85,7 @@ func (a *Analysis) addShaft(s *sums, z0, z1 float64) error {
 		}
 	}
 	for k := lo; k < len(a.iv) && a.iv[k].top < z1; k++ {
+		s.k = k
 		iv := &a.iv[k]
 		top, bot := max(z0, iv.top), min(z1, iv.bot)
 		if bot > top {
@@ -127,6 +133,13 @@ func (a *Analysis) segment(s *sums, iv *interval, z0, z1 float64) error {
 		s.lamF, s.lamFt, s.lamVal = lp.fShaft, lp.fTension, lp.lamVal
 		return nil
 	}
+	if iv.check && lp.kind != kindGeneral {
+		for _, z := range endPoints(z0, z1) {
+			if _, err := lp.shaft.Unit(a.point(lp, units.Length(z), units.Stress(iv.sigma(z)))); err != nil {
+				return fmt.Errorf("layers[%d] (%s).shaft at %.4g m: %w", iv.layer, lp.layer.Name, z, err)
+			}
+		}
+	}
 	var q float64
 	switch lp.kind {
 	case kindBeta:
@@ -143,6 +156,13 @@ func (a *Analysis) segment(s *sums, iv *interval, z0, z1 float64) error {
 			s.flags |= ShaftLimit
 		}
 		s.flags |= shaftFlags(lp.flags)
+	case kindAlphaAPI:
+		v, fl, err := shaft.AlphaAPI{}.Integral(lp.su0, units.Stress(s0), units.Stress(s1), units.Length(h))
+		if err != nil {
+			return fmt.Errorf("layers[%d] (%s).shaft at %.4g to %.4g m: %w", iv.layer, lp.layer.Name, z0, z1, err)
+		}
+		q = float64(v)
+		s.flags |= shaftFlags(fl)
 	default:
 		v, fl, err := a.quad(lp, z0, z1, s0, s1, 0)
 		if err != nil {
@@ -180,6 +200,7 @@ func (a *Analysis) pileWeight(z0, z1 float64) float64 {
 func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	*c = Capacity{TipDepth: units.Length(t)}
 	outer, design, tension := s.outer, s.design, s.tension
+	var lamFlags Flags
 	if s.lamLen > 0 {
 		L := t - float64(a.pile.HeadDepth)
 		var fav float64
@@ -191,7 +212,7 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 				return fmt.Errorf("shaft (λ method): %w", err)
 			}
 			fav = float64(r.Fav)
-			s.flags |= shaftFlags(r.Flags)
+			lamFlags = shaftFlags(r.Flags)
 		}
 		q := fav * s.lamLen
 		outer += q
@@ -199,7 +220,7 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 		tension += s.lamFt * q
 	}
 	var tr tipResult
-	if err := a.tipAt(t, &tr, nil); err != nil {
+	if err := a.tipAt(t, &tr, nil, s.k); err != nil {
 		return err
 	}
 	qp := tr.qp
@@ -207,7 +228,7 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 		qp = max(0, qp-tr.sigma)
 	}
 	c.UnitTip = units.Stress(qp)
-	c.Flags = s.flags | tr.flags
+	c.Flags = s.flags | tr.flags | lamFlags
 	tf := a.tension.Value
 	c.Weight = units.Force(s.weight)
 	// Modes: plugged (gross area, outer perimeter) and unplugged (material
@@ -285,24 +306,22 @@ type tipDetail struct {
 // detail nil, a layer whose tip method reduces to factors (tipModel) is
 // evaluated from them; otherwise the method is called and its input and
 // result are stored in detail (for the breakdown).
-func (a *Analysis) tipAt(z float64, out *tipResult, detail *tipDetail) error {
+func (a *Analysis) tipAt(z float64, out *tipResult, detail *tipDetail, hint int) error {
 	direct := detail != nil
-	li, err := a.prof.LayerAt(units.Length(z))
-	if err != nil {
-		return err
+	if !(z >= 0 && z <= float64(a.prof.Depth())) {
+		return fmt.Errorf("pile: tip depth %.4g m is outside the profile (0 to %v)", z, a.prof.Depth())
 	}
+	ivk := &a.iv[a.tipInterval(z, hint)]
+	li := ivk.layer
 	lp := &a.plans[li]
 	if !direct && lp.tm.ok {
-		sv, err := a.prof.EffectiveStress(units.Length(z))
-		if err != nil {
-			return err
-		}
+		sv := ivk.effective(z)
 		var su float64
 		if lp.layer.HasSu {
 			su = float64(lp.suAt(min(max(units.Length(z), lp.layer.Top), lp.layer.Bottom)))
 		}
-		_, qp, limited := lp.tm.eval(float64(sv), su)
-		out.layer, out.qp, out.sigma, out.f, out.upper = li, qp, float64(sv), lp.fTip, 0
+		_, qp, limited := lp.tm.eval(sv, su)
+		out.layer, out.qp, out.sigma, out.f, out.upper = li, qp, sv, lp.fTip, 0
 		out.flags = tipFlags(lp.tm.flags)
 		if limited {
 			out.flags |= TipLimit
@@ -318,7 +337,9 @@ func (a *Analysis) tipAt(z float64, out *tipResult, detail *tipDetail) error {
 		}
 		*out = tipResult{layer: li, qp: float64(r.Qp), sigma: float64(in.Q), f: lp.fTip}
 		out.flags = tipFlags(r.Flags)
-		detail.in, detail.res = in, r
+		if detail != nil {
+			detail.in, detail.res = in, r
+		}
 	}
 	d := a.size
 	top := float64(lp.layer.Top)

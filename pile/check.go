@@ -215,9 +215,8 @@ func (a *Analysis) WithDepth(from, to, step units.Length, dst []Capacity) ([]Cap
 			return dst, err
 		}
 		prev = z
-		c := s
 		dst = append(dst, Capacity{})
-		if err := a.finish(&c, z, &dst[len(dst)-1]); err != nil {
+		if err := a.finish(&s, z, &dst[len(dst)-1]); err != nil {
 			return dst[:len(dst)-1], err
 		}
 	}

@@ -13,12 +13,67 @@ import (
 type interval struct {
 	top, bot float64
 	layer    int
-	s0, ds   float64 // σ′v = s0 + ds·(z − top)
+	s0, ds   float64 // σ′v for shaft friction = s0 + ds·(z − top)
+	e0, de   float64 // σ′v itself (not held) = e0 + de·(z − top)
 	held     bool    // below the critical depth
 	noShaft  bool    // in a zone without shaft friction
+	// check: the layer's method, integrated in closed form here, refused
+	// the stresses at an end of the interval; segments inside it are then
+	// checked at their own ends (see markRanges).
+	check bool
+}
+
+// markRanges evaluates, once, the method of every closed-form interval at
+// its two ends, and marks the intervals where it refuses its inputs, so that
+// the closed forms never return what the method itself would refuse.
+func (a *Analysis) markRanges() {
+	for k := range a.iv {
+		iv := &a.iv[k]
+		lp := &a.plans[iv.layer]
+		if lp.lambda || lp.noShaft || iv.noShaft || lp.kind == kindGeneral {
+			continue
+		}
+		for _, z := range endPoints(iv.top, iv.bot) {
+			if _, err := lp.shaft.Unit(a.point(lp, units.Length(z), units.Stress(iv.sigma(z)))); err != nil {
+				iv.check = true
+			}
+		}
+	}
 }
 
 func (iv *interval) sigma(z float64) float64 { return iv.s0 + iv.ds*(z-iv.top) }
+
+// effective returns σ′v itself at z (not held below the critical depth).
+func (iv *interval) effective(z float64) float64 { return iv.e0 + iv.de*(z-iv.top) }
+
+// tipInterval returns the index of the interval that holds a tip at depth
+// z: the interval below where z is a split (the layer below wins), the
+// last one at the bottom of the profile. hint is tried first.
+func (a *Analysis) tipInterval(z float64, hint int) int {
+	n := len(a.iv)
+	if hint >= 0 && hint < n {
+		iv := &a.iv[hint]
+		if iv.top <= z && z < iv.bot {
+			return hint
+		}
+		if z == iv.bot && (hint == n-1 || a.iv[hint+1].top == z) {
+			if hint == n-1 {
+				return hint
+			}
+			return hint + 1
+		}
+	}
+	lo, hi := 0, n-1
+	for lo < hi {
+		m := int(uint(lo+hi+1) >> 1)
+		if a.iv[m].top <= z {
+			lo = m
+		} else {
+			hi = m - 1
+		}
+	}
+	return lo
+}
 
 // buildIntervals fills a.iv from a.splits.
 func (a *Analysis) buildIntervals() error {
@@ -40,6 +95,7 @@ func (a *Analysis) buildIntervals() error {
 			return err
 		}
 		iv := interval{top: top, bot: bot, layer: li, s0: float64(st), ds: 2 * (float64(sm) - float64(st)) / (bot - top)}
+		iv.e0, iv.de = iv.s0, iv.ds
 		if a.zc > 0 && top >= a.zc {
 			iv.s0, iv.ds, iv.held = a.svc, 0, true
 		}

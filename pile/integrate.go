@@ -18,6 +18,9 @@ const (
 	kindBeta
 	// kindAlpha: fs = min(c·su, cap), with c = α constant in the layer.
 	kindAlpha
+	// kindAlphaAPI: the API α with su constant in the layer, integrated
+	// in closed form by shaft.AlphaAPI.Integral.
+	kindAlphaAPI
 )
 
 // classify decides the layer's kind from the method's type. Only methods
@@ -36,6 +39,10 @@ func (a *Analysis) classify(i int, lp *layerPlan) error {
 			return fmt.Errorf("layers[%d] (%s).shaft: %w", i, lp.layer.Name, err)
 		}
 		capv, m = v, c.Method
+	}
+	if _, ok := lp.shaft.(shaft.AlphaAPI); ok && lp.su0 == lp.su1 {
+		lp.kind = kindAlphaAPI
+		return nil
 	}
 	kind := kindGeneral
 	switch m.(type) {
@@ -158,6 +165,16 @@ const maxQuadDepth = 30
 // depth). It returns the integral (N/m), the flags of the evaluations, and
 // the first error a method returned.
 func (a *Analysis) quad(lp *layerPlan, z0, z1, s0, s1 float64, depth int) (float64, Flags, error) {
+	if depth == 0 {
+		// The method's range is checked at the ends of the segment too
+		// (just inside them, where σ′v = 0 at the surface is a limit).
+		for _, z := range endPoints(z0, z1) {
+			s := s0 + (s1-s0)*(z-z0)/(z1-z0)
+			if _, err := lp.shaft.Unit(a.point(lp, units.Length(z), units.Stress(s))); err != nil {
+				return 0, 0, err
+			}
+		}
+	}
 	h := (z1 - z0) / 2
 	mid := (z0 + z1) / 2
 	var k7, g3 float64
@@ -206,4 +223,12 @@ func shaftFlags(f shaft.Flags) Flags {
 		out |= ChartEdge
 	}
 	return out
+}
+
+// endPoints returns the depths just inside a segment's ends (a billionth
+// of its length in) at which a method is evaluated for its range and for a
+// breakdown row.
+func endPoints(z0, z1 float64) [2]float64 {
+	e := 1e-9 * (z1 - z0)
+	return [2]float64{z0 + e, z1 - e}
 }

@@ -374,6 +374,7 @@ func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analy
 			return nil, err
 		}
 	}
+	a.markRanges()
 	for i := range a.plans {
 		lp := &a.plans[i]
 		lp.tm = a.buildTipModel(lp)

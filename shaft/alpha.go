@@ -204,3 +204,58 @@ func (g AlphaGiven) Unit(p Point) (Result, error) {
 // tpm1996 is the source of the α tabulation reproduced by Das.
 var tpm1996 = cite.Source{Key: "terzaghi-peck-mesri1996", Authors: "Terzaghi, K., Peck, R.B., Mesri, G.", Year: 1996,
 	Title: "Soil Mechanics in Engineering Practice", Publication: "3rd ed., Wiley, New York"}
+
+// Integral returns the integral of fs over a segment of length h along
+// which su is constant and σ′v varies linearly from s0 at its top to s1 at
+// its bottom (σ′v ≥ 0; F(0) = 0, since α → 0 as ψ → ∞), in closed form. With ψ = su/σ′v, fs is a power of σ′v on
+// each branch of the rule, so with F the antiderivative in σ′v,
+//
+//	F(σ) = 0.4·su^0.75·σ^1.25                         σ ≤ su       (ψ ≥ 1)
+//	F(σ) = 0.4·su² + (1/3)·su^0.5·(σ^1.5 − su^1.5)     su ≤ σ ≤ 4su
+//	F(σ) = (41/15)·su² + su·(σ − 4su)                  σ ≥ 4su      (α = 1)
+//	∫ fs dz = h·(F(s1) − F(s0))/(s1 − s0)
+//
+// and h·fs when σ′v is constant. It checks its inputs as Unit does and
+// sets BoundApplied where α = 1 governs anywhere in the segment. It
+// allocates nothing.
+func (m AlphaAPI) Integral(su, s0, s1 units.Stress, h units.Length) (units.ForcePerLength, Flags, error) {
+	id := m.ID()
+	if err := checkSu(id, su); err != nil {
+		return 0, 0, err
+	}
+	if err := checkSigmaV(id, s0); err != nil {
+		return 0, 0, err
+	}
+	if err := checkSigmaV(id, s1); err != nil {
+		return 0, 0, err
+	}
+	if err := check(id, "h", h.Metres(), 0, maxDepth, "m", false); err != nil {
+		return 0, 0, err
+	}
+	var fl Flags
+	if max(s0, s1) > 4*su {
+		fl = BoundApplied
+	}
+	u, a, b := float64(su), float64(s0), float64(s1)
+	if a == 0 && b == 0 {
+		return 0, fl, nil // ψ → ∞, α → 0
+	}
+	if math.Abs(b-a) <= 1e-9*math.Max(a, b) {
+		r, err := m.Unit(Point{Su: su, SigmaV: (s0 + s1) / 2})
+		if err != nil {
+			return 0, 0, err
+		}
+		return units.ForcePerLength(float64(r.Fs) * h.Metres()), fl, nil
+	}
+	F := func(s float64) float64 {
+		switch {
+		case s <= u:
+			return 0.4 * math.Pow(u, 0.75) * math.Pow(s, 1.25)
+		case s <= 4*u:
+			return 0.4*u*u + math.Sqrt(u)*(s*math.Sqrt(s)-u*math.Sqrt(u))/3
+		default:
+			return 41.0/15*u*u + u*(s-4*u)
+		}
+	}
+	return units.ForcePerLength(h.Metres() * (F(b) - F(a)) / (b - a)), fl, nil
+}
