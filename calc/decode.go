@@ -1,0 +1,334 @@
+package calc
+
+import (
+	"bytes"
+	"errors"
+	"fmt"
+	"reflect"
+	"sort"
+	"strconv"
+	"strings"
+
+	"go.yaml.in/yaml/v3"
+)
+
+// MaxFileSize is the largest calc file Decode reads: 1 MiB, far more than
+// any borehole log needs.
+const MaxFileSize = 1 << 20
+
+// maxDepth is the deepest nesting of mappings and sequences accepted; a
+// calc file needs 5.
+const maxDepth = 16
+
+// Problem is one thing wrong with a calc file.
+type Problem struct {
+	Path string // field path, such as "ground.layers[2].thickness"; "" for the file
+	Line int    // line in the file, 0 when unknown
+	Msg  string
+}
+
+func (p Problem) Error() string {
+	var b strings.Builder
+	if p.Path != "" {
+		b.WriteString(p.Path)
+	} else {
+		b.WriteString("file")
+	}
+	if p.Line > 0 {
+		b.WriteString(" (line ")
+		b.WriteString(strconv.Itoa(p.Line))
+		b.WriteString(")")
+	}
+	b.WriteString(": ")
+	b.WriteString(p.Msg)
+	return b.String()
+}
+
+// Problems is every problem found in a calc file. It is the error type of
+// Decode and Run for bad input.
+type Problems []Problem
+
+func (ps Problems) Error() string {
+	lines := make([]string, len(ps))
+	for i, p := range ps {
+		lines[i] = p.Error()
+	}
+	return strings.Join(lines, "\n")
+}
+
+// Decode reads a calc file in YAML or JSON (JSON is read as YAML, of which
+// it is a subset). It is strict: unknown keys, duplicate keys, anchors and
+// aliases, more than one document, files over MaxFileSize and nesting
+// deeper than a calc file needs are errors. Every problem found is
+// reported, each with its field path and line, as Problems.
+func Decode(data []byte) (*File, error) {
+	if len(data) > MaxFileSize {
+		return nil, Problems{{Msg: fmt.Sprintf("%d bytes is over the limit of %d bytes (1 MiB)", len(data), MaxFileSize)}}
+	}
+	if len(bytes.TrimSpace(data)) == 0 {
+		return nil, Problems{{Msg: "empty; a calc file needs at least ground and pile"}}
+	}
+	if err := scanDepth(data); err != nil {
+		return nil, err
+	}
+	dec := yaml.NewDecoder(bytes.NewReader(data))
+	var doc yaml.Node
+	if err := dec.Decode(&doc); err != nil {
+		return nil, Problems{{Line: yamlLine(err), Msg: "not valid YAML or JSON: " + yamlMsg(err)}}
+	}
+	var extra yaml.Node
+	if err := dec.Decode(&extra); err == nil {
+		return nil, Problems{{Line: extra.Line, Msg: "holds more than one document; give one calculation per file"}}
+	}
+	root := &doc
+	if root.Kind == yaml.DocumentNode && len(root.Content) == 1 {
+		root = root.Content[0]
+	}
+	if root.Kind != yaml.MappingNode {
+		return nil, Problems{{Line: root.Line, Msg: "the top level must be a mapping of keys (title, ground, pile, …)"}}
+	}
+	d := decoder{lines: map[string]int{}}
+	var f File
+	d.value(root, reflect.ValueOf(&f).Elem(), "", 0)
+	if len(d.probs) > 0 {
+		return nil, d.probs
+	}
+	f.lines = d.lines
+	return &f, nil
+}
+
+// scanDepth refuses flow nesting ([ and {) deeper than maxDepth before
+// the YAML parser sees it.
+func scanDepth(data []byte) error {
+	depth, line := 0, 1
+	var quote byte
+	for _, c := range data {
+		switch {
+		case c == '\n':
+			line++
+			if quote == '\'' || quote == '"' {
+				continue
+			}
+		case quote != 0:
+			if c == quote {
+				quote = 0
+			}
+		case c == '"' || c == '\'':
+			quote = c
+		case c == '[' || c == '{':
+			depth++
+			if depth > maxDepth {
+				return Problems{{Line: line, Msg: fmt.Sprintf("nested deeper than %d levels; a calc file needs far fewer", maxDepth)}}
+			}
+		case c == ']' || c == '}':
+			depth--
+		}
+	}
+	return nil
+}
+
+func yamlLine(err error) int {
+	s := err.Error()
+	if i := strings.Index(s, "line "); i >= 0 {
+		j := i + 5
+		for j < len(s) && s[j] >= '0' && s[j] <= '9' {
+			j++
+		}
+		n, _ := strconv.Atoi(s[i+5 : j])
+		return n
+	}
+	return 0
+}
+
+func yamlMsg(err error) string {
+	s := strings.TrimPrefix(err.Error(), "yaml: ")
+	if i := strings.Index(s, "line "); i == 0 {
+		if j := strings.Index(s, ": "); j > 0 {
+			s = s[j+2:]
+		}
+	}
+	return s
+}
+
+// decoder walks a YAML node tree into Go values by reflection, by the
+// yaml tags of the target structs, collecting problems.
+type decoder struct {
+	probs Problems
+	lines map[string]int
+}
+
+func (d *decoder) add(path string, line int, format string, args ...any) {
+	d.probs = append(d.probs, Problem{Path: path, Line: line, Msg: fmt.Sprintf(format, args...)})
+}
+
+func join(path, key string) string {
+	if path == "" {
+		return key
+	}
+	return path + "." + key
+}
+
+var (
+	valueType = reflect.TypeOf(Value{})
+	strengthT = reflect.TypeOf(Strength{})
+	loadT     = reflect.TypeOf(Load{})
+)
+
+func kindName(n *yaml.Node) string {
+	switch n.Kind {
+	case yaml.MappingNode:
+		return "a mapping"
+	case yaml.SequenceNode:
+		return "a list"
+	case yaml.ScalarNode:
+		return "a single value"
+	case yaml.AliasNode:
+		return "an alias"
+	}
+	return "a document"
+}
+
+func (d *decoder) value(n *yaml.Node, v reflect.Value, path string, depth int) {
+	if depth > maxDepth {
+		d.add(path, n.Line, "nested deeper than %d levels", maxDepth)
+		return
+	}
+	if d.lines != nil && path != "" {
+		if _, ok := d.lines[path]; !ok {
+			d.lines[path] = n.Line
+		}
+	}
+	if n.Kind == yaml.AliasNode || n.Anchor != "" {
+		d.add(path, n.Line, "anchors and aliases (& and *) are not accepted in calc files; write the values out")
+		return
+	}
+	if n.Kind == yaml.ScalarNode && n.Tag == "!!null" && v.Kind() == reflect.Pointer {
+		return
+	}
+	switch {
+	case v.Type() == valueType:
+		if n.Kind != yaml.ScalarNode {
+			d.add(path, n.Line, "want a single value such as \"12 m\", got %s", kindName(n))
+			return
+		}
+		if n.Tag == "!!null" {
+			return
+		}
+		v.Set(reflect.ValueOf(Value{Raw: n.Value, Line: n.Line}))
+		return
+	case v.Type() == strengthT || v.Type() == loadT:
+		if n.Kind == yaml.ScalarNode {
+			v.Field(0).Set(reflect.ValueOf(Value{Raw: n.Value, Line: n.Line}))
+			return
+		}
+		d.mapping(n, v, path, depth)
+		return
+	}
+	switch v.Kind() {
+	case reflect.Pointer:
+		p := reflect.New(v.Type().Elem())
+		d.value(n, p.Elem(), path, depth)
+		v.Set(p)
+	case reflect.Struct:
+		d.mapping(n, v, path, depth)
+	case reflect.Slice:
+		if n.Kind != yaml.SequenceNode {
+			d.add(path, n.Line, "want a list, got %s", kindName(n))
+			return
+		}
+		s := reflect.MakeSlice(v.Type(), len(n.Content), len(n.Content))
+		for i, c := range n.Content {
+			d.value(c, s.Index(i), fmt.Sprintf("%s[%d]", path, i), depth+1)
+		}
+		v.Set(s)
+	case reflect.Map:
+		if n.Kind != yaml.MappingNode {
+			d.add(path, n.Line, "want a mapping, got %s", kindName(n))
+			return
+		}
+		m := reflect.MakeMap(v.Type())
+		for i := 0; i+1 < len(n.Content); i += 2 {
+			k, c := n.Content[i], n.Content[i+1]
+			if k.Kind != yaml.ScalarNode {
+				d.add(path, k.Line, "keys must be single values")
+				continue
+			}
+			if m.MapIndex(reflect.ValueOf(k.Value)).IsValid() {
+				d.add(join(path, k.Value), k.Line, "given twice")
+				continue
+			}
+			e := reflect.New(v.Type().Elem()).Elem()
+			d.value(c, e, join(path, k.Value), depth+1)
+			m.SetMapIndex(reflect.ValueOf(k.Value), e)
+		}
+		v.Set(m)
+	case reflect.String:
+		if n.Kind != yaml.ScalarNode {
+			d.add(path, n.Line, "want a single word or text, got %s", kindName(n))
+			return
+		}
+		v.SetString(n.Value)
+	case reflect.Bool:
+		b, err := strconv.ParseBool(n.Value)
+		if n.Kind != yaml.ScalarNode || err != nil {
+			d.add(path, n.Line, "want true or false, got %q", n.Value)
+			return
+		}
+		v.SetBool(b)
+	case reflect.Int:
+		i, err := strconv.Atoi(n.Value)
+		if n.Kind != yaml.ScalarNode || err != nil {
+			d.add(path, n.Line, "want a whole number, got %q", n.Value)
+			return
+		}
+		v.SetInt(int64(i))
+	default:
+		d.add(path, n.Line, "cannot be read (internal: %s)", v.Kind())
+	}
+}
+
+// mapping decodes a mapping node into struct v by its yaml tags.
+func (d *decoder) mapping(n *yaml.Node, v reflect.Value, path string, depth int) {
+	if n.Kind != yaml.MappingNode {
+		d.add(path, n.Line, "want a mapping of keys, got %s", kindName(n))
+		return
+	}
+	t := v.Type()
+	fields := map[string]int{}
+	var names []string
+	for i := 0; i < t.NumField(); i++ {
+		tag := strings.Split(t.Field(i).Tag.Get("yaml"), ",")[0]
+		if tag == "" || tag == "-" {
+			continue
+		}
+		fields[tag] = i
+		names = append(names, tag)
+	}
+	sort.Strings(names)
+	seen := map[string]bool{}
+	for i := 0; i+1 < len(n.Content); i += 2 {
+		k, c := n.Content[i], n.Content[i+1]
+		if k.Kind != yaml.ScalarNode {
+			d.add(path, k.Line, "keys must be single words")
+			continue
+		}
+		if k.Value == "<<" {
+			d.add(path, k.Line, "merge keys (<<) are not accepted in calc files")
+			continue
+		}
+		p := join(path, k.Value)
+		fi, ok := fields[k.Value]
+		if !ok {
+			d.add(p, k.Line, "unknown key %q; accepted here: %s", k.Value, strings.Join(names, ", "))
+			continue
+		}
+		if seen[k.Value] {
+			d.add(p, k.Line, "given twice")
+			continue
+		}
+		seen[k.Value] = true
+		d.value(c, v.Field(fi), p, depth+1)
+	}
+}
+
+var _ = errors.New

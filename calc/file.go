@@ -1,0 +1,232 @@
+package calc
+
+// FormatVersion is the version of the calc file format this package reads.
+const FormatVersion = 1
+
+// File is a calc file as written: one calculation of one pile in one
+// ground profile. Quantities are Values: a number with a unit ("450 mm",
+// "52 ft", "18 kN/m3") or a bare number counted in the unit system the file
+// declares (Units). Field names are the YAML/JSON keys.
+type File struct {
+	// Qult is the format version; 0 or absent means FormatVersion.
+	Qult     int    `yaml:"qult,omitempty" json:"qult,omitempty"`
+	Title    string `yaml:"title" json:"title"`
+	Project  string `yaml:"project,omitempty" json:"project,omitempty"`
+	Revision string `yaml:"revision,omitempty" json:"revision,omitempty"`
+	Engineer string `yaml:"engineer,omitempty" json:"engineer,omitempty"`
+	Date     string `yaml:"date,omitempty" json:"date,omitempty"`
+	// Units is the system for bare numbers and for display: SI (m, kPa,
+	// kN, kN/m3, deg) or US (ft, ksf, kip, pcf, deg). Default SI.
+	Units   string   `yaml:"units,omitempty" json:"units,omitempty"`
+	Ground  Ground   `yaml:"ground" json:"ground"`
+	Pile    Pile     `yaml:"pile" json:"pile"`
+	Methods *Methods `yaml:"methods,omitempty" json:"methods,omitempty"`
+	Design  *Design  `yaml:"design,omitempty" json:"design,omitempty"`
+	Loads   *Loads   `yaml:"loads,omitempty" json:"loads,omitempty"`
+	Search  *Search  `yaml:"search,omitempty" json:"search,omitempty"`
+
+	// lines maps each field path read from the file to its line.
+	lines map[string]int
+}
+
+// Ground is the borehole: groundwater and layers from the surface down.
+type Ground struct {
+	// WaterDepth is the depth of the water table below ground level;
+	// negative means free water standing above the ground; "none" (or
+	// omitting it) is a dry site.
+	WaterDepth      Value       `yaml:"water_depth,omitempty" json:"water_depth,omitempty"`
+	WaterUnitWeight Value       `yaml:"water_unit_weight,omitempty" json:"water_unit_weight,omitempty"`
+	Surcharge       Value       `yaml:"surcharge,omitempty" json:"surcharge,omitempty"`
+	PorePressures   []PorePoint `yaml:"pore_pressures,omitempty" json:"pore_pressures,omitempty"`
+	Layers          []Layer     `yaml:"layers" json:"layers"`
+}
+
+// PorePoint is a pore pressure at a depth, for non-hydrostatic water.
+type PorePoint struct {
+	Depth    Value `yaml:"depth" json:"depth"`
+	Pressure Value `yaml:"pressure" json:"pressure"`
+}
+
+// Strength is an undrained strength: a single value, or top and bottom
+// values varying linearly through the layer.
+type Strength struct {
+	Value  Value `yaml:"-" json:"-"`
+	Top    Value `yaml:"top,omitempty" json:"top,omitempty"`
+	Bottom Value `yaml:"bottom,omitempty" json:"bottom,omitempty"`
+}
+
+// Layer is one layer of the log.
+type Layer struct {
+	Name      string `yaml:"name" json:"name"`
+	Thickness Value  `yaml:"thickness,omitempty" json:"thickness,omitempty"`
+	Top       Value  `yaml:"top,omitempty" json:"top,omitempty"`
+	Bottom    Value  `yaml:"bottom,omitempty" json:"bottom,omitempty"`
+	// Drainage is "drained" (φ′, c′ govern) or "undrained" (su governs).
+	Drainage string `yaml:"drainage" json:"drainage"`
+
+	UnitWeight          Value `yaml:"unit_weight,omitempty" json:"unit_weight,omitempty"`
+	SaturatedUnitWeight Value `yaml:"saturated_unit_weight,omitempty" json:"saturated_unit_weight,omitempty"`
+	DryUnitWeight       Value `yaml:"dry_unit_weight,omitempty" json:"dry_unit_weight,omitempty"`
+	VoidRatio           Value `yaml:"void_ratio,omitempty" json:"void_ratio,omitempty"`
+	WaterContent        Value `yaml:"water_content,omitempty" json:"water_content,omitempty"`
+	SpecificGravity     Value `yaml:"specific_gravity,omitempty" json:"specific_gravity,omitempty"`
+	Saturation          Value `yaml:"saturation,omitempty" json:"saturation,omitempty"`
+
+	FrictionAngle     Value     `yaml:"friction_angle,omitempty" json:"friction_angle,omitempty"`
+	Cohesion          Value     `yaml:"cohesion,omitempty" json:"cohesion,omitempty"`
+	UndrainedStrength *Strength `yaml:"undrained_strength,omitempty" json:"undrained_strength,omitempty"`
+
+	OCR             Value `yaml:"ocr,omitempty" json:"ocr,omitempty"`
+	RelativeDensity Value `yaml:"relative_density,omitempty" json:"relative_density,omitempty"`
+	N60             Value `yaml:"n60,omitempty" json:"n60,omitempty"`
+	YoungsModulus   Value `yaml:"youngs_modulus,omitempty" json:"youngs_modulus,omitempty"`
+	PoissonsRatio   Value `yaml:"poissons_ratio,omitempty" json:"poissons_ratio,omitempty"`
+	ShearModulus    Value `yaml:"shear_modulus,omitempty" json:"shear_modulus,omitempty"`
+	RigidityIndex   Value `yaml:"rigidity_index,omitempty" json:"rigidity_index,omitempty"`
+
+	// Shaft and Tip override the methods for this layer.
+	Shaft *ShaftChoice `yaml:"shaft,omitempty" json:"shaft,omitempty"`
+	Tip   *TipChoice   `yaml:"tip,omitempty" json:"tip,omitempty"`
+}
+
+// ShaftChoice picks a shaft method for a layer and gives the values it
+// takes instead of computing them.
+type ShaftChoice struct {
+	// Method is a shaft method identifier: beta, beta-given, beta-burland,
+	// beta-drilled-sand, beta-drilled-k0, beta-api, alpha-api, alpha-chart,
+	// alpha-drilled, alpha-given, lambda, none.
+	Method string `yaml:"method" json:"method"`
+	// For beta: K by one of k, k_over_k0, k_over_kp, k0 ("jaky" or "ocr");
+	// δ by delta or delta_over_phi. Unset ones take the defaults.
+	K            Value  `yaml:"k,omitempty" json:"k,omitempty"`
+	KOverK0      Value  `yaml:"k_over_k0,omitempty" json:"k_over_k0,omitempty"`
+	KOverKp      Value  `yaml:"k_over_kp,omitempty" json:"k_over_kp,omitempty"`
+	K0           string `yaml:"k0,omitempty" json:"k0,omitempty"`
+	Delta        Value  `yaml:"delta,omitempty" json:"delta,omitempty"`
+	DeltaOverPhi Value  `yaml:"delta_over_phi,omitempty" json:"delta_over_phi,omitempty"`
+	Beta         Value  `yaml:"beta,omitempty" json:"beta,omitempty"`
+	Alpha        Value  `yaml:"alpha,omitempty" json:"alpha,omitempty"`
+	Lambda       Value  `yaml:"lambda,omitempty" json:"lambda,omitempty"`
+	// SandClass is the API RP 2GEO class for beta-api (and for an API
+	// limit): api-medium-dense-sand-silt, api-medium-dense-sand,
+	// api-dense-sand, api-very-dense-sand.
+	SandClass string `yaml:"sand_class,omitempty" json:"sand_class,omitempty"`
+	// Limit is a limiting unit shaft friction.
+	Limit Value `yaml:"limit,omitempty" json:"limit,omitempty"`
+}
+
+// TipChoice picks a tip method for a layer.
+type TipChoice struct {
+	// Method is a tip method identifier: meyerhof, vesic, berezantzev,
+	// janbu, api-sand-1 to api-sand-4, shaft-n60-sand, given-nq, nc9,
+	// vesic-undrained, given-nc.
+	Method string `yaml:"method" json:"method"`
+	Nq     Value  `yaml:"nq,omitempty" json:"nq,omitempty"`
+	Nc     Value  `yaml:"nc,omitempty" json:"nc,omitempty"`
+	Limit  Value  `yaml:"limit,omitempty" json:"limit,omitempty"`
+	// Eta is Janbu's plastic-zone angle η′ (default 90 deg).
+	Eta Value `yaml:"eta,omitempty" json:"eta,omitempty"`
+}
+
+// Section is a pile cross-section.
+type Section struct {
+	// Shape: circle, square, closed-pipe, open-pipe, h-section, given.
+	Shape     string `yaml:"shape" json:"shape"`
+	Diameter  Value  `yaml:"diameter,omitempty" json:"diameter,omitempty"`
+	Width     Value  `yaml:"width,omitempty" json:"width,omitempty"`
+	Wall      Value  `yaml:"wall,omitempty" json:"wall,omitempty"`
+	Depth     Value  `yaml:"depth,omitempty" json:"depth,omitempty"`
+	Web       Value  `yaml:"web,omitempty" json:"web,omitempty"`
+	Flange    Value  `yaml:"flange,omitempty" json:"flange,omitempty"`
+	Area      Value  `yaml:"area,omitempty" json:"area,omitempty"`
+	Perimeter Value  `yaml:"perimeter,omitempty" json:"perimeter,omitempty"`
+}
+
+// Pile is the pile and its installation.
+type Pile struct {
+	Section      Section `yaml:"section" json:"section"`
+	Length       Value   `yaml:"length" json:"length"`
+	HeadDepth    Value   `yaml:"head_depth,omitempty" json:"head_depth,omitempty"`
+	Installation string  `yaml:"installation" json:"installation"`
+	// Surface: rough-concrete, smooth-concrete, rough-steel, smooth-steel,
+	// timber; default by section and installation.
+	Surface       string `yaml:"surface,omitempty" json:"surface,omitempty"`
+	Plug          string `yaml:"plug,omitempty" json:"plug,omitempty"`
+	YoungsModulus Value  `yaml:"youngs_modulus,omitempty" json:"youngs_modulus,omitempty"`
+	UnitWeight    Value  `yaml:"unit_weight,omitempty" json:"unit_weight,omitempty"`
+}
+
+// Zone is a depth range with no shaft friction.
+type Zone struct {
+	Top    Value `yaml:"top" json:"top"`
+	Bottom Value `yaml:"bottom" json:"bottom"`
+}
+
+// Methods are the methods for the whole pile, by drainage class.
+type Methods struct {
+	TipDrained     string `yaml:"tip_drained,omitempty" json:"tip_drained,omitempty"`
+	TipUndrained   string `yaml:"tip_undrained,omitempty" json:"tip_undrained,omitempty"`
+	ShaftDrained   string `yaml:"shaft_drained,omitempty" json:"shaft_drained,omitempty"`
+	ShaftUndrained string `yaml:"shaft_undrained,omitempty" json:"shaft_undrained,omitempty"`
+	// CriticalDepth is the ratio n of zc = n·D; 0 or absent for none.
+	CriticalDepth Value `yaml:"critical_depth,omitempty" json:"critical_depth,omitempty"`
+	// LayeredTip turns Meyerhof's rule for a tip near a weaker layer above
+	// on or off (default on).
+	LayeredTip *bool `yaml:"layered_tip,omitempty" json:"layered_tip,omitempty"`
+	// WeakBelow is how many diameters below the tip to look for a weaker
+	// layer (default 3).
+	WeakBelow Value `yaml:"weak_below,omitempty" json:"weak_below,omitempty"`
+	// SelfWeight: ignored (default), net or gross.
+	SelfWeight string `yaml:"self_weight,omitempty" json:"self_weight,omitempty"`
+	// TensionFactor multiplies shaft resistance in tension (default 1).
+	TensionFactor Value  `yaml:"tension_factor,omitempty" json:"tension_factor,omitempty"`
+	ClampCharts   bool   `yaml:"clamp_charts,omitempty" json:"clamp_charts,omitempty"`
+	NoShaft       []Zone `yaml:"no_shaft,omitempty" json:"no_shaft,omitempty"`
+}
+
+// Design is the design basis.
+type Design struct {
+	// Basis: safety-factor, lrfd or en1997.
+	Basis string `yaml:"basis" json:"basis"`
+	// safety-factor: factor (global), or tip_factor and shaft_factor;
+	// tension_factor.
+	Factor        Value `yaml:"factor,omitempty" json:"factor,omitempty"`
+	TipFactor     Value `yaml:"tip_factor,omitempty" json:"tip_factor,omitempty"`
+	ShaftFactor   Value `yaml:"shaft_factor,omitempty" json:"shaft_factor,omitempty"`
+	TensionFactor Value `yaml:"tension_factor,omitempty" json:"tension_factor,omitempty"`
+	// lrfd: preset (aashto-driven, aashto-drilled) and/or resistance
+	// factors by method identifier ("*" for any other), load factors.
+	Preset    string           `yaml:"preset,omitempty" json:"preset,omitempty"`
+	Tip       map[string]Value `yaml:"tip,omitempty" json:"tip,omitempty"`
+	Shaft     map[string]Value `yaml:"shaft,omitempty" json:"shaft,omitempty"`
+	Uplift    map[string]Value `yaml:"uplift,omitempty" json:"uplift,omitempty"`
+	Permanent Value            `yaml:"permanent,omitempty" json:"permanent,omitempty"`
+	Variable  Value            `yaml:"variable,omitempty" json:"variable,omitempty"`
+	// en1997: approach (DA1, DA2, DA3), profiles (n for ξ3/ξ4; 0 for the
+	// model factor alone), model_factor (γRd), total (use γt).
+	Approach    string `yaml:"approach,omitempty" json:"approach,omitempty"`
+	Profiles    Value  `yaml:"profiles,omitempty" json:"profiles,omitempty"`
+	ModelFactor Value  `yaml:"model_factor,omitempty" json:"model_factor,omitempty"`
+	Total       bool   `yaml:"total,omitempty" json:"total,omitempty"`
+}
+
+// Load is a characteristic load: a single value (taken as permanent) or
+// permanent and variable parts.
+type Load struct {
+	Value     Value `yaml:"-" json:"-"`
+	Permanent Value `yaml:"permanent,omitempty" json:"permanent,omitempty"`
+	Variable  Value `yaml:"variable,omitempty" json:"variable,omitempty"`
+}
+
+// Loads are the characteristic loads on the pile head.
+type Loads struct {
+	Compression *Load `yaml:"compression,omitempty" json:"compression,omitempty"`
+	Tension     *Load `yaml:"tension,omitempty" json:"tension,omitempty"`
+}
+
+// Search sets the depths for capacity with depth and the search for the
+// required length.
+type Search struct {
+	Step   Value `yaml:"step,omitempty" json:"step,omitempty"`
+	MaxTip Value `yaml:"max_tip,omitempty" json:"max_tip,omitempty"`
+}

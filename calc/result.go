@@ -1,0 +1,74 @@
+package calc
+
+import (
+	"github.com/qultgeo/qult/cite"
+	"github.com/qultgeo/qult/pile"
+	"github.com/qultgeo/qult/profile"
+	"github.com/qultgeo/qult/units"
+)
+
+// ResultSchema names the version of Result's JSON form.
+const ResultSchema = "qult.result/1"
+
+// Result is one calculation run: the inputs as entered and as normalised,
+// every intermediate value, the design check, warnings and sources. All
+// quantities are SI inside; reports convert them for display.
+type Result struct {
+	Schema   string
+	Version  string // qult version that ran it
+	Title    string
+	Project  string
+	Revision string
+	Engineer string
+	Date     string
+	// Display is the unit system the file declared (for reports).
+	Display units.System
+
+	// Input is the file as decoded; Source is its text as entered.
+	Input  *File
+	Source []byte
+
+	// Ground is the resolved profile; Layers its layers with unit weights
+	// derived; Stresses σv, u and σ′v at every break of the profile.
+	Ground   *profile.Profile
+	Layers   []profile.Layer
+	Stresses []StressPoint
+
+	// Pile as normalised, and the methods resolved for each layer.
+	Pile    pile.Pile
+	Methods []LayerMethods
+
+	// Breakdown is the characteristic capacity with its derivation.
+	Breakdown pile.Breakdown
+	// Design is the design check; nil when the file has no design basis.
+	Design *pile.Design
+	// Loads as normalised; zero when the file gives none.
+	Loads pile.Loads
+	// WithDepth is the characteristic capacity for tip depths from
+	// Search.Step to Search.MaxTip; DesignWithDepth is the design
+	// compression resistance of the governing case at the same depths
+	// (empty without a design basis).
+	WithDepth       []pile.Capacity
+	DesignWithDepth []units.Force
+	// Length is the shortest pile that passes, when a design basis and
+	// loads are given.
+	Length *pile.Length
+
+	Warnings []string
+	Sources  []cite.Source
+	Cautions []string
+}
+
+// StressPoint is the vertical stress state at one depth.
+type StressPoint struct {
+	Depth                  units.Length
+	Total, Pore, Effective units.Stress
+}
+
+// LayerMethods records which methods each layer uses.
+type LayerMethods struct {
+	Layer    string
+	Drainage string
+	Tip      string
+	Shaft    string
+}

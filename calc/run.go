@@ -1,0 +1,254 @@
+package calc
+
+import (
+	"errors"
+	"fmt"
+	"strings"
+
+	"github.com/qultgeo/qult/cite"
+	"github.com/qultgeo/qult/pile"
+	"github.com/qultgeo/qult/profile"
+	"github.com/qultgeo/qult/units"
+)
+
+// Version is the qult version written into results; the command sets it.
+var version = "dev"
+
+// SetVersion sets the version string written into results (the command
+// line tool sets it from its build).
+func SetVersion(v string) { version = v }
+
+// CautionText returns the cautions printed with every result.
+func CautionText() []string {
+	return []string{
+		"These results are for qualified geotechnical engineers. Check them against the codes of practice that govern the project, the site investigation and load tests.",
+		"Each method carries the limitations stated in its source; values read from charts carry the stated reading tolerance.",
+		"qult is not a substitute for the judgement of a licensed professional engineer, who remains responsible for any design that uses it.",
+	}
+}
+
+// Parse decodes and runs a calc file.
+func Parse(data []byte) (*Result, error) {
+	f, err := Decode(data)
+	if err != nil {
+		return nil, err
+	}
+	r, err := Run(f)
+	if r != nil {
+		r.Source = data
+	}
+	return r, err
+}
+
+// Run resolves and runs a decoded calc file: the profile, the
+// characteristic capacity with its breakdown, capacity with depth, and,
+// with a design basis, the design check and the required length. Bad
+// input gives Problems naming each field and its line.
+func Run(f *File) (*Result, error) {
+	in, err := Resolve(f)
+	if err != nil {
+		return nil, err
+	}
+	prof, err := profile.New(in.Ground)
+	if err != nil {
+		return nil, translate(f, err)
+	}
+	res := &Result{Schema: ResultSchema, Version: version, Title: f.Title, Project: f.Project, Revision: f.Revision,
+		Engineer: f.Engineer, Date: f.Date, Display: in.System, Input: f, Ground: prof, Layers: prof.Layers(),
+		Pile: in.Pile, Loads: in.Loads, Cautions: CautionText()}
+	for _, b := range prof.Breaks() {
+		st, err := prof.StressesAt(b)
+		if err != nil {
+			return nil, err
+		}
+		res.Stresses = append(res.Stresses, StressPoint{Depth: b, Total: st.Total, Pore: st.Pore, Effective: st.Effective})
+	}
+	a, err := pile.NewAnalysis(prof, in.Pile, in.Methods, nil)
+	if err != nil {
+		return nil, translate(f, err)
+	}
+	res.Breakdown, err = a.Breakdown()
+	if err != nil {
+		return nil, translate(f, err)
+	}
+	res.Methods = layerMethods(prof, res.Breakdown)
+	// Capacity with depth: from one step below the head to the search
+	// depth (default: the bottom of the profile).
+	step, maxTip := in.Step, in.MaxTip
+	if step == 0 {
+		step = 0.5 * units.Metre
+		if in.System == units.US {
+			step = 2 * units.Foot
+		}
+	}
+	if maxTip == 0 {
+		maxTip = prof.Depth()
+	}
+	if maxTip > prof.Depth() {
+		return nil, Problems{{Path: "search.max_tip", Line: lineOf(f, "search.max_tip"),
+			Msg: fmt.Sprintf("%v is below the bottom of the ground profile at %v", maxTip, prof.Depth())}}
+	}
+	if !(step > 0) || float64((maxTip-in.Pile.HeadDepth)/step) > 1e5 {
+		return nil, Problems{{Path: "search.step", Line: lineOf(f, "search.step"),
+			Msg: fmt.Sprintf("%v: want a positive step giving at most 100000 depths", step)}}
+	}
+	deep := in.Pile
+	deep.Length = maxTip - in.Pile.HeadDepth
+	ad, err := pile.NewAnalysis(prof, deep, in.Methods, nil)
+	if err == nil {
+		res.WithDepth, err = ad.WithDepth(in.Pile.HeadDepth+step, maxTip, step, nil)
+	}
+	if err != nil {
+		res.Warnings = append(res.Warnings, "capacity with depth stops short: "+err.Error())
+		res.WithDepth = nil
+	}
+	if in.Basis != nil {
+		d, err := pile.Check(prof, in.Pile, in.Methods, in.Basis, in.Loads)
+		if err != nil {
+			return nil, translate(f, err)
+		}
+		res.Design = &d
+		cases, _ := in.Basis.Cases(in.Pile.Installation)
+		if len(res.WithDepth) > 0 && d.Governing < len(cases) {
+			cs := cases[d.Governing]
+			if a2, err := pile.NewAnalysis(prof, deep, in.Methods, &pile.Options{Case: &cs}); err == nil {
+				if rows, err := a2.WithDepth(in.Pile.HeadDepth+step, maxTip, step, nil); err == nil {
+					for _, c := range rows {
+						res.DesignWithDepth = append(res.DesignWithDepth, c.DesignCompression)
+					}
+				}
+			}
+		}
+		if in.HasLoad {
+			l, err := pile.RequiredLength(prof, in.Pile, in.Methods, in.Basis, in.Loads, step, maxTip)
+			if err != nil {
+				res.Warnings = append(res.Warnings, "required length not found: "+err.Error())
+			} else {
+				res.Length = &l
+			}
+		}
+	}
+	res.Warnings = append(res.Warnings, warnings(res)...)
+	var refs []cite.Source
+	refs = append(refs, res.Breakdown.Sources...)
+	if in.Basis != nil {
+		refs = append(refs, cite.Collect(in.Basis.Refs()...)...)
+	}
+	res.Sources = uniqueSources(refs)
+	return res, nil
+}
+
+func uniqueSources(s []cite.Source) []cite.Source {
+	refs := make([]cite.Ref, len(s))
+	for i, x := range s {
+		refs[i] = cite.Ref{Source: x}
+	}
+	return cite.Collect(refs...)
+}
+
+// warnings gathers the warnings of a result that are data, not failures.
+func warnings(r *Result) []string {
+	var w []string
+	for _, l := range r.Layers {
+		if l.Basis&(profile.AssumedDry|profile.AssumedSaturated|profile.SaturatedAboveWater) != 0 {
+			w = append(w, fmt.Sprintf("layer %q: unit weights %s (an assumption; give the weights to remove it)", l.Name, l.Basis))
+		}
+	}
+	for _, m := range r.Breakdown.Warnings {
+		w = append(w, m)
+	}
+	if r.Design != nil && !r.Design.Pass {
+		w = append(w, "the design check fails: utilisation above 1")
+	}
+	return w
+}
+
+func layerMethods(prof *profile.Profile, b pile.Breakdown) []LayerMethods {
+	out := make([]LayerMethods, prof.NumLayers())
+	for i, l := range prof.Layers() {
+		out[i] = LayerMethods{Layer: l.Name, Drainage: l.Drainage.String()}
+	}
+	for _, r := range b.Rows {
+		out[r.Layer].Shaft = r.Method
+	}
+	out[b.Tip.Layer].Tip = b.Tip.Method
+	return out
+}
+
+// profileRename maps the profile package's field names onto the calc
+// file's keys.
+var profileRename = map[string]string{
+	"phi": "friction_angle", "su": "undrained_strength", "su_top": "undrained_strength.top",
+	"su_bottom": "undrained_strength.bottom", "gs": "specific_gravity", "dr": "relative_density",
+	"ir": "rigidity_index", "nu": "poissons_ratio", "e": "youngs_modulus", "g": "shear_modulus", "u": "pressure",
+}
+
+// translate turns the library's errors into Problems with calc-file paths
+// and lines.
+func translate(f *File, err error) error {
+	var errs []error
+	if j, ok := err.(interface{ Unwrap() []error }); ok {
+		errs = j.Unwrap()
+	} else {
+		errs = []error{err}
+	}
+	var ps Problems
+	for _, e := range errs {
+		var fe *profile.FieldError
+		var path, msg string
+		if errors.As(e, &fe) {
+			path, msg = fe.Path, fe.Msg
+			if i := strings.LastIndexByte(path, '.'); i >= 0 {
+				if n, ok := profileRename[path[i+1:]]; ok {
+					path = path[:i+1] + n
+				}
+			} else if n, ok := profileRename[path]; ok {
+				path = n
+			}
+			path = "ground." + path
+		} else {
+			s := e.Error()
+			if i := strings.Index(s, ": "); i > 0 && !strings.ContainsAny(s[:i], " ") || strings.HasPrefix(s, "layers[") {
+				i := strings.Index(s, ": ")
+				path, msg = s[:i], s[i+2:]
+			} else {
+				msg = s
+			}
+			if strings.HasPrefix(path, "layers[") {
+				path = "ground." + path
+			}
+			// "ground.layers[1] (clay).shaft at 3 m" → path ground.layers[1].shaft
+			if i := strings.Index(path, " ("); i > 0 {
+				if j := strings.Index(path[i:], ")"); j > 0 {
+					rest := path[i+j+1:]
+					if k := strings.Index(rest, " at "); k >= 0 {
+						msg = strings.TrimSpace(rest[k+1:]) + ": " + msg
+						rest = rest[:k]
+					}
+					path = path[:i] + rest
+				}
+			}
+		}
+		ps = append(ps, Problem{Path: path, Line: lineOf(f, path), Msg: msg})
+	}
+	return ps
+}
+
+// lineOf returns the line of the field at a calc path, or of its
+// nearest parent that was read from the file; 0 when unknown.
+func lineOf(f *File, path string) int {
+	if f == nil || f.lines == nil {
+		return 0
+	}
+	for path != "" {
+		if l, ok := f.lines[path]; ok {
+			return l
+		}
+		i := strings.LastIndexAny(path, ".[")
+		if i < 0 {
+			break
+		}
+		path = path[:i]
+	}
+	return 0
+}
