@@ -1,0 +1,177 @@
+package calc
+
+import (
+	"errors"
+	"math"
+	"os"
+	"strconv"
+	"strings"
+	"testing"
+)
+
+// The checks in this file are of decoding and validation: they compare
+// messages and line numbers, and results against the library run directly
+// (closed-form reasoning: the same input must give the same number). No
+// published values are involved.
+
+func mustRead(t *testing.T, path string) []byte {
+	t.Helper()
+	b, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return b
+}
+
+func TestExampleRuns(t *testing.T) {
+	r, err := Parse(mustRead(t, "../examples/pump-station-bored.yaml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.Schema != ResultSchema || len(r.Breakdown.Rows) == 0 || r.Design == nil || len(r.WithDepth) == 0 {
+		t.Errorf("incomplete result: schema %q, %d rows, design %v, %d depths", r.Schema, len(r.Breakdown.Rows), r.Design, len(r.WithDepth))
+	}
+	if len(r.Cautions) == 0 || len(r.Sources) == 0 {
+		t.Error("no cautions or sources")
+	}
+}
+
+const base = `title: t
+units: SI
+ground:
+  water_depth: 2 m
+  layers:
+    - name: sand
+      thickness: 30 m
+      drainage: drained
+      unit_weight: 18 kN/m3
+      saturated_unit_weight: 20 kN/m3
+      friction_angle: 34 deg
+pile:
+  section: {shape: circle, diameter: 0.6 m}
+  length: 15 m
+  installation: driven-high
+`
+
+func problems(t *testing.T, src string) Problems {
+	t.Helper()
+	_, err := Parse([]byte(src))
+	if err == nil {
+		t.Fatalf("accepted:\n%s", src)
+	}
+	var ps Problems
+	if !errors.As(err, &ps) {
+		t.Fatalf("error %T %v is not Problems", err, err)
+	}
+	return ps
+}
+
+func TestProblemsNamePathAndLine(t *testing.T) {
+	cases := []struct {
+		name, src, path string
+		line            int
+	}{
+		{"unknown key", strings.Replace(base, "  length: 15 m", "  length: 15 m\n  lenght: 15 m", 1), "pile.lenght", 15},
+		{"wrong dimension", strings.Replace(base, "thickness: 30 m", "thickness: 30 kPa", 1), "ground.layers[0].thickness", 7},
+		{"phi 70", strings.Replace(base, "34 deg", "70 deg", 1), "ground.layers[0].friction_angle", 11},
+		{"tip below", strings.Replace(base, "length: 15 m", "length: 45 m", 1), "pile.length", 14},
+		{"ambiguous unit", strings.Replace(base, "2 m\n", "2 ton\n", 1), "ground.water_depth", 4},
+		{"bad drainage", strings.Replace(base, "drainage: drained", "drainage: sandy", 1), "ground.layers[0].drainage", 8},
+		{"duplicate key", strings.Replace(base, "title: t", "title: t\ntitle: u", 1), "title", 2},
+		{"no water data", strings.Replace(base, "  water_depth: 2 m\n", "", 1), "ground.water_depth", 0},
+	}
+	for _, c := range cases {
+		ps := problems(t, c.src)
+		found := false
+		for _, p := range ps {
+			if p.Path == c.path && (c.line == 0 || p.Line == c.line) {
+				found = true
+			}
+		}
+		if !found {
+			t.Errorf("%s: want a problem at %s line %d, got %v", c.name, c.path, c.line, ps)
+		}
+	}
+}
+
+func TestEveryProblemAtOnce(t *testing.T) {
+	src := strings.Replace(base, "thickness: 30 m", "thickness: 30 kPa", 1)
+	src = strings.Replace(src, "installation: driven-high", "installation: hammered", 1)
+	src = strings.Replace(src, "diameter: 0.6 m", "diameter: 0.6 furlong", 1)
+	ps := problems(t, src)
+	if len(ps) < 3 {
+		t.Errorf("want three problems reported together, got %v", ps)
+	}
+}
+
+func TestStrictness(t *testing.T) {
+	for name, src := range map[string]string{
+		"alias":      "a: &x 1\nb: *x\n",
+		"two docs":   base + "---\ntitle: again\n",
+		"not a map":  "- 1\n- 2\n",
+		"deep":       strings.Repeat("[", 40) + strings.Repeat("]", 40),
+		"empty":      "  \n# only a comment\n",
+		"not yaml":   "title: [unclosed\n",
+		"merge key":  "title: t\n<<: {units: SI}\n",
+		"list for a": strings.Replace(base, "  section: {shape: circle, diameter: 0.6 m}", "  section: [circle]", 1),
+	} {
+		if _, err := Parse([]byte(src)); err == nil {
+			t.Errorf("%s: accepted", name)
+		}
+	}
+	big := make([]byte, MaxFileSize+1)
+	if _, err := Decode(big); err == nil || !strings.Contains(err.Error(), "over the limit") {
+		t.Errorf("oversize file: %v", err)
+	}
+}
+
+// TestJSONSameAsYAML: the same file written as JSON gives the same result.
+func TestJSONSameAsYAML(t *testing.T) {
+	js := `{"title": "t", "units": "SI",
+	"ground": {"water_depth": "2 m", "layers": [{"name": "sand", "thickness": 30, "drainage": "drained",
+	  "unit_weight": "18 kN/m3", "saturated_unit_weight": 20, "friction_angle": 34}]},
+	"pile": {"section": {"shape": "circle", "diameter": "600 mm"}, "length": "15 m", "installation": "driven-high"}}`
+	a, err := Parse([]byte(js))
+	if err != nil {
+		t.Fatal(err)
+	}
+	b, err := Parse([]byte(base))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if a.Breakdown.Compression != b.Breakdown.Compression {
+		t.Errorf("JSON %v, YAML %v", a.Breakdown.Compression, b.Breakdown.Compression)
+	}
+}
+
+// TestUSUnitsSame: the same calculation entered in US units (bare numbers
+// in ft, ksf, pcf, deg) gives the same capacity within 1e-9. The US values
+// are the SI ones divided by the NIST SP 811 factors (1 ft = 0.3048 m,
+// 1 pcf = 157.0874606 N/m³).
+func TestUSUnitsSame(t *testing.T) {
+	ft := func(m float64) float64 { return m / 0.3048 }
+	pcf := func(kn float64) float64 { return kn * 1000 / (4.4482216152605 / (0.3048 * 0.3048 * 0.3048)) }
+	// γw defaults differ by system (9.81 kN/m³ SI, 62.4 pcf US): give it.
+	si := strings.Replace(base, "  water_depth: 2 m\n", "  water_depth: 2 m\n  water_unit_weight: 9.81 kN/m3\n", 1)
+	us := strings.NewReplacer(
+		"9.81 kN/m3", fmtF(pcf(9.81)),
+		"units: SI", "units: US",
+		"2 m", fmtF(ft(2)), "30 m", fmtF(ft(30)), "0.6 m", fmtF(ft(0.6)), "15 m", fmtF(ft(15)),
+		"18 kN/m3", fmtF(pcf(18)), "20 kN/m3", fmtF(pcf(20)), "34 deg", "34",
+	).Replace(si)
+	a, err := Parse([]byte(us))
+	if err != nil {
+		t.Fatal(err)
+	}
+	b, err := Parse([]byte(si))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if d := math.Abs(float64(a.Breakdown.Compression-b.Breakdown.Compression)) / float64(b.Breakdown.Compression); d > 1e-9 {
+		t.Errorf("US %v, SI %v (rel %g)", a.Breakdown.Compression, b.Breakdown.Compression, d)
+	}
+}
+
+func fmtF(x float64) string { return strings.TrimRight(strings.TrimRight(strconvF(x), "0"), ".") }
+
+func strconvF(x float64) string { return strconv.FormatFloat(x, 'f', 12, 64) }

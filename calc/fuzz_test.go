@@ -1,0 +1,46 @@
+package calc
+
+import (
+	"errors"
+	"math"
+	"testing"
+	"time"
+)
+
+// FuzzParse feeds arbitrary bytes to the decoder, validation and run: no
+// panic, no hang (each input must finish within 2 s), and either Problems
+// or a result with finite numbers.
+func FuzzParse(f *testing.F) {
+	f.Add([]byte(base))
+	f.Add([]byte("a: &x [1]\nb: *x\n"))
+	f.Add([]byte("{\"title\": 1}"))
+	f.Add([]byte(base + "design: {basis: en1997, approach: DA1}\nloads: {compression: 500 kN}\n"))
+	f.Add([]byte(base + "methods: {shaft_undrained: lambda, critical_depth: 20}\n"))
+	f.Fuzz(func(t *testing.T, data []byte) {
+		done := make(chan struct{})
+		var r *Result
+		var err error
+		go func() {
+			defer close(done)
+			r, err = Parse(data)
+		}()
+		select {
+		case <-done:
+		case <-time.After(2 * time.Second):
+			t.Fatalf("Parse did not finish in 2 s on %q", data)
+		}
+		if err != nil {
+			var ps Problems
+			if !errors.As(err, &ps) || len(ps) == 0 {
+				t.Fatalf("error is not Problems: %T %v", err, err)
+			}
+			return
+		}
+		c := r.Breakdown.Capacity
+		for _, v := range []float64{float64(c.Tip), float64(c.Shaft), float64(c.Compression), float64(c.Tension)} {
+			if math.IsNaN(v) || math.IsInf(v, 0) {
+				t.Fatalf("non-finite result %+v", c)
+			}
+		}
+	})
+}
