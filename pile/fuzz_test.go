@@ -8,7 +8,7 @@ import (
 	"github.com/qultgeo/qult/units"
 )
 
-// FuzzCapacity builds a two-layer profile and a pile from fuzzed numbers
+// FuzzCapacity (no published source: it checks robustness, not values) builds a two-layer profile and a pile from fuzzed numbers
 // and checks that nothing panics and that a capacity returned without an
 // error is finite. No published values are involved.
 func FuzzCapacity(f *testing.F) {

@@ -1,5 +1,8 @@
 package units_test
 
+// The conversions printed here rest on the NIST SP 811 (2008) factors that
+// units_test.go checks; the scenarios are our own.
+
 import (
 	"fmt"
 

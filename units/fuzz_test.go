@@ -1,5 +1,8 @@
 package units
 
+// No published source here: the fuzz target checks robustness and the round
+// trip; the NIST SP 811 (2008) factors are checked in units_test.go.
+
 import (
 	"math"
 	"testing"
