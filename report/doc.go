@@ -1,0 +1,64 @@
+// Package report renders a calculation result (calc.Result) as aligned
+// text tables, CSV, JSON, Markdown or a self-contained HTML calculation
+// package.
+//
+// Write takes a Format and Options: the display unit system (SI: m, kPa,
+// kN, kN/m3, m2, kN/m; US: ft, ksf, kip, pcf, ft2, kip/ft; angles in
+// degrees; Young's modulus in MPa or ksi), the View and an optional date.
+//
+// # Views
+//
+//	ViewCheck     loads, characteristic capacity totals, each design case with Ed, Rd and Ed/Rd, warnings
+//	ViewCapacity  the per-segment shaft table, the tip block, each equation once with substituted numbers, totals, warnings
+//	ViewLength    the required length and the capacity with depth, warnings
+//	ViewReport    all of it: title block, pile, ground profile with derived unit weights, vertical stresses,
+//	              loads, shaft and tip with worked equations, totals, design check, required length,
+//	              capacity with depth, warnings, sources cited and cautions
+//
+// Each format renders the view as follows.
+//
+//	Text      aligned tables with units in the headers
+//	Markdown  the same content as Text, as headings and pipe tables
+//	CSV       one table per view: check, one row per design case (characteristic totals without a design
+//	          basis); capacity and report, one row per shaft segment then a tip row; length, capacity with depth
+//	JSON      the whole result for every view (schema calc.ResultSchema, described in JSON.md)
+//	HTML      the view's sections in one self-contained page (inline CSS and SVG, no scripts, no external
+//	          fetches). ViewReport is the calculation package: it adds the inputs as entered, a drawing of
+//	          the ground profile to scale, a plot of vertical stress with depth and a plot of capacity with
+//	          depth; ViewLength adds the capacity plot; ViewCheck and ViewCapacity are tables only.
+//
+// # Numbers
+//
+// Text, Markdown and HTML show 4 significant digits, CSV and JSON 6, so
+// that output is the same on every machine; trailing zeros are dropped
+// ("24", "78.74"). In text formats a magnitude below 5e-7 display units is
+// round-off and shows as 0. A result never holds NaN or Inf; if one did,
+// text would show "n/a" and JSON null.
+//
+// # JSON
+//
+// Every quantity is an object with its value in display units and the unit
+// named alongside, {"value": 12.3, "unit": "kN"}; dimensionless numbers (K,
+// β, α, Nq, utilisation) are plain numbers. Optional values are left out
+// when they do not apply. The layout is versioned by its "schema" field;
+// a change that removes or renames a key changes the version. See JSON.md.
+//
+// # Safety
+//
+// All text from the calc file (title, names, the file itself) is escaped:
+// html.EscapeString in HTML and in the SVG drawings, entities and
+// backslashes in Markdown. CSV text cells starting with =, +, -, @ are
+// prefixed with an apostrophe so that spreadsheets do not read them as
+// formulas.
+//
+// # Choices
+//
+// Where the issue was silent: the date in the title block is Options.Date,
+// else the calc file's date, else none; the worked shaft equations use the
+// bottom end of the first segment of each method (the top is often at zero
+// stress); the capacity plot adds the governing case's design compression
+// action Ed as a vertical line; the ground drawing shares one scale for
+// depth and pile width, with the ground column an arbitrary width.
+// Plots use gonum.org/v1/plot with fixed sizes and its default fonts, not
+// embedded, so the SVG is stable and small.
+package report

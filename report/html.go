@@ -1,0 +1,202 @@
+package report
+
+import (
+	"bufio"
+	"html"
+	"strings"
+
+	"github.com/qultgeo/qult/calc"
+)
+
+// The section headings the HTML writer adds figures to.
+const (
+	headGround    = "Ground profile"
+	headStress    = "Vertical stress"
+	headWithDepth = "Capacity with depth"
+)
+
+const css = `
+body{font-family:Georgia,"Times New Roman",serif;color:#111;background:#fff;max-width:62rem;margin:1.5rem auto;padding:0 1rem;line-height:1.4}
+h1{font-size:1.6rem;margin:0 0 .4rem}
+h2{font-size:1.15rem;border-bottom:1px solid #888;margin:1.8rem 0 .6rem;padding-bottom:.15rem}
+table{border-collapse:collapse;margin:.5rem 0;font-size:.88rem}
+th,td{border:1px solid #aaa;padding:.2rem .45rem;vertical-align:top}
+th{background:#eee;font-weight:600;text-align:left}
+td.n{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}
+table.kv th{background:#f6f6f6;font-weight:normal}
+.titleblock{border:2px solid #222;padding:.6rem .9rem;margin-bottom:1rem}
+.titleblock table{margin:0}
+.eq{font-family:"DejaVu Sans Mono",Consolas,monospace;font-size:.86rem;margin:.15rem 0 .15rem 1rem}
+pre{background:#f7f7f7;border:1px solid #ccc;padding:.6rem;overflow-x:auto;font-size:.8rem}
+figure{margin:.6rem 0}
+figcaption{font-size:.85rem;color:#333}
+figure svg{max-width:100%;height:auto}
+.warn li{margin:.2rem 0}
+.caution{border:1px solid #555;padding:.3rem .9rem;background:#fafafa}
+.fail{color:#a00;font-weight:bold}
+.wide{overflow-x:auto}
+@media print{body{max-width:none;margin:0}h2{break-after:avoid}table,figure{break-inside:avoid}.wide{overflow:visible}}
+`
+
+// esc escapes text for HTML element content and attribute values.
+func esc(s string) string { return html.EscapeString(s) }
+
+// addFigures puts the figures of the HTML calculation package into d.
+func addFigures(d *doc, r *calc.Result, o Options) error {
+	c := conv{o.Units}
+	for i := range d.sections {
+		s := &d.sections[i]
+		switch s.heading {
+		case headGround:
+			if g := groundSVG(r, c); g != "" {
+				s.blocks = append(s.blocks, block{svg: g, fig: "Ground profile drawn to scale (depths and pile width at the same scale; the width of the ground column is arbitrary)."})
+			}
+		case headStress:
+			if len(r.Stresses) >= 2 {
+				g, err := stressSVG(r, c)
+				if err != nil {
+					return err
+				}
+				s.blocks = append(s.blocks, block{svg: g, fig: "Total stress, pore pressure and effective vertical stress with depth."})
+			}
+		case headWithDepth:
+			if len(r.WithDepth) >= 2 {
+				g, err := capacitySVG(r, c)
+				if err != nil {
+					return err
+				}
+				s.blocks = append(s.blocks, block{svg: g, fig: "Characteristic compression and tension resistance and design compression resistance against tip depth."})
+			}
+		}
+	}
+	if o.View == ViewReport && len(r.Source) > 0 {
+		in := section{heading: "Inputs as entered", blocks: []block{{pre: string(r.Source)}}}
+		d.sections = append(d.sections[:1], append([]section{in}, d.sections[1:]...)...)
+	}
+	return nil
+}
+
+func writeHTML(b *bufio.Writer, r *calc.Result, o Options) error {
+	d := build(r, o)
+	if err := addFigures(d, r, o); err != nil {
+		return err
+	}
+	b.WriteString("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n<title>")
+	b.WriteString(esc(d.title))
+	b.WriteString("</title>\n<style>")
+	b.WriteString(css)
+	b.WriteString("</style>\n</head>\n<body>\n")
+	for i, s := range d.sections {
+		if i == 0 && s.heading == "" {
+			b.WriteString("<header class=\"titleblock\">\n<h1>")
+			b.WriteString(esc(d.title))
+			b.WriteString("</h1>\n")
+			for _, bl := range s.blocks {
+				htmlBlock(b, bl, "")
+			}
+			b.WriteString("</header>\n<main>\n")
+			continue
+		}
+		if i == 0 {
+			b.WriteString("<main>\n")
+		}
+		b.WriteString("<section>\n<h2>")
+		b.WriteString(esc(s.heading))
+		b.WriteString("</h2>\n")
+		for _, bl := range s.blocks {
+			htmlBlock(b, bl, s.heading)
+		}
+		b.WriteString("</section>\n")
+	}
+	if len(d.sections) == 0 {
+		b.WriteString("<main>\n")
+	}
+	b.WriteString("</main>\n<footer><p>Written by qult ")
+	b.WriteString(esc(r.Version))
+	b.WriteString(".</p></footer>\n</body>\n</html>\n")
+	return nil
+}
+
+func htmlCell(b *bufio.Writer, c cell) {
+	v := c.str(sig)
+	switch {
+	case c.num || v == "-":
+		b.WriteString("<td class=\"n\">")
+	case v == "FAIL":
+		b.WriteString("<td class=\"fail\">")
+	default:
+		b.WriteString("<td>")
+	}
+	b.WriteString(esc(v))
+	b.WriteString("</td>")
+}
+
+func htmlBlock(b *bufio.Writer, bl block, heading string) {
+	switch {
+	case bl.para != "":
+		b.WriteString("<p>")
+		b.WriteString(esc(bl.para))
+		b.WriteString("</p>\n")
+	case len(bl.items) > 0:
+		b.WriteString("<table class=\"kv\">\n")
+		for _, it := range bl.items {
+			b.WriteString("<tr><th>")
+			b.WriteString(esc(it.label))
+			b.WriteString("</th>")
+			htmlCell(b, it.val)
+			b.WriteString("<td>")
+			b.WriteString(esc(it.unit))
+			b.WriteString("</td></tr>\n")
+		}
+		b.WriteString("</table>\n")
+	case bl.tbl != nil:
+		b.WriteString("<div class=\"wide\"><table>\n<thead><tr>")
+		for _, c := range bl.tbl.cols {
+			b.WriteString("<th>")
+			b.WriteString(esc(c.header()))
+			b.WriteString("</th>")
+		}
+		b.WriteString("</tr></thead>\n<tbody>\n")
+		for _, row := range bl.tbl.rows {
+			b.WriteString("<tr>")
+			for _, c := range row {
+				htmlCell(b, c)
+			}
+			b.WriteString("</tr>\n")
+		}
+		b.WriteString("</tbody>\n</table></div>\n")
+	case len(bl.eqs) > 0:
+		for _, e := range bl.eqs {
+			b.WriteString("<p class=\"eq\">")
+			b.WriteString(esc(e))
+			b.WriteString("</p>\n")
+		}
+	case len(bl.list) > 0:
+		tag, class := "ul", ""
+		switch heading {
+		case "Sources cited":
+			tag = "ol"
+		case "Warnings":
+			class = " class=\"warn\""
+		case "Cautions":
+			class = " class=\"caution\""
+		}
+		b.WriteString("<" + tag + class + ">\n")
+		for _, l := range bl.list {
+			b.WriteString("<li>")
+			b.WriteString(esc(l))
+			b.WriteString("</li>\n")
+		}
+		b.WriteString("</" + tag + ">\n")
+	case bl.svg != "":
+		b.WriteString("<figure>\n")
+		b.WriteString(bl.svg)
+		b.WriteString("\n<figcaption>")
+		b.WriteString(esc(bl.fig))
+		b.WriteString("</figcaption>\n</figure>\n")
+	case bl.pre != "":
+		b.WriteString("<pre>")
+		b.WriteString(esc(strings.TrimRight(bl.pre, "\n")))
+		b.WriteString("</pre>\n")
+	}
+}

@@ -1,0 +1,508 @@
+package report
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"github.com/qultgeo/qult/calc"
+)
+
+// The text, Markdown and HTML writers render one document model: sections
+// of blocks (paragraphs, label-value items, tables, equations, lists),
+// built once from the result by build.
+
+// cell is a table or item value: text, or a number formatted by the writer.
+type cell struct {
+	s   string
+	v   float64
+	num bool
+}
+
+func txt(s string) cell  { return cell{s: s} }
+func num(v float64) cell { return cell{v: v, num: true} }
+func (c cell) str(n int) string {
+	if c.num {
+		return fmtNum(c.v, n)
+	}
+	return c.s
+}
+
+type column struct{ name, unit string }
+
+// header returns "name (unit)" or the name alone.
+func (c column) header() string {
+	if c.unit == "" {
+		return c.name
+	}
+	return c.name + " (" + c.unit + ")"
+}
+
+type table struct {
+	cols []column
+	rows [][]cell
+}
+
+type item struct {
+	label string
+	val   cell
+	unit  string
+}
+
+// block is one of: a paragraph, items, a table, equations, a list, and for
+// HTML only an inline SVG figure (ours, not escaped) or preformatted text.
+type block struct {
+	para  string
+	items []item
+	tbl   *table
+	eqs   []string
+	list  []string
+	svg   string
+	pre   string
+	fig   string // figure caption
+}
+
+type section struct {
+	heading string
+	blocks  []block
+}
+
+type doc struct {
+	title    string
+	sections []section
+}
+
+// build assembles the document of view o.View.
+func build(r *calc.Result, o Options) *doc {
+	c := conv{o.Units}
+	d := &doc{title: r.Title}
+	if d.title == "" {
+		d.title = "qult calculation"
+	}
+	add := func(s section) {
+		if len(s.blocks) > 0 {
+			d.sections = append(d.sections, s)
+		}
+	}
+	add(secTitle(r, o))
+	switch o.View {
+	case ViewCheck:
+		add(secLoads(r, c))
+		add(secTotals(r, c))
+		add(secDesign(r, c))
+	case ViewCapacity:
+		add(secShaft(r, c))
+		add(secTip(r, c))
+		add(secTotals(r, c))
+	case ViewLength:
+		add(secLength(r, c))
+		add(secWithDepth(r, c))
+	case ViewReport:
+		add(secPile(r, c))
+		add(secLayers(r, c))
+		add(secStresses(r, c))
+		add(secLoads(r, c))
+		add(secShaft(r, c))
+		add(secTip(r, c))
+		add(secTotals(r, c))
+		add(secDesign(r, c))
+		add(secLength(r, c))
+		add(secWithDepth(r, c))
+	}
+	add(secList("Warnings", r.Warnings))
+	if o.View == ViewReport {
+		src := make([]string, len(r.Sources))
+		for i, s := range r.Sources {
+			src[i] = s.String()
+		}
+		add(secList("Sources cited", src))
+		add(secList("Cautions", r.Cautions))
+	}
+	return d
+}
+
+func date(r *calc.Result, o Options) string {
+	if o.Date != "" {
+		return o.Date
+	}
+	return r.Date
+}
+
+func secTitle(r *calc.Result, o Options) section {
+	var it []item
+	for _, kv := range [][2]string{{"Project", r.Project}, {"Revision", r.Revision}, {"Engineer", r.Engineer},
+		{"Date", date(r, o)}, {"qult version", r.Version}, {"Display units", o.Units.String()}} {
+		if kv[1] != "" {
+			it = append(it, item{label: kv[0], val: txt(kv[1])})
+		}
+	}
+	return section{heading: "", blocks: []block{{items: it}}}
+}
+
+func secPile(r *calc.Result, c conv) section {
+	p := r.Pile
+	s := p.Section
+	it := []item{
+		{"Section", txt(s.Shape.String()), ""},
+		{"Size (diameter or width)", num(c.L(s.Size())), c.uL()},
+	}
+	if s.Wall > 0 {
+		it = append(it, item{"Wall", num(c.L(s.Wall)), c.uL()})
+	}
+	it = append(it,
+		item{"Gross area", num(c.A(s.GrossArea())), c.uA()},
+		item{"Material area", num(c.A(s.MaterialArea())), c.uA()},
+		item{"Outer perimeter", num(c.L(s.OuterPerimeter())), c.uL()},
+		item{"Length", num(c.L(p.Length)), c.uL()},
+		item{"Head depth", num(c.L(p.HeadDepth)), c.uL()},
+		item{"Tip depth", num(c.L(p.Tip())), c.uL()},
+		item{"Installation", txt(p.Installation.String()), ""},
+	)
+	if s.CanPlug() {
+		it = append(it, item{"Plug", txt(p.Plug.String()), ""})
+	}
+	if p.Modulus > 0 {
+		v, u := c.modulus(p.Modulus)
+		it = append(it, item{"Young's modulus", num(v), u})
+	}
+	if p.UnitWeight > 0 {
+		it = append(it, item{"Unit weight of pile", num(c.G(p.UnitWeight)), c.uG()})
+	}
+	return section{heading: "Pile", blocks: []block{{items: it}}}
+}
+
+func secLayers(r *calc.Result, c conv) section {
+	t := &table{cols: []column{{"Layer", ""}, {"Top", c.uL()}, {"Bottom", c.uL()}, {"Drainage", ""},
+		{"φ′", "deg"}, {"c′", c.uS()}, {"su top", c.uS()}, {"su bottom", c.uS()},
+		{"γ", c.uG()}, {"γsat", c.uG()}, {"γ′", c.uG()}, {"Weights", ""}, {"Shaft", ""}, {"Tip", ""}}}
+	for i, l := range r.Layers {
+		row := []cell{txt(l.Name), num(c.L(l.Top)), num(c.L(l.Bottom)), txt(l.Drainage.String()),
+			optNum(l.Phi.Degrees(), l.Phi > 0), optNum(c.S(l.Cohesion), l.Cohesion > 0),
+			optNum(c.S(l.SuTop), l.HasSu), optNum(c.S(l.SuBottom), l.HasSu),
+			optNum(c.G(l.UnitWeight), l.UnitWeight > 0), optNum(c.G(l.SaturatedUnitWeight), l.SaturatedUnitWeight > 0),
+			optNum(c.G(l.SubmergedUnitWeight), l.SaturatedUnitWeight > 0), txt(l.Basis.String())}
+		shaftM, tipM := "", ""
+		if i < len(r.Methods) {
+			shaftM, tipM = r.Methods[i].Shaft, r.Methods[i].Tip
+		}
+		row = append(row, txt(dash(shaftM)), txt(dash(tipM)))
+		t.rows = append(t.rows, row)
+	}
+	zw, wet := r.Ground.WaterDepth()
+	water := "none (dry site)"
+	if wet {
+		water = c.ls(zw) + " below ground"
+		if zw < 0 {
+			water = c.ls(-zw) + " of free water above ground"
+		}
+	}
+	return section{heading: "Ground profile", blocks: []block{
+		{items: []item{{"Water table", txt(water), ""}, {"γw", num(c.G(r.Ground.WaterUnitWeight())), c.uG()}}},
+		{tbl: t},
+		{para: "Weights: given = as entered; phase = derived from dry unit weight, void ratio, water content or specific gravity by phase relations; assumed-dry and assumed-saturated mark an assumption where data were missing. γ′ = γsat − γw."},
+	}}
+}
+
+func dash(s string) string {
+	if s == "" {
+		return "-"
+	}
+	return s
+}
+
+func optNum(v float64, ok bool) cell {
+	if !ok {
+		return txt("-")
+	}
+	return num(v)
+}
+
+func secStresses(r *calc.Result, c conv) section {
+	t := &table{cols: []column{{"Depth", c.uL()}, {"σv", c.uS()}, {"u", c.uS()}, {"σ′v", c.uS()}}}
+	for _, p := range r.Stresses {
+		t.rows = append(t.rows, []cell{num(c.L(p.Depth)), num(c.S(p.Total)), num(c.S(p.Pore)), num(c.S(p.Effective))})
+	}
+	return section{heading: "Vertical stress", blocks: []block{{para: "Total stress σv, pore pressure u and effective stress σ′v = σv − u at each break of the profile; linear between."}, {tbl: t}}}
+}
+
+func secLoads(r *calc.Result, c conv) section {
+	l := r.Loads
+	if l.Compression.Permanent == 0 && l.Compression.Variable == 0 && l.Tension.Permanent == 0 && l.Tension.Variable == 0 {
+		return section{}
+	}
+	return section{heading: "Loads (characteristic)", blocks: []block{{items: []item{
+		{"Compression, permanent", num(c.F(l.Compression.Permanent)), c.uF()},
+		{"Compression, variable", num(c.F(l.Compression.Variable)), c.uF()},
+		{"Tension, permanent", num(c.F(l.Tension.Permanent)), c.uF()},
+		{"Tension, variable", num(c.F(l.Tension.Variable)), c.uF()},
+	}}}}
+}
+
+// shaftTable is the per-segment table.
+func shaftTable(r *calc.Result, c conv) *table {
+	t := &table{cols: []column{{"Top", c.uL()}, {"Bottom", c.uL()}, {"Layer", ""}, {"Method", ""},
+		{"σ′v top", c.uS()}, {"σ′v bottom", c.uS()}, {"su top", c.uS()}, {"su bottom", c.uS()},
+		{"fs top", c.uS()}, {"fs bottom", c.uS()}, {"∫fs dz", c.uQ()}, {"Perimeter", c.uL()}, {"Qs", c.uF()}}}
+	for _, w := range r.Breakdown.Rows {
+		hasSu := w.SuTop > 0 || w.SuBottom > 0
+		fsOK := w.Method != "none" && w.Method != "lambda"
+		t.rows = append(t.rows, []cell{num(c.L(w.Top)), num(c.L(w.Bottom)), txt(w.LayerName), txt(w.Method),
+			num(c.S(w.SigmaTop)), num(c.S(w.SigmaBottom)), optNum(c.S(w.SuTop), hasSu), optNum(c.S(w.SuBottom), hasSu),
+			optNum(c.S(w.At[0].Fs), fsOK), optNum(c.S(w.At[1].Fs), fsOK),
+			num(c.Q(w.Integral)), num(c.L(w.Perimeter)), num(c.F(w.Force))})
+	}
+	return t
+}
+
+func secShaft(r *calc.Result, c conv) section {
+	b := r.Breakdown
+	blocks := []block{{para: "One row per segment between layer boundaries, the water table and any critical depth; fs at the segment ends, ∫fs dz the exact integral over the segment, Qs = perimeter × ∫fs dz."}, {tbl: shaftTable(r, c)}}
+	if b.Lambda != nil {
+		l := b.Lambda
+		blocks = append(blocks, block{para: fmt.Sprintf("λ method over the whole embedded length L = %s: mean σ′v = %s, mean su = %s, λ = %s, fs,av = %s (rows using it show no end values).",
+			c.ls(l.Length), c.ss(l.SigmaV), c.ss(l.Su), fmtNum(l.Lambda, sig), c.ss(l.Fav))})
+	}
+	if eq := shaftEquations(r, c); len(eq) > 0 {
+		blocks = append(blocks, block{para: "Worked equations (the bottom of the first segment of each method):"}, block{eqs: eq})
+	}
+	return section{heading: "Shaft resistance", blocks: blocks}
+}
+
+// shaftEquations writes each shaft method's equation once with the
+// numbers of the bottom end of its first segment.
+func shaftEquations(r *calc.Result, c conv) []string {
+	var out []string
+	seen := map[string]bool{}
+	for _, w := range r.Breakdown.Rows {
+		if w.Method == "none" || seen[w.Method] {
+			continue
+		}
+		seen[w.Method] = true
+		a := w.At[1]
+		head := fmt.Sprintf("%s (%s, z = %s): ", w.Method, w.LayerName, c.ls(w.Bottom))
+		var e string
+		switch {
+		case w.Method == "lambda" && r.Breakdown.Lambda != nil:
+			l := r.Breakdown.Lambda
+			e = fmt.Sprintf("fs,av = λ·(σ̄′v + 2·s̄u) = %s × (%s + 2 × %s) = %s", fmtNum(l.Lambda, sig), c.ss(l.SigmaV), c.ss(l.Su), c.ss(l.Fav))
+		case a.K > 0 && a.Delta > 0:
+			if a.KRatio > 0 && a.K0 > 0 {
+				out = append(out, head+fmt.Sprintf("K = (K/K0)·K0 = %s × %s = %s", fmtNum(a.KRatio, sig), fmtNum(a.K0, sig), fmtNum(a.K, sig)))
+			} else if a.KRatio > 0 && a.Kp > 0 {
+				out = append(out, head+fmt.Sprintf("K = (K/Kp)·Kp = %s × %s = %s", fmtNum(a.KRatio, sig), fmtNum(a.Kp, sig), fmtNum(a.K, sig)))
+			}
+			e = fmt.Sprintf("fs = K·σ′v·tan δ = %s × %s × tan %s° = %s", fmtNum(a.K, sig), c.ss(a.SigmaV), fmtNum(a.Delta.Degrees(), sig), c.ss(a.Unlimited))
+		case a.Beta > 0:
+			e = fmt.Sprintf("fs = β·σ′v = %s × %s = %s", fmtNum(a.Beta, sig), c.ss(a.SigmaV), c.ss(a.Unlimited))
+		case a.Alpha > 0:
+			su := w.SuBottom
+			e = fmt.Sprintf("fs = α·su = %s × %s = %s", fmtNum(a.Alpha, sig), c.ss(su), c.ss(a.Unlimited))
+			if a.Psi > 0 {
+				e += fmt.Sprintf(" (ψ = %s)", fmtNum(a.Psi, sig))
+			}
+		default:
+			e = fmt.Sprintf("%s gives fs = %s", w.Equation, c.ss(a.Fs))
+		}
+		if a.Unlimited != a.Fs && w.Method != "lambda" {
+			e += fmt.Sprintf("; limited to fs = %s", c.ss(a.Fs))
+		}
+		out = append(out, head+e)
+		out = append(out, head+fmt.Sprintf("Qs = p·∫fs dz = %s × %s = %s (segment %s to %s)", c.ls(w.Perimeter), c.qs(w.Integral), c.fs(w.Force), c.ls(w.Top), c.ls(w.Bottom)))
+	}
+	return out
+}
+
+func secTip(r *calc.Result, c conv) section {
+	t := r.Breakdown.Tip
+	res := t.Result
+	it := []item{
+		{"Tip depth", num(c.L(t.Depth)), c.uL()},
+		{"Layer", txt(t.LayerName), ""},
+		{"Method", txt(t.Method), ""},
+		{"Equation", txt(t.Equation), ""},
+		{"q′ = σ′v at the tip", num(c.S(t.Input.Q)), c.uS()},
+	}
+	if t.Input.Phi > 0 {
+		it = append(it, item{"φ′", num(t.Input.Phi.Degrees()), "deg"})
+	}
+	if t.Input.Su > 0 {
+		it = append(it, item{"su", num(c.S(t.Input.Su)), c.uS()})
+	}
+	if res.Nq > 0 {
+		it = append(it, item{"Nq", num(res.Nq), ""})
+	}
+	if res.Nc > 0 {
+		it = append(it, item{"Nc", num(res.Nc), ""})
+	}
+	if res.Irr > 0 {
+		it = append(it, item{"Irr", num(res.Irr), ""})
+	}
+	it = append(it, item{"qp before limit", num(c.S(res.Unlimited)), c.uS()})
+	if res.Limit > 0 {
+		it = append(it, item{"Limit", num(c.S(res.Limit)), c.uS()})
+	}
+	if t.Upper > 0 {
+		it = append(it, item{"Upper layer's qp (layered rule)", num(c.S(t.Upper)), c.uS()})
+	}
+	it = append(it, item{"qp used", num(c.S(t.Qp)), c.uS()},
+		item{"Area", num(c.A(t.Area)), c.uA()},
+		item{"Qp", num(c.F(t.Force)), c.uF()})
+	if t.Flags != 0 {
+		it = append(it, item{"Notes", txt(t.Flags.String()), ""})
+	}
+	return section{heading: "Tip resistance", blocks: []block{{items: it}, {para: "Worked equation:"}, {eqs: tipEquations(r, c)}}}
+}
+
+func tipEquations(r *calc.Result, c conv) []string {
+	t := r.Breakdown.Tip
+	res := t.Result
+	var out []string
+	var terms, vals []string
+	if res.Nq > 0 {
+		sym := "q′"
+		if math.Abs(float64(res.Sigma-t.Input.Q)) > 1e-9*math.Abs(float64(t.Input.Q)) {
+			sym = "σ′o"
+		}
+		terms = append(terms, sym+"·Nq")
+		vals = append(vals, fmt.Sprintf("%s × %s", c.ss(res.Sigma), fmtNum(res.Nq, sig)))
+	}
+	if res.Nc > 0 {
+		terms = append(terms, "c·Nc")
+		vals = append(vals, fmt.Sprintf("%s × %s", c.ss(res.C), fmtNum(res.Nc, sig)))
+	}
+	if len(terms) > 0 {
+		out = append(out, fmt.Sprintf("qp = %s = %s = %s", strings.Join(terms, " + "), strings.Join(vals, " + "), c.ss(res.Unlimited)))
+	} else {
+		out = append(out, fmt.Sprintf("%s gives qp = %s", t.Equation, c.ss(res.Unlimited)))
+	}
+	if res.Limit > 0 {
+		out = append(out, fmt.Sprintf("qp ≤ limit %s, so qp = min(%s, %s) = %s", c.ss(res.Limit), c.ss(res.Unlimited), c.ss(res.Limit), c.ss(res.Qp)))
+	}
+	if t.Upper > 0 {
+		out = append(out, fmt.Sprintf("tip less than 10 diameters into a stronger layer: qp grows from the upper layer's %s to %s (Meyerhof 1976), qp = %s", c.ss(t.Upper), c.ss(res.Qp), c.ss(t.Qp)))
+	} else if t.Qp != res.Qp {
+		out = append(out, fmt.Sprintf("qp used = %s", c.ss(t.Qp)))
+	}
+	out = append(out, fmt.Sprintf("Qp = qp·A = %s × %s = %s", c.ss(t.Qp), c.as(t.Area), c.fs(t.Force)))
+	return out
+}
+
+func secTotals(r *calc.Result, c conv) section {
+	k := r.Breakdown.Capacity
+	it := []item{
+		{"Tip Qp", num(c.F(k.Tip)), c.uF()},
+		{"Shaft Qs", num(c.F(k.Shaft)), c.uF()},
+		{"Pile weight W′", num(c.F(k.Weight)), c.uF()},
+		{"Compression Rc", num(c.F(k.Compression)), c.uF()},
+		{"Shaft in tension", num(c.F(k.TensionShaft)), c.uF()},
+		{"Tension Rt", num(c.F(k.Tension)), c.uF()},
+	}
+	if r.Pile.Section.CanPlug() {
+		mode := "unplugged"
+		if k.Plugged {
+			mode = "plugged"
+		}
+		it = append(it, item{"Governing mode", txt(mode), ""})
+	}
+	rc := "Rc = Qp + Qs = " + c.fs(k.Tip) + " + " + c.fs(k.Shaft)
+	if math.Abs(float64(k.Compression-k.Tip-k.Shaft)) > 1e-6*math.Abs(float64(k.Compression))+1e-9 {
+		rc += " − " + c.fs(k.Weight)
+	}
+	rc += " = " + c.fs(k.Compression)
+	rt := "Rt = Qs,t + W′ = " + c.fs(k.TensionShaft) + " + " + c.fs(k.Weight) + " = " + c.fs(k.Tension)
+	return section{heading: "Characteristic capacity", blocks: []block{{items: it}, {eqs: []string{rc, rt}}}}
+}
+
+func useCell(u float64) cell {
+	if u >= 1e6 {
+		return txt("> 1e6")
+	}
+	return num(u)
+}
+
+func passText(p bool) string {
+	if p {
+		return "pass"
+	}
+	return "FAIL"
+}
+
+func secDesign(r *calc.Result, c conv) section {
+	d := r.Design
+	if d == nil {
+		return section{heading: "Design check", blocks: []block{{para: "No design basis given: characteristic values only."}}}
+	}
+	t := &table{cols: []column{{"Case", ""}, {"Compression Ed", c.uF()}, {"Compression Rd", c.uF()}, {"Compression Ed/Rd", ""},
+		{"Tension Ed", c.uF()}, {"Tension Rd", c.uF()}, {"Tension Ed/Rd", ""}, {"Result", ""}}}
+	for _, v := range d.Cases {
+		t.rows = append(t.rows, []cell{txt(v.Case), num(c.F(v.CompressionEd)), num(c.F(v.CompressionRd)), useCell(v.CompressionUse),
+			num(c.F(v.TensionEd)), num(c.F(v.TensionRd)), useCell(v.TensionUse), txt(passText(v.Pass))})
+	}
+	gov := ""
+	if d.Governing >= 0 && d.Governing < len(d.Cases) {
+		gov = d.Cases[d.Governing].Case
+	}
+	it := []item{{"Basis", txt(d.Basis), ""}, {"Governing case", txt(gov), ""}, {"Highest utilisation", useCell(d.MaxUse()), ""}, {"Result", txt(passText(d.Pass)), ""}}
+	return section{heading: "Design check", blocks: []block{{items: it}, {tbl: t},
+		{para: "Ed is the design action, Rd the design resistance of the case; the pile passes when Ed/Rd ≤ 1 in every case and direction."}}}
+}
+
+func secLength(r *calc.Result, c conv) section {
+	l := r.Length
+	if l == nil {
+		msg := "No required length: it needs a design basis and loads."
+		if r.Design != nil {
+			msg = "No required length was found (see the warnings)."
+		}
+		return section{heading: "Required length", blocks: []block{{para: msg}}}
+	}
+	if !l.Found {
+		return section{heading: "Required length", blocks: []block{{para: "No tip depth within the search passes every design case."}}}
+	}
+	return section{heading: "Required length", blocks: []block{{items: []item{
+		{"Tip depth", num(c.L(l.TipDepth)), c.uL()},
+		{"Length", num(c.L(l.Length)), c.uL()},
+		{"Governs", txt(l.Governs), ""},
+		{"Utilisation there", useCell(l.Use), ""},
+	}}}}
+}
+
+// withDepthTable is the capacity with depth.
+func withDepthTable(r *calc.Result, c conv) *table {
+	t := &table{cols: []column{{"Tip depth", c.uL()}, {"qp", c.uS()}, {"Qp", c.uF()}, {"Qs", c.uF()}, {"W′", c.uF()},
+		{"Rc", c.uF()}, {"Rt", c.uF()}}}
+	des := len(r.DesignWithDepth) == len(r.WithDepth) && len(r.DesignWithDepth) > 0
+	if des {
+		t.cols = append(t.cols, column{"Rc,d", c.uF()})
+	}
+	for i, k := range r.WithDepth {
+		row := []cell{num(c.L(k.TipDepth)), num(c.S(k.UnitTip)), num(c.F(k.Tip)), num(c.F(k.Shaft)), num(c.F(k.Weight)),
+			num(c.F(k.Compression)), num(c.F(k.Tension))}
+		if des {
+			row = append(row, num(c.F(r.DesignWithDepth[i])))
+		}
+		t.rows = append(t.rows, row)
+	}
+	return t
+}
+
+func secWithDepth(r *calc.Result, c conv) section {
+	if len(r.WithDepth) == 0 {
+		return section{heading: "Capacity with depth", blocks: []block{{para: "Not computed (see the warnings)."}}}
+	}
+	p := "Characteristic capacity for each tip depth (same pile, head fixed)."
+	if len(r.DesignWithDepth) == len(r.WithDepth) {
+		p += " Rc,d is the design compression resistance of the governing case."
+	}
+	return section{heading: "Capacity with depth", blocks: []block{{para: p}, {tbl: withDepthTable(r, c)}}}
+}
+
+func secList(h string, l []string) section {
+	if len(l) == 0 {
+		if h == "Warnings" {
+			return section{heading: h, blocks: []block{{para: "None."}}}
+		}
+		return section{}
+	}
+	return section{heading: h, blocks: []block{{list: l}}}
+}

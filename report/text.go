@@ -1,0 +1,162 @@
+package report
+
+import (
+	"bufio"
+	"strings"
+	"unicode/utf8"
+)
+
+func width(s string) int { return utf8.RuneCountInString(s) }
+
+func pad(b *bufio.Writer, s string, w int, right bool) {
+	n := w - width(s)
+	if right {
+		b.WriteString(strings.Repeat(" ", max(0, n)))
+		b.WriteString(s)
+	} else {
+		b.WriteString(s)
+		b.WriteString(strings.Repeat(" ", max(0, n)))
+	}
+}
+
+// wrap breaks s into lines of at most n runes at spaces.
+func wrap(s string, n int) []string {
+	var out []string
+	line := ""
+	for _, w := range strings.Fields(s) {
+		if line != "" && width(line)+1+width(w) > n {
+			out = append(out, line)
+			line = ""
+		}
+		if line != "" {
+			line += " "
+		}
+		line += w
+	}
+	if line != "" {
+		out = append(out, line)
+	}
+	return out
+}
+
+func writeText(b *bufio.Writer, d *doc) error {
+	b.WriteString(d.title)
+	b.WriteString("\n")
+	b.WriteString(strings.Repeat("=", width(d.title)))
+	b.WriteString("\n")
+	for _, s := range d.sections {
+		if s.heading != "" {
+			b.WriteString("\n")
+			b.WriteString(s.heading)
+			b.WriteString("\n")
+			b.WriteString(strings.Repeat("-", width(s.heading)))
+			b.WriteString("\n")
+		}
+		for i, bl := range s.blocks {
+			if i > 0 && bl.svg == "" && bl.pre == "" {
+				b.WriteString("\n")
+			}
+			textBlock(b, bl)
+		}
+	}
+	return nil
+}
+
+func textBlock(b *bufio.Writer, bl block) {
+	switch {
+	case bl.para != "":
+		for _, l := range wrap(bl.para, 78) {
+			b.WriteString(l)
+			b.WriteString("\n")
+		}
+	case len(bl.items) > 0:
+		lw, vw := 0, 0
+		for _, it := range bl.items {
+			lw = max(lw, width(it.label))
+			if it.val.num {
+				vw = max(vw, width(it.val.str(sig)))
+			}
+		}
+		for _, it := range bl.items {
+			b.WriteString("  ")
+			pad(b, it.label, lw, false)
+			b.WriteString("  ")
+			v := it.val.str(sig)
+			if it.val.num {
+				pad(b, v, vw, true)
+			} else {
+				b.WriteString(v)
+			}
+			if it.unit != "" {
+				b.WriteString(" ")
+				b.WriteString(it.unit)
+			}
+			b.WriteString("\n")
+		}
+	case bl.tbl != nil:
+		textTable(b, bl.tbl)
+	case len(bl.eqs) > 0:
+		for _, e := range bl.eqs {
+			b.WriteString("  ")
+			b.WriteString(e)
+			b.WriteString("\n")
+		}
+	case len(bl.list) > 0:
+		for _, l := range bl.list {
+			for i, w := range wrap(l, 74) {
+				if i == 0 {
+					b.WriteString("  - ")
+				} else {
+					b.WriteString("    ")
+				}
+				b.WriteString(w)
+				b.WriteString("\n")
+			}
+		}
+	}
+}
+
+func textTable(b *bufio.Writer, t *table) {
+	w := make([]int, len(t.cols))
+	right := make([]bool, len(t.cols))
+	heads := make([]string, len(t.cols))
+	for j, c := range t.cols {
+		heads[j] = c.header()
+		w[j] = width(heads[j])
+		right[j] = true
+	}
+	cells := make([][]string, len(t.rows))
+	for i, row := range t.rows {
+		cells[i] = make([]string, len(row))
+		for j, c := range row {
+			cells[i][j] = c.str(sig)
+			w[j] = max(w[j], width(cells[i][j]))
+			if !c.num && c.s != "-" {
+				right[j] = false
+			}
+		}
+	}
+	line := func(vals []string) {
+		b.WriteString("  ")
+		for j, v := range vals {
+			if j > 0 {
+				b.WriteString("  ")
+			}
+			if j == len(vals)-1 && !right[j] {
+				b.WriteString(v)
+			} else {
+				pad(b, v, w[j], right[j])
+			}
+		}
+		b.WriteString("\n")
+	}
+	line(heads)
+	rule := make([]string, len(w))
+	for j := range w {
+		rule[j] = strings.Repeat("-", w[j])
+	}
+	line(rule)
+	for _, r := range cells {
+		line(r)
+	}
+}
