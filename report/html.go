@@ -81,7 +81,7 @@ func writeHTML(b *bufio.Writer, r *calc.Result, o Options) error {
 	if err := addFigures(d, r, o); err != nil {
 		return err
 	}
-	b.WriteString("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n<title>")
+	b.WriteString("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\"/>\n<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\"/>\n<title>")
 	b.WriteString(esc(d.title))
 	b.WriteString("</title>\n<style>")
 	b.WriteString(css)
