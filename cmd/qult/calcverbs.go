@@ -1,0 +1,151 @@
+package main
+
+import (
+	"bytes"
+	"errors"
+	"flag"
+	"fmt"
+	"path/filepath"
+	"strings"
+
+	"github.com/qultgeo/qult/calc"
+	"github.com/qultgeo/qult/report"
+	"github.com/qultgeo/qult/units"
+)
+
+// calcFormats are the output formats of the verbs that read a calc file.
+const calcFormats = "text, json, csv, md, html"
+
+// calcOpts are the flags of check, capacity, length and report.
+type calcOpts struct {
+	format string
+	units  string
+	out    string
+}
+
+func calcFlags(name, formats string, o *calcOpts) *flag.FlagSet {
+	fs := newFlagSet(name)
+	def := "text"
+	if name == "report" {
+		def = "text, or html when -o ends in .html"
+	}
+	fs.StringVar(&o.format, "format", "", "output `format`: "+formats+" (default "+def+")")
+	fs.StringVar(&o.units, "units", "", "display `system` SI or US (default: the file's units)")
+	fs.StringVar(&o.out, "o", "", "write the output to `FILE` instead of standard output")
+	return fs
+}
+
+func setCalcVersion(v string) { calc.SetVersion(v) }
+
+func runCheck(c *cmd, args []string) int    { return c.calcVerb(args, viewCheck) }
+func runCapacity(c *cmd, args []string) int { return c.calcVerb(args, viewCapacity) }
+func runLength(c *cmd, args []string) int   { return c.calcVerb(args, viewLength) }
+func runReport(c *cmd, args []string) int   { return c.calcVerb(args, viewReport) }
+
+// calcVerb is check, capacity, length and report: read, run, render.
+func (c *cmd) calcVerb(args []string, view report.View) int {
+	var o calcOpts
+	fs := calcFlags(c.verb, calcFormats, &o)
+	pos, code, ok := c.parseFlags(fs, args)
+	if !ok {
+		return code
+	}
+	switch len(pos) {
+	case 0:
+		return c.usageErr("%s: no calc file given (use - for standard input)", c.verb)
+	case 1:
+	default:
+		return c.usageErr("%s: one calc file at a time, got %d (%s); use batch for many", c.verb, len(pos), strings.Join(pos, " "))
+	}
+	format := strings.ToLower(o.format)
+	if format == "" {
+		format = "text"
+		if ext := strings.ToLower(filepath.Ext(o.out)); view == viewReport && (ext == ".html" || ext == ".htm") {
+			format = "html"
+		}
+	}
+	if err := oneOf("format", format, "text", "json", "csv", "md", "html"); err != nil {
+		return c.usageErr("%s: %v", c.verb, err)
+	}
+	sys, hasSys := units.SI, false
+	if o.units != "" {
+		s, err := units.ParseSystem(o.units)
+		if err != nil {
+			return c.usageErr("%s: --units %q: want SI or US", c.verb, o.units)
+		}
+		sys, hasSys = s, true
+	}
+	name := pos[0]
+	data, err := readInput(name, calc.MaxFileSize)
+	if err != nil {
+		c.errorf("%v", err)
+		return exitUsage
+	}
+	res, err := calc.Parse(data)
+	if err != nil {
+		c.problems(displayName(name), err)
+		return exitUsage
+	}
+	if hasSys {
+		res.Display = sys
+	}
+	code = exitOK
+	switch view {
+	case viewCheck, viewLength:
+		if res.Design == nil {
+			c.errorf("%s: design: not given; %s needs a design section (basis safety-factor, lrfd or en1997)", displayName(name), c.verb)
+			return exitUsage
+		}
+		if res.Input == nil || res.Input.Loads == nil {
+			c.errorf("%s: loads: not given; %s needs the characteristic loads (compression, tension)", displayName(name), c.verb)
+			return exitUsage
+		}
+		if view == viewCheck && !res.Design.Pass {
+			code = exitFail
+		}
+		if view == viewLength && (res.Length == nil || !res.Length.Found) {
+			code = exitFail
+		}
+	}
+	var buf bytes.Buffer
+	if err := render(&buf, res, format, view, res.Display); err != nil {
+		c.errorf("%s: %v", c.verb, err)
+		return exitUsage
+	}
+	if w := c.output(o.out, &buf); w != exitOK {
+		return w
+	}
+	return code
+}
+
+func displayName(name string) string {
+	if name == "-" {
+		return "<stdin>"
+	}
+	return name
+}
+
+// problems prints every problem of a bad calc file on its own line:
+//
+//	qult: ground.layers[1].thickness (line 12): "12 kPa": ...
+//
+// A problem without a field path is named by the file.
+func (c *cmd) problems(file string, err error) {
+	var ps calc.Problems
+	if !errors.As(err, &ps) {
+		c.errorf("%s: %v", file, err)
+		return
+	}
+	for _, p := range ps {
+		if p.Path == "" {
+			p.Path = file
+		}
+		c.errorf("%s", p.Error())
+	}
+	if len(ps) == 0 {
+		c.errorf("%s: %v", file, err)
+	}
+}
+
+// sysName returns the display name of a unit system for messages.
+func sysName(s units.System) string { return fmt.Sprint(s) }

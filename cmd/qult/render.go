@@ -1,0 +1,44 @@
+package main
+
+import (
+	"bytes"
+	"encoding/json"
+	"io"
+
+	"github.com/qultgeo/qult/calc"
+	"github.com/qultgeo/qult/report"
+	"github.com/qultgeo/qult/units"
+)
+
+// The views of a result, one per verb.
+var (
+	viewCheck    = report.ViewCheck
+	viewCapacity = report.ViewCapacity
+	viewLength   = report.ViewLength
+	viewReport   = report.ViewReport
+)
+
+// render writes res in format for view, in display system sys, through
+// package report. The date is left to the calc file (none is made up), so
+// that the same file gives the same output.
+func render(w io.Writer, res *calc.Result, format string, view report.View, sys units.System) error {
+	f, err := report.ParseFormat(format)
+	if err != nil {
+		return err
+	}
+	return report.Write(w, res, f, report.Options{Units: sys, View: view})
+}
+
+// renderJSONLine writes res as one line of the report's JSON form.
+func renderJSONLine(w io.Writer, res *calc.Result, sys units.System) error {
+	var buf, line bytes.Buffer
+	if err := report.Write(&buf, res, report.JSON, report.Options{Units: sys, View: report.ViewReport}); err != nil {
+		return err
+	}
+	if err := json.Compact(&line, buf.Bytes()); err != nil {
+		return err
+	}
+	line.WriteByte('\n')
+	_, err := w.Write(line.Bytes())
+	return err
+}
