@@ -363,3 +363,70 @@ func TestBatchLongLine(t *testing.T) {
 		t.Errorf("the lines around the long one differ")
 	}
 }
+
+// TestUnitsOverride: --units US shows the same result in US units. The
+// conversions are exact by definition (closed form): 1 kip = 4.4482216152605
+// kN, 1 ft = 0.3048 m.
+func TestUnitsOverride(t *testing.T) {
+	type q struct {
+		Value float64
+		Unit  string
+	}
+	var docs [2]struct {
+		Units    string
+		Pile     map[string]json.RawMessage
+		Capacity struct{ Tip, Shaft, Compression, Tension q }
+		Design   struct{ Pass bool }
+	}
+	for i, sys := range []string{"SI", "US"} {
+		r := runQ(t, slow, "", "capacity", "--format", "json", "--units", sys, examplePath("pump-station-bored"))
+		if r.code != 0 {
+			t.Fatalf("--units %s: exit %d\n%s", sys, r.code, r.stderr)
+		}
+		if err := json.Unmarshal([]byte(r.stdout), &docs[i]); err != nil {
+			t.Fatal(err)
+		}
+	}
+	si, us := docs[0], docs[1]
+	if si.Units != "SI" || us.Units != "US" {
+		t.Errorf("units %q and %q, want SI and US", si.Units, us.Units)
+	}
+	const kip = 4.4482216152605 // kN, exact by definition of the pound-force
+	for _, c := range []struct {
+		name   string
+		si, us q
+	}{{"tip", si.Capacity.Tip, us.Capacity.Tip}, {"shaft", si.Capacity.Shaft, us.Capacity.Shaft},
+		{"compression", si.Capacity.Compression, us.Capacity.Compression}, {"tension", si.Capacity.Tension, us.Capacity.Tension}} {
+		if c.si.Unit != "kN" || c.us.Unit != "kip" {
+			t.Errorf("%s: units %q and %q, want kN and kip", c.name, c.si.Unit, c.us.Unit)
+		}
+		if math.Abs(c.us.Value*kip-c.si.Value) > 2e-5*c.si.Value { // both carry 6 significant digits
+			t.Errorf("%s: %g kip × %g = %g kN, want %g kN", c.name, c.us.Value, kip, c.us.Value*kip, c.si.Value)
+		}
+	}
+	if si.Design.Pass != us.Design.Pass {
+		t.Errorf("the design check differs with the display units")
+	}
+}
+
+// TestBatchMatchesSingle: each batch answer is the compacted JSON that
+// capacity --format json gives for the same input line.
+func TestBatchMatchesSingle(t *testing.T) {
+	in, _ := batchInput(t)
+	r := runQ(t, slow, in, "batch")
+	out := strings.Split(strings.TrimRight(r.stdout, "\n"), "\n")
+	for _, c := range []struct{ in, out int }{{0, 0}, {4, 3}, {5, 4}} {
+		line := lines0(in, c.in)
+		single := runQ(t, slow, line, "capacity", "--format", "json", "-")
+		if single.code != 0 {
+			t.Fatalf("capacity of input line %d: exit %d\n%s", c.in+1, single.code, single.stderr)
+		}
+		var compact bytes.Buffer
+		if err := json.Compact(&compact, []byte(single.stdout)); err != nil {
+			t.Fatal(err)
+		}
+		if compact.String() != out[c.out] {
+			t.Errorf("batch answer %d differs from capacity --format json of the same line", c.out+1)
+		}
+	}
+}

@@ -119,8 +119,7 @@ func writeVerbHelp(w io.Writer, name string) {
 	fs.VisitAll(func(*flag.Flag) { n++ })
 	if n > 0 {
 		fmt.Fprintf(w, "\nflags:\n")
-		fs.SetOutput(w)
-		fs.PrintDefaults()
+		printFlags(w, fs)
 	}
 	fmt.Fprintf(w, "\nexample:\n  %s\n", h.example)
 }
@@ -208,4 +207,24 @@ func oneOf(flagName, v string, accepted ...string) error {
 		}
 	}
 	return fmt.Errorf("--%s %q: want one of %s", flagName, v, strings.Join(accepted, ", "))
+}
+
+// printFlags lists the flags as users write them: --name for every flag
+// but the output file, -o.
+func printFlags(w io.Writer, fs *flag.FlagSet) {
+	fs.VisitAll(func(f *flag.Flag) {
+		dash := "--"
+		if f.Name == "o" {
+			dash = "-"
+		}
+		arg, usage := flag.UnquoteUsage(f)
+		line := "  " + dash + f.Name
+		if arg != "" {
+			line += " " + arg
+		}
+		if f.DefValue != "" && f.DefValue != "false" {
+			usage += fmt.Sprintf(" (default %q)", f.DefValue)
+		}
+		fmt.Fprintf(w, "%s\n      %s\n", line, usage)
+	})
 }

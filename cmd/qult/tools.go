@@ -513,7 +513,7 @@ func writeFactors(b *bytes.Buffer, format string, rows []bearing.Row, sys units.
 	}
 	for _, r := range rows {
 		if r.Err != nil {
-			t.add(r.ID, "–", "–", "–", "–", "–", "–", "not applied: "+r.Err.Error())
+			t.add(r.ID, "–", "–", "–", "–", "–", "–", "not applied: "+strings.TrimPrefix(r.Err.Error(), "bearing: "))
 			continue
 		}
 		res := r.Result
