@@ -38,8 +38,21 @@ figure svg{max-width:100%;height:auto}
 @media print{body{max-width:none;margin:0}h2{break-after:avoid}table,figure{break-inside:avoid}.wide{overflow:visible}}
 `
 
-// esc escapes text for HTML element content and attribute values.
-func esc(s string) string { return html.EscapeString(s) }
+// esc escapes text for HTML element content and attribute values. Invalid
+// UTF-8 and control characters other than tab, newline and carriage
+// return (which no HTML or XML parser accepts as text) become U+FFFD.
+func esc(s string) string { return html.EscapeString(clean(s)) }
+
+// clean replaces invalid UTF-8 and control characters with U+FFFD.
+func clean(s string) string {
+	s = strings.ToValidUTF8(s, "\uFFFD")
+	return strings.Map(func(r rune) rune {
+		if r < 0x20 && r != '\t' && r != '\n' && r != '\r' || r >= 0x7f && r < 0xa0 || r == 0xFFFE || r == 0xFFFF {
+			return '\uFFFD'
+		}
+		return r
+	}, s)
+}
 
 // addFigures puts the figures of the HTML calculation package into d.
 func addFigures(d *doc, r *calc.Result, o Options) error {

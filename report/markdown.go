@@ -14,7 +14,7 @@ var mdEscaper = strings.NewReplacer(
 	"\n", " ", "\r", " ",
 )
 
-func mdEsc(s string) string { return mdEscaper.Replace(s) }
+func mdEsc(s string) string { return mdEscaper.Replace(clean(s)) }
 
 func writeMarkdown(b *bufio.Writer, d *doc) error {
 	b.WriteString("# ")

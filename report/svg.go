@@ -3,7 +3,6 @@ package report
 import (
 	"bytes"
 	"fmt"
-	"html"
 	"image/color"
 	"math"
 	"strings"
@@ -72,6 +71,7 @@ func groundSVG(r *calc.Result, c conv) string {
 	var b strings.Builder
 	fmt.Fprintf(&b, `<svg xmlns="http://www.w3.org/2000/svg" width="%g" height="%g" viewBox="0 0 %g %g" role="img" aria-label="Ground profile">`+"\n", W, H, W, H)
 	fmt.Fprintf(&b, `<g font-family="%s" font-size="11">`+"\n", fontFamily)
+	tipY := y(float64(r.Pile.Tip()))
 	if wet && zw < 0 {
 		fmt.Fprintf(&b, `<rect x="%g" y="%.2f" width="%g" height="%.2f" fill="#dbeafb" stroke="none"/>`+"\n", left, y(float64(zw)), right-left, y(0)-y(float64(zw)))
 	}
@@ -82,8 +82,16 @@ func groundSVG(r *calc.Result, c conv) string {
 		}
 		y0, y1 := y(float64(l.Top)), y(float64(l.Bottom))
 		fmt.Fprintf(&b, `<rect x="%g" y="%.2f" width="%g" height="%.2f" fill="%s" stroke="#555" stroke-width="0.8"/>`+"\n", left, y0, right-left, y1-y0, fill)
-		label := truncate(l.Name, 34) + " (" + l.Drainage.String() + ")"
-		fmt.Fprintf(&b, `<text x="%g" y="%.2f" dominant-baseline="middle">%s</text>`+"\n", labelX, (y0+y1)/2, html.EscapeString(label))
+		label := truncate(l.Name, 40) + " (" + l.Drainage.String() + ")"
+		ly := (y0 + y1) / 2
+		if math.Abs(ly-tipY) < 13 { // keep clear of the pile tip's label
+			if ly < tipY {
+				ly = tipY - 13
+			} else {
+				ly = tipY + 13
+			}
+		}
+		fmt.Fprintf(&b, `<text x="%g" y="%.2f" dominant-baseline="middle">%s</text>`+"\n", labelX, ly, esc(label))
 	}
 	// depth axis in display units
 	dispBot := c.L(units.Length(zBot))
@@ -107,14 +115,18 @@ func groundSVG(r *calc.Result, c conv) string {
 	ph, pt := y(float64(p.HeadDepth)), y(float64(p.Tip()))
 	fmt.Fprintf(&b, `<rect x="%.2f" y="%.2f" width="%.2f" height="%.2f" fill="#8c8c8c" stroke="#222" stroke-width="0.8"/>`+"\n", cx-pw/2, ph, pw, pt-ph)
 	fmt.Fprintf(&b, `<line x1="%.2f" y1="%.2f" x2="%g" y2="%.2f" stroke="#222" stroke-dasharray="2 2"/>`+"\n", cx+pw/2, pt, right+4, pt)
-	fmt.Fprintf(&b, `<text x="%g" y="%.2f" dominant-baseline="middle" font-weight="bold">pile tip %s</text>`+"\n", labelX, pt, html.EscapeString(c.ls(p.Tip())))
+	fmt.Fprintf(&b, `<text x="%g" y="%.2f" dominant-baseline="middle" font-weight="bold">pile tip %s</text>`+"\n", labelX, pt, esc(c.ls(p.Tip())))
 	// water table
 	if wet && float64(zw) <= zBot {
 		yw := y(float64(zw))
 		fmt.Fprintf(&b, `<line x1="%g" y1="%.2f" x2="%g" y2="%.2f" stroke="%s" stroke-width="1.5" stroke-dasharray="6 3"/>`+"\n", left, yw, right, yw, waterColour)
 		tx := right - 30
 		fmt.Fprintf(&b, `<path d="M %.2f %.2f L %.2f %.2f L %.2f %.2f Z" fill="none" stroke="%s" stroke-width="1.2"/>`+"\n", tx-6, yw-10, tx+6, yw-10, tx, yw-1, waterColour)
-		fmt.Fprintf(&b, `<text x="%g" y="%.2f" fill="%s" text-anchor="end">water %s</text>`+"\n", tx-10, yw-4, waterColour, html.EscapeString(c.ls(zw)))
+		wl := "water table " + c.ls(zw)
+		if zw < 0 {
+			wl = "free water " + c.ls(-zw) + " above ground"
+		}
+		fmt.Fprintf(&b, `<text x="%g" y="%.2f" fill="%s" stroke="#fff" stroke-width="3" paint-order="stroke" text-anchor="end">%s</text>`+"\n", tx-10, yw-4, waterColour, esc(wl))
 	}
 	fmt.Fprintf(&b, `<line x1="%g" y1="%.2f" x2="%g" y2="%.2f" stroke="#000" stroke-width="1.5"/>`+"\n", left-4, y(0), right+4, y(0))
 	b.WriteString("</g>\n</svg>")
@@ -172,6 +184,7 @@ func svgPlot(title, xlabel, ylabel string, ss []series) (string, error) {
 		p.Add(l)
 		p.Legend.Add(s.name, l)
 	}
+	p.Y.Max = 0 // the ground surface at the top
 	cv := vgsvg.New(plotW, plotH)
 	p.Draw(draw.New(cv))
 	var buf bytes.Buffer
