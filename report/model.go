@@ -259,7 +259,7 @@ func secShaft(r *calc.Result, c conv) section {
 	blocks := []block{{para: "One row per segment between layer boundaries, the water table and any critical depth; fs at the segment ends, ∫fs dz the exact integral over the segment, Qs = perimeter × ∫fs dz."}, {tbl: shaftTable(r, c)}}
 	if b.Lambda != nil {
 		l := b.Lambda
-		blocks = append(blocks, block{para: fmt.Sprintf("λ method over the whole embedded length L = %s: mean σ′v = %s, mean su = %s, λ = %s, fs,av = %s (rows using it show no end values).",
+		blocks = append(blocks, block{para: fmt.Sprintf("λ method: embedded length L = %s, mean σ′v = %s and mean su = %s over the layers using it, λ = %s, fs,av = %s (its rows show no end values).",
 			c.ls(l.Length), c.ss(l.SigmaV), c.ss(l.Su), fmtNum(l.Lambda, sig), c.ss(l.Fav))})
 	}
 	if eq := shaftEquations(r, c); len(eq) > 0 {

@@ -540,3 +540,61 @@ func BenchmarkWriteHTML(b *testing.B) {
 		}
 	}
 }
+
+// TestVariants renders edited versions of the example that take other
+// paths: the λ method, no design basis and no loads, a dry site, a zone
+// without shaft friction.
+func TestVariants(t *testing.T) {
+	cut := func(s, from, to string) string {
+		i := strings.Index(s, from)
+		j := strings.Index(s, to)
+		if i < 0 || j < i {
+			t.Fatalf("example lacks %q … %q", from, to)
+		}
+		return s[:i] + s[j:]
+	}
+	for _, c := range []struct {
+		name string
+		edit func(string) string
+		want []string // in the text report
+	}{
+		{"lambda", func(s string) string {
+			return strings.Replace(s, "shaft_undrained: alpha-drilled", "shaft_undrained: lambda", 1)
+		}, []string{"fs,av = λ·(σ̄′v + 2·s̄u) = "}},
+		{"no design", func(s string) string { return cut(s, "design:", "search:") },
+			[]string{"No design basis given", "No required length: it needs a design basis and loads."}},
+		{"dry", func(s string) string {
+			return strings.Replace(s, "water_depth: 1.5 m", "water_depth: none", 1)
+		}, []string{"none (dry site)"}},
+		{"no shaft zone", func(s string) string {
+			return strings.Replace(s, "methods:\n", "methods:\n  no_shaft: [{top: 0 m, bottom: 3 m}]\n", 1)
+		}, []string{" none "}},
+	} {
+		t.Run(c.name, func(t *testing.T) {
+			r := load(t, example, c.edit)
+			txt := render(t, r, Text, Options{View: ViewReport})
+			for _, w := range c.want {
+				if !strings.Contains(txt, w) {
+					t.Errorf("text report lacks %q", w)
+				}
+			}
+			for _, v := range allViews {
+				for _, f := range allFormats {
+					out := render(t, r, f, Options{View: v, Units: units.US})
+					name := c.name + "/" + v.String() + "/" + f.String()
+					if m := nonFinite.FindString(out); m != "" && f != JSON {
+						t.Errorf("%s: output holds %q", name, m)
+					}
+					switch f {
+					case JSON:
+						checkJSON(t, name, out)
+					case CSV:
+						checkCSV(t, name, out)
+					case HTML:
+						checkHTML(t, name, out)
+					}
+				}
+			}
+		})
+	}
+}
