@@ -152,14 +152,18 @@ func htmlBlock(b *bufio.Writer, bl block, heading string) {
 		b.WriteString("</p>\n")
 	case len(bl.items) > 0:
 		b.WriteString("<table class=\"kv\">\n")
+		withUnits := hasUnits(bl.items)
 		for _, it := range bl.items {
 			b.WriteString("<tr><th>")
 			b.WriteString(esc(it.label))
 			b.WriteString("</th>")
 			htmlCell(b, it.val)
-			b.WriteString("<td>")
-			b.WriteString(esc(it.unit))
-			b.WriteString("</td></tr>\n")
+			if withUnits {
+				b.WriteString("<td>")
+				b.WriteString(esc(it.unit))
+				b.WriteString("</td>")
+			}
+			b.WriteString("</tr>\n")
 		}
 		b.WriteString("</table>\n")
 	case bl.tbl != nil:
@@ -212,4 +216,14 @@ func htmlBlock(b *bufio.Writer, bl block, heading string) {
 		b.WriteString(esc(strings.TrimRight(bl.pre, "\n")))
 		b.WriteString("</pre>\n")
 	}
+}
+
+// hasUnits reports whether any item has a unit.
+func hasUnits(items []item) bool {
+	for _, it := range items {
+		if it.unit != "" {
+			return true
+		}
+	}
+	return false
 }

@@ -50,6 +50,14 @@ func mdBlock(b *bufio.Writer, bl block) {
 		b.WriteString(mdEsc(bl.para))
 		b.WriteString("\n")
 	case len(bl.items) > 0:
+		if !hasUnits(bl.items) {
+			mdRow(b, []string{"Item", "Value"})
+			b.WriteString("|---|---|\n")
+			for _, it := range bl.items {
+				mdRow(b, []string{mdEsc(it.label), mdEsc(it.val.str(sig))})
+			}
+			break
+		}
 		mdRow(b, []string{"Item", "Value", "Unit"})
 		b.WriteString("|---|--:|---|\n")
 		for _, it := range bl.items {
