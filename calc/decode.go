@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"errors"
 	"fmt"
+	"io"
 	"reflect"
 	"sort"
 	"strconv"
@@ -74,6 +75,9 @@ func Decode(data []byte) (*File, error) {
 	dec := yaml.NewDecoder(bytes.NewReader(data))
 	var doc yaml.Node
 	if err := dec.Decode(&doc); err != nil {
+		if errors.Is(err, io.EOF) {
+			return nil, Problems{{Msg: "empty (only comments); a calc file needs at least ground and pile"}}
+		}
 		return nil, Problems{{Line: yamlLine(err), Msg: "not valid YAML or JSON: " + yamlMsg(err)}}
 	}
 	var extra yaml.Node
@@ -81,6 +85,9 @@ func Decode(data []byte) (*File, error) {
 		return nil, Problems{{Line: extra.Line, Msg: "holds more than one document; give one calculation per file"}}
 	}
 	root := &doc
+	if root.Kind == 0 || (root.Kind == yaml.DocumentNode && len(root.Content) == 0) {
+		return nil, Problems{{Msg: "empty (only comments); a calc file needs at least ground and pile"}}
+	}
 	if root.Kind == yaml.DocumentNode && len(root.Content) == 1 {
 		root = root.Content[0]
 	}
@@ -330,5 +337,3 @@ func (d *decoder) mapping(n *yaml.Node, v reflect.Value, path string, depth int)
 		d.value(c, v.Field(fi), p, depth+1)
 	}
 }
-
-var _ = errors.New

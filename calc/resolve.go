@@ -625,4 +625,10 @@ func (r *resolver) search(f *File, in *Inputs) {
 	}
 	in.Step = r.length(f.Search.Step, "search.step")
 	in.MaxTip = r.length(f.Search.MaxTip, "search.max_tip")
+	if f.Search.Step.IsSet() && !(in.Step > 0) {
+		r.add("search.step", 0, "%q: want a positive step", f.Search.Step.Raw)
+	}
+	if f.Search.MaxTip.IsSet() && !(in.MaxTip > 0) {
+		r.add("search.max_tip", 0, "%q: want a depth below the ground surface", f.Search.MaxTip.Raw)
+	}
 }

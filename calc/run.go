@@ -149,7 +149,13 @@ func uniqueSources(s []cite.Source) []cite.Source {
 // warnings gathers the warnings of a result that are data, not failures.
 func warnings(r *Result) []string {
 	var w []string
+	zw, wet := r.Ground.WaterDepth()
 	for _, l := range r.Layers {
+		// The unit weight above water is an assumption that matters only
+		// where part of the layer lies above the water table.
+		if wet && l.Top >= zw {
+			continue
+		}
 		if l.Basis&(profile.AssumedDry|profile.AssumedSaturated|profile.SaturatedAboveWater) != 0 {
 			w = append(w, fmt.Sprintf("layer %q: unit weights %s (an assumption; give the weights to remove it)", l.Name, l.Basis))
 		}

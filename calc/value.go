@@ -50,7 +50,7 @@ func (v Value) number() (float64, error) {
 	x, err := strconv.ParseFloat(s, 64)
 	if err != nil {
 		if q, perr := units.Parse(s); perr == nil {
-			return 0, fmt.Errorf("%q is a %s; this field is a plain number", s, q.Dim)
+			return 0, fmt.Errorf("%q is %s; this field is a plain number", s, units.Article(q.Dim))
 		}
 		return 0, fmt.Errorf("%q is not a number", s)
 	}

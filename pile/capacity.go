@@ -314,6 +314,9 @@ func (a *Analysis) tipAt(z float64, out *tipResult, detail *tipDetail, hint int)
 	ivk := &a.iv[a.tipInterval(z, hint)]
 	li := ivk.layer
 	lp := &a.plans[li]
+	if a.useCase && lp.fTip == 0 {
+		return fmt.Errorf("layers[%d] (%s): design case %s has no resistance factor for tip method %q; give one", li, lp.layer.Name, a.cs.Name, lp.tip.ID())
+	}
 	if !direct && lp.tm.ok {
 		sv := ivk.effective(z)
 		var su float64

@@ -117,19 +117,21 @@ func checkFactor(field string, v float64) error {
 // Cases returns the single verification "FS".
 func (s SafetyFactor) Cases(Installation) ([]Case, error) {
 	tip, shaft, ten := s.Tip, s.Shaft, s.Tension
+	tipName, shaftName, tenName := "design.tip_factor", "design.shaft_factor", "design.tension_factor"
 	if s.Global != 0 {
 		if tip != 0 || shaft != 0 {
 			return nil, fmt.Errorf("design.factor: give either a global factor or factors on tip and shaft, not both")
 		}
 		tip, shaft = s.Global, s.Global
+		tipName, shaftName = "design.factor", "design.factor"
 	}
 	if ten == 0 {
-		ten = shaft
+		ten, tenName = shaft, shaftName
 	}
 	for _, f := range []struct {
 		n string
 		v float64
-	}{{"design.tip_factor", tip}, {"design.shaft_factor", shaft}, {"design.tension_factor", ten}} {
+	}{{tipName, tip}, {shaftName, shaft}, {tenName, ten}} {
 		if err := checkFactor(f.n, f.v); err != nil {
 			return nil, err
 		}

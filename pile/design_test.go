@@ -2,6 +2,7 @@ package pile
 
 import (
 	"math"
+	"strings"
 	"testing"
 
 	"github.com/qultgeo/qult/bearing"
@@ -245,5 +246,18 @@ func TestSafetyFactorClosedForm(t *testing.T) {
 	}
 	if _, err := (SafetyFactor{Global: 0.8}).Cases(Bored); err == nil {
 		t.Error("a factor of safety below 1 accepted")
+	}
+}
+
+// TestMissingFactorIsAnError: an LRFD basis without a factor for the tip
+// method in use refuses, naming the method; it never takes φ = 0.
+func TestMissingFactorIsAnError(t *testing.T) {
+	prof := mustProfile(t, profile.Spec{NoWater: true, Layers: []profile.LayerSpec{
+		{Name: "sand", Thickness: 30 * m, Drainage: profile.Drained, Phi: 34 * deg, UnitWeight: 19 * kNm},
+	}})
+	p := Pile{Section: Section{Shape: Circle, Diameter: 0.5 * m}, Length: 12 * m, Installation: DrivenHigh}
+	_, err := Check(prof, p, Methods{}, AASHTODrivenPiles(), Loads{Compression: Action{Permanent: 100 * kN}})
+	if err == nil || !strings.Contains(err.Error(), `"meyerhof"`) {
+		t.Errorf("missing tip factor: %v", err)
 	}
 }

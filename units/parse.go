@@ -326,8 +326,8 @@ func parseDim(fn, s string, d Dimension, def *unit) (float64, error) {
 		return 0, err
 	}
 	if q.Dim != d {
-		return 0, &ParseError{Func: fn, Input: s, Err: fmt.Errorf("%w: %s is a %s, want a %s (%s)",
-			ErrDimension, strings.TrimSpace(s), q.Dim, d, Accepted(d))}
+		return 0, &ParseError{Func: fn, Input: s, Err: fmt.Errorf("%w: %s is %s, want %s (%s)",
+			ErrDimension, strings.TrimSpace(s), Article(q.Dim), Article(d), Accepted(d))}
 	}
 	return q.Value, nil
 }
@@ -391,4 +391,14 @@ func ParseIn(s string, d Dimension, sys System) (float64, error) {
 	}
 	u, _ := lookup(sym)
 	return parseDim("ParseIn", s, d, &u)
+}
+
+// Article returns the dimension's name with "a" or "an" before it, for
+// messages: "an angle", "a length".
+func Article(d Dimension) string {
+	n := d.String()
+	if n != "" && strings.ContainsRune("aeiou", rune(n[0])) {
+		return "an " + n
+	}
+	return "a " + n
 }

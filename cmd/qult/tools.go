@@ -43,7 +43,7 @@ func readNum(name string, g *given, pct bool) (float64, error) {
 	x, err := strconv.ParseFloat(s, 64)
 	if err != nil {
 		if q, perr := units.Parse(s); perr == nil {
-			return 0, fmt.Errorf("--%s %q is a %s; this flag is a plain number", name, g.raw, q.Dim)
+			return 0, fmt.Errorf("--%s %q is %s; this flag is a plain number", name, g.raw, units.Article(q.Dim))
 		}
 		return 0, fmt.Errorf("--%s %q is not a number", name, g.raw)
 	}
