@@ -87,7 +87,13 @@ func (a *Analysis) addShaft(s *sums, z0, z1 float64) error {
 	for k := lo; k < len(a.iv) && a.iv[k].top < z1; k++ {
 		s.k = k
 		iv := &a.iv[k]
-		top, bot := max(z0, iv.top), min(z1, iv.bot)
+		top, bot := iv.top, iv.bot // plain comparisons: min and max handle NaN and cost more here
+		if z0 > top {
+			top = z0
+		}
+		if z1 < bot {
+			bot = z1
+		}
 		if bot > top {
 			if err := a.segment(s, iv, top, bot); err != nil {
 				return err
@@ -320,7 +326,7 @@ func (a *Analysis) tipAt(z float64, out *tipResult, detail *tipDetail, hint int)
 	if !direct && lp.tm.ok {
 		sv := ivk.effective(z)
 		var su float64
-		if lp.layer.HasSu {
+		if lp.tm.useSu && lp.layer.HasSu {
 			su = float64(lp.suAt(min(max(units.Length(z), lp.layer.Top), lp.layer.Bottom)))
 		}
 		_, qp, limited := lp.tm.eval(sv, su)
