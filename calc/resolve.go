@@ -48,7 +48,11 @@ func (r *resolver) q(v Value, path string, d units.Dimension) float64 {
 	}
 	x, err := v.quantity(d, r.sys)
 	if err != nil {
-		r.add(path, v.Line, "%q: %v (accepted units: %s)", v.Raw, err, units.Accepted(d))
+		if errors.Is(err, units.ErrDimension) {
+			r.add(path, v.Line, "%q: %v", v.Raw, err) // the message lists the accepted units
+		} else {
+			r.add(path, v.Line, "%q: %v (accepted units: %s)", v.Raw, err, units.Accepted(d))
+		}
 		return 0
 	}
 	return x
