@@ -53,9 +53,11 @@ func (m AlphaAPI) Unit(p Point) (Result, error) {
 }
 
 // alphaChartX and alphaChartY are the tabulation of α against su/pa given by
-// Das (Principles of Foundation Engineering, "variation of α, interpolated
-// values based on Terzaghi, Peck & Mesri 1996"), recalled, not read; see the
-// package doc. At and below su/pa = 0.1 the table gives α = 1.00.
+// Das & Sivakugan (2019), Principles of Foundation Engineering, 9th ed.,
+// Table 12.11 ("variation of α, interpolated values based on Terzaghi, Peck
+// & Mesri 1996"), first recalled and since checked against a reproduction
+// of the table (see TestAlphaChartReadTable). At and below su/pa = 0.1 the
+// table gives α = 1.00.
 var (
 	alphaChartX = [...]float64{0.1, 0.2, 0.3, 0.4, 0.6, 0.8, 1.0, 1.2, 1.4, 1.6, 1.8, 2.0, 2.4, 2.8}
 	alphaChartY = [...]float64{1.00, 0.92, 0.82, 0.74, 0.62, 0.54, 0.48, 0.42, 0.40, 0.38, 0.36, 0.35, 0.34, 0.34}

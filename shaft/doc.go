@@ -71,9 +71,11 @@
 //
 // Some published values here were recalled rather than read in the source,
 // and are marked so in the tests: Kulhawy's (1984) K/K0 and δ/φ′ ranges, the
-// API RP 2GEO β and fL by sand class, the α tabulation and the λ tabulation
-// as presented by Das, the N60/15 reduction of the drilled-shaft β, and the
-// cap K0 ≤ Kp of the GEC 10 K0 form. The
-// drilled-shaft β form with its bounds, the drilled-shaft α and the API α
-// were confirmed in secondary presentations (see the tests).
+// API RP 2GEO β and fL by sand class, the λ tabulation as presented by Das
+// (its 30 m value, 0.136, is the one Das uses in a worked example), the
+// N60/15 reduction of the drilled-shaft β, and the cap K0 ≤ Kp of the
+// GEC 10 K0 form. The α tabulation was checked against a reproduction of
+// Das & Sivakugan (2019) Table 12.11. The drilled-shaft β form with its
+// bounds, the drilled-shaft α and the API α were confirmed in secondary
+// presentations (see the tests).
 package shaft

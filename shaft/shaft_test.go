@@ -433,3 +433,24 @@ func idsOfParts(m Unit) string {
 	}
 	return ""
 }
+
+// TestAlphaChartReadTable checks every node of the α tabulation against
+// Das & Sivakugan (2019), Principles of Foundation Engineering, 9th ed.,
+// Table 12.11, "Variation of α (interpolated values based on Terzaghi et
+// al., 1996)", read as reproduced with the book's Problem 12.13:
+// cu/pa ≤ 0.1 → 1.00, 0.2 → 0.92, 0.3 → 0.82, 0.4 → 0.74, 0.6 → 0.62,
+// 0.8 → 0.54, 1.0 → 0.48, 1.2 → 0.42, 1.4 → 0.40, 1.6 → 0.38, 1.8 → 0.36,
+// 2.0 → 0.35, 2.4 → 0.34, 2.8 → 0.34 (pa = 100 kPa). Nodes are exact.
+func TestAlphaChartReadTable(t *testing.T) {
+	table := [][2]float64{{0.05, 1.00}, {0.1, 1.00}, {0.2, 0.92}, {0.3, 0.82}, {0.4, 0.74}, {0.6, 0.62}, {0.8, 0.54},
+		{1.0, 0.48}, {1.2, 0.42}, {1.4, 0.40}, {1.6, 0.38}, {1.8, 0.36}, {2.0, 0.35}, {2.4, 0.34}, {2.8, 0.34}}
+	for _, row := range table {
+		r, err := AlphaChart{}.Unit(Point{Su: units.Stress(row[0]*100) * units.Kilopascal})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if math.Abs(r.Alpha-row[1]) > 1e-12 {
+			t.Errorf("su/pa = %g: α = %g, want %g (Das & Sivakugan 2019, Table 12.11)", row[0], r.Alpha, row[1])
+		}
+	}
+}
