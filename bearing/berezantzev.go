@@ -132,7 +132,7 @@ func (b Berezantzev) Nq(phi units.Angle, ld float64, clamp bool) (nq float64, cl
 func (b Berezantzev) Tip(in Input) (Result, error) {
 	l, dia := in.L.Metres(), in.D.Metres()
 	if !finite(l) || !finite(dia) || l <= 0 || dia <= 0 {
-		return Result{}, &RangeError{Method: b.ID(), Field: "l, d", Value: in.L.String() + ", " + in.D.String(), Range: "both above 0"}
+		return Result{}, &RangeError{Method: b.ID(), Field: "l, d", Value: "L = " + in.L.String() + ", D = " + in.D.String(), Range: "(0, ∞) m for each (the embedment L and the diameter D give L/D)"}
 	}
 	nq, clamped, err := b.Nq(in.Phi, l/dia, in.Clamp)
 	if err != nil {
