@@ -23,14 +23,10 @@ import (
 //     1-degree values agree, value for value, with an independent
 //     transcription of Das's table ("Tabla 11.5", 7th ed. numbering) found
 //     in a public repository: a secondary check, not the book itself.
-//   - O'Neill & Reese (1999), tip in cohesionless soil, as reproduced in
-//     the OpenBrIM documentation "Drilled Shaft Sand QZ (Reese and
-//     O'Neill)": qu = 0.6·N tsf for N ≤ 50, else 30 tsf (read).
+//   - O'Neill & Reese (1999), tip in cohesionless soil: qu = 0.6·N tsf for
+//     N ≤ 50, else 30 tsf (from memory).
 //   - API RP 2GEO (2011), table of design parameters for cohesionless
-//     siliceous soil (from memory; table number not confirmed). The same Nq and q_L by
-//     soil description are given in the documentation of the groundhog
-//     library (Stuyts), function API_unit_end_bearing_sand_rp2geo, a
-//     secondary reproduction that agrees with the values recalled here.
+//     siliceous soil (from memory; table number not confirmed).
 //   - SNiP 2.02.03-85, Table 6, Berezantzev's α2 and α3 (from memory).
 
 // closedTol is the tolerance on a closed form against a printed value.
@@ -396,8 +392,8 @@ func TestAPISandFromMemory(t *testing.T) {
 }
 
 func TestShaftSand(t *testing.T) {
-	// O'Neill & Reese (1999), as reproduced by OpenBrIM (read): qu = 0.6·N
-	// tsf for N ≤ 50, 30 tsf above; 1 tsf = 2000 psf = 95.76052 kPa (NIST
+	// O'Neill & Reese (1999) (from memory): qu = 0.6·N tsf for N ≤ 50,
+	// 30 tsf above; 1 tsf = 2000 psf = 95.76052 kPa (NIST
 	// SP 811, 1 psf = 47.880259 Pa). GEC 10 (Brown et al. 2010) states it as
 	// 1.2·N60 ksf ≤ 60 ksf (from memory) — the same rule.
 	const tsfKPa = 2000 * 47.880259 / 1000

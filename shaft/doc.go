@@ -75,7 +75,9 @@
 // (its 30 m value, 0.136, is the one Das uses in a worked example), the
 // N60/15 reduction of the drilled-shaft β, and the cap K0 ≤ Kp of the
 // GEC 10 K0 form. The α tabulation was checked against a reproduction of
-// Das & Sivakugan (2019) Table 12.11. The drilled-shaft β form with its
-// bounds, the drilled-shaft α and the API α were confirmed in secondary
-// presentations (see the tests).
+// Das & Sivakugan (2019) Table 12.11. The drilled-shaft α was checked in
+// an open textbook (Fundamentals of Foundation Engineering, CAUL, Fig.
+// 6.41); the API α is applied, branch for branch and with its cap, in a
+// published course exercise worked to API RP 2A (see package pile's tests);
+// the drilled-shaft β form and its bounds are from memory.
 package shaft
