@@ -143,8 +143,10 @@ func (e *RangeError) Error() string {
 
 func num(x float64) string { return strconv.FormatFloat(x, 'g', 6, 64) }
 
-func rangeErr(method, field string, v float64, unit, rng string) error {
-	val := num(v)
+// rangeErr reports v outside lo to hi; rng says the accepted range in words.
+// The value is written with enough digits to differ from the nearer limit.
+func rangeErr(method, field string, v, lo, hi float64, unit, rng string) error {
+	val := units.FormatNear(v, lo, hi)
 	if unit != "" {
 		val += " " + unit
 	}
@@ -161,7 +163,7 @@ const degEps = 1e-9
 func checkPhi(id string, phi units.Angle, lo, hi float64) error {
 	d := phi.Degrees()
 	if !finite(d) || d < lo-degEps || d > hi+degEps {
-		return rangeErr(id, "phi", d, "deg", num(lo)+" to "+num(hi)+" deg")
+		return rangeErr(id, "phi", d, lo, hi, "deg", num(lo)+" to "+num(hi)+" deg")
 	}
 	return nil
 }
@@ -170,7 +172,7 @@ func checkPhi(id string, phi units.Angle, lo, hi float64) error {
 func checkStress(id, field string, s units.Stress) error {
 	k := s.KPa()
 	if !finite(k) || k < 0 || k > 1e6 {
-		return rangeErr(id, field, k, "kPa", "0 to 1e+06 kPa")
+		return rangeErr(id, field, k, 0, 1e6, "kPa", "0 to 1e+06 kPa")
 	}
 	return nil
 }

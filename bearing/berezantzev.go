@@ -98,21 +98,21 @@ var snip1985 = cite.Source{Key: "snip-2.02.03-85", Authors: "Gosstroy USSR", Yea
 func (b Berezantzev) Nq(phi units.Angle, ld float64, clamp bool) (nq float64, clamped bool, err error) {
 	d := phi.Degrees()
 	if !finite(d) {
-		return 0, false, rangeErr(b.ID(), "phi", d, "deg", "23 to 39 deg")
+		return 0, false, rangeErr(b.ID(), "phi", d, 23, 39, "deg", "23 to 39 deg")
 	}
 	if d < 23-degEps || d > 39+degEps {
 		if !clamp {
-			return 0, false, rangeErr(b.ID(), "phi", d, "deg", "23 to 39 deg (Berezantzev chart); set Clamp to read at the edge")
+			return 0, false, rangeErr(b.ID(), "phi", d, 23, 39, "deg", "23 to 39 deg (Berezantzev chart); set Clamp to read at the edge")
 		}
 		d = math.Min(math.Max(d, 23), 39)
 		clamped = true
 	}
 	if !finite(ld) || ld <= 0 || ld > 1e4 {
-		return 0, false, rangeErr(b.ID(), "l/d", ld, "", "4 to 1e+04 (give l and d)")
+		return 0, false, rangeErr(b.ID(), "l/d", ld, 4, 1e4, "", "4 to 1e+04 (give l and d)")
 	}
 	if ld < 4 {
 		if !clamp {
-			return 0, false, rangeErr(b.ID(), "l/d", ld, "", "4 and above (Berezantzev chart); set Clamp to read at the edge")
+			return 0, false, rangeErr(b.ID(), "l/d", ld, 4, math.Inf(1), "", "4 and above (Berezantzev chart); set Clamp to read at the edge")
 		}
 		ld = 4
 		clamped = true

@@ -53,5 +53,8 @@
 //     in the method documentation and the tests.
 //
 // Errors are *RangeError values naming the method, the field and the
-// accepted range. No result holds NaN or Inf.
+// accepted range, with the value written in enough digits to differ from the
+// limit it passes. Limits are inclusive; φ′ is compared with a tolerance of
+// 1e-9 degrees, so a range edge converted from degrees to radians and back
+// stays inside. No result holds NaN or Inf.
 package bearing

@@ -45,7 +45,7 @@ func (j Janbu) eta() (units.Angle, error) {
 	}
 	d := j.Eta.Degrees()
 	if !finite(d) || d < 60-degEps || d > 105+degEps {
-		return 0, rangeErr(j.ID(), "eta", d, "deg", "60 to 105 deg (0 for 90 deg)")
+		return 0, rangeErr(j.ID(), "eta", d, 60, 105, "deg", "60 to 105 deg (0 for 90 deg)")
 	}
 	return j.Eta, nil
 }

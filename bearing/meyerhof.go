@@ -85,11 +85,11 @@ func (Meyerhof) Range() string {
 func (m Meyerhof) NqStar(phi units.Angle, clamp bool) (nq float64, clamped bool, err error) {
 	d := phi.Degrees()
 	if !finite(d) {
-		return 0, false, rangeErr(m.ID(), "phi", d, "deg", "20 to 45 deg")
+		return 0, false, rangeErr(m.ID(), "phi", d, 20, 45, "deg", "20 to 45 deg")
 	}
 	if d < 20-degEps || d > 45+degEps {
 		if !clamp {
-			return 0, false, rangeErr(m.ID(), "phi", d, "deg", "20 to 45 deg (Meyerhof chart); set Clamp to read at the edge")
+			return 0, false, rangeErr(m.ID(), "phi", d, 20, 45, "deg", "20 to 45 deg (Meyerhof chart); set Clamp to read at the edge")
 		}
 		d = math.Min(math.Max(d, 20), 45)
 		clamped = true
@@ -142,7 +142,7 @@ func atmosphere(id string, pa units.Stress) (units.Stress, error) {
 	}
 	k := pa.KPa()
 	if !finite(k) || k < 50 || k > 150 {
-		return 0, rangeErr(id, "pa", k, "kPa", "50 to 150 kPa (0 for 100 kPa)")
+		return 0, rangeErr(id, "pa", k, 50, 150, "kPa", "50 to 150 kPa (0 for 100 kPa)")
 	}
 	return pa, nil
 }

@@ -57,7 +57,7 @@ func (APISand) Range() string { return "class 1 to 4; q′ ≥ 0" }
 // Tip returns the API unit tip resistance.
 func (a APISand) Tip(in Input) (Result, error) {
 	if a.Class < 1 || a.Class > 4 {
-		return Result{}, rangeErr("api-sand", "class", float64(a.Class), "", "1 to 4")
+		return Result{}, rangeErr("api-sand", "class", float64(a.Class), 1, 4, "", "1 to 4")
 	}
 	c := apiSand[a.Class-1]
 	if err := checkStress(c.id, "q", in.Q); err != nil {
@@ -96,7 +96,7 @@ func (ShaftSand) Range() string { return "N60 0 to 200 (limit governs above 50)"
 // Tip returns the unit tip resistance from N60.
 func (s ShaftSand) Tip(in Input) (Result, error) {
 	if !finite(in.N60) || in.N60 < 0 || in.N60 > 200 {
-		return Result{}, rangeErr(s.ID(), "n60", in.N60, "blows/0.3 m", "0 to 200")
+		return Result{}, rangeErr(s.ID(), "n60", in.N60, 0, 200, "blows/0.3 m", "0 to 200")
 	}
 	return finish(Result{Limit: 30 * units.TSF, Unlimited: units.Stress(0.6 * in.N60 * float64(units.TSF))}), nil
 }
@@ -162,10 +162,10 @@ func (GivenNq) Range() string {
 func (g GivenNq) Tip(in Input) (Result, error) {
 	id := g.ID()
 	if !finite(g.Nq) || g.Nq < 1 || g.Nq > 1e4 {
-		return Result{}, rangeErr(id, "nq", g.Nq, "", "1 to 1e+04")
+		return Result{}, rangeErr(id, "nq", g.Nq, 1, 1e4, "", "1 to 1e+04")
 	}
 	if !finite(g.Nc) || g.Nc < 0 || g.Nc > 1e4 {
-		return Result{}, rangeErr(id, "nc", g.Nc, "", "0 to 1e+04")
+		return Result{}, rangeErr(id, "nc", g.Nc, 0, 1e4, "", "0 to 1e+04")
 	}
 	if err := checkStress(id, "limit", g.Limit); err != nil {
 		return Result{}, err
@@ -206,7 +206,7 @@ func (GivenNc) Range() string { return "Nc 1 to 100; su > 0" }
 // Tip returns Nc·su.
 func (g GivenNc) Tip(in Input) (Result, error) {
 	if !finite(g.Nc) || g.Nc < 1 || g.Nc > 100 {
-		return Result{}, rangeErr(g.ID(), "nc", g.Nc, "", "1 to 100")
+		return Result{}, rangeErr(g.ID(), "nc", g.Nc, 1, 100, "", "1 to 100")
 	}
 	if err := checkSu(g.ID(), in.Su); err != nil {
 		return Result{}, err

@@ -77,7 +77,7 @@ func vesicUndrainedNc(irr float64) float64 {
 
 func checkIrr(id string, irr float64) error {
 	if !finite(irr) || irr < 1 || irr > 1e5 {
-		return rangeErr(id, "irr", irr, "", "1 to 1e+05")
+		return rangeErr(id, "irr", irr, 1, 1e5, "", "1 to 1e+05")
 	}
 	return nil
 }
@@ -98,14 +98,14 @@ func reducedRigidity(id string, in Input, den units.Stress) (float64, error) {
 		ir = float64(in.G) / float64(den)
 	}
 	if !finite(ir) || ir < 1 || ir > 1e5 {
-		return 0, rangeErr(id, "ir", ir, "", "1 to 1e+05")
+		return 0, rangeErr(id, "ir", ir, 1, 1e5, "", "1 to 1e+05")
 	}
 	if !finite(in.Delta) || in.Delta < 0 || in.Delta > 0.5 {
-		return 0, rangeErr(id, "delta", in.Delta, "", "0 to 0.5")
+		return 0, rangeErr(id, "delta", in.Delta, 0, 0.5, "", "0 to 0.5")
 	}
 	irr := ir / (1 + ir*in.Delta)
 	if irr < 1 {
-		return 0, rangeErr(id, "irr", irr, "", "1 to 1e+05 (reduce delta)")
+		return 0, rangeErr(id, "irr", irr, 1, 1e5, "", "1 to 1e+05 (reduce delta)")
 	}
 	return irr, nil
 }
@@ -126,7 +126,7 @@ func (v Vesic) Tip(in Input) (Result, error) {
 	if k0 == 0 {
 		k0 = 1 - in.Phi.Sin()
 	} else if !finite(k0) || k0 < 0.1 || k0 > 4 {
-		return Result{}, rangeErr(id, "k0", k0, "", "0.1 to 4 (0 for 1 − sinφ′)")
+		return Result{}, rangeErr(id, "k0", k0, 0.1, 4, "", "0.1 to 4 (0 for 1 − sinφ′)")
 	}
 	irr, err := reducedRigidity(id, in, in.C+units.Stress(float64(in.Q)*in.Phi.Tan()))
 	if err != nil {
@@ -185,7 +185,7 @@ func (v VesicUndrained) Tip(in Input) (Result, error) {
 func checkSu(id string, su units.Stress) error {
 	k := su.KPa()
 	if !finite(k) || k <= 0 || k > 1e5 {
-		return rangeErr(id, "su", k, "kPa", "above 0 to 1e+05 kPa")
+		return rangeErr(id, "su", k, 0, 1e5, "kPa", "above 0 to 1e+05 kPa")
 	}
 	return nil
 }

@@ -66,6 +66,10 @@
 //     own: σ′v ≤ 20 MPa, su ≤ 5 MPa, z ≤ 300 m, φ′ ≤ 50°, OCR ≤ 100,
 //     N60 ≤ 100, given K ≤ 10, β ≤ 3, α ≤ 1.5, K/K0 ≤ 3, K/Kp ≤ 1,
 //     δ/φ′ ≤ 1, critical depth ratio 5 to 50.
+//   - Every limit is inclusive (σ′v = 20 MPa is accepted), except where a
+//     lower limit of 0 is marked excluded (φ′ > 0, su > 0). The comparison
+//     is exact: a computed σ′v one rounding error above 20 MPa is refused,
+//     and the message prints the digits that put it there.
 //
 // # Values recalled, not read
 //

@@ -58,5 +58,5 @@ func ExampleRangeError() {
 	_, err := shaft.Burland{}.Unit(shaft.Point{SigmaV: 50 * units.Kilopascal, Phi: 62 * units.Degree})
 	fmt.Println(err)
 	// Output:
-	// shaft: beta-burland: phi: 62 deg is outside 0 (excluded) to 50 deg
+	// shaft: beta-burland: phi: 62 deg is above 50 deg (accepted above 0 and up to 50 deg)
 }

@@ -145,6 +145,9 @@ type RangeError struct {
 	Open   bool    // Min itself is refused
 }
 
+// Error says which limit the value passes, with enough digits to show the
+// difference from it: "sigma_v: 20000.000000004 kPa is above 20000 kPa
+// (accepted 0 to 20000 kPa)".
 func (e *RangeError) Error() string {
 	var b strings.Builder
 	b.WriteString("shaft: ")
@@ -152,24 +155,33 @@ func (e *RangeError) Error() string {
 	b.WriteString(": ")
 	b.WriteString(e.Field)
 	b.WriteString(": ")
-	b.WriteString(num(e.Value))
+	unit := ""
 	if e.Unit != "" {
-		b.WriteString(" " + e.Unit)
+		unit = " " + e.Unit
 	}
-	b.WriteString(" is outside " + num(e.Min))
+	switch {
+	case e.Value > e.Max:
+		b.WriteString(units.FormatApart(e.Value, e.Max) + unit + " is above " + num(e.Max) + unit)
+	case e.Value < e.Min:
+		b.WriteString(units.FormatApart(e.Value, e.Min) + unit + " is below " + num(e.Min) + unit)
+	case e.Value == e.Min && e.Open:
+		b.WriteString(num(e.Value) + unit + " is not accepted; it must be above " + num(e.Min) + unit)
+	default: // NaN
+		b.WriteString(num(e.Value) + unit + " is not a number")
+	}
 	if e.Open {
-		b.WriteString(" (excluded)")
-	}
-	b.WriteString(" to " + num(e.Max))
-	if e.Unit != "" {
-		b.WriteString(" " + e.Unit)
+		b.WriteString(" (accepted above " + num(e.Min) + " and up to " + num(e.Max) + unit + ")")
+	} else {
+		b.WriteString(" (accepted " + num(e.Min) + " to " + num(e.Max) + unit + ")")
 	}
 	return b.String()
 }
 
 func num(v float64) string { return strconv.FormatFloat(v, 'g', 6, 64) }
 
-// check returns a RangeError unless lo ≤ v ≤ hi (lo < v ≤ hi when open).
+// check returns a RangeError unless lo ≤ v ≤ hi (lo < v ≤ hi when open):
+// both limits are inclusive unless open excludes the lower one, and a
+// value computed a rounding error past a limit is refused like any other.
 // NaN is always refused.
 func check(method, field string, v, lo, hi float64, unit string, open bool) error {
 	ok := v >= lo && v <= hi

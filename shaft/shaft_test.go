@@ -376,7 +376,7 @@ func TestErrors(t *testing.T) {
 	if _, err := (APIBeta{}).Unit(Point{}); err == nil {
 		t.Error("APIBeta without a class accepted")
 	}
-	want := "shaft: beta-burland: phi: 62 deg is outside 0 (excluded) to 50 deg"
+	want := "shaft: beta-burland: phi: 62 deg is above 50 deg (accepted above 0 and up to 50 deg)"
 	if _, err := (Burland{}).Unit(Point{SigmaV: kPa, Phi: d(62)}); err == nil || err.Error() != want {
 		t.Errorf("message %q, want %q", err, want)
 	}

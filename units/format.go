@@ -248,3 +248,42 @@ func (a *Angle) UnmarshalText(b []byte) error {
 func (a *Angle) UnmarshalJSON(b []byte) error {
 	return unmarshalJSON((*float64)(a), b, DimAngle, "Angle.UnmarshalJSON")
 }
+
+// FormatApart writes x with the fewest significant digits, at least 6, at
+// which it does not read the same as bound written with 6, so that a value
+// a hair past a range limit shows the digits that put it there:
+//
+//	FormatApart(20000.000000004, 20000) = "20000.000000004"
+//	FormatApart(62, 50)                 = "62"
+//
+// A value equal to bound, NaN or an infinity is written with 6 digits.
+func FormatApart(x, bound float64) string {
+	b, _ := strconv.ParseFloat(strconv.FormatFloat(bound, 'g', 6, 64), 64)
+	if x == bound || math.IsNaN(x) || math.IsInf(x, 0) {
+		return strconv.FormatFloat(x, 'g', 6, 64)
+	}
+	for prec := 6; prec < 17; prec++ {
+		r, _ := strconv.ParseFloat(strconv.FormatFloat(x, 'g', prec, 64), 64)
+		if r != b {
+			return shortest(r)
+		}
+	}
+	return shortest(x)
+}
+
+// shortest writes x with the fewest digits that read back to x, in fixed
+// notation for ordinary magnitudes.
+func shortest(x float64) string {
+	if a := math.Abs(x); a >= 1e-4 && a < 1e15 {
+		return strconv.FormatFloat(x, 'f', -1, 64)
+	}
+	return strconv.FormatFloat(x, 'g', -1, 64)
+}
+
+// FormatNear is FormatApart against whichever of lo and hi is nearer x.
+func FormatNear(x, lo, hi float64) string {
+	if math.Abs(x-lo) <= math.Abs(x-hi) {
+		return FormatApart(x, lo)
+	}
+	return FormatApart(x, hi)
+}
