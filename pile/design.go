@@ -2,7 +2,9 @@ package pile
 
 import (
 	"fmt"
+	"maps"
 	"math"
+	"slices"
 
 	"github.com/qultgeo/qult/cite"
 	"github.com/qultgeo/qult/units"
@@ -176,8 +178,8 @@ func (l LRFD) Cases(Installation) ([]Case, error) {
 		n string
 		m map[string]float64
 	}{{"design.tip", l.Tip}, {"design.shaft", l.Shaft}, {"design.tension", l.Tension}} {
-		for k, v := range m.m {
-			if !(v > 0 && v <= 1) {
+		for _, k := range slices.Sorted(maps.Keys(m.m)) { // sorted: the first bad key is the same on every run
+			if v := m.m[k]; !(v > 0 && v <= 1) {
 				return nil, fmt.Errorf("%s[%q]: resistance factor %g is outside (0, 1]", m.n, k, v)
 			}
 		}
