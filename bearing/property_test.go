@@ -40,7 +40,7 @@ var phiRange = map[string][2]float64{
 	"prandtl": {0, 50}, "meyerhof": {20, 45}, "vesic": {0, 50}, "janbu": {0, 50}, "berezantzev": {23, 39},
 }
 
-func TestPropertyNqIncreasesWithPhi(t *testing.T) {
+func TestPropNqIncreasesWithPhi(t *testing.T) {
 	rapid.Check(t, func(t *rapid.T) {
 		irr := rapid.Float64Range(1, 1000).Draw(t, "irr")
 		eta := rapid.Float64Range(60, 105).Draw(t, "eta")
@@ -68,7 +68,7 @@ func TestPropertyNqIncreasesWithPhi(t *testing.T) {
 	})
 }
 
-func TestPropertyVesicIncreasesWithIrr(t *testing.T) {
+func TestPropVesicIncreasesWithIrr(t *testing.T) {
 	rapid.Check(t, func(t *rapid.T) {
 		phi := rapid.Float64Range(0.1, 50).Draw(t, "phi")
 		a := rapid.Float64Range(1, 1e5).Draw(t, "irr1")
@@ -93,7 +93,7 @@ func TestPropertyVesicIncreasesWithIrr(t *testing.T) {
 	})
 }
 
-func TestPropertyBerezantzevNotIncreasingWithLD(t *testing.T) {
+func TestPropBerezantzevNotIncreasingWithLD(t *testing.T) {
 	rapid.Check(t, func(t *rapid.T) {
 		phi := rapid.Float64Range(23, 39).Draw(t, "phi")
 		a := rapid.Float64Range(4, 100).Draw(t, "ld1")
@@ -112,7 +112,7 @@ func TestPropertyBerezantzevNotIncreasingWithLD(t *testing.T) {
 	})
 }
 
-func TestPropertyLimitHolds(t *testing.T) {
+func TestPropLimitHolds(t *testing.T) {
 	// Qp never exceeds Unlimited, and never exceeds a limit that governs
 	// (definition of a limit; Meyerhof 1976, API 2011, O'Neill & Reese 1999).
 	rapid.Check(t, func(t *rapid.T) {

@@ -261,10 +261,10 @@ func TestImpossible(t *testing.T) {
 	}
 }
 
-// TestPropertyIdentities: for random Gs, e, S, Solve from (Gs, e, S)
+// TestPropIdentities: for random Gs, e, S, Solve from (Gs, e, S)
 // returns a state that satisfies Se = wGs and γ = (Gs+Se)γw/(1+e)
 // (closed forms), and solving again from (γd, w, γsat) recovers it.
-func TestPropertyIdentities(t *testing.T) {
+func TestPropIdentities(t *testing.T) {
 	rapid.Check(t, func(t *rapid.T) {
 		gs := rapid.Float64Range(2.4, 3.0).Draw(t, "Gs")
 		e := rapid.Float64Range(0.2, 3).Draw(t, "e")

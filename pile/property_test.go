@@ -19,10 +19,10 @@ func relClose(a, b, rel float64) bool {
 	return math.Abs(a-b) <= rel*math.Max(math.Abs(a), math.Abs(b))+1e-9
 }
 
-// TestLongerNeverWeaker: in a uniform drained profile with no critical
+// TestPropLongerNeverWeaker: in a uniform drained profile with no critical
 // depth and no shaft limit, compression capacity never falls as the pile
 // lengthens.
-func TestLongerNeverWeaker(t *testing.T) {
+func TestPropLongerNeverWeaker(t *testing.T) {
 	rapid.Check(t, func(r *rapid.T) {
 		phi := rapid.Float64Range(20, 44).Draw(r, "phi")
 		gamma := rapid.Float64Range(15, 21).Draw(r, "gamma")

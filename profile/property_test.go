@@ -48,7 +48,7 @@ func closeRel(a, b, rel, abs float64) bool {
 	return math.Abs(a-b) <= math.Max(rel*math.Max(math.Abs(a), math.Abs(b)), abs)
 }
 
-func TestPropertySplitLayer(t *testing.T) {
+func TestPropSplitLayer(t *testing.T) {
 	rapid.Check(t, func(t *rapid.T) {
 		spec, gl := drawSpec(t)
 		k := rapid.IntRange(0, len(gl)-1).Draw(t, "split")
@@ -87,7 +87,7 @@ func TestPropertySplitLayer(t *testing.T) {
 	})
 }
 
-func TestPropertyEffectiveStressMonotone(t *testing.T) {
+func TestPropEffectiveStressMonotone(t *testing.T) {
 	rapid.Check(t, func(t *rapid.T) {
 		spec, _ := drawSpec(t)
 		p, err := New(spec)
@@ -117,9 +117,9 @@ func TestPropertyEffectiveStressMonotone(t *testing.T) {
 	})
 }
 
-// TestPropertyUSUnits enters the same profile in feet, pcf and psf (γw too)
+// TestPropUSUnits enters the same profile in feet, pcf and psf (γw too)
 // and compares stresses, read in psf, with the SI profile's within 1e-9.
-func TestPropertyUSUnits(t *testing.T) {
+func TestPropUSUnits(t *testing.T) {
 	rapid.Check(t, func(t *rapid.T) {
 		spec, gl := drawSpec(t)
 		si, err := New(spec)

@@ -9,11 +9,11 @@ import (
 	"pgregory.net/rapid"
 )
 
-// TestAlphaAPIIntegral checks the closed-form segment integral of the API
+// TestPropAlphaAPIIntegral checks the closed-form segment integral of the API
 // RP 2GEO (2011) α method against numerical quadrature of the point rule
 // (gonum's fixed Gauss-Legendre rule, split at the branch points so that
 // each piece is smooth): the two must agree to 1e-8 relative (the quadrature, not the closed form, limits it near σ′v → 0).
-func TestAlphaAPIIntegral(t *testing.T) {
+func TestPropAlphaAPIIntegral(t *testing.T) {
 	m := AlphaAPI{}
 	rapid.Check(t, func(r *rapid.T) {
 		su := rapid.Float64Range(5, 300).Draw(r, "su") * 1e3
