@@ -210,8 +210,10 @@ type Design struct {
 	Total       bool   `yaml:"total,omitempty" json:"total,omitempty"`
 }
 
-// Load is a characteristic load: a single value (taken as permanent) or
-// permanent and variable parts.
+// Load is a characteristic load given as its permanent and variable parts
+// ({permanent: 1500 kN, variable: 700 kN}); either may be left out. A bare
+// value ("800 kN") is refused, because the design bases factor the two
+// parts differently and a bare value would choose one in silence.
 type Load struct {
 	Value     Value `yaml:"-" json:"-"`
 	Permanent Value `yaml:"permanent,omitempty" json:"permanent,omitempty"`

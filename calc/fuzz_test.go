@@ -14,7 +14,7 @@ func FuzzParse(f *testing.F) {
 	f.Add([]byte(base))
 	f.Add([]byte("a: &x [1]\nb: *x\n"))
 	f.Add([]byte("{\"title\": 1}"))
-	f.Add([]byte(base + "design: {basis: en1997, approach: DA1}\nloads: {compression: 500 kN}\n"))
+	f.Add([]byte(base + "design: {basis: en1997, approach: DA1}\nloads: {compression: {permanent: 500 kN}}\n"))
 	f.Add([]byte(base + "methods: {shaft_undrained: lambda, critical_depth: 20}\n"))
 	f.Fuzz(func(t *testing.T, data []byte) {
 		done := make(chan struct{})

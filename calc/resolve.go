@@ -610,7 +610,10 @@ func (r *resolver) load(l *Load, path string) pile.Action {
 		return pile.Action{}
 	}
 	if l.Value.IsSet() {
-		return pile.Action{Permanent: r.force(l.Value, path)}
+		// A design basis factors permanent and variable actions
+		// differently, so a bare value would choose a factor in silence.
+		r.add(path, l.Value.Line, "%q does not say whether the load is permanent or variable; write {permanent: %s} or {variable: %s} (or both parts)", l.Value.Raw, l.Value.Raw, l.Value.Raw)
+		return pile.Action{}
 	}
 	return pile.Action{Permanent: r.force(l.Permanent, path+".permanent"), Variable: r.force(l.Variable, path+".variable")}
 }

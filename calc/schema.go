@@ -61,9 +61,11 @@ func schemaOf(t reflect.Type, key string) map[string]any {
 	switch {
 	case t == valueType:
 		return copyMap(quantity)
-	case t == strengthT || t == loadT:
+	case t == strengthT:
 		obj := object(t)
 		return map[string]any{"oneOf": []any{copyMap(quantity), obj}}
+	case t == loadT: // permanent and variable parts only: a bare load is refused
+		return object(t)
 	}
 	switch t.Kind() {
 	case reflect.Struct:

@@ -90,6 +90,7 @@ var badCases = []badCase{
 	{file: "62-search-step-negative", want: []string{"search.step", "positive step"}},
 	{file: "63-zero-diameter", want: []string{"pile.section.diameter", "outside"}},
 	{file: "64-nan-load", want: []string{"loads.compression", "finite"}},
+	{file: "65-bare-load", want: []string{"loads.compression (line 25)", "permanent or variable"}},
 }
 
 const badTimeout = 5 * time.Second
