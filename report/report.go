@@ -2,6 +2,7 @@ package report
 
 import (
 	"bufio"
+	"bytes"
 	"fmt"
 	"io"
 	"math"
@@ -124,12 +125,25 @@ func Write(w io.Writer, r *calc.Result, f Format, o Options) error {
 	bw := bufio.NewWriterSize(w, 32<<10)
 	var err error
 	switch f {
-	case Text:
-		err = writeText(bw, build(r, o))
-	case Markdown:
-		err = writeMarkdown(bw, build(r, o))
-	case CSV:
-		err = writeCSV(bw, r, o)
+	case Text, Markdown, CSV:
+		// Rendered whole, then cleaned of control and bidirectional
+		// characters (CleanText) before it reaches w.
+		var buf bytes.Buffer
+		tw := bufio.NewWriter(&buf)
+		switch f {
+		case Text:
+			err = writeText(tw, build(r, o))
+		case Markdown:
+			err = writeMarkdown(tw, build(r, o))
+		default:
+			err = writeCSV(tw, r, o)
+		}
+		if err == nil {
+			err = tw.Flush()
+		}
+		if err == nil {
+			_, err = bw.WriteString(CleanText(buf.String()))
+		}
 	case JSON:
 		err = writeJSON(bw, r, o)
 	case HTML:

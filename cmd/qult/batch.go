@@ -69,6 +69,9 @@ func runBatch(c *cmd, args []string) int {
 	if len(pos) == 1 {
 		name = pos[0]
 	}
+	if !c.checkOut(o.out, name) {
+		return exitUsage
+	}
 	var in io.Reader = stdin
 	if name != "-" {
 		f, err := os.Open(name)
@@ -80,11 +83,11 @@ func runBatch(c *cmd, args []string) int {
 		in = f
 	}
 	var out io.Writer = c.stdout
-	var file *os.File
+	var file *atomicFile
 	if o.out != "" && o.out != "-" {
-		f, err := os.Create(o.out)
+		f, err := createAtomic(o.out)
 		if err != nil {
-			c.errorf("%v", err)
+			c.errorf("batch: %v", err)
 			return exitUsage
 		}
 		file = f
@@ -96,8 +99,10 @@ func runBatch(c *cmd, args []string) int {
 		err = ferr
 	}
 	if file != nil {
-		if cerr := file.Close(); err == nil {
-			err = cerr
+		if err == nil {
+			err = file.commit()
+		} else {
+			file.abort()
 		}
 	}
 	if err != nil {
@@ -159,6 +164,12 @@ func batch(in io.Reader, out io.Writer, sys units.System, hasSys bool, n int) (b
 	var rerr error
 	for num := 1; ; num++ {
 		data, long, err := readLine(br, calc.MaxFileSize)
+		if num == 1 {
+			// A byte-order mark at the start of the input, as some
+			// editors write, is not part of the first line (single calc
+			// files accept it too).
+			data = bytes.TrimPrefix(data, []byte("\xef\xbb\xbf"))
+		}
 		if len(bytes.TrimSpace(data)) > 0 || long {
 			ch := make(chan batchLine, 1)
 			order <- ch

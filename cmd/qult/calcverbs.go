@@ -76,6 +76,9 @@ func (c *cmd) calcVerb(args []string, view report.View) int {
 		sys, hasSys = s, true
 	}
 	name := pos[0]
+	if !c.checkOut(o.out, name) {
+		return exitUsage
+	}
 	data, err := readInput(name, calc.MaxFileSize)
 	if err != nil {
 		c.errorf("%v", err)
@@ -136,12 +139,14 @@ func (c *cmd) problems(file string, err error) {
 		c.errorf("%s: %v", file, err)
 		return
 	}
-	for _, p := range ps {
+	lines := make([]string, len(ps))
+	for i, p := range ps {
 		if p.Path == "" {
 			p.Path = file
 		}
-		c.errorf("%s", p.Error())
+		lines[i] = report.CleanText("qult: " + p.Error())
 	}
+	cappedLines(c.stderr, lines)
 	if len(ps) == 0 {
 		c.errorf("%s: %v", file, err)
 	}

@@ -192,7 +192,7 @@ func (c *cmd) output(out string, buf *bytes.Buffer) int {
 		}
 		return exitOK
 	}
-	if err := os.WriteFile(out, buf.Bytes(), 0o644); err != nil {
+	if err := writeAtomic(out, buf.Bytes()); err != nil {
 		c.errorf("%v", err)
 		return exitUsage
 	}

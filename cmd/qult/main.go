@@ -18,9 +18,13 @@
 // FILE may be "-" for standard input. Exit codes: 0 done, 1 the design
 // check fails, 2 bad input or usage.
 //
-// Choices where the issue was silent: flags may come before or after the
-// file name; -o writes the output only when the verb succeeds (nothing is
-// left half-written); check and length need a design section and loads in
+// Choices: flags may come before or after the file name; -o writes the
+// output only when the verb succeeds, under a temporary name renamed over
+// the destination at the end (nothing is left half-written), and refuses a
+// path that names the input file; text, CSV and Markdown output and error
+// messages carry no control or bidirectional formatting characters (they
+// become U+FFFD); at most 100 problems are printed, then a count of the
+// rest; check and length need a design section and loads in
 // the file; batch exits 2 when any line is bad input, else 1 when any
 // design check fails, else 0, and every line's answer (or its error) is
 // written either way.
@@ -33,6 +37,8 @@ import (
 	"os"
 	"runtime/debug"
 	"strings"
+
+	"github.com/qultgeo/qult/report"
 )
 
 // version is the qult version; set at build time with
@@ -79,9 +85,10 @@ type cmd struct {
 	verb           string
 }
 
-// errorf prints an error line prefixed with "qult: ".
+// errorf prints an error line prefixed with "qult: ", cleaned of control
+// and bidirectional characters (a message may quote a name from the file).
 func (c *cmd) errorf(format string, args ...any) {
-	fmt.Fprintf(c.stderr, "qult: "+format+"\n", args...)
+	fmt.Fprint(c.stderr, report.CleanText(fmt.Sprintf("qult: "+format+"\n", args...)))
 }
 
 // usageErr prints a usage error and points at the verb's help.
