@@ -114,6 +114,8 @@ func TestStrictness(t *testing.T) {
 		"not yaml":   "title: [unclosed\n",
 		"merge key":  "title: t\n<<: {units: SI}\n",
 		"list for a": strings.Replace(base, "  section: {shape: circle, diameter: 0.6 m}", "  section: [circle]", 1),
+		"after end":  base + "...\ngarbage: [\n",
+		"two values": `{"title": "a"}` + "\n" + `{"title": "b"}` + "\n",
 	} {
 		if _, err := Parse([]byte(src)); err == nil {
 			t.Errorf("%s: accepted", name)
@@ -122,6 +124,26 @@ func TestStrictness(t *testing.T) {
 	big := make([]byte, MaxFileSize+1)
 	if _, err := Decode(big); err == nil || !strings.Contains(err.Error(), "over the limit") {
 		t.Errorf("oversize file: %v", err)
+	}
+}
+
+// TestDepthScanReadsYAML: brackets inside plain scalars, quoted scalars and
+// comments are text, not nesting, so names such as these are accepted.
+func TestDepthScanReadsYAML(t *testing.T) {
+	for _, name := range []string{
+		"dense{{{{{{{{{{{{{{{{{{{{ sand",
+		"O'Brien's fill [[[[[[[[[[[[[[[[[[[[",
+		`"quoted {{{{{{{{{{{{{{{{{{{{{{{{ \" [[[["`,
+		`'single [[[[[[[[[[[[[[[[[[[[[ '' {{{{'`,
+		"sand # {{{{{{{{{{{{{{{{{{{{{{{{{{{{ a comment",
+	} {
+		src := strings.Replace(base, "name: sand", "name: "+name, 1)
+		if src == base {
+			t.Fatal("base file changed: the test no longer renames a layer")
+		}
+		if _, err := Parse([]byte(src)); err != nil {
+			t.Errorf("layer name %s: %v", name, err)
+		}
 	}
 }
 

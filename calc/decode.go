@@ -81,8 +81,14 @@ func Decode(data []byte) (*File, error) {
 		return nil, Problems{{Line: yamlLine(err), Msg: "not valid YAML or JSON: " + yamlMsg(err)}}
 	}
 	var extra yaml.Node
-	if err := dec.Decode(&extra); err == nil {
+	switch err := dec.Decode(&extra); {
+	case err == nil:
 		return nil, Problems{{Line: extra.Line, Msg: "holds more than one document; give one calculation per file"}}
+	case !errors.Is(err, io.EOF):
+		// Text after the first document that is not a document either
+		// (after a "..." end marker, or a second JSON value): refused, not
+		// dropped.
+		return nil, Problems{{Line: yamlLine(err), Msg: "text after the end of the calc file is not valid YAML or JSON (" + yamlMsg(err) + "); give one calculation per file"}}
 	}
 	root := &doc
 	if root.Kind == 0 || (root.Kind == yaml.DocumentNode && len(root.Content) == 0) {
@@ -109,27 +115,66 @@ func Decode(data []byte) (*File, error) {
 func scanDepth(data []byte) error {
 	depth, line := 0, 1
 	var quote byte
-	for _, c := range data {
-		switch {
-		case c == '\n':
+	// prev is the last byte before c that is not a space or tab on the
+	// current line ('\n' at the start of a line): brackets and quotes
+	// open a flow collection or a quoted scalar only where a value may
+	// start (after ": ", "- ", "? ", ",", "[", "{" or at the start of a
+	// line) or anywhere inside a flow collection. A plain scalar such as
+	// "a{{{{" or "O'Brien clay" and a comment do not count.
+	prev := byte('\n')
+	startsValue := func() bool {
+		return depth > 0 && prev != '"' && prev != '\'' || strings.IndexByte(":-?,[{\n", prev) >= 0
+	}
+	for i := 0; i < len(data); i++ {
+		c := data[i]
+		if quote != 0 {
+			switch {
+			case c == '\n':
+				line++
+			case quote == '"' && c == '\\':
+				i++ // an escaped character
+			case c == quote && quote == '\'' && i+1 < len(data) && data[i+1] == '\'':
+				i++ // '' inside single quotes
+			case c == quote:
+				quote, prev = 0, c
+			}
+			continue
+		}
+		switch c {
+		case '\n':
 			line++
-			if quote == '\'' || quote == '"' {
+			prev = '\n'
+			continue
+		case ' ', '\t', '\r':
+			continue
+		case '#':
+			if i == 0 || data[i-1] == ' ' || data[i-1] == '\t' || data[i-1] == '\n' {
+				for i+1 < len(data) && data[i+1] != '\n' {
+					i++
+				}
 				continue
 			}
-		case quote != 0:
-			if c == quote {
-				quote = 0
+		case '"', '\'':
+			if startsValue() {
+				quote = c
+				continue
 			}
-		case c == '"' || c == '\'':
-			quote = c
-		case c == '[' || c == '{':
+			c = 'a' // an apostrophe inside a plain scalar
+		case '[', '{':
+			if !startsValue() {
+				c = 'a' // part of a plain scalar: not an indicator
+				break
+			}
 			depth++
 			if depth > maxDepth {
 				return Problems{{Line: line, Msg: fmt.Sprintf("nested deeper than %d levels; a calc file needs far fewer", maxDepth)}}
 			}
-		case c == ']' || c == '}':
-			depth--
+		case ']', '}':
+			if depth > 0 {
+				depth--
+			}
 		}
+		prev = c
 	}
 	return nil
 }
