@@ -7,6 +7,9 @@ import (
 	"strconv"
 	"strings"
 	"testing"
+
+	"github.com/qultgeo/qult/profile"
+	"github.com/qultgeo/qult/units"
 )
 
 // The checks in this file are of decoding and validation: they compare
@@ -197,3 +200,31 @@ func TestUSUnitsSame(t *testing.T) {
 func fmtF(x float64) string { return strings.TrimRight(strings.TrimRight(strconvF(x), "0"), ".") }
 
 func strconvF(x float64) string { return strconv.FormatFloat(x, 'f', 12, 64) }
+
+// TestErrorsKeepTheirChain: errors.Is and errors.As reach the library
+// error behind a problem, through Parse.
+func TestErrorsKeepTheirChain(t *testing.T) {
+	src := strings.Replace(base, "thickness: 30 m", "thickness: 12 kPa", 1)
+	if src == base {
+		t.Fatal("base file changed: the test no longer breaks a thickness")
+	}
+	_, err := Parse([]byte(src))
+	if !errors.Is(err, units.ErrDimension) {
+		t.Errorf("errors.Is(err, units.ErrDimension) = false for %v", err)
+	}
+	var pe *units.ParseError
+	if !errors.As(err, &pe) || pe.Input != "12 kPa" {
+		t.Errorf("errors.As(*units.ParseError) failed or wrong input: %v", err)
+	}
+	var ps Problems
+	if !errors.As(err, &ps) || len(ps) == 0 || ps[0].Path != "ground.layers[0].thickness" {
+		t.Errorf("Problems: %v", err)
+	}
+	// A profile error keeps its type too.
+	src = strings.Replace(base, "thickness: 30 m", "thickness: -3 m", 1)
+	_, err = Parse([]byte(src))
+	var fe *profile.FieldError
+	if !errors.As(err, &fe) {
+		t.Errorf("errors.As(*profile.FieldError) failed: %v", err)
+	}
+}

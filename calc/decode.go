@@ -26,7 +26,15 @@ type Problem struct {
 	Path string // field path, such as "ground.layers[2].thickness"; "" for the file
 	Line int    // line in the file, 0 when unknown
 	Msg  string
+	// Err is the library error behind the message, if any (a
+	// *units.ParseError, a *profile.FieldError, a shaft or bearing
+	// *RangeError, …), so that errors.Is and errors.As reach it through
+	// Problems.
+	Err error
 }
+
+// Unwrap returns the library error behind the problem, or nil.
+func (p Problem) Unwrap() error { return p.Err }
 
 func (p Problem) Error() string {
 	var b strings.Builder
@@ -48,6 +56,18 @@ func (p Problem) Error() string {
 // Problems is every problem found in a calc file. It is the error type of
 // Decode and Run for bad input.
 type Problems []Problem
+
+// Unwrap returns the library errors behind the problems, for errors.Is
+// and errors.As.
+func (ps Problems) Unwrap() []error {
+	var errs []error
+	for _, p := range ps {
+		if p.Err != nil {
+			errs = append(errs, p.Err)
+		}
+	}
+	return errs
+}
 
 func (ps Problems) Error() string {
 	lines := make([]string, len(ps))

@@ -39,7 +39,14 @@ func (r *resolver) add(path string, line int, format string, args ...any) {
 	if line == 0 {
 		line = lineOf(r.f, path)
 	}
-	r.probs = append(r.probs, Problem{Path: path, Line: line, Msg: fmt.Sprintf(format, args...)})
+	var cause error
+	for _, a := range args {
+		if e, ok := a.(error); ok {
+			cause = e
+			break
+		}
+	}
+	r.probs = append(r.probs, Problem{Path: path, Line: line, Msg: fmt.Sprintf(format, args...), Err: cause})
 }
 
 func (r *resolver) q(v Value, path string, d units.Dimension) float64 {
@@ -48,11 +55,22 @@ func (r *resolver) q(v Value, path string, d units.Dimension) float64 {
 	}
 	x, err := v.quantity(d, r.sys)
 	if err != nil {
-		if errors.Is(err, units.ErrDimension) {
-			r.add(path, v.Line, "%q: %v", v.Raw, err) // the message lists the accepted units
-		} else {
-			r.add(path, v.Line, "%q: %v (accepted units: %s)", v.Raw, err, units.Accepted(d))
+		// The message shows the reason without the parser's own prefix;
+		// the Problem keeps the whole *units.ParseError for errors.As.
+		reason := err
+		var pe *units.ParseError
+		if errors.As(err, &pe) {
+			reason = pe.Err
 		}
+		line := v.Line
+		if line == 0 {
+			line = lineOf(r.f, path)
+		}
+		msg := fmt.Sprintf("%q: %v", v.Raw, reason) // a wrong dimension lists the accepted units
+		if !errors.Is(err, units.ErrDimension) {
+			msg = fmt.Sprintf("%q: %v (accepted units: %s)", v.Raw, reason, units.Accepted(d))
+		}
+		r.probs = append(r.probs, Problem{Path: path, Line: line, Msg: msg, Err: err})
 		return 0
 	}
 	return x

@@ -235,7 +235,7 @@ func translate(f *File, err error) error {
 				}
 			}
 		}
-		ps = append(ps, Problem{Path: path, Line: lineOf(f, path), Msg: msg})
+		ps = append(ps, Problem{Path: path, Line: lineOf(f, path), Msg: msg, Err: e})
 	}
 	return ps
 }

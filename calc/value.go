@@ -1,7 +1,6 @@
 package calc
 
 import (
-	"errors"
 	"fmt"
 	"math"
 	"strconv"
@@ -33,15 +32,7 @@ func (v Value) MarshalText() ([]byte, error) { return []byte(v.Raw), nil }
 // quantity reads the value as a quantity of dimension d; a bare number is
 // counted in system sys's unit for d.
 func (v Value) quantity(d units.Dimension, sys units.System) (float64, error) {
-	x, err := units.ParseIn(v.Raw, d, sys)
-	if err != nil {
-		var pe *units.ParseError
-		if errors.As(err, &pe) {
-			return 0, pe.Err
-		}
-		return 0, err
-	}
-	return x, nil
+	return units.ParseIn(v.Raw, d, sys)
 }
 
 // number reads a dimensionless number; a unit is an error.
