@@ -1,6 +1,7 @@
 package pile
 
 import (
+	"errors"
 	"fmt"
 	"math"
 
@@ -106,11 +107,27 @@ type Section struct {
 	Perimeter units.Length
 }
 
+// Largest section dimensions accepted: 15 m covers the widest driven
+// monopiles and drilled shafts in use (common practice; an offshore
+// monopile is rarely over 12 m); an area of 200 m² and a perimeter of
+// 60 m follow from it. Anything larger is a slip of units.
+const (
+	maxSize      = 15 * units.Metre
+	maxArea      = 200 * units.SquareMetre
+	maxPerimeter = 60 * units.Metre
+)
+
+// positive checks 0 < v ≤ maxSize. A value that reads as a size in
+// millimetres counted in metres gets a hint.
 func positive(field string, v units.Length) error {
-	if !(v > 0) || math.IsInf(float64(v), 0) {
-		return fmt.Errorf("%s: %v is outside (0, ∞) m", field, v)
+	if v > 0 && v <= maxSize {
+		return nil
 	}
-	return nil
+	msg := fmt.Sprintf("%s: %v is outside (0, %v]", field, v, maxSize)
+	if v > maxSize && v/1000 <= maxSize && !math.IsInf(float64(v), 0) {
+		msg += fmt.Sprintf(" (if millimetres were meant: %g mm)", float64(v))
+	}
+	return errors.New(msg)
 }
 
 // Validate checks that the fields the shape uses are positive and finite
@@ -149,11 +166,11 @@ func (s Section) Validate(path string) error {
 			return fmt.Errorf("%s: %v must be less than half the depth (%v)", p("flange"), s.Flange, s.Depth/2)
 		}
 	case GivenSection:
-		if !(s.Area > 0) || math.IsInf(float64(s.Area), 0) {
-			return fmt.Errorf("%s: %v is outside (0, ∞) m2", p("area"), s.Area)
+		if !(s.Area > 0 && s.Area <= maxArea) {
+			return fmt.Errorf("%s: %v is outside (0, %v]", p("area"), s.Area, maxArea)
 		}
-		if err := positive(p("perimeter"), s.Perimeter); err != nil {
-			return err
+		if !(s.Perimeter > 0 && s.Perimeter <= maxPerimeter) {
+			return fmt.Errorf("%s: %v is outside (0, %v]", p("perimeter"), s.Perimeter, maxPerimeter)
 		}
 		return positive(p("width"), s.Width)
 	default:

@@ -91,6 +91,8 @@ var badCases = []badCase{
 	{file: "63-zero-diameter", want: []string{"pile.section.diameter", "outside"}},
 	{file: "64-nan-load", want: []string{"loads.compression", "finite"}},
 	{file: "65-bare-load", want: []string{"loads.compression (line 25)", "permanent or variable"}},
+	{file: "66-bare-diameter-600", want: []string{"pile.section.diameter", "600 m is outside (0, 15 m]", "600 mm"}},
+	{file: "67-huge-diameter", want: []string{"pile.section.diameter", "outside (0, 15 m]"}},
 }
 
 const badTimeout = 5 * time.Second
