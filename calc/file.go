@@ -128,7 +128,15 @@ type TipChoice struct {
 	Eta Value `yaml:"eta,omitempty" json:"eta,omitempty"`
 }
 
-// Section is a pile cross-section.
+// Section is a pile cross-section. Each shape reads its own keys, and a
+// key it does not read is an error:
+//
+//	circle        diameter
+//	square        width (the side)
+//	closed-pipe   diameter (outside), wall
+//	open-pipe     diameter (outside), wall
+//	h-section     depth, width (flange), web, flange (thicknesses)
+//	given         area (tip), perimeter (shaft), width (for L/D, critical depth, tip zones)
 type Section struct {
 	// Shape: circle, square, closed-pipe, open-pipe, h-section, given.
 	Shape     string `yaml:"shape" json:"shape"`

@@ -242,6 +242,9 @@ func (r *resolver) pile(f *File, in *Inputs) {
 			r.add("pile.section.shape", 0, "%v", err)
 		}
 	}
+	if err == nil {
+		r.sectionKeys(shape, sec)
+	}
 	in.Pile.Section = pile.Section{Shape: shape,
 		Diameter: r.length(sec.Diameter, "pile.section.diameter"), Width: r.length(sec.Width, "pile.section.width"),
 		Wall: r.length(sec.Wall, "pile.section.wall"), Depth: r.length(sec.Depth, "pile.section.depth"),
@@ -273,6 +276,40 @@ func (r *resolver) pile(f *File, in *Inputs) {
 	}
 	in.Pile.Modulus = r.stress(p.YoungsModulus, "pile.youngs_modulus")
 	in.Pile.UnitWeight = r.weight(p.UnitWeight, "pile.unit_weight")
+}
+
+// sectionFields lists, per shape, the section keys it reads and what each
+// means, in the order a message names them.
+var sectionFields = map[pile.Shape][]struct{ key, what string }{
+	pile.Circle:       {{"diameter", "the diameter"}},
+	pile.Square:       {{"width", "the side"}},
+	pile.ClosedPipe:   {{"diameter", "the outside diameter"}, {"wall", "the wall thickness"}},
+	pile.OpenPipe:     {{"diameter", "the outside diameter"}, {"wall", "the wall thickness"}},
+	pile.HSection:     {{"depth", "the section depth"}, {"width", "the flange width"}, {"web", "the web thickness"}, {"flange", "the flange thickness"}},
+	pile.GivenSection: {{"area", "the tip area"}, {"perimeter", "the shaft perimeter"}, {"width", "the width used for L/D, critical depth and the zones around the tip"}},
+}
+
+// sectionKeys reports the keys a shape needs that are missing, and keys
+// given that the shape does not read (they would be ignored in silence).
+func (r *resolver) sectionKeys(shape pile.Shape, sec Section) {
+	given := map[string]Value{"diameter": sec.Diameter, "width": sec.Width, "wall": sec.Wall, "depth": sec.Depth,
+		"web": sec.Web, "flange": sec.Flange, "area": sec.Area, "perimeter": sec.Perimeter}
+	used := map[string]bool{}
+	var need []string
+	for _, f := range sectionFields[shape] {
+		used[f.key] = true
+		need = append(need, f.key)
+	}
+	for _, f := range sectionFields[shape] {
+		if !given[f.key].IsSet() {
+			r.add("pile.section."+f.key, 0, "not given; shape %s needs %s (%s: %s)", shape, strings.Join(need, ", "), f.key, f.what)
+		}
+	}
+	for _, k := range []string{"diameter", "width", "wall", "depth", "web", "flange", "area", "perimeter"} {
+		if v := given[k]; v.IsSet() && !used[k] {
+			r.add("pile.section."+k, v.Line, "shape %s does not use %s; it reads %s", shape, k, strings.Join(need, ", "))
+		}
+	}
 }
 
 // tipMethods and shaftMethods list the identifiers accepted in calc files.

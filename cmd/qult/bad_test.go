@@ -93,6 +93,8 @@ var badCases = []badCase{
 	{file: "65-bare-load", want: []string{"loads.compression (line 25)", "permanent or variable"}},
 	{file: "66-bare-diameter-600", want: []string{"pile.section.diameter", "600 m is outside (0, 15 m]", "600 mm"}},
 	{file: "67-huge-diameter", want: []string{"pile.section.diameter", "outside (0, 15 m]"}},
+	{file: "68-given-without-width", want: []string{"pile.section.width (line 18)", "not given", "L/D"}},
+	{file: "69-wall-on-circle", want: []string{"pile.section.wall (line 18)", "does not use wall"}},
 }
 
 const badTimeout = 5 * time.Second
