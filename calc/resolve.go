@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"slices"
 	"sort"
 	"strings"
 
@@ -607,6 +608,7 @@ func (r *resolver) design(f *File, in *Inputs) {
 	if d == nil {
 		return
 	}
+	r.designKeys(d)
 	switch strings.TrimSpace(d.Basis) {
 	case "safety-factor":
 		in.Basis = pile.SafetyFactor{Global: r.num(d.Factor, "design.factor", 0, 100),
@@ -623,6 +625,7 @@ func (r *resolver) design(f *File, in *Inputs) {
 			l = pile.AASHTODrilledShafts()
 		default:
 			r.add("design.preset", 0, "%q: want aashto-driven or aashto-drilled", d.Preset)
+			l = pile.LRFD{Tip: map[string]float64{}, Shaft: map[string]float64{}, Tension: map[string]float64{}}
 		}
 		for k, v := range r.factorMap(d.Tip, "design.tip") {
 			l.Tip[k] = v
@@ -657,6 +660,35 @@ func (r *resolver) design(f *File, in *Inputs) {
 		r.add("design.basis", 0, "not given; want safety-factor, lrfd or en1997")
 	default:
 		r.add("design.basis", 0, "%q: want safety-factor, lrfd or en1997", d.Basis)
+	}
+}
+
+// designKeysOf lists the design keys each basis reads.
+var designKeysOf = map[string][]string{
+	"safety-factor": {"factor", "tip_factor", "shaft_factor", "tension_factor"},
+	"lrfd":          {"preset", "tip", "shaft", "uplift", "permanent", "variable"},
+	"en1997":        {"approach", "profiles", "model_factor", "total"},
+}
+
+// designKeys refuses keys that the chosen basis does not read (a preset
+// under a safety-factor basis would otherwise be ignored in silence).
+func (r *resolver) designKeys(d *Design) {
+	reads, ok := designKeysOf[strings.TrimSpace(d.Basis)]
+	if !ok {
+		return // the basis itself is reported
+	}
+	set := map[string]bool{
+		"factor": d.Factor.IsSet(), "tip_factor": d.TipFactor.IsSet(), "shaft_factor": d.ShaftFactor.IsSet(),
+		"tension_factor": d.TensionFactor.IsSet(), "preset": d.Preset != "", "tip": d.Tip != nil,
+		"shaft": d.Shaft != nil, "uplift": d.Uplift != nil, "permanent": d.Permanent.IsSet(),
+		"variable": d.Variable.IsSet(), "approach": d.Approach != "", "profiles": d.Profiles.IsSet(),
+		"model_factor": d.ModelFactor.IsSet(), "total": d.Total,
+	}
+	for _, k := range []string{"factor", "tip_factor", "shaft_factor", "tension_factor", "preset", "tip", "shaft",
+		"uplift", "permanent", "variable", "approach", "profiles", "model_factor", "total"} {
+		if set[k] && !slices.Contains(reads, k) {
+			r.add("design."+k, 0, "basis %s does not use %s; it reads %s", strings.TrimSpace(d.Basis), k, strings.Join(reads, ", "))
+		}
 	}
 }
 

@@ -95,6 +95,8 @@ var badCases = []badCase{
 	{file: "67-huge-diameter", want: []string{"pile.section.diameter", "outside (0, 15 m]"}},
 	{file: "68-given-without-width", want: []string{"pile.section.width (line 18)", "not given", "L/D"}},
 	{file: "69-wall-on-circle", want: []string{"pile.section.wall (line 18)", "does not use wall"}},
+	{file: "70-preset-under-safety-factor", want: []string{"design.preset (line 24)", "does not use preset"}},
+	{file: "71-unknown-preset-with-factors", want: []string{"design.preset", "no-such-code"}},
 }
 
 const badTimeout = 5 * time.Second
