@@ -20,7 +20,7 @@
 //	γd   = Gs·γw·S/(S + w·Gs)
 //	Dr   = (emax − e)/(emax − emin)
 //
-// Choices made where the brief was silent:
+// Choices made where the sources are silent:
 //
 //   - Quantities are fractions, not percentages: w = 0.18 for 18 %, S = 0.9,
 //     n = 0.35, Dr = 0.6.
@@ -33,7 +33,10 @@
 //     and, for Dr, both emax and emin. Given values beyond that are checked
 //     against each other to a relative tolerance (DefaultTolerance, 0.5 %,
 //     unless Input.Tol is set), enough to accept published data rounded to
-//     three significant figures.
+//     three significant figures. Once they agree, the state is recomputed
+//     from Gs, e and S, so that every relation holds exactly in what is
+//     returned (and printed); another given value may move by up to the
+//     tolerance.
 //   - Gs must lie in [MinGs, MaxGs] = [1.3, 3.5]: common practice puts
 //     quartz and clay minerals at 2.6-2.8, organic soils and peat down to
 //     about 1.4, and heavy-mineral sands up to about 3.4. Dr must lie in

@@ -223,6 +223,7 @@ func Solve(in Input) (State, error) {
 	if err := s.checkAll(); err != nil {
 		return State{}, err
 	}
+	s.reconcile()
 	v := s.v
 	st := State{
 		Gs: v[Gs], E: v[E], N: v[N], W: v[W], S: v[S],
@@ -523,6 +524,27 @@ func (s *solver) checkAll() error {
 		}
 	}
 	return nil
+}
+
+// reconcile recomputes every other quantity from Gs, e and S once the
+// given values have been found to agree within the tolerance, so that the
+// state returned satisfies every relation exactly (to round-off): Se = wGs
+// and the unit weights agree with each other however the given values were
+// rounded. A given value other than Gs, e and S may move by up to the
+// tolerance. Gs, e and S are themselves given or derived from the given
+// values by the first relations that fixed them.
+func (s *solver) reconcile() {
+	v := &s.v
+	gs, e, sat, gw := v[Gs], v[E], v[S], s.gw
+	v[N] = e / (1 + e)
+	v[W] = sat * e / gs
+	v[GammaD] = gs * gw / (1 + e)
+	v[GammaSat] = (gs + e) * gw / (1 + e)
+	v[GammaSub] = v[GammaSat] - gw
+	v[Gamma] = (gs + sat*e) * gw / (1 + e)
+	if s.hasDr {
+		v[Dr] = min(max((s.emax-e)/(s.emax-s.emin), 0), 1) // round-off only: the check passed
+	}
 }
 
 // closure returns the quantities fixed by known, by the structure of the

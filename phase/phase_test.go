@@ -289,3 +289,50 @@ func TestPropIdentities(t *testing.T) {
 		}
 	})
 }
+
+// TestPropReconciled: over-determined inputs that agree within the
+// tolerance (here Gs, e, S and a water content perturbed by up to 0.4 %)
+// give a state in which every relation holds to round-off (closed forms:
+// Se = wGs, n = e/(1+e), γ = (Gs+Se)γw/(1+e), γd(1+w) = γ, γ′ = γsat − γw).
+func TestPropReconciled(t *testing.T) {
+	rapid.Check(t, func(t *rapid.T) {
+		gs := rapid.Float64Range(2.4, 3.0).Draw(t, "Gs")
+		e := rapid.Float64Range(0.2, 3).Draw(t, "e")
+		sr := rapid.Float64Range(0.05, 1).Draw(t, "S")
+		k := rapid.Float64Range(-0.004, 0.004).Draw(t, "perturbation")
+		w := sr * e / gs * (1 + k)
+		st, err := Solve(Input{Gs: gs, E: e, S: sr, W: w})
+		if err != nil {
+			t.Fatal(err)
+		}
+		gw := float64(st.GammaW)
+		checks := []struct {
+			name      string
+			got, want float64
+		}{
+			{"Se = wGs", st.S * st.E, st.W * st.Gs},
+			{"n = e/(1+e)", st.N, st.E / (1 + st.E)},
+			{"γ", float64(st.Gamma), (st.Gs + st.S*st.E) * gw / (1 + st.E)},
+			{"γd(1+w) = γ", float64(st.GammaD) * (1 + st.W), float64(st.Gamma)},
+			{"γ′ = γsat − γw", float64(st.GammaSub), float64(st.GammaSat) - gw},
+		}
+		for _, c := range checks {
+			if math.Abs(c.got-c.want) > 1e-12*math.Max(1, math.Abs(c.want)) {
+				t.Fatalf("%s: %v, want %v", c.name, c.got, c.want)
+			}
+		}
+	})
+}
+
+// TestReconciledExample: water content 18.6 % with Gs 2.68, e 0.55 and
+// S 0.91 (invented numbers: Se = 0.5005, wGs = 0.49848, 0.4 % apart) is
+// accepted and printed consistent: w = Se/Gs = 0.18675 (closed form).
+func TestReconciledExample(t *testing.T) {
+	st, err := Solve(Input{Gs: 2.68, E: 0.55, S: 0.91, W: 0.186})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if want := 0.91 * 0.55 / 2.68; math.Abs(st.W-want) > 1e-12 {
+		t.Errorf("w = %v, want %v", st.W, want)
+	}
+}

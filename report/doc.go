@@ -53,7 +53,7 @@
 //
 // # Choices
 //
-// Where the issue was silent: the date in the title block is Options.Date,
+// The date in the title block is Options.Date,
 // else the calc file's date, else none; the worked shaft equations use the
 // bottom end of the first segment of each method (the top is often at zero
 // stress); the capacity plot adds the governing case's design compression

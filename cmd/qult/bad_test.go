@@ -113,7 +113,7 @@ func TestBadInput(t *testing.T) {
 		t.Errorf("%d files under testdata/bad, %d cases in the table: every file needs a case", len(files), len(badCases))
 	}
 	if len(badCases) < 40 {
-		t.Errorf("only %d bad-input cases; the issue asks for at least 40", len(badCases))
+		t.Errorf("only %d bad-input cases; the catalogue must hold at least 40", len(badCases))
 	}
 	for _, c := range badCases {
 		t.Run(c.file, func(t *testing.T) {
