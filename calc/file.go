@@ -34,55 +34,55 @@ type Ground struct {
 	// WaterDepth is the depth of the water table below ground level;
 	// negative means free water standing above the ground; "none" (or
 	// omitting it) is a dry site.
-	WaterDepth      Value       `yaml:"water_depth,omitempty" json:"water_depth,omitempty"`
-	WaterUnitWeight Value       `yaml:"water_unit_weight,omitempty" json:"water_unit_weight,omitempty"`
-	Surcharge       Value       `yaml:"surcharge,omitempty" json:"surcharge,omitempty"`
+	WaterDepth      Value       `yaml:"water_depth,omitempty" json:"water_depth,omitempty" q:"length-or-none" doc:"Depth of the water table below ground level; negative for free water above the ground; \"none\" for a dry site."`
+	WaterUnitWeight Value       `yaml:"water_unit_weight,omitempty" json:"water_unit_weight,omitempty" q:"unitweight,0," doc:"Unit weight of water; default 9.81 kN/m3 (SI) or 62.4 pcf (US)."`
+	Surcharge       Value       `yaml:"surcharge,omitempty" json:"surcharge,omitempty" q:"stress,0," doc:"Uniform surcharge on the ground surface."`
 	PorePressures   []PorePoint `yaml:"pore_pressures,omitempty" json:"pore_pressures,omitempty"`
 	Layers          []Layer     `yaml:"layers" json:"layers"`
 }
 
 // PorePoint is a pore pressure at a depth, for non-hydrostatic water.
 type PorePoint struct {
-	Depth    Value `yaml:"depth" json:"depth"`
-	Pressure Value `yaml:"pressure" json:"pressure"`
+	Depth    Value `yaml:"depth" json:"depth" q:"length,0," doc:"Depth of the pore-pressure point below ground level."`
+	Pressure Value `yaml:"pressure" json:"pressure" q:"stress" doc:"Pore water pressure at that depth."`
 }
 
 // Strength is an undrained strength: a single value, or top and bottom
 // values varying linearly through the layer.
 type Strength struct {
 	Value  Value `yaml:"-" json:"-"`
-	Top    Value `yaml:"top,omitempty" json:"top,omitempty"`
-	Bottom Value `yaml:"bottom,omitempty" json:"bottom,omitempty"`
+	Top    Value `yaml:"top,omitempty" json:"top,omitempty" q:"stress,0," doc:"Undrained shear strength su at the top of the layer."`
+	Bottom Value `yaml:"bottom,omitempty" json:"bottom,omitempty" q:"stress,0," doc:"Undrained shear strength su at the bottom of the layer."`
 }
 
 // Layer is one layer of the log.
 type Layer struct {
 	Name      string `yaml:"name" json:"name"`
-	Thickness Value  `yaml:"thickness,omitempty" json:"thickness,omitempty"`
-	Top       Value  `yaml:"top,omitempty" json:"top,omitempty"`
-	Bottom    Value  `yaml:"bottom,omitempty" json:"bottom,omitempty"`
+	Thickness Value  `yaml:"thickness,omitempty" json:"thickness,omitempty" q:"length,0," doc:"Layer thickness (or give top and bottom)."`
+	Top       Value  `yaml:"top,omitempty" json:"top,omitempty" q:"length,0," doc:"Depth of the top of the layer below ground level."`
+	Bottom    Value  `yaml:"bottom,omitempty" json:"bottom,omitempty" q:"length,0," doc:"Depth of the bottom of the layer below ground level."`
 	// Drainage is "drained" (φ′, c′ govern) or "undrained" (su governs).
 	Drainage string `yaml:"drainage" json:"drainage"`
 
-	UnitWeight          Value `yaml:"unit_weight,omitempty" json:"unit_weight,omitempty"`
-	SaturatedUnitWeight Value `yaml:"saturated_unit_weight,omitempty" json:"saturated_unit_weight,omitempty"`
-	DryUnitWeight       Value `yaml:"dry_unit_weight,omitempty" json:"dry_unit_weight,omitempty"`
-	VoidRatio           Value `yaml:"void_ratio,omitempty" json:"void_ratio,omitempty"`
-	WaterContent        Value `yaml:"water_content,omitempty" json:"water_content,omitempty"`
-	SpecificGravity     Value `yaml:"specific_gravity,omitempty" json:"specific_gravity,omitempty"`
-	Saturation          Value `yaml:"saturation,omitempty" json:"saturation,omitempty"`
+	UnitWeight          Value `yaml:"unit_weight,omitempty" json:"unit_weight,omitempty" q:"unitweight,0," doc:"Unit weight above the water table."`
+	SaturatedUnitWeight Value `yaml:"saturated_unit_weight,omitempty" json:"saturated_unit_weight,omitempty" q:"unitweight,0," doc:"Saturated unit weight, used below the water table."`
+	DryUnitWeight       Value `yaml:"dry_unit_weight,omitempty" json:"dry_unit_weight,omitempty" q:"unitweight,0," doc:"Dry unit weight (with void_ratio or specific_gravity: the other unit weights by phase relations)."`
+	VoidRatio           Value `yaml:"void_ratio,omitempty" json:"void_ratio,omitempty" q:"number,0,20" doc:"Void ratio e."`
+	WaterContent        Value `yaml:"water_content,omitempty" json:"water_content,omitempty" q:"fraction" doc:"Water content w, as a fraction (0.18) or a percentage (\"18 %\")."`
+	SpecificGravity     Value `yaml:"specific_gravity,omitempty" json:"specific_gravity,omitempty" q:"number,0,10" doc:"Specific gravity of solids Gs."`
+	Saturation          Value `yaml:"saturation,omitempty" json:"saturation,omitempty" q:"fraction" doc:"Degree of saturation S, as a fraction (0.9) or a percentage (\"90 %\")."`
 
-	FrictionAngle     Value     `yaml:"friction_angle,omitempty" json:"friction_angle,omitempty"`
-	Cohesion          Value     `yaml:"cohesion,omitempty" json:"cohesion,omitempty"`
+	FrictionAngle     Value     `yaml:"friction_angle,omitempty" json:"friction_angle,omitempty" q:"angle,0,50" doc:"Effective friction angle φ′ (deg)."`
+	Cohesion          Value     `yaml:"cohesion,omitempty" json:"cohesion,omitempty" q:"stress,0," doc:"Effective cohesion c′."`
 	UndrainedStrength *Strength `yaml:"undrained_strength,omitempty" json:"undrained_strength,omitempty"`
 
-	OCR             Value `yaml:"ocr,omitempty" json:"ocr,omitempty"`
-	RelativeDensity Value `yaml:"relative_density,omitempty" json:"relative_density,omitempty"`
-	N60             Value `yaml:"n60,omitempty" json:"n60,omitempty"`
-	YoungsModulus   Value `yaml:"youngs_modulus,omitempty" json:"youngs_modulus,omitempty"`
-	PoissonsRatio   Value `yaml:"poissons_ratio,omitempty" json:"poissons_ratio,omitempty"`
-	ShearModulus    Value `yaml:"shear_modulus,omitempty" json:"shear_modulus,omitempty"`
-	RigidityIndex   Value `yaml:"rigidity_index,omitempty" json:"rigidity_index,omitempty"`
+	OCR             Value `yaml:"ocr,omitempty" json:"ocr,omitempty" q:"number,0,1000000" doc:"Overconsolidation ratio OCR."`
+	RelativeDensity Value `yaml:"relative_density,omitempty" json:"relative_density,omitempty" q:"fraction" doc:"Relative density Dr, as a fraction or a percentage."`
+	N60             Value `yaml:"n60,omitempty" json:"n60,omitempty" q:"number,0,1000000" doc:"SPT blow count corrected to 60 % energy, N60 (blows/0.3 m)."`
+	YoungsModulus   Value `yaml:"youngs_modulus,omitempty" json:"youngs_modulus,omitempty" q:"stress,0," doc:"Young's modulus of the soil."`
+	PoissonsRatio   Value `yaml:"poissons_ratio,omitempty" json:"poissons_ratio,omitempty" q:"number,0,1000000" doc:"Poisson's ratio of the soil."`
+	ShearModulus    Value `yaml:"shear_modulus,omitempty" json:"shear_modulus,omitempty" q:"stress,0," doc:"Shear modulus of the soil G."`
+	RigidityIndex   Value `yaml:"rigidity_index,omitempty" json:"rigidity_index,omitempty" q:"number,0,1000000000" doc:"Rigidity index Ir (for Vesic's tip)."`
 
 	// Shaft and Tip override the methods for this layer.
 	Shaft *ShaftChoice `yaml:"shaft,omitempty" json:"shaft,omitempty"`
@@ -98,21 +98,21 @@ type ShaftChoice struct {
 	Method string `yaml:"method" json:"method"`
 	// For beta: K by one of k, k_over_k0, k_over_kp, k0 ("jaky" or "ocr");
 	// δ by delta or delta_over_phi. Unset ones take the defaults.
-	K            Value  `yaml:"k,omitempty" json:"k,omitempty"`
-	KOverK0      Value  `yaml:"k_over_k0,omitempty" json:"k_over_k0,omitempty"`
-	KOverKp      Value  `yaml:"k_over_kp,omitempty" json:"k_over_kp,omitempty"`
+	K            Value  `yaml:"k,omitempty" json:"k,omitempty" q:"number,0,10" doc:"Earth pressure coefficient K, given."`
+	KOverK0      Value  `yaml:"k_over_k0,omitempty" json:"k_over_k0,omitempty" q:"number,0,3" doc:"K/K0, given."`
+	KOverKp      Value  `yaml:"k_over_kp,omitempty" json:"k_over_kp,omitempty" q:"number,0,1" doc:"K/Kp, given."`
 	K0           string `yaml:"k0,omitempty" json:"k0,omitempty"`
-	Delta        Value  `yaml:"delta,omitempty" json:"delta,omitempty"`
-	DeltaOverPhi Value  `yaml:"delta_over_phi,omitempty" json:"delta_over_phi,omitempty"`
-	Beta         Value  `yaml:"beta,omitempty" json:"beta,omitempty"`
-	Alpha        Value  `yaml:"alpha,omitempty" json:"alpha,omitempty"`
-	Lambda       Value  `yaml:"lambda,omitempty" json:"lambda,omitempty"`
+	Delta        Value  `yaml:"delta,omitempty" json:"delta,omitempty" q:"angle,0,50" doc:"Interface friction angle δ, given (deg)."`
+	DeltaOverPhi Value  `yaml:"delta_over_phi,omitempty" json:"delta_over_phi,omitempty" q:"number,0,1" doc:"δ/φ′, given."`
+	Beta         Value  `yaml:"beta,omitempty" json:"beta,omitempty" q:"number,0,3" doc:"β = K·tanδ, given (beta-given)."`
+	Alpha        Value  `yaml:"alpha,omitempty" json:"alpha,omitempty" q:"number,0,1.5" doc:"Adhesion factor α, given (alpha-given)."`
+	Lambda       Value  `yaml:"lambda,omitempty" json:"lambda,omitempty" q:"number,0,1" doc:"λ, given instead of read from the table (lambda)."`
 	// SandClass is the API RP 2GEO class for beta-api (and for an API
 	// limit): api-medium-dense-sand-silt, api-medium-dense-sand,
 	// api-dense-sand, api-very-dense-sand.
 	SandClass string `yaml:"sand_class,omitempty" json:"sand_class,omitempty"`
 	// Limit is a limiting unit shaft friction.
-	Limit Value `yaml:"limit,omitempty" json:"limit,omitempty"`
+	Limit Value `yaml:"limit,omitempty" json:"limit,omitempty" q:"stress,0," doc:"Limiting unit shaft friction."`
 }
 
 // TipChoice picks a tip method for a layer.
@@ -121,11 +121,11 @@ type TipChoice struct {
 	// janbu, api-sand-1 to api-sand-4, shaft-n60-sand, given-nq, nc9,
 	// vesic-undrained, given-nc.
 	Method string `yaml:"method" json:"method"`
-	Nq     Value  `yaml:"nq,omitempty" json:"nq,omitempty"`
-	Nc     Value  `yaml:"nc,omitempty" json:"nc,omitempty"`
-	Limit  Value  `yaml:"limit,omitempty" json:"limit,omitempty"`
+	Nq     Value  `yaml:"nq,omitempty" json:"nq,omitempty" q:"number,0,10000" doc:"Bearing capacity factor Nq, given (given-nq)."`
+	Nc     Value  `yaml:"nc,omitempty" json:"nc,omitempty" q:"number,0,10000" doc:"Bearing capacity factor Nc, given (given-nc, given-nq)."`
+	Limit  Value  `yaml:"limit,omitempty" json:"limit,omitempty" q:"stress,0," doc:"Limiting unit tip resistance."`
 	// Eta is Janbu's plastic-zone angle η′ (default 90 deg).
-	Eta Value `yaml:"eta,omitempty" json:"eta,omitempty"`
+	Eta Value `yaml:"eta,omitempty" json:"eta,omitempty" q:"angle,0,180" doc:"Janbu's plastic-zone angle η′ (deg; default 90)."`
 }
 
 // Section is a pile cross-section. Each shape reads its own keys, and a
@@ -140,34 +140,34 @@ type TipChoice struct {
 type Section struct {
 	// Shape: circle, square, closed-pipe, open-pipe, h-section, given.
 	Shape     string `yaml:"shape" json:"shape"`
-	Diameter  Value  `yaml:"diameter,omitempty" json:"diameter,omitempty"`
-	Width     Value  `yaml:"width,omitempty" json:"width,omitempty"`
-	Wall      Value  `yaml:"wall,omitempty" json:"wall,omitempty"`
-	Depth     Value  `yaml:"depth,omitempty" json:"depth,omitempty"`
-	Web       Value  `yaml:"web,omitempty" json:"web,omitempty"`
-	Flange    Value  `yaml:"flange,omitempty" json:"flange,omitempty"`
-	Area      Value  `yaml:"area,omitempty" json:"area,omitempty"`
-	Perimeter Value  `yaml:"perimeter,omitempty" json:"perimeter,omitempty"`
+	Diameter  Value  `yaml:"diameter,omitempty" json:"diameter,omitempty" q:"length,0," doc:"Diameter (outside diameter of a pipe)."`
+	Width     Value  `yaml:"width,omitempty" json:"width,omitempty" q:"length,0," doc:"Side of a square, flange width of an H-section, or the width of a given section."`
+	Wall      Value  `yaml:"wall,omitempty" json:"wall,omitempty" q:"length,0," doc:"Wall thickness of a pipe."`
+	Depth     Value  `yaml:"depth,omitempty" json:"depth,omitempty" q:"length,0," doc:"Depth of an H-section."`
+	Web       Value  `yaml:"web,omitempty" json:"web,omitempty" q:"length,0," doc:"Web thickness of an H-section."`
+	Flange    Value  `yaml:"flange,omitempty" json:"flange,omitempty" q:"length,0," doc:"Flange thickness of an H-section."`
+	Area      Value  `yaml:"area,omitempty" json:"area,omitempty" q:"area,0," doc:"Tip area of a given section."`
+	Perimeter Value  `yaml:"perimeter,omitempty" json:"perimeter,omitempty" q:"length,0," doc:"Shaft perimeter of a given section."`
 }
 
 // Pile is the pile and its installation.
 type Pile struct {
 	Section      Section `yaml:"section" json:"section"`
-	Length       Value   `yaml:"length" json:"length"`
-	HeadDepth    Value   `yaml:"head_depth,omitempty" json:"head_depth,omitempty"`
+	Length       Value   `yaml:"length" json:"length" q:"length,0," doc:"Pile length from head to tip."`
+	HeadDepth    Value   `yaml:"head_depth,omitempty" json:"head_depth,omitempty" q:"length,0," doc:"Depth of the pile head below ground level (default 0)."`
 	Installation string  `yaml:"installation" json:"installation"`
 	// Surface: rough-concrete, smooth-concrete, rough-steel, smooth-steel,
 	// timber; default by section and installation.
 	Surface       string `yaml:"surface,omitempty" json:"surface,omitempty"`
 	Plug          string `yaml:"plug,omitempty" json:"plug,omitempty"`
-	YoungsModulus Value  `yaml:"youngs_modulus,omitempty" json:"youngs_modulus,omitempty"`
-	UnitWeight    Value  `yaml:"unit_weight,omitempty" json:"unit_weight,omitempty"`
+	YoungsModulus Value  `yaml:"youngs_modulus,omitempty" json:"youngs_modulus,omitempty" q:"stress,0," doc:"Young's modulus of the pile material."`
+	UnitWeight    Value  `yaml:"unit_weight,omitempty" json:"unit_weight,omitempty" q:"unitweight,0," doc:"Unit weight of the pile material, for its self-weight."`
 }
 
 // Zone is a depth range with no shaft friction.
 type Zone struct {
-	Top    Value `yaml:"top" json:"top"`
-	Bottom Value `yaml:"bottom" json:"bottom"`
+	Top    Value `yaml:"top" json:"top" q:"length,0," doc:"Top of the zone, depth below ground level."`
+	Bottom Value `yaml:"bottom" json:"bottom" q:"length,0," doc:"Bottom of the zone, depth below ground level."`
 }
 
 // Methods are the methods for the whole pile, by drainage class.
@@ -177,17 +177,17 @@ type Methods struct {
 	ShaftDrained   string `yaml:"shaft_drained,omitempty" json:"shaft_drained,omitempty"`
 	ShaftUndrained string `yaml:"shaft_undrained,omitempty" json:"shaft_undrained,omitempty"`
 	// CriticalDepth is the ratio n of zc = n·D; 0 or absent for none.
-	CriticalDepth Value `yaml:"critical_depth,omitempty" json:"critical_depth,omitempty"`
+	CriticalDepth Value `yaml:"critical_depth,omitempty" json:"critical_depth,omitempty" q:"number,0,1000" doc:"Critical depth ratio n of zc = n·D (β methods in drained layers); absent for none."`
 	// LayeredTip turns Meyerhof's rule for a tip near a weaker layer above
 	// on or off (default on).
 	LayeredTip *bool `yaml:"layered_tip,omitempty" json:"layered_tip,omitempty"`
 	// WeakBelow is how many diameters below the tip to look for a weaker
 	// layer (default 3).
-	WeakBelow Value `yaml:"weak_below,omitempty" json:"weak_below,omitempty"`
+	WeakBelow Value `yaml:"weak_below,omitempty" json:"weak_below,omitempty" q:"number,0,1000" doc:"How many diameters below the tip to look for a weaker layer."`
 	// SelfWeight: ignored (default), net or gross.
 	SelfWeight string `yaml:"self_weight,omitempty" json:"self_weight,omitempty"`
 	// TensionFactor multiplies shaft resistance in tension (default 1).
-	TensionFactor Value  `yaml:"tension_factor,omitempty" json:"tension_factor,omitempty"`
+	TensionFactor Value  `yaml:"tension_factor,omitempty" json:"tension_factor,omitempty" q:"number,0,1000" doc:"Factor on shaft resistance in tension."`
 	ClampCharts   bool   `yaml:"clamp_charts,omitempty" json:"clamp_charts,omitempty"`
 	NoShaft       []Zone `yaml:"no_shaft,omitempty" json:"no_shaft,omitempty"`
 }
@@ -198,23 +198,23 @@ type Design struct {
 	Basis string `yaml:"basis" json:"basis"`
 	// safety-factor: factor (global), or tip_factor and shaft_factor;
 	// tension_factor.
-	Factor        Value `yaml:"factor,omitempty" json:"factor,omitempty"`
-	TipFactor     Value `yaml:"tip_factor,omitempty" json:"tip_factor,omitempty"`
-	ShaftFactor   Value `yaml:"shaft_factor,omitempty" json:"shaft_factor,omitempty"`
-	TensionFactor Value `yaml:"tension_factor,omitempty" json:"tension_factor,omitempty"`
+	Factor        Value `yaml:"factor,omitempty" json:"factor,omitempty" q:"number,0,100" doc:"Global factor of safety (safety-factor)."`
+	TipFactor     Value `yaml:"tip_factor,omitempty" json:"tip_factor,omitempty" q:"number,0,100" doc:"Factor of safety on the tip (safety-factor)."`
+	ShaftFactor   Value `yaml:"shaft_factor,omitempty" json:"shaft_factor,omitempty" q:"number,0,100" doc:"Factor of safety on the shaft (safety-factor)."`
+	TensionFactor Value `yaml:"tension_factor,omitempty" json:"tension_factor,omitempty" q:"number,0,100" doc:"Factor of safety in tension (safety-factor)."`
 	// lrfd: preset (aashto-driven, aashto-drilled) and/or resistance
 	// factors by method identifier ("*" for any other), load factors.
 	Preset    string           `yaml:"preset,omitempty" json:"preset,omitempty"`
-	Tip       map[string]Value `yaml:"tip,omitempty" json:"tip,omitempty"`
-	Shaft     map[string]Value `yaml:"shaft,omitempty" json:"shaft,omitempty"`
-	Uplift    map[string]Value `yaml:"uplift,omitempty" json:"uplift,omitempty"`
-	Permanent Value            `yaml:"permanent,omitempty" json:"permanent,omitempty"`
-	Variable  Value            `yaml:"variable,omitempty" json:"variable,omitempty"`
+	Tip       map[string]Value `yaml:"tip,omitempty" json:"tip,omitempty" q:"factormap,0,1" doc:"Resistance factors φ on tip resistance, by tip method (lrfd)."`
+	Shaft     map[string]Value `yaml:"shaft,omitempty" json:"shaft,omitempty" q:"factormap,0,1" doc:"Resistance factors φ on shaft resistance, by shaft method (lrfd)."`
+	Uplift    map[string]Value `yaml:"uplift,omitempty" json:"uplift,omitempty" q:"factormap,0,1" doc:"Resistance factors φ on uplift resistance, by shaft method (lrfd)."`
+	Permanent Value            `yaml:"permanent,omitempty" json:"permanent,omitempty" q:"number,0,10" doc:"Load factor on permanent actions (lrfd)."`
+	Variable  Value            `yaml:"variable,omitempty" json:"variable,omitempty" q:"number,0,10" doc:"Load factor on variable actions (lrfd)."`
 	// en1997: approach (DA1, DA2, DA3), profiles (n for ξ3/ξ4; 0 for the
 	// model factor alone), model_factor (γRd), total (use γt).
 	Approach    string `yaml:"approach,omitempty" json:"approach,omitempty"`
-	Profiles    Value  `yaml:"profiles,omitempty" json:"profiles,omitempty"`
-	ModelFactor Value  `yaml:"model_factor,omitempty" json:"model_factor,omitempty"`
+	Profiles    Value  `yaml:"profiles,omitempty" json:"profiles,omitempty" q:"integer,0,1000" doc:"Number of ground test profiles n for ξ3/ξ4 (en1997)."`
+	ModelFactor Value  `yaml:"model_factor,omitempty" json:"model_factor,omitempty" q:"number,0,10" doc:"Model factor γRd (en1997)."`
 	Total       bool   `yaml:"total,omitempty" json:"total,omitempty"`
 }
 
@@ -224,8 +224,8 @@ type Design struct {
 // parts differently and a bare value would choose one in silence.
 type Load struct {
 	Value     Value `yaml:"-" json:"-"`
-	Permanent Value `yaml:"permanent,omitempty" json:"permanent,omitempty"`
-	Variable  Value `yaml:"variable,omitempty" json:"variable,omitempty"`
+	Permanent Value `yaml:"permanent,omitempty" json:"permanent,omitempty" q:"force,0," doc:"Permanent (dead) part of the characteristic load."`
+	Variable  Value `yaml:"variable,omitempty" json:"variable,omitempty" q:"force,0," doc:"Variable (live, wind, …) part of the characteristic load."`
 }
 
 // Loads are the characteristic loads on the pile head.
@@ -237,6 +237,6 @@ type Loads struct {
 // Search sets the depths for capacity with depth and the search for the
 // required length.
 type Search struct {
-	Step   Value `yaml:"step,omitempty" json:"step,omitempty"`
-	MaxTip Value `yaml:"max_tip,omitempty" json:"max_tip,omitempty"`
+	Step   Value `yaml:"step,omitempty" json:"step,omitempty" q:"length,0," doc:"Step of the depth grid for capacity with depth and the required length."`
+	MaxTip Value `yaml:"max_tip,omitempty" json:"max_tip,omitempty" q:"length,0," doc:"Deepest tip considered, below ground level."`
 }

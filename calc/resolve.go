@@ -582,7 +582,10 @@ func (r *resolver) methods(f *File, in *Inputs) {
 	in.Methods = ms
 }
 
-func (r *resolver) factorMap(m map[string]Value, path string) map[string]float64 {
+// factorMap reads resistance factors keyed by method identifier; a key
+// that is not one of ids (or "*", any other method) is an error, so that
+// a misspelt method cannot leave a factor unused.
+func (r *resolver) factorMap(m map[string]Value, path string, ids []string) map[string]float64 {
 	if m == nil {
 		return nil
 	}
@@ -597,6 +600,9 @@ func (r *resolver) factorMap(m map[string]Value, path string) map[string]float64
 		key := k
 		if k == "*" {
 			key = ""
+		} else if !slices.Contains(ids, k) {
+			r.add(path+"."+k, v.Line, "%q is not a method identifier; want one of %s, or * for any other", k, strings.Join(ids, ", "))
+			continue
 		}
 		out[key] = r.num(v, path+"."+k, 0, 1)
 	}
@@ -627,13 +633,13 @@ func (r *resolver) design(f *File, in *Inputs) {
 			r.add("design.preset", 0, "%q: want aashto-driven or aashto-drilled", d.Preset)
 			l = pile.LRFD{Tip: map[string]float64{}, Shaft: map[string]float64{}, Tension: map[string]float64{}}
 		}
-		for k, v := range r.factorMap(d.Tip, "design.tip") {
+		for k, v := range r.factorMap(d.Tip, "design.tip", tipIDs) {
 			l.Tip[k] = v
 		}
-		for k, v := range r.factorMap(d.Shaft, "design.shaft") {
+		for k, v := range r.factorMap(d.Shaft, "design.shaft", shaftIDs) {
 			l.Shaft[k] = v
 		}
-		for k, v := range r.factorMap(d.Uplift, "design.uplift") {
+		for k, v := range r.factorMap(d.Uplift, "design.uplift", shaftIDs) {
 			l.Tension[k] = v
 		}
 		if d.Permanent.IsSet() {

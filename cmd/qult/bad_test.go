@@ -97,6 +97,7 @@ var badCases = []badCase{
 	{file: "69-wall-on-circle", want: []string{"pile.section.wall (line 18)", "does not use wall"}},
 	{file: "70-preset-under-safety-factor", want: []string{"design.preset (line 24)", "does not use preset"}},
 	{file: "71-unknown-preset-with-factors", want: []string{"design.preset", "no-such-code"}},
+	{file: "72-misspelt-factor-key", want: []string{"design.shaft.betta", "not a method identifier"}},
 }
 
 const badTimeout = 5 * time.Second
