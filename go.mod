@@ -8,6 +8,7 @@ require (
 )
 
 require (
+	github.com/santhosh-tekuri/jsonschema/v6 v6.0.2
 	go.yaml.in/yaml/v3 v3.0.6
 	gonum.org/v1/plot v0.17.0
 )

@@ -708,8 +708,24 @@ func (r *resolver) load(l *Load, path string) pile.Action {
 		r.add(path, l.Value.Line, "%q does not say whether the load is permanent or variable; write {permanent: %s} or {variable: %s} (or both parts)", l.Value.Raw, l.Value.Raw, l.Value.Raw)
 		return pile.Action{}
 	}
-	return pile.Action{Permanent: r.force(l.Permanent, path+".permanent"), Variable: r.force(l.Variable, path+".variable")}
+	a := pile.Action{Permanent: r.force(l.Permanent, path+".permanent"), Variable: r.force(l.Variable, path+".variable")}
+	for _, p := range []struct {
+		key string
+		v   Value
+		f   *units.Force
+	}{{"permanent", l.Permanent, &a.Permanent}, {"variable", l.Variable, &a.Variable}} {
+		if f := *p.f; f < 0 || f > maxLoad {
+			r.add(path+"."+p.key, p.v.Line, "%q is outside 0 to %v; a load on one pile is a magnitude in the direction of the check", p.v.Raw, maxLoad)
+			*p.f = 0
+		}
+	}
+	return a
 }
+
+// maxLoad is the largest characteristic load accepted on one pile: 1 GN,
+// some twenty times the largest single drilled shaft or monopile load in
+// practice (common practice); anything larger is a slip of units.
+const maxLoad = 1e6 * units.Kilonewton
 
 func (r *resolver) loads(f *File, in *Inputs) {
 	if f.Loads == nil {

@@ -3,7 +3,11 @@ package calc
 import (
 	"encoding/json"
 	"reflect"
+	"regexp"
+	"strconv"
 	"strings"
+
+	"github.com/qultgeo/qult/units"
 )
 
 // SchemaID is the identifier of the calc file's JSON Schema.
@@ -28,7 +32,7 @@ var enums = map[string][]string{
 // required lists the keys each struct needs.
 var required = map[reflect.Type][]string{
 	reflect.TypeOf(File{}):        {"ground", "pile"},
-	reflect.TypeOf(Ground{}):      {"layers"},
+	reflect.TypeOf(Ground{}):      {"water_depth", "layers"},
 	reflect.TypeOf(Layer{}):       {"drainage"},
 	reflect.TypeOf(Pile{}):        {"section", "length", "installation"},
 	reflect.TypeOf(Section{}):     {"shape"},
@@ -42,6 +46,129 @@ var required = map[reflect.Type][]string{
 var quantity = map[string]any{
 	"type":        []string{"string", "number"},
 	"description": "a number with a unit, such as \"12 m\" or \"18 kN/m3\", or a bare number in the file's unit system",
+}
+
+// kindDims maps the q tag's kinds onto the dimensions whose units a string
+// may carry.
+var kindDims = map[string]units.Dimension{
+	"length": units.DimLength, "length-or-none": units.DimLength, "area": units.DimArea,
+	"stress": units.DimStress, "force": units.DimForce, "unitweight": units.DimUnitWeight,
+	"angle": units.DimAngle,
+}
+
+// numberRE matches a decimal number as package units reads it.
+const numberRE = `[0-9]+(\.[0-9]*)?|\.[0-9]+`
+
+// unitAlternation writes the accepted spellings of a dimension's units as a
+// regular-expression alternation, with the powers in any of the forms
+// units reads (m2, m², m^2) and spaces around a slash.
+func unitAlternation(d units.Dimension) string {
+	var alts []string
+	for _, sym := range units.Symbols(d) {
+		var b strings.Builder
+		for _, r := range sym {
+			switch r {
+			case '2':
+				b.WriteString(`(2|²|\^2)`)
+			case '3':
+				b.WriteString(`(3|³|\^3)`)
+			case '/':
+				b.WriteString(` */ *`)
+			default:
+				b.WriteString(regexp.QuoteMeta(string(r)))
+			}
+		}
+		alts = append(alts, b.String())
+	}
+	return strings.Join(alts, "|")
+}
+
+// fieldSchema returns the schema of one tagged Value field: a number, or a
+// string holding a number with (or without) one of the dimension's units.
+// Bounds go on bare numbers where they do not depend on the unit system
+// (angles are degrees in both, plain numbers have no unit); a lower bound
+// of 0 also forbids a minus sign in the string form.
+func fieldSchema(tag, doc string) map[string]any {
+	parts := strings.Split(tag, ",")
+	kind := parts[0]
+	var lo, hi string
+	if len(parts) == 3 {
+		lo, hi = parts[1], parts[2]
+	}
+	sign := `[-+]?`
+	if lo == "0" {
+		sign = `\+?`
+	}
+	num := map[string]any{"type": "number"}
+	str := map[string]any{"type": "string"}
+	switch kind {
+	case "number", "integer", "fraction", "factormap":
+		str["pattern"] = `^ *` + sign + `(` + numberRE + `)([eE][-+]?[0-9]+)? *$`
+		if kind == "fraction" {
+			str["pattern"] = `^ *\+?(` + numberRE + `)([eE][-+]?[0-9]+)? *%? *$`
+			lo, hi = "0", "10"
+		}
+		if kind == "integer" {
+			num["type"] = "integer"
+			str["pattern"] = `^ *\+?[0-9]+ *$`
+		}
+	default:
+		d, ok := kindDims[kind]
+		if !ok {
+			panic("calc: unknown q tag kind " + kind)
+		}
+		str["pattern"] = `^ *` + sign + `(` + numberRE + `)([eE][-+]?[0-9]+)? *(` + unitAlternation(d) + `)? *$`
+		if kind == "length-or-none" {
+			str["pattern"] = `^ *(none|[-+]?(` + numberRE + `)([eE][-+]?[0-9]+)? *(` + unitAlternation(d) + `)?) *$`
+		}
+		if kind == "angle" && hi != "" {
+			// Degrees bounded as the bare number is; radians only by form.
+			str["pattern"] = `^ *\+?(0*(` + belowRE(int(atof(hi))) + `)(\.[0-9]*)?|0*` + hi + `(\.0*)?|\.[0-9]+) *(deg|°)? *$|^ *\+?(` + numberRE + `) *rad *$`
+		} else {
+			hi = "" // a bare number's unit depends on the file's system
+		}
+	}
+	if lo != "" {
+		num["minimum"] = atof(lo)
+	}
+	if hi != "" {
+		num["maximum"] = atof(hi)
+	}
+	one := map[string]any{"oneOf": []any{num, str}, "description": doc}
+	if kind == "factormap" {
+		return map[string]any{"type": "object", "additionalProperties": map[string]any{"oneOf": []any{num, str}}, "description": doc}
+	}
+	return one
+}
+
+// belowRE returns a regular expression for the whole numbers 0 to n − 1,
+// for n a multiple of 10 from 20 to 990 (the angle limits of the calc
+// file: 50 and 180 degrees).
+func belowRE(n int) string {
+	if n%10 != 0 || n < 20 || n > 990 {
+		panic("calc: belowRE: unsupported limit " + strconv.Itoa(n))
+	}
+	tens := n / 10 // n = tens·10: two-digit numbers up to (tens−1)9
+	if n < 100 {
+		return "[0-9]|[1-" + strconv.Itoa(tens-1) + "][0-9]"
+	}
+	h, t := n/100, (n/10)%10
+	re := "[0-9]|[1-9][0-9]"
+	if h > 1 {
+		re += "|[1-" + strconv.Itoa(h-1) + "][0-9][0-9]"
+	}
+	if t > 0 {
+		re += "|" + strconv.Itoa(h) + "[0-" + strconv.Itoa(t-1) + "][0-9]"
+	}
+	return re
+}
+
+func atof(s string) float64 {
+	x, err := strconv.ParseFloat(s, 64)
+	if err != nil {
+		panic("calc: bad number in a q tag: " + s)
+	}
+	return x
 }
 
 // Schema returns the JSON Schema (draft 2020-12) of the calc file,
@@ -91,11 +218,19 @@ func schemaOf(t reflect.Type, key string) map[string]any {
 func object(t reflect.Type) map[string]any {
 	props := map[string]any{}
 	for i := 0; i < t.NumField(); i++ {
-		name := strings.Split(t.Field(i).Tag.Get("yaml"), ",")[0]
+		f := t.Field(i)
+		name := strings.Split(f.Tag.Get("yaml"), ",")[0]
 		if name == "" || name == "-" {
 			continue
 		}
-		props[name] = schemaOf(t.Field(i).Type, name)
+		if q := f.Tag.Get("q"); q != "" {
+			props[name] = fieldSchema(q, f.Tag.Get("doc"))
+			continue
+		}
+		props[name] = schemaOf(f.Type, name)
+		if d := f.Tag.Get("doc"); d != "" {
+			props[name].(map[string]any)["description"] = d
+		}
 	}
 	m := map[string]any{"type": "object", "properties": props, "additionalProperties": false}
 	if r, ok := required[t]; ok {

@@ -6,9 +6,10 @@ import (
 	"flag"
 	"os"
 	"path/filepath"
-	"strconv"
+	"strings"
 	"testing"
 
+	"github.com/santhosh-tekuri/jsonschema/v6"
 	"go.yaml.in/yaml/v3"
 )
 
@@ -50,132 +51,113 @@ func TestSchema(t *testing.T) {
 	}
 }
 
-// validate checks doc against the subset of JSON Schema that Schema
-// writes (type, properties, additionalProperties, required, enum, items,
-// oneOf), returning the first violation.
-func validate(s map[string]any, doc any, path string) string {
-	if one, ok := s["oneOf"].([]any); ok {
-		n := 0
-		for _, o := range one {
-			if validate(o.(map[string]any), doc, path) == "" {
-				n++
-			}
-		}
-		if n != 1 {
-			return path + ": matches " + strconv.Itoa(n) + " of oneOf"
-		}
-		return ""
-	}
-	if e, ok := s["enum"].([]any); ok {
-		found := false
-		for _, v := range e {
-			if v == doc {
-				found = true
-			}
-		}
-		if !found {
-			return path + ": not in enum"
-		}
-	}
-	typeOK := func(t string) bool {
-		switch t {
-		case "object":
-			_, ok := doc.(map[string]any)
-			return ok
-		case "array":
-			_, ok := doc.([]any)
-			return ok
-		case "string":
-			_, ok := doc.(string)
-			return ok
-		case "number":
-			switch doc.(type) {
-			case float64, int:
-				return true
-			}
-		case "integer":
-			_, ok := doc.(int)
-			return ok
-		case "boolean":
-			_, ok := doc.(bool)
-			return ok
-		}
-		return false
-	}
-	switch t := s["type"].(type) {
-	case string:
-		if !typeOK(t) {
-			return path + ": not " + t
-		}
-	case []any:
-		ok := false
-		for _, x := range t {
-			ok = ok || typeOK(x.(string))
-		}
-		if !ok {
-			return path + ": wrong type"
-		}
-	}
-	if m, ok := doc.(map[string]any); ok {
-		props, _ := s["properties"].(map[string]any)
-		for _, r := range asSlice(s["required"]) {
-			if _, ok := m[r.(string)]; !ok {
-				return path + ": lacks " + r.(string)
-			}
-		}
-		for k, v := range m {
-			if ps, ok := props[k]; ok {
-				if msg := validate(ps.(map[string]any), v, path+"."+k); msg != "" {
-					return msg
-				}
-			} else if ap, ok := s["additionalProperties"].(map[string]any); ok {
-				if msg := validate(ap, v, path+"."+k); msg != "" {
-					return msg
-				}
-			} else if s["additionalProperties"] == false {
-				return path + ": unknown key " + k
-			}
-		}
-	}
-	if a, ok := doc.([]any); ok {
-		for i, v := range a {
-			if msg := validate(s["items"].(map[string]any), v, path+"["+strconv.Itoa(i)+"]"); msg != "" {
-				return msg
-			}
-		}
-	}
-	return ""
-}
-
-func asSlice(v any) []any {
-	s, _ := v.([]any)
-	return s
-}
-
-// TestSchemaAcceptsExamples: every shipped calc file validates against the
-// schema, and a file with an unknown key does not.
-func TestSchemaAcceptsExamples(t *testing.T) {
-	raw, _ := Schema()
-	var s map[string]any
-	if err := json.Unmarshal(raw, &s); err != nil {
+// compileSchema compiles the generated schema with an independent
+// validator (github.com/santhosh-tekuri/jsonschema/v6, draft 2020-12).
+func compileSchema(t *testing.T) *jsonschema.Schema {
+	t.Helper()
+	raw, err := Schema()
+	if err != nil {
 		t.Fatal(err)
 	}
+	doc, err := jsonschema.UnmarshalJSON(bytes.NewReader(raw))
+	if err != nil {
+		t.Fatal(err)
+	}
+	c := jsonschema.NewCompiler()
+	if err := c.AddResource(SchemaID, doc); err != nil {
+		t.Fatal(err)
+	}
+	sch, err := c.Compile(SchemaID)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return sch
+}
+
+// instance reads a calc file (YAML or JSON) into the values a JSON
+// validator sees.
+func instance(t *testing.T, src []byte) any {
+	t.Helper()
+	var doc any
+	if err := yaml.Unmarshal(src, &doc); err != nil {
+		t.Fatal(err)
+	}
+	js, err := json.Marshal(doc)
+	if err != nil {
+		t.Fatal(err)
+	}
+	v, err := jsonschema.UnmarshalJSON(bytes.NewReader(js))
+	if err != nil {
+		t.Fatal(err)
+	}
+	return v
+}
+
+// TestSchemaAcceptsExamples: every shipped calc file, and the README's
+// shortened one, validates against the schema in an independent validator.
+func TestSchemaAcceptsExamples(t *testing.T) {
+	sch := compileSchema(t)
 	files, _ := filepath.Glob("../examples/*.yaml")
 	if len(files) == 0 {
 		t.Fatal("no examples")
 	}
 	for _, f := range files {
-		var doc any
-		if err := yaml.Unmarshal(mustRead(t, f), &doc); err != nil {
-			t.Fatal(err)
-		}
-		if msg := validate(s, doc, "$"); msg != "" {
-			t.Errorf("%s: %s", f, msg)
+		if err := sch.Validate(instance(t, mustRead(t, f))); err != nil {
+			t.Errorf("%s: %v", f, err)
 		}
 	}
-	var bad any
-	_ = yaml.Unmarshal([]byte(base+"colour: red\n"), &bad)
-	if validate(s, bad, "$") == "" {
-		t.Error("unknown key accepted by the schema")
+	if err := sch.Validate(instance(t, []byte(base))); err != nil {
+		t.Errorf("base file: %v", err)
+	}
+}
+
+// TestSchemaRefuses: files with a wrong dimension, a value out of range, an
+// unknown method or key, or a missing required key fail in the independent
+// validator, as they fail in the decoder.
+func TestSchemaRefuses(t *testing.T) {
+	sch := compileSchema(t)
+	cases := []struct{ name, from, to string }{
+		{"thickness in kPa", "thickness: 30 m", "thickness: 12 kPa"},
+		{"thickness negative", "thickness: 30 m", "thickness: -3 m"},
+		{"thickness a word", "thickness: 30 m", "thickness: thirty"},
+		{"phi 70 bare", "friction_angle: 34 deg", "friction_angle: 70"},
+		{"phi 70 deg", "friction_angle: 34 deg", "friction_angle: 70 deg"},
+		{"phi 50.5°", "friction_angle: 34 deg", "friction_angle: 50.5°"},
+		{"phi in kPa", "friction_angle: 34 deg", "friction_angle: 34 kPa"},
+		{"unit weight as length", "unit_weight: 18 kN/m3", "unit_weight: 18 m"},
+		{"diameter as force", "diameter: 0.6 m", "diameter: 600 kN"},
+		{"no water depth", "  water_depth: 2 m\n", ""},
+		{"water depth a word", "water_depth: 2 m", "water_depth: dry"},
+		{"no layers", "  layers:\n", "  strata:\n"},
+		{"unknown drainage", "drainage: drained", "drainage: partly"},
+		{"unknown shape", "shape: circle", "shape: hexagon"},
+		{"unknown installation", "installation: driven-high", "installation: hammered"},
+		{"no installation", "  installation: driven-high\n", ""},
+		{"no length", "  length: 15 m\n", ""},
+		{"unknown key", "title: t", "title: t\ncolour: red"},
+		{"unknown layer key", "drainage: drained", "drainage: drained\n      frictionangle: 30"},
+		{"unknown units", "units: SI", "units: imperial"},
+		{"load bare", "pile:", "loads: {compression: 800 kN}\npile:"},
+		{"load negative", "pile:", "loads: {compression: {permanent: -800 kN}}\npile:"},
+		{"load as stress", "pile:", "loads: {compression: {permanent: 800 kPa}}\npile:"},
+		{"void ratio over 20", "drainage: drained", "drainage: drained\n      void_ratio: 25"},
+		{"unknown basis", "pile:", "design: {basis: lucky-guess}\npile:"},
+		{"no basis", "pile:", "design: {factor: 2.5}\npile:"},
+		{"factor over 1", "pile:", "design: {basis: lrfd, shaft: {beta: 1.5}}\npile:"},
+		{"profiles fractional", "pile:", "design: {basis: en1997, approach: DA1, profiles: 2.5}\npile:"},
+		{"unknown approach", "pile:", "design: {basis: en1997, approach: DA4}\npile:"},
+		{"unknown self weight", "pile:", "methods: {self_weight: heavy}\npile:"},
+	}
+	for _, c := range cases {
+		src := strings.Replace(base, c.from, c.to, 1)
+		if src == base {
+			t.Fatalf("%s: base file changed: %q not found", c.name, c.from)
+		}
+		if err := sch.Validate(instance(t, []byte(src))); err == nil {
+			t.Errorf("%s: accepted by the schema", c.name)
+		}
+		if _, err := Parse([]byte(src)); err == nil {
+			t.Errorf("%s: accepted by the decoder", c.name)
+		}
 	}
 }

@@ -402,3 +402,16 @@ func Article(d Dimension) string {
 	}
 	return "a " + n
 }
+
+// Symbols returns every spelling of the units of dimension d that Parse
+// accepts, in the order of Accepted (powers written as 2 and 3; Parse also
+// reads ², ³, ^2 and ^3, and spaces around a slash).
+func Symbols(d Dimension) []string {
+	var out []string
+	for _, u := range unitTable {
+		if u.dim == d {
+			out = append(out, u.sym)
+		}
+	}
+	return out
+}

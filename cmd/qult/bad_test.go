@@ -98,6 +98,7 @@ var badCases = []badCase{
 	{file: "70-preset-under-safety-factor", want: []string{"design.preset (line 24)", "does not use preset"}},
 	{file: "71-unknown-preset-with-factors", want: []string{"design.preset", "no-such-code"}},
 	{file: "72-misspelt-factor-key", want: []string{"design.shaft.betta", "not a method identifier"}},
+	{file: "73-huge-load", want: []string{"loads.compression.permanent (line 25)", "outside 0 to 1000000 kN"}},
 }
 
 const badTimeout = 5 * time.Second
