@@ -3,6 +3,7 @@ package shaft
 import (
 	"strconv"
 
+	"github.com/qultgeo/qult/cite"
 	"github.com/qultgeo/qult/units"
 )
 
@@ -138,6 +139,8 @@ func (s Surface) DeltaOverPhi() (Range, error) {
 // and steel; they are kept as the defaults, and these values serve as the
 // read check on them. Timber is taken parallel to the grain, the direction
 // of shaft friction (Potyondy's perpendicular value is 0.88).
+//
+// PotyondyRef gives the source to cite beside these values.
 func (s Surface) Potyondy() (float64, error) {
 	switch s {
 	case RoughConcrete:
@@ -152,6 +155,11 @@ func (s Surface) Potyondy() (float64, error) {
 		return 0.76, nil
 	}
 	return 0, &ChoiceError{Field: "surface", Value: s.String(), Accepted: surfaceIDs[1:]}
+}
+
+// PotyondyRef returns the source of Surface.Potyondy.
+func PotyondyRef() cite.Ref {
+	return cite.Ref{Source: cite.Potyondy1961, Where: "δ/φ′ from shear box tests, dense dry sand"}
 }
 
 // SandClass is a soil class of API RP 2GEO (2011) for shaft friction of

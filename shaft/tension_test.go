@@ -191,6 +191,9 @@ func TestPotyondy(t *testing.T) {
 			t.Errorf("%v: Potyondy's %g outside Kulhawy's %g-%g", c.s, v, r.Lo, r.Hi)
 		}
 	}
+	if PotyondyRef().Source.Key != "potyondy1961" {
+		t.Error("Potyondy values cite another source")
+	}
 	if _, err := Surface(0).Potyondy(); err == nil {
 		t.Error("unknown surface accepted")
 	}
