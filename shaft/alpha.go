@@ -146,10 +146,16 @@ func (m AlphaChart) Unit(p Point) (Result, error) {
 //	fs = α·su
 //
 // Above su/pa = 2.5 the soil is treated as cohesive intermediate geomaterial
-// by those sources and this method returns an error. The exclusion of the
-// top 1.5 m and of the bottom diameter of the shaft is left to the caller.
-// It reads su (above 0, at most 5 MPa) and pa (0 for 100 kPa, else 80 to
-// 120 kPa).
+// by those sources and this method returns an error. It reads su (above 0,
+// at most 5 MPa) and pa (0 for 100 kPa, else 80 to 120 kPa).
+//
+// The same sources count parts of a straight shaft in cohesive soil as
+// giving no side resistance with this α; NoSide returns them (the top
+// 1.5 m and the bottom one diameter) for the caller to leave out.
+//
+// FHWA GEC 10 of 2018 (Brown et al., FHWA-NHI-18-024) was not read, so
+// whether its α for cohesive soil differs from this form is not known here;
+// no 2018 form is offered.
 type AlphaDrilled struct{}
 
 func (AlphaDrilled) ID() string { return "alpha-drilled" }
@@ -158,8 +164,8 @@ func (AlphaDrilled) Equation() string {
 }
 func (AlphaDrilled) Valid() string { return "0 < su/pa ≤ 2.5" }
 func (AlphaDrilled) Refs() []cite.Ref {
-	return []cite.Ref{{Source: cite.ONeillReese1999, Where: "α for drilled shafts in cohesive soil"},
-		{Source: cite.Brown2010, Where: "ch. 13, side resistance in cohesive soil"}}
+	return []cite.Ref{{Source: cite.ONeillReese1999, Where: "α for drilled shafts in cohesive soil; zones without side resistance"},
+		{Source: cite.Brown2010, Where: "ch. 13, side resistance in cohesive soil; zones without side resistance"}}
 }
 func (m AlphaDrilled) Unit(p Point) (Result, error) {
 	id := m.ID()
@@ -179,6 +185,51 @@ func (m AlphaDrilled) Unit(p Point) (Result, error) {
 	}
 	fs := units.Stress(a) * p.Su
 	return Result{Fs: fs, Unlimited: fs, Alpha: a, Psi: r}, nil
+}
+
+// NoSideZones are the parts of a straight drilled shaft in cohesive soil
+// that give no side resistance by the α of O'Neill & Reese (1999) and
+// FHWA GEC 10 (Brown et al. 2010): a length Top below the top of the
+// shaft's embedded length, and BottomDiameters shaft diameters above its
+// base.
+type NoSideZones struct {
+	Top             units.Length // 1.5 m (5 ft in the US form)
+	BottomDiameters float64      // 1
+}
+
+// NoSide returns the zones without side resistance that the sources of
+// AlphaDrilled prescribe for a straight (not belled) shaft in cohesive
+// soil: the top 1.5 m (5 ft) and the bottom one diameter, as recalled from
+// O'Neill & Reese (1999) and GEC 10 (2010), not read (see the package doc).
+// A belled shaft loses more (the bell's periphery and one diameter above
+// it); that is not covered here.
+func (AlphaDrilled) NoSide() NoSideZones {
+	return NoSideZones{Top: 1.5 * units.Metre, BottomDiameters: 1}
+}
+
+// Span returns the part of a shaft that may carry side resistance: from
+// top + Top down to base − BottomDiameters·d, where top is the depth of the
+// top of the shaft's embedded length (the ground surface or, if deeper,
+// the shaft head) and base the depth of its base. ok is false, and from
+// and to are zero, when the zones cover the whole shaft. Inputs are
+// depths in metres below ground, 0 to 300 m, with top < base, and
+// 0 < d ≤ 10 m.
+func (z NoSideZones) Span(top, base, d units.Length) (from, to units.Length, ok bool, err error) {
+	const id = "alpha-drilled"
+	if err := checkDepth(id, top); err != nil {
+		return 0, 0, false, err
+	}
+	if err := check(id, "base", base.Metres(), top.Metres(), maxDepth, "m", true); err != nil {
+		return 0, 0, false, err
+	}
+	if err := check(id, "diameter", d.Metres(), 0, maxDiam, "m", true); err != nil {
+		return 0, 0, false, err
+	}
+	from, to = top+z.Top, base-units.Length(z.BottomDiameters)*d
+	if !(from < to) {
+		return 0, 0, false, nil
+	}
+	return from, to, true, nil
 }
 
 // AlphaGiven is the α method with α given, 0 to 1.5:

@@ -11,6 +11,17 @@ import (
 var benchPoint = Point{SigmaV: 120 * kPa, Depth: 12 * units.Metre, Phi: d(33), OCR: 2,
 	Su: 60 * kPa, Diameter: 600 * units.Millimetre, N60: 12}
 
+// benchPieces and benchTension are invented inputs for timing (no
+// published source needed): two clay pieces under a sand layer, and a
+// concrete pile 30 diameters long.
+var (
+	benchPieces = [...]LambdaPiece{
+		{Thickness: 8 * units.Metre, SigmaTop: 90 * kPa, SigmaBottom: 160 * kPa, SuTop: 40 * kPa, SuBottom: 55 * kPa},
+		{Thickness: 12 * units.Metre, SigmaTop: 160 * kPa, SigmaBottom: 270 * kPa, SuTop: 60 * kPa, SuBottom: 90 * kPa},
+	}
+	benchTension = TensionInput{Slenderness: 30, PilePoisson: 0.2, ShearModulusRatio: 0.002, Delta: d(30)}
+)
+
 func benchMethods() []Unit {
 	kb, _ := KOverK0For(DrivenHighDisplacement)
 	dr, _ := DeltaOverPhiFor(RoughSteel)
@@ -60,6 +71,22 @@ func BenchmarkUnitShaft(b *testing.B) {
 			}
 		}
 	})
+	b.Run("lambda-layered", func(b *testing.B) {
+		b.ReportAllocs()
+		for b.Loop() {
+			if _, err := (Lambda{}).Layered(30*units.Metre, benchPieces[:]); err != nil {
+				b.Fatal(err)
+			}
+		}
+	})
+	b.Run("tension-poisson", func(b *testing.B) {
+		b.ReportAllocs()
+		for b.Loop() {
+			if _, err := (TensionPoisson{}).Tension(benchTension); err != nil {
+				b.Fatal(err)
+			}
+		}
+	})
 	b.Run("critical-depth", func(b *testing.B) {
 		b.ReportAllocs()
 		for b.Loop() {
@@ -92,5 +119,30 @@ func TestNoAllocs(t *testing.T) {
 	})
 	if n != 0 {
 		t.Errorf("lambda: %v allocations per call", n)
+	}
+	others := []struct {
+		name string
+		f    func() error
+	}{
+		{"lambda-layered", func() error { _, err := (Lambda{}).Layered(30*units.Metre, benchPieces[:]); return err }},
+		{"lambda-given", func() error {
+			_, err := (LambdaGiven{Lambda: 0.2}).Average(24*units.Metre, 110*kPa, 55*kPa)
+			return err
+		}},
+		{"tension-poisson", func() error { _, err := (TensionPoisson{}).Tension(benchTension); return err }},
+		{"no-side", func() error {
+			_, _, _, err := (AlphaDrilled{}).NoSide().Span(0, 12*units.Metre, units.Metre)
+			return err
+		}},
+	}
+	for _, o := range others {
+		n := testing.AllocsPerRun(100, func() {
+			if err := o.f(); err != nil {
+				t.Fatal(err)
+			}
+		})
+		if n != 0 {
+			t.Errorf("%s: %v allocations per call", o.name, n)
+		}
 	}
 }

@@ -31,10 +31,21 @@
 //	alpha-chart        AlphaChart     α from the α–su/pa table (Das after Terzaghi, Peck & Mesri)
 //	alpha-drilled      AlphaDrilled   α = 0.55 … (O'Neill & Reese 1999, GEC 10)
 //	alpha-given        AlphaGiven     fs = α·su
-//	lambda             Lambda         fav = λ·(σ̄′v + 2·s̄u) over a whole length (Vijayvergiya & Focht 1972)
+//	lambda             Lambda         fav = λ·(σ̄′v + 2·s̄u) ≤ s̄u over a whole length (Vijayvergiya & Focht 1972)
+//	lambda-given       LambdaGiven    the same with λ given
 //	limit-given        LimitGiven     fs ≤ fL given
 //	limit-api          LimitAPI       fs ≤ fL by API RP 2GEO sand class
 //	critical-depth     CriticalDepth  σ′v held below zc = n·D
+//	tension-poisson    TensionPoisson Qt/Qc = [1 − 0.2·log10(100/(L/D))]·(1 − 8η + 25η²) (De Nicola & Randolph 1993)
+//	tension-given      TensionGiven   Qt/Qc given
+//
+// LambdaMeans forms the λ method's σ̄′v and s̄u from layer pieces as Das
+// does (areas of the σ′v diagram and su-weighted thicknesses over their
+// total thickness), and Lambda.Layered gives fav and the friction per unit
+// perimeter for the clay pieces of an embedded length. AlphaDrilled.NoSide
+// gives the zones of a drilled shaft in cohesive soil without side
+// resistance (top 1.5 m, bottom one diameter), and Surface.Potyondy the
+// measured δ/φ′ behind Kulhawy's ranges.
 //
 // Capped puts a Limit on any Unit method; CriticalDepth.Depth and Hold let a
 // caller hold σ′v below the critical depth, which, with the shaft split at
@@ -60,6 +71,19 @@
 //     refuses su/pa above 2.5 (intermediate geomaterial in its sources).
 //   - lambda interpolates its table linearly and refuses L above 90 m unless
 //     Extrapolate is set.
+//   - lambda and lambda-given hold fav ≤ s̄u (α ≤ 1) by default; the sources
+//     print no limit for λ, and this one is the bound API RP 2GEO puts on
+//     its α. NoCap turns it off, and every result then carries
+//     LambdaCapOff. In clay under sand the pieces passed to Layered are the
+//     clay's; λ is that of the whole embedded length.
+//   - tension-poisson is for drained (cohesionless) layers; undrained shaft
+//     resistance takes no reduction in tension. With Gav/Ep not known it
+//     takes η = 0, the ratio's upper bound, and sets NoCompressibility. It
+//     accepts 5 ≤ L/D ≤ 100 and η ≤ 0.16 (the minimum of 1 − 8η + 25η²).
+//   - The drilled-shaft zones without side resistance are measured from the
+//     top of the shaft's embedded length and up from its base; belled
+//     shafts are not covered. GEC 10 of 2018 was not read, so no 2018 form
+//     of the drilled-shaft α is offered.
 //   - The API β method (beta-api) includes its class limit; a limit can be
 //     put on any other method with Capped.
 //   - Input ranges not set by a source are generous physical bounds of our
@@ -83,5 +107,14 @@
 // an open textbook (Fundamentals of Foundation Engineering, CAUL, Fig.
 // 6.41); the API α is applied, branch for branch and with its cap, in a
 // published course exercise worked to API RP 2A (see package pile's tests);
-// the drilled-shaft β form and its bounds are from memory.
+// the drilled-shaft β form and its bounds are from memory. Also recalled:
+// the form of De Nicola & Randolph's (1993) tension ratio (the paper's
+// abstract, read, gives its cause and variables), and the drilled-shaft
+// zones without side resistance (top 1.5 m, bottom one diameter). Read:
+// Das's averaging for the λ method in layered soil (σ̄′v from the areas of
+// the σ′v diagram over L, s̄u = Σ su,i·Li/L, in a reproduction of the
+// section), and Potyondy's (1961) measured δ/φ′ (smooth steel 0.54, rusted
+// steel 0.76, smooth concrete 0.80, rough concrete 0.98, timber 0.76), in a
+// textbook's reproduction of his table; they lie in Kulhawy's recalled
+// ranges for concrete and steel.
 package shaft

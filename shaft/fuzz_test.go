@@ -63,8 +63,29 @@ func FuzzUnitShaft(f *testing.F) {
 			}
 		}
 		lr, err := Lambda{Extrapolate: q > 0}.Average(units.Length(z), units.Stress(sv)*kPa, units.Stress(su)*kPa)
-		if err == nil && (!finite(float64(lr.Fav), lr.Lambda) || lr.Fav < 0) {
+		if err == nil && (!finite(float64(lr.Fav), float64(lr.Unlimited), lr.Lambda, lr.Alpha) || lr.Fav < 0 || lr.Fav > lr.Su) {
 			t.Fatalf("lambda: %+v", lr)
+		}
+		lg, err := LambdaGiven{Lambda: q, NoCap: ocr > 1}.Average(units.Length(z), units.Stress(sv)*kPa, units.Stress(su)*kPa)
+		if err == nil && (!finite(float64(lg.Fav), lg.Alpha) || lg.Fav < 0 || (lg.Flags&LambdaCapOff == 0 && lg.Fav > lg.Su)) {
+			t.Fatalf("lambda given: %+v", lg)
+		}
+		pieces := [2]LambdaPiece{
+			{Thickness: units.Length(dia), SigmaTop: units.Stress(pa) * kPa, SigmaBottom: units.Stress(sv) * kPa, SuTop: units.Stress(n60) * kPa, SuBottom: units.Stress(su) * kPa},
+			{Thickness: units.Length(q), SigmaTop: units.Stress(sv) * kPa, SigmaBottom: units.Stress(sv) * kPa, SuTop: units.Stress(su) * kPa, SuBottom: units.Stress(su) * kPa},
+		}
+		ly, err := Lambda{Extrapolate: true}.Layered(units.Length(z), pieces[:])
+		if err == nil && (!finite(float64(ly.Fav), float64(ly.Integral), float64(ly.SigmaV), float64(ly.Su)) || ly.Fav < 0 || ly.Fav > ly.Su ||
+			ly.Pieces > units.Length(z)*(1+1e-12)) {
+			t.Fatalf("lambda layered: %+v", ly)
+		}
+		tr, err := TensionPoisson{}.Tension(TensionInput{Slenderness: z, PilePoisson: ocr, ShearModulusRatio: q, Delta: units.Angle(phi) * units.Degree})
+		if err == nil && (!finite(tr.Ratio, tr.Eta) || tr.Ratio <= 0 || tr.Ratio > 1) {
+			t.Fatalf("tension: %+v", tr)
+		}
+		if from, to, ok, err := (AlphaDrilled{}).NoSide().Span(units.Length(z), units.Length(sv), units.Length(dia)); err == nil &&
+			(!finite(float64(from), float64(to)) || (ok && !(from < to))) {
+			t.Fatalf("no-side span: %v %v %v", from, to, ok)
 		}
 		zc, err := CriticalDepth{Ratio: q}.Depth(units.Length(dia))
 		if err == nil && (!finite(float64(zc)) || zc < 0) {

@@ -3,6 +3,7 @@ package shaft
 import (
 	"strconv"
 
+	"github.com/qultgeo/qult/cite"
 	"github.com/qultgeo/qult/units"
 )
 
@@ -122,6 +123,43 @@ func (s Surface) DeltaOverPhi() (Range, error) {
 		return Range{0.8, 0.9}, nil
 	}
 	return Range{}, &ChoiceError{Field: "surface", Value: s.String(), Accepted: surfaceIDs[1:]}
+}
+
+// Potyondy returns the ratio δ/φ′ that Potyondy (1961) measured in shear
+// box tests of dense dry sand against each surface, as reproduced in a
+// textbook table (read; see the tests):
+//
+//	rough concrete (cast against soil)   0.98
+//	smooth concrete (formed)             0.80
+//	rough steel (rusted)                 0.76
+//	smooth steel                         0.54
+//	timber (parallel to the grain)       0.76
+//
+// Kulhawy's ranges (DeltaOverPhi) bracket these measurements for concrete
+// and steel; they are kept as the defaults, and these values serve as the
+// read check on them. Timber is taken parallel to the grain, the direction
+// of shaft friction (Potyondy's perpendicular value is 0.88).
+//
+// PotyondyRef gives the source to cite beside these values.
+func (s Surface) Potyondy() (float64, error) {
+	switch s {
+	case RoughConcrete:
+		return 0.98, nil
+	case SmoothConcrete:
+		return 0.80, nil
+	case RoughSteel:
+		return 0.76, nil
+	case SmoothSteel:
+		return 0.54, nil
+	case Timber:
+		return 0.76, nil
+	}
+	return 0, &ChoiceError{Field: "surface", Value: s.String(), Accepted: surfaceIDs[1:]}
+}
+
+// PotyondyRef returns the source of Surface.Potyondy.
+func PotyondyRef() cite.Ref {
+	return cite.Ref{Source: cite.Potyondy1961, Where: "δ/φ′ from shear box tests, dense dry sand"}
 }
 
 // SandClass is a soil class of API RP 2GEO (2011) for shaft friction of

@@ -98,9 +98,19 @@ const (
 	// ChartEdge: the input lay beyond a digitised chart and the caller opted
 	// in to holding the chart's last value.
 	ChartEdge
+	// LambdaCapped: the λ method's limit fav ≤ s̄u (α ≤ 1) replaced
+	// λ·(σ̄′v + 2·s̄u).
+	LambdaCapped
+	// LambdaCapOff: the λ method's limit fav ≤ s̄u was switched off, so fav
+	// may exceed s̄u.
+	LambdaCapOff
+	// NoCompressibility: a tension/compression ratio was taken without the
+	// pile compressibility term (η = 0), its upper bound.
+	NoCompressibility
 )
 
-var flagNames = [...]string{"limit governs", "critical depth governs", "bound applied", "beyond chart, end value held"}
+var flagNames = [...]string{"limit governs", "critical depth governs", "bound applied", "beyond chart, end value held",
+	"λ limit fav ≤ s̄u governs", "λ limit fav ≤ s̄u switched off", "tension ratio without pile compressibility"}
 
 // String lists the set flags, joined by ", ", or "none".
 func (f Flags) String() string {

@@ -287,8 +287,12 @@ func TestLambda(t *testing.T) {
 		if math.Abs(r.Lambda-c.lambda) > LambdaChartTolerance {
 			t.Errorf("L = %g m: λ = %.4f, want %.3f ± %.3f", c.l, r.Lambda, c.lambda, LambdaChartTolerance)
 		}
-		if rel(r.Fav.KPa(), 170*r.Lambda) > 1e-12 {
-			t.Errorf("L = %g m: fav = %g kPa, want 170·λ", c.l, r.Fav.KPa())
+		if rel(r.Unlimited.KPa(), 170*r.Lambda) > 1e-12 {
+			t.Errorf("L = %g m: λ·(σ̄′v + 2·s̄u) = %g kPa, want 170·λ", c.l, r.Unlimited.KPa())
+		}
+		// The limit fav ≤ s̄u = 40 kPa governs where 170·λ > 40 (L = 10 m).
+		if want := math.Min(170*r.Lambda, 40); rel(r.Fav.KPa(), want) > 1e-12 || (r.Flags&LambdaCapped != 0) != (170*r.Lambda > 40) {
+			t.Errorf("L = %g m: fav = %g kPa, flags %v; want %g kPa", c.l, r.Fav.KPa(), r.Flags, want)
 		}
 	}
 	// Near L = 0 the table starts at 0.500 (from memory).
@@ -420,7 +424,8 @@ func allMethods() []Method {
 	return []Method{KGiven{K: 1}, KJaky{}, KMayneKulhawy{}, KOverK0{Ratio: 1}, KOverKp{Ratio: 0.5},
 		DeltaGiven{}, DeltaOverPhi{Ratio: 1}, Beta{K: KJaky{}, Delta: DeltaOverPhi{Ratio: 1}}, BetaGiven{},
 		Burland{}, DrilledSand{}, DrilledSandK0{}, APIBeta{Class: DenseSand}, AlphaAPI{}, AlphaChart{}, AlphaDrilled{}, AlphaGiven{},
-		Lambda{}, LimitGiven{Fs: kPa}, LimitAPI{Class: DenseSand}, CriticalDepth{Ratio: 10},
+		Lambda{}, LambdaGiven{Lambda: 0.2}, LimitGiven{Fs: kPa}, LimitAPI{Class: DenseSand}, CriticalDepth{Ratio: 10},
+		TensionPoisson{}, TensionGiven{Ratio: 0.7},
 		Capped{Method: AlphaAPI{}, Limit: LimitGiven{Fs: kPa}}}
 }
 
