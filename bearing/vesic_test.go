@@ -14,8 +14,10 @@ import (
 // 16-2 (see reference_test.go):
 //
 //   - A Thai-language foundation engineering textbook published as a
-//     flipbook (online.flipbuilder.com/tctx/gxzn, printed page 191, Eqs.
-//     5.13 to 5.16), a worked example of Vesic's method that follows Das's
+//     flipbook (online.flipbuilder.com/tctx/gxzn; author and title are not
+//     on the pages read; its figures cite Das 2011, Principles of
+//     Foundation Engineering, 7th ed.), printed page 191, Eqs. 5.13 to
+//     5.16, a worked example of Vesic's method that follows Das's
 //     presentation (read): φ′ = 42 deg, q′ = 17.5 × 12 = 210 kPa,
 //     K0 = 1 − sin 42° = 0.331, σ′o = 116.34 kPa, μs = 0.1 + 0.3·(φ′ −
 //     25)/20 = 0.355, Es = 600·pa = 60,000 kPa, Ir = Es/[2(1 + μs)·q′·tanφ′]
