@@ -59,7 +59,10 @@ type Input struct {
 	Delta float64
 
 	L units.Length // embedded length of the pile, for Berezantzev's L/D
-	D units.Length // pile diameter or width at the tip, for L/D
+	// D is the pile diameter or width at the tip: for Berezantzev's L/D,
+	// and the base diameter B of the large-base reduction (LargeBase,
+	// BoredSand); for a belled shaft give the diameter of the bell.
+	D units.Length
 
 	N60 float64 // SPT blow count corrected to 60 % energy, for drilled shafts in sand
 
