@@ -51,16 +51,26 @@ type Input struct {
 	Ir float64
 	// G is the shear modulus of the soil, used when Ir is 0.
 	G units.Stress
-	// Delta is the average volumetric strain Δ in the plastic zone (Vesic);
-	// 0 means an incompressible soil, Irr = Ir.
+	// Delta is the average volumetric strain Δ in the plastic zone
+	// (Vesic). 0 means "not given": the drained Vesic methods then take Δ
+	// from Vesic's correlation with φ′ and q′/pa (see VesicDelta) unless
+	// the method is set to ignore volume change; the undrained method
+	// takes Δ = 0 (no volume change at constant volume).
 	Delta float64
 
 	L units.Length // embedded length of the pile, for Berezantzev's L/D
-	D units.Length // pile diameter or width at the tip, for L/D
+	// D is the pile diameter or width at the tip: for Berezantzev's L/D,
+	// and the base diameter B of the large-base reduction (LargeBase,
+	// BoredSand); for a belled shaft give the diameter of the bell.
+	D units.Length
 
 	N60 float64 // SPT blow count corrected to 60 % energy, for drilled shafts in sand
 
-	// Pa is atmospheric pressure for Meyerhof's limit; 0 means DefaultPa.
+	// Pa is the atmospheric pressure used to make stresses dimensionless:
+	// in Meyerhof's limit 0.5·pa·Nq*·tanφ′, in the bored-pile rules built
+	// on it, and in Vesic's Δ correlation (q′/pa). 0 means DefaultPa
+	// (100 kPa); any value from 50 to 150 kPa is accepted, so a US file may
+	// pass 2000 psf (95.76 kPa) or 2116 psf (101.3 kPa) as it chooses.
 	Pa units.Stress
 
 	// Clamp asks chart methods to read a φ′ or L/D outside the chart at
@@ -80,13 +90,29 @@ type Input struct {
 type Result struct {
 	Nq    float64      // factor on Sigma: Nq, Nq*, Nσ* or, for SPT methods, 0
 	Nc    float64      // factor on c′ (drained) or su (undrained); 0 if unused
-	Irr   float64      // reduced rigidity index (Vesic methods); 0 otherwise
 	Sigma units.Stress // stress Nq multiplies: q′, or σ′o for Vesic
 	C     units.Stress // strength Nc multiplies: c′ or su
 
+	// Vesic's rigidity, as used (Vesic methods; zero otherwise):
+	// Irr = Ir/(1 + Ir·Delta), with Delta obtained as DeltaBy says.
+	Ir      float64
+	Delta   float64
+	DeltaBy DeltaBasis
+	Irr     float64
+
+	// Reduction is the factor an installation or size rule applied to the
+	// tip resistance after the limit: 1/3 for bored piles by BoredPhi,
+	// 1.27 m/B for a large base by LargeBase, or their product. 0 means no
+	// such rule applied (a factor of 1).
+	Reduction float64
+	// Rule is the identifier of the rule a composite method chose (such as
+	// "shaft-n60-sand" or "bored-phi" under BoredSand); "" otherwise.
+	Rule string
+
 	Unlimited units.Stress // unit tip resistance before any limit
 	Limit     units.Stress // the method's limit; 0 means none
-	Qp        units.Stress // unit tip resistance after the limit
+	Cap       units.Stress // a cap on Qp after any Reduction (bored-pile rules); 0 means none
+	Qp        units.Stress // unit tip resistance after the limit, any Reduction and the Cap
 	Flags     Flags        // warnings
 }
 
@@ -102,9 +128,21 @@ const (
 	// LimitGoverns: the limiting tip resistance is less than the
 	// unlimited value, so Qp is the limit.
 	LimitGoverns
+	// VolumeChangeIgnored: a drained Vesic tip used Irr = Ir (Δ = 0)
+	// because the method was set to ignore volume change; the
+	// correlation would have given a lower tip resistance.
+	VolumeChangeIgnored
+	// ReductionOff: a rule that lowers the tip resistance (the bored-pile
+	// cap or the large-base reduction) was switched off by the caller
+	// where it would have applied.
+	ReductionOff
+	// CapGoverns: the bored-pile cap is less than the reduced value, so Qp
+	// is the cap.
+	CapGoverns
 )
 
-var flagNames = [...]string{"clamped to chart edge", "limit governs"}
+var flagNames = [...]string{"clamped to chart edge", "limit governs",
+	"volume change in the plastic zone ignored (Irr = Ir)", "a reducing rule was switched off", "cap governs"}
 
 // String returns the warnings joined by "; ", or "" when there are none.
 func (f Flags) String() string {

@@ -27,6 +27,17 @@ import (
 // yet checked against the printed table or against the chart reproduced
 // by Tomlinson & Woodward (2008). Reading tolerance: ±10 % until checked.
 //
+// Scope. This is Berezantzev's bearing factor applied to the effective
+// overburden at the tip, qp = Nq·q′, the way Tomlinson & Woodward (2008)
+// use Berezantzev's Nq (as recalled). It is not the design-resistance
+// formula of SNiP 2.02.03-85 for bored piles in sand, which (as recalled,
+// not read) reads R = 0.75·α4·(α1·γ′·d + α2·α3·γ·h) with a term in the
+// base width d and a factor α4 below 1 that depends on d; neither that
+// term nor the factors 0.75 and α4 are applied here, so this method is
+// not a SNiP design resistance and is not to be compared with one. The
+// full published form will be implemented when its table can be read in a
+// citable source.
+//
 // Reads Phi, Q, L and D. A φ′ outside 23 to 39 deg or an L/D below 4 is
 // an error unless Clamp is set, when the chart is read at its edge and
 // the result is flagged Clamped. No limit is applied.

@@ -74,3 +74,40 @@ func ExampleCompare() {
 	// api-sand-4      factor   50.00  qp   6000 kPa
 	// shaft-n60-sand  factor    0.00  qp   1609 kPa
 }
+
+// Vesic's method with the volume change of the sand taken from the
+// correlation (the reviewer's choice); the result says which Ir, Δ and Irr
+// were used. Values of our own.
+func ExampleVesic_Tip_correlated() {
+	in := bearing.Input{Phi: 34 * units.Degree, Q: 180 * units.Kilopascal, Ir: 120}
+	r, err := bearing.Vesic{Volume: bearing.VolumeCorrelated}.Tip(in)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Printf("Ir = %.0f, Δ = %.5f (%s), Irr = %.1f, Nσ* = %.1f, qp = %.0f kPa\n",
+		r.Ir, r.Delta, r.DeltaBy, r.Irr, r.Nq, r.Qp.KPa())
+	// Output:
+	// Ir = 120, Δ = 0.00495 (Vesic's correlation with φ′ and q′/pa), Irr = 75.3, Nσ* = 66.4, qp = 7493 kPa
+}
+
+// The default tip of a bored pile in sand: the SPT rule when N60 is known,
+// otherwise one third of the driven value under the drilled-shaft cap,
+// with the large-base reduction. A 1.8 m bored pile of our own.
+func ExampleBoredSand_Tip() {
+	in := bearing.Input{Phi: 38 * units.Degree, Q: 240 * units.Kilopascal, D: 1.8}
+	for _, n60 := range []float64{0, 35} {
+		in.N60 = n60
+		r, err := bearing.BoredSand{}.Tip(in)
+		if err != nil {
+			fmt.Println(err)
+			return
+		}
+		fmt.Printf("%-14s qp = %4.0f kPa, reduction %.3f (%s)\n", r.Rule, r.Qp.KPa(), r.Reduction, r.Flags)
+	}
+	fmt.Println(bearing.SettlementBasis(bearing.ShaftSand{}))
+	// Output:
+	// bored-phi      qp = 2027 kPa, reduction 0.235 (limit governs; cap governs)
+	// shaft-n60-sand qp = 1419 kPa, reduction 0.706 ()
+	// unit base resistance at a base settlement of 5 % of the base diameter
+}

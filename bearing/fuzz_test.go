@@ -26,7 +26,9 @@ func FuzzTip(f *testing.F) {
 			Clamp: clamp,
 		}
 		methods := append(append(Drained(), Undrained()...),
-			Janbu{Eta: deg(eta)}, APISand{Class: class}, GivenNq{Nq: nq, Nc: nc, Limit: units.Stress(su) * units.Kilopascal}, GivenNc{Nc: nc})
+			Janbu{Eta: deg(eta)}, APISand{Class: class}, GivenNq{Nq: nq, Nc: nc, Limit: units.Stress(su) * units.Kilopascal}, GivenNc{Nc: nc},
+			Vesic{Volume: VolumeCorrelated}, VesicGiven{Nsigma: nq, Nc: nc}, BoredPhi{}, BoredPhi{NoCap: clamp},
+			BoredSand{}, BoredSand{NoCap: clamp, NoLargeBase: !clamp}, LargeBase{Of: ShaftSand{}, Off: clamp}, LargeBase{})
 		for _, m := range methods {
 			r, err := m.Tip(in)
 			if err != nil {
@@ -35,13 +37,14 @@ func FuzzTip(f *testing.F) {
 				}
 				continue
 			}
-			for _, v := range []float64{r.Nq, r.Nc, r.Irr, float64(r.Sigma), float64(r.C), float64(r.Unlimited), float64(r.Limit), float64(r.Qp)} {
+			for _, v := range []float64{r.Nq, r.Nc, r.Ir, r.Delta, r.Irr, r.Reduction, float64(r.Sigma), float64(r.C),
+				float64(r.Unlimited), float64(r.Limit), float64(r.Cap), float64(r.Qp)} {
 				if math.IsNaN(v) || math.IsInf(v, 0) || v < 0 {
 					t.Fatalf("%s: bad result %+v for %+v", m.ID(), r, in)
 				}
 			}
-			if r.Qp > r.Unlimited {
-				t.Fatalf("%s: qp %v above unlimited %v", m.ID(), r.Qp, r.Unlimited)
+			if r.Qp > r.Unlimited || (r.Cap > 0 && r.Qp > r.Cap) || r.Reduction > 1 || r.Irr > r.Ir {
+				t.Fatalf("%s: qp %v above unlimited %v or cap %v, or reduction %g above 1, or Irr %g above Ir %g", m.ID(), r.Qp, r.Unlimited, r.Cap, r.Reduction, r.Irr, r.Ir)
 			}
 		}
 		for _, row := range Compare(in) {

@@ -70,10 +70,20 @@ func (a APISand) Tip(in Input) (Result, error) {
 // O'Neill & Reese (1999) as carried into FHWA GEC 10 (Brown et al. 2010),
 // identifier "shaft-n60-sand":
 //
-//	qp = 0.6·N60 tsf ≤ 30 tsf     (= 57.5·N60 kPa ≤ 2.87 MPa; 1.2·N60 ksf ≤ 60 ksf)
+//	qp = 0.6·N60 tsf ≤ 30 tsf     (= 57.46·N60 kPa ≤ 2.873 MPa; 1.2·N60 ksf ≤ 60 ksf)
 //
-// so the limit governs above N60 = 50. Reads N60 (0 to 200). No reduction
-// for base diameters above 1.27 m is applied here; the caller applies it.
+// so the limit governs above N60 = 50. The rule is written in tons per
+// square foot (1 tsf = 2000 psf = 95.76 kPa, exact from NIST SP 811's psf)
+// as published; it does not use pa. Settlement basis: the unit base
+// resistance at a base settlement of 5 % of the base diameter, as
+// O'Neill & Reese and GEC 10 define the nominal base resistance of a
+// drilled shaft (SettlementBasis5Percent). The coefficient 0.6, the cap
+// and the 5 % definition are from memory, not yet read in either manual.
+//
+// Reads N60 (above 0 to 200): a zero N60 means the blow count was not
+// given and is an error naming n60. No reduction for base diameters
+// above 1.27 m is applied here; wrap the method in LargeBase (as
+// BoredSand does) to apply it.
 type ShaftSand struct{}
 
 // ID returns "shaft-n60-sand".
@@ -86,20 +96,27 @@ func (ShaftSand) Equation() string {
 
 // Refs returns O'Neill & Reese (1999) and GEC 10.
 func (ShaftSand) Refs() []cite.Ref {
-	return []cite.Ref{{Source: cite.ONeillReese1999, Where: "tip resistance in cohesionless soil"},
-		{Source: cite.Brown2010, Where: "tip resistance in cohesionless soil"}}
+	return []cite.Ref{{Source: cite.ONeillReese1999, Where: "base resistance in cohesionless soil"},
+		{Source: cite.Brown2010, Where: "base resistance in cohesionless soil"}}
 }
 
 // Range returns the inputs ShaftSand accepts.
+// (N60 = 0 means "not given" and is refused.)
 func (ShaftSand) Range() string { return "N60 0 to 200 (limit governs above 50)" }
+
+// SettlementBasis returns the settlement at which the rule's qp is defined.
+func (ShaftSand) SettlementBasis() string { return SettlementBasis5Percent }
 
 // Tip returns the unit tip resistance from N60.
 func (s ShaftSand) Tip(in Input) (Result, error) {
-	if !finite(in.N60) || in.N60 < 0 || in.N60 > 200 {
-		return Result{}, rangeErr(s.ID(), "n60", in.N60, 0, 200, "blows/0.3 m", "0 to 200")
+	if !finite(in.N60) || in.N60 <= 0 || in.N60 > 200 {
+		return Result{}, rangeErr(s.ID(), "n60", in.N60, 0, 200, "blows/0.3 m", "above 0 to 200 blows/0.3 m (give the SPT N60 at the base)")
 	}
-	return finish(Result{Limit: 30 * units.TSF, Unlimited: units.Stress(0.6 * in.N60 * float64(units.TSF))}), nil
+	return finish(Result{Limit: shaftSandCap, Unlimited: units.Stress(0.6 * in.N60 * float64(units.TSF))}), nil
 }
+
+// shaftSandCap is the 30 tsf cap of ShaftSand.
+const shaftSandCap = 30 * units.TSF
 
 // Skempton is the undrained tip with Skempton's (1951) Nc = 9 for a deep
 // circular or square base, identifier "nc9":

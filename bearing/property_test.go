@@ -119,14 +119,16 @@ func TestPropLimitHolds(t *testing.T) {
 		in := Input{
 			Phi: deg(rapid.Float64Range(20, 45).Draw(t, "phi")),
 			Q:   units.Stress(rapid.Float64Range(0, 2e6).Draw(t, "q")),
-			N60: rapid.Float64Range(0, 200).Draw(t, "n60"),
+			N60: rapid.Float64Range(1e-3, 200).Draw(t, "n60"), // 0 means not given
+			D:   units.Length(rapid.Float64Range(0.1, 5).Draw(t, "d")),
 		}
-		for _, m := range []Tip{Meyerhof{}, APISand{Class: 1}, APISand{Class: 4}, ShaftSand{}} {
+		for _, m := range []Tip{Meyerhof{}, APISand{Class: 1}, APISand{Class: 4}, ShaftSand{}, BoredPhi{}, BoredSand{}, LargeBase{Of: ShaftSand{}}} {
 			r, err := m.Tip(in)
 			if err != nil {
 				t.Fatal(err)
 			}
-			if r.Qp > r.Unlimited || (r.Flags&LimitGoverns != 0 && math.Abs(float64(r.Qp-r.Limit)) > 1e-9*float64(r.Limit)) {
+			if r.Qp > r.Unlimited || (r.Flags&LimitGoverns != 0 && r.Reduction == 0 && math.Abs(float64(r.Qp-r.Limit)) > 1e-9*float64(r.Limit)) ||
+				(r.Cap > 0 && r.Qp > r.Cap) {
 				t.Fatalf("%s: %+v", m.ID(), r)
 			}
 		}

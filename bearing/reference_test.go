@@ -471,7 +471,7 @@ func TestRangeErrorMessage(t *testing.T) {
 
 func TestIdentifiersUnique(t *testing.T) {
 	seen := map[string]bool{}
-	all := append(append(Drained(), Undrained()...), GivenNq{}, GivenNc{})
+	all := append(append(Drained(), Undrained()...), GivenNq{}, GivenNc{}, VesicGiven{}, BoredPhi{}, BoredSand{}, LargeBase{Of: Meyerhof{}})
 	for _, m := range all {
 		if seen[m.ID()] {
 			t.Errorf("identifier %q used twice", m.ID())
@@ -515,6 +515,14 @@ func TestBadInputNamesField(t *testing.T) {
 		{GivenNq{Nq: 20, Nc: -1}, Input{Q: kPa}, "nc"},
 		{GivenNq{Nq: 20, Limit: -1}, Input{Q: kPa}, "limit"},
 		{GivenNc{Nc: 200}, Input{Su: kPa}, "nc"},
+		{VesicGiven{Nsigma: 0.5}, Input{Q: kPa}, "nsigma"},
+		{VesicGiven{Nsigma: 50, Nc: -2}, Input{Q: kPa}, "nc"},
+		{VesicGiven{Nsigma: 50}, Input{Q: kPa, K0: 7}, "k0"},
+		{Vesic{Volume: VolumeCorrelated}, Input{Phi: deg(30), Q: kPa, Ir: 50, Pa: 10 * kPa}, "pa"},
+		{Vesic{Volume: VolumeCorrelated}, Input{Phi: deg(48), Q: kPa, Ir: 50}, "phi"},
+		{BoredPhi{}, Input{Phi: deg(30), Q: -kPa}, "q"},
+		{BoredSand{}, Input{Phi: deg(30), Q: kPa, D: -1}, "d"},
+		{BoredSand{}, Input{N60: 500, D: 1}, "n60"},
 	}
 	for _, c := range cases {
 		_, err := c.m.Tip(c.in)
