@@ -163,6 +163,13 @@ func TestCutLayersAndLines(t *testing.T) {
 	if i, err := p.LayerAt(1 * m); err != nil || i != 0 {
 		t.Errorf("LayerAt(1 m) = %d, %v; want 0", i, err)
 	}
+	// Scour cites HEC-18; an excavation alone cites nothing.
+	if r := p.Refs(); len(r) != 1 || r[0].Source.Key != "fhwa-hec18-2001" {
+		t.Errorf("Refs with scour = %v", r)
+	}
+	if e, err := New(Spec{ExcavationDepth: 1 * m, Layers: []LayerSpec{sand(3 * m)}}); err != nil || e.Refs() != nil {
+		t.Errorf("excavation only: Refs %v, %v; want none", e.Refs(), err)
+	}
 	// Without a cut: zero lines, nothing removed.
 	q, _ := New(Spec{Layers: []LayerSpec{sand(3 * m)}})
 	if q.GroundLines() != (GroundLines{}) || q.Layer(0).Removed != 0 {

@@ -28,9 +28,12 @@
 // before leaves: general scour (long-term degradation and contraction
 // scour, across the bed) below the excavation floor, local scour (at the
 // pier or abutment) below the general scour line, as bridge hydraulics
-// separates total scour (Richardson & Davis 2001, FHWA HEC-18, 4th ed.,
-// ch. 2, as summarised in FHWA-RD-03-052, ch. 2; Arneson et al. 2012,
-// HEC-18, 5th ed.). The soil above zd is removed for everything: it
+// separates total scour: long-term degradation, contraction (general) and
+// local scour, which develop independently and add (FHWA HEC-18,
+// Richardson & Davis, ch. 2, as summarised in FHWA-RD-03-052, 2005, ch. 2;
+// an early edition's step 3, "evaluate the scour analysis method"). The
+// current edition is Arneson et al. (2012), FHWA-HIF-12-003. The soil
+// above zd is removed for everything: it
 // carries no shaft resistance and holds no tip, and its weight leaves the
 // stresses below. FHWA's circular on laterally loaded deep foundations
 // (GEC 9, text beside its Fig. 6-14) takes the whole depth of the scour

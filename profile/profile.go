@@ -7,6 +7,7 @@ import (
 	"slices"
 	"strings"
 
+	"github.com/qultgeo/qult/cite"
 	"github.com/qultgeo/qult/phase"
 	"github.com/qultgeo/qult/units"
 )
@@ -598,6 +599,16 @@ func (p *Profile) DesignGround() units.Length { return units.Length(p.design) }
 // which every depth is measured: always zero. It is there so that code
 // drawing both lines reads plainly.
 func (p *Profile) OriginalGround() units.Length { return 0 }
+
+// Refs returns the sources of the design ground line: with scour given,
+// FHWA HEC-18 for its division of total scour into components that add;
+// nil otherwise (an excavation is plain mechanics).
+func (p *Profile) Refs() []cite.Ref {
+	if p.design <= p.excavation {
+		return nil
+	}
+	return []cite.Ref{{Source: cite.Richardson2001, Where: "ch. 2, total scour"}}
+}
 
 // GroundLines returns the depths of the original ground, the excavation
 // floor, the general scour line and the design ground line.
