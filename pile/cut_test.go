@@ -81,3 +81,43 @@ func TestDesignGroundLine(t *testing.T) {
 		t.Errorf("tip on the design ground line: err = %v", err)
 	}
 }
+
+// TestDesignGroundShaftShifted: with the default methods, the shaft
+// resistance of a pile in a scoured profile equals that of the same pile in
+// the profile built from the design ground line down (layers shifted up,
+// the river deeper by the scour), the pile's head on that line. Invented
+// soils; the check is the identity, not a published value.
+func TestDesignGroundShaftShifted(t *testing.T) {
+	layers := func(top units.Length) []profile.LayerSpec {
+		return []profile.LayerSpec{
+			{Name: "soft clay", Thickness: 6*m - top, Drainage: profile.Undrained, SuTop: 15 * kPa, SuBottom: 30 * kPa, SaturatedUnitWeight: 17 * kNm},
+			{Name: "dense sand", Thickness: 20 * m, Drainage: profile.Drained, Phi: 36 * units.Degree, SaturatedUnitWeight: 20 * kNm},
+		}
+	}
+	scoured, err := profile.New(profile.Spec{WaterDepth: -5 * m, Scour: profile.Scour{General: 1 * m, Local: 1.5 * m}, Layers: layers(0)})
+	if err != nil {
+		t.Fatal(err)
+	}
+	ls := layers(2.5 * m)
+	// su at the new top: 15 + 15·2.5/6.
+	ls[0].SuTop = units.Stress(15+15*2.5/6) * kPa
+	shifted, err := profile.New(profile.Spec{WaterDepth: -7.5 * m, Layers: ls})
+	if err != nil {
+		t.Fatal(err)
+	}
+	sec := Section{Shape: ClosedPipe, Diameter: 0.6 * m, Wall: 12 * mm}
+	a, err := NewAnalysis(scoured, Pile{Section: sec, Length: 18 * m, Installation: DrivenHigh}, DefaultMethods(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	b, err := NewAnalysis(shifted, Pile{Section: sec, Length: 15.5 * m, Installation: DrivenHigh}, DefaultMethods(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	ca, err1 := a.Capacity()
+	cb, err2 := b.Capacity()
+	if err1 != nil || err2 != nil {
+		t.Fatal(err1, err2)
+	}
+	near(t, "shaft, scoured vs shifted", ca.Shaft.KN(), cb.Shaft.KN(), 1e-6)
+}
