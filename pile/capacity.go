@@ -317,6 +317,12 @@ func (a *Analysis) tipAt(z float64, out *tipResult, detail *tipDetail, hint int)
 	if !(z >= 0 && z <= float64(a.prof.Depth())) {
 		return fmt.Errorf("pile: tip depth %.4g m is outside the profile (0 to %v)", z, a.prof.Depth())
 	}
+	if z <= float64(a.prof.DesignGround()) {
+		// No soil at or above the design ground line: no tip (a tip
+		// there only occurs in capacity with depth).
+		*out = tipResult{f: 1}
+		return nil
+	}
 	ivk := &a.iv[a.tipInterval(z, hint)]
 	li := ivk.layer
 	lp := &a.plans[li]

@@ -99,7 +99,9 @@ func (a *Analysis) buildIntervals() error {
 		if a.zc > 0 && top >= a.zc {
 			iv.s0, iv.ds, iv.held = a.svc, 0, true
 		}
-		iv.noShaft = a.inZone((top + bot) / 2)
+		// No shaft in a zone, nor above the design ground line (excavation
+		// and scour), which the profile makes a split.
+		iv.noShaft = a.inZone((top+bot)/2) || (top+bot)/2 < float64(a.prof.DesignGround())
 		a.iv = append(a.iv, iv)
 	}
 	return nil

@@ -137,7 +137,9 @@ type LayerMethods struct {
 }
 
 // Zone is a depth range along the pile that carries no shaft friction: a
-// length below the head, a scour or disturbed zone, a casing.
+// length below the head, a disturbed zone, a casing. A zone keeps the
+// soil's weight in σ′v below it; for scour or an excavation, which remove
+// it, give profile.Spec's Scour and ExcavationDepth instead.
 type Zone struct {
 	Top, Bottom units.Length // depths below ground, Top < Bottom
 }
@@ -285,6 +287,9 @@ func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analy
 	}
 	if p.Tip() > prof.Depth() {
 		return nil, fmt.Errorf("pile.length: tip at %v is below the bottom of the ground profile at %v; extend the profile or shorten the pile", p.Tip(), prof.Depth())
+	}
+	if zd := prof.DesignGround(); p.Tip() <= zd {
+		return nil, fmt.Errorf("pile.length: tip at %v is not below the design ground line at %v (excavation and scour); lengthen the pile", p.Tip(), zd)
 	}
 	a := &Analysis{prof: prof, pile: p, methods: m}
 	if opt != nil && opt.Case != nil {

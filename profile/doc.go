@@ -9,12 +9,73 @@
 // their gradients. A stress query is then a binary search and one
 // multiply-add: O(log n), no allocation.
 //
-// Depths z are measured down from the ground surface (z = 0) to the
-// profile's bottom, Depth(). Stresses are vertical:
+// Depths z are measured down from the original ground surface (z = 0) to
+// the profile's bottom, Depth(). Stresses are vertical:
 //
 //	σv(z) = q + γw·hw + Σ γi·Δzi       (q surcharge, hw free water above ground)
 //	u(z)  = γw·(z − zw)  for z > zw   (hydrostatic, water table at zw)
 //	σ′v   = σv − u
+//
+// # Excavation and scour
+//
+// Spec.ExcavationDepth and Spec.Scour cut the ground down to the design
+// ground line, at depth
+//
+//	zd = excavation + general scour + local scour
+//
+// below the original surface (DesignGround; GroundLines gives each line
+// for drawing). The components add, each measured from the line the one
+// before leaves: general scour (long-term degradation and contraction
+// scour, across the bed) below the excavation floor, local scour (at the
+// pier or abutment) below the general scour line, as bridge hydraulics
+// separates total scour: long-term degradation, contraction (general) and
+// local scour, which develop independently and add (FHWA HEC-18,
+// Richardson & Davis, ch. 2, as summarised in FHWA-RD-03-052, 2005, ch. 2;
+// an early edition's step 3, "evaluate the scour analysis method"). The
+// current edition is Arneson et al. (2012), FHWA-HIF-12-003. The soil
+// above zd is removed for everything: it
+// carries no shaft resistance and holds no tip, and its weight leaves the
+// stresses below. FHWA's circular on laterally loaded deep foundations
+// (GEC 9, text beside its Fig. 6-14) takes the whole depth of the scour
+// zone as removed and refers axial design to Hannigan et al. (2016), FHWA
+// GEC 12, and Brown et al. (2010), GEC 10; an agency manual (TxDOT
+// Geotechnical Manual, "Driven Piles and Scour") sizes piles for the
+// nominal resistance after the design scour, the skin friction of the
+// scoured soil being lost. For local scour, whose hole is narrow, some
+// overburden may remain beside the pile; it is removed in full here, the
+// conservative reading (common practice; a partial reduction is not
+// offered). So, with depths still from the original surface:
+//
+//	σv(z) = γw·max(0, zd − zw) + Σ γi·Δzi   (soil from zd down to z), z ≥ zd
+//	σv(z) = u(z) = γw·max(0, z − zw),  σ′v = 0,                        z < zd
+//
+// which is the profile one would build from the design ground line down,
+// with the water level where it is. Choices:
+//
+//   - Layer depths, the water depth, pore-pressure points, pile head and
+//     tip depths all keep their meaning: depths from the original surface.
+//   - A layer cut through keeps its Top and Bottom (and its index); only
+//     its part below zd weighs, and Layer.Removed says how much was cut.
+//     A layer wholly above zd stays in Layers for the record and the
+//     drawing, with Removed = Thickness(); it needs no unit weight.
+//   - Strength parameters are not changed by the cut. Unloading raises the
+//     OCR of what remains; leaving it as logged errs on the low side for
+//     K0 = (1 − sinφ′)·OCR^sinφ′. Review su and OCR for a deep cut.
+//   - Water above the design ground line: the water table (WaterDepth)
+//     stays where it is. Where it lies above zd, the excavation or scour
+//     hole is full of water up to it, which adds to σv and u alike; where
+//     it lies below zd, the cut is dry. Model a dewatered excavation with a
+//     water table at or below its floor, or with pore-pressure points.
+//   - Pore-pressure points must lie at or below zd (an error names the
+//     point otherwise): they describe the ground that remains. Above zd u
+//     is that of free water. At zd u may then jump from the free water's
+//     value to the first point's rule, as at any break.
+//   - A surcharge with a cut is an error: a load on the original surface
+//     goes with the soil removed, and keeping it would overstate σ′v.
+//   - The depths of the cut must leave soil: each of excavation_depth,
+//     scour.general and scour.local is in [0, 10 km], and the line each
+//     reaches must lie above the bottom of the profile; the error names
+//     the field and its range there.
 //
 // Choices made where the brief was silent:
 //
@@ -65,6 +126,9 @@
 //     that catch unit slips and keep every stress finite.
 //   - Negative effective stress anywhere in the profile is an error naming
 //     the depth.
+//   - Queries between 0 and Depth() are answered above the design ground
+//     line too (σ′v = 0 there), so that a pile whose head is above it can
+//     walk its whole length; LayerAt still names the layer that was there.
 //   - Validation reports every problem it finds, joined with errors.Join,
 //     each naming its field path, such as
 //     "layers[2].thickness: -1 m is outside (0, ∞)".

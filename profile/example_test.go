@@ -76,3 +76,43 @@ func TestExampleByHand(t *testing.T) {
 		t.Errorf("base: σv %.6f σ′v %.6f; by hand %.6f, %.6f (closed form)", s.Total.KPa(), s.Effective.KPa(), sigma, sigma-u)
 	}
 }
+
+// A river pier (a scenario of our own): 4 m of water over 3 m of loose
+// sand and 17 m of clay; the design scour is 1 m general and 2.5 m local.
+// The soil above the design ground line leaves σ′v below it. The printed
+// stresses were worked by hand: σv = 9.81·(4 + 3.5) + 18·6.5 = 190.575,
+// u = 9.81·14 = 137.34, σ′v = 8.19·6.5 = 53.235 kPa; without scour
+// σ′v = 9.19·3 + 8.19·7 = 84.9 kPa.
+func ExampleSpec_scour() {
+	spec := profile.Spec{
+		WaterDepth: -4 * m, // standing water above the original bed
+		Layers: []profile.LayerSpec{
+			{Name: "loose sand", Thickness: 3 * m, Drainage: profile.Drained, Phi: 30 * units.Degree,
+				SaturatedUnitWeight: 19 * kNm3},
+			{Name: "clay", Thickness: 17 * m, Drainage: profile.Undrained, Su: 40 * kPa,
+				SaturatedUnitWeight: 18 * kNm3},
+		},
+	}
+	before, _ := profile.New(spec)
+	spec.Scour = profile.Scour{General: 1 * m, Local: 2.5 * m}
+	after, err := profile.New(spec)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	g := after.GroundLines()
+	fmt.Printf("original ground 0 m, general scour line %.1f m, design ground line %.1f m\n",
+		g.GeneralScour.Metres(), g.Design.Metres())
+	for _, l := range after.Layers() {
+		fmt.Printf("%-10s removed %.1f of %.1f m\n", l.Name, l.Removed.Metres(), l.Thickness().Metres())
+	}
+	s, _ := after.StressesAt(10 * m)
+	s0, _ := before.StressesAt(10 * m)
+	fmt.Printf("at 10 m: σv %.1f kPa, u %.1f kPa, σ′v %.1f kPa (%.1f kPa without scour)\n",
+		s.Total.KPa(), s.Pore.KPa(), s.Effective.KPa(), s0.Effective.KPa())
+	// Output:
+	// original ground 0 m, general scour line 1.0 m, design ground line 3.5 m
+	// loose sand removed 3.0 of 3.0 m
+	// clay       removed 0.5 of 17.0 m
+	// at 10 m: σv 190.6 kPa, u 137.3 kPa, σ′v 53.2 kPa (84.9 kPa without scour)
+}

@@ -8,16 +8,21 @@ import (
 )
 
 // FuzzProfile builds two-layer profiles from arbitrary numbers (seeds are
-// invented) and queries them: New and the queries must never panic, and a
-// query without error must return finite stresses. Source of the seeds: our
-// own invention.
+// invented), with or without an excavation and scour, and queries them:
+// New and the queries must never panic, a query without error must return
+// finite stresses, and σ′v must be zero above the design ground line.
+// Source of the seeds: our own invention.
 func FuzzProfile(f *testing.F) {
-	f.Add(3.0, 5.0, 18.0, 20.0, 19.0, 2.0, 10.0, 4.0, 30.0, 6.5, 0.6, 0.3, 2.7, false)
-	f.Add(1.0, 1.0, 0.0, 0.0, 0.0, -3.0, 0.0, 0.0, 0.0, 2.0, 0.7, 0.0, 0.0, true)
-	f.Add(2.0, -1.0, 18.0, 9.0, 25.0, 0.0, -4.0, 1.0, -9.81, 0.0, 0.0, 0.45, 2.65, false)
-	f.Add(math.NaN(), 2.0, math.Inf(1), 20.0, 19.0, 1.0, 0.0, 1.5, 500.0, 1.0, 0.5, 0.2, 2.7, false)
-	f.Fuzz(func(t *testing.T, t1, t2, g1, gs1, gs2, wd, q, pz, pu, z, e, w, gs float64, noWater bool) {
+	f.Add(3.0, 5.0, 18.0, 20.0, 19.0, 2.0, 10.0, 4.0, 30.0, 6.5, 0.6, 0.3, 2.7, false, 0.0, 0.0, 0.0)
+	f.Add(1.0, 1.0, 0.0, 0.0, 0.0, -3.0, 0.0, 0.0, 0.0, 2.0, 0.7, 0.0, 0.0, true, 0.0, 0.0, 0.0)
+	f.Add(2.0, -1.0, 18.0, 9.0, 25.0, 0.0, -4.0, 1.0, -9.81, 0.0, 0.0, 0.45, 2.65, false, 0.0, 0.0, 0.0)
+	f.Add(math.NaN(), 2.0, math.Inf(1), 20.0, 19.0, 1.0, 0.0, 1.5, 500.0, 1.0, 0.5, 0.2, 2.7, false, 0.0, 0.0, 0.0)
+	f.Add(3.0, 5.0, 18.0, 20.0, 19.0, -2.0, 0.0, 0.0, 0.0, 1.0, 0.6, 0.3, 2.7, false, 0.5, 1.0, 1.5)
+	f.Add(3.0, 5.0, 18.0, 20.0, 19.0, 4.0, 0.0, 5.0, 20.0, 2.5, 0.6, 0.3, 2.7, false, 2.0, 0.0, 0.0)
+	f.Add(3.0, 5.0, 18.0, 20.0, 19.0, 1.0, 0.0, 0.0, 0.0, 2.5, 0.6, 0.3, 2.7, false, 3.0, 4.0, math.NaN())
+	f.Fuzz(func(t *testing.T, t1, t2, g1, gs1, gs2, wd, q, pz, pu, z, e, w, gs float64, noWater bool, exc, gen, loc float64) {
 		spec := Spec{
+			ExcavationDepth: units.Length(exc), Scour: Scour{General: units.Length(gen), Local: units.Length(loc)},
 			WaterDepth: units.Length(wd), NoWater: noWater, Surcharge: units.Stress(q * 1e3),
 			Layers: []LayerSpec{
 				{Thickness: units.Length(t1), Drainage: Drained, Phi: 30 * units.Degree,
@@ -48,6 +53,9 @@ func FuzzProfile(f *testing.F) {
 			}
 			if s.Effective < -1e-6*max(1, s.Total) {
 				t.Fatalf("z %v: negative effective stress %+v accepted", zz, s)
+			}
+			if zz < p.DesignGround() && s.Effective != 0 {
+				t.Fatalf("z %v: σ′v %v above the design ground line at %v", zz, s.Effective, p.DesignGround())
 			}
 			if _, err := p.LayerAt(zz); err != nil {
 				t.Fatalf("LayerAt(%v): %v for a depth StressesAt accepted", zz, err)

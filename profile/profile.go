@@ -7,6 +7,7 @@ import (
 	"slices"
 	"strings"
 
+	"github.com/qultgeo/qult/cite"
 	"github.com/qultgeo/qult/phase"
 	"github.com/qultgeo/qult/units"
 )
@@ -57,6 +58,9 @@ type Profile struct {
 	waterDepth float64
 	noWater    bool
 	surcharge  float64
+	// the ground lines: excavation floor, general scour line, design
+	// ground line (depths below the original surface)
+	excavation, general, design float64
 }
 
 // Stresses holds the three vertical stresses at one depth.
@@ -105,6 +109,7 @@ func New(spec Spec) (*Profile, error) {
 	if !finite(p.surcharge) || p.surcharge < 0 || p.surcharge > float64(maxStress) {
 		c.add("surcharge", "%s is outside [0, %s]", spec.Surcharge, maxStress)
 	}
+	cutOK := p.checkCutFields(spec, &c)
 	for i, pt := range spec.PorePressures {
 		path := fmt.Sprintf("pore_pressures[%d]", i)
 		if !finite(float64(pt.Depth)) || pt.Depth < 0 {
@@ -122,6 +127,14 @@ func New(spec Spec) (*Profile, error) {
 	}
 	p.layers = make([]Layer, len(spec.Layers))
 	geometryOK := p.resolveGeometry(spec.Layers, &c)
+	if geometryOK && cutOK {
+		cutOK = p.placeCut(spec, &c)
+	}
+	if !cutOK {
+		// Which weights are needed is then unknown below the cut: ask as
+		// if nothing were removed.
+		p.excavation, p.general, p.design = 0, 0, 0
+	}
 	for i := range spec.Layers {
 		p.resolveLayer(i, spec.Layers[i], geometryOK, &c)
 	}
@@ -138,6 +151,61 @@ func New(spec Spec) (*Profile, error) {
 		return nil, err
 	}
 	return p, nil
+}
+
+// checkCutFields checks the excavation and scour depths on their own, and
+// what may not be given with a cut; it reports false when a depth is
+// unusable.
+func (p *Profile) checkCutFields(spec Spec, c *collector) bool {
+	ok := true
+	for _, f := range []struct {
+		path string
+		v    units.Length
+	}{{"excavation_depth", spec.ExcavationDepth}, {"scour.general", spec.Scour.General}, {"scour.local", spec.Scour.Local}} {
+		if !finite(float64(f.v)) || f.v < 0 || f.v > maxDepth {
+			c.add(f.path, "%s is outside [0, %s]", f.v, maxDepth)
+			ok = false
+		}
+	}
+	if !ok {
+		return false
+	}
+	cut := spec.ExcavationDepth + spec.Scour.General + spec.Scour.Local
+	if cut > 0 && spec.Surcharge != 0 {
+		c.add("surcharge", "%s is given with the ground cut down to %s by excavation or scour; a surcharge on the original surface goes with the soil removed: give 0", spec.Surcharge, cut)
+	}
+	for i, pt := range spec.PorePressures {
+		if cut > 0 && pt.Depth < cut {
+			c.add(fmt.Sprintf("pore_pressures[%d].depth", i), "%s is above the design ground line at %s; give the pore pressures of the ground that remains, at or below it", pt.Depth, cut)
+		}
+	}
+	return true
+}
+
+// placeCut sets the ground lines once the profile's depth is known; each
+// must leave soil below it. It reports false when one does not.
+func (p *Profile) placeCut(spec Spec, c *collector) bool {
+	depth := float64(p.layers[len(p.layers)-1].Bottom)
+	e := float64(spec.ExcavationDepth)
+	g := e + float64(spec.Scour.General)
+	d := g + float64(spec.Scour.Local)
+	bottom := units.Length(depth)
+	switch {
+	case e >= depth:
+		c.add("excavation_depth", "%s is outside [0, %s): the excavation floor must lie above the bottom of the profile at %s",
+			spec.ExcavationDepth, bottom, bottom)
+		return false
+	case g >= depth:
+		c.add("scour.general", "%s is outside [0, %s): below the excavation floor at %s, the general scour line must lie above the bottom of the profile at %s",
+			spec.Scour.General, units.Length(depth-e), units.Length(e), bottom)
+		return false
+	case d >= depth:
+		c.add("scour.local", "%s is outside [0, %s): below the general scour line at %s, the design ground line must lie above the bottom of the profile at %s",
+			spec.Scour.Local, units.Length(depth-g), units.Length(g), bottom)
+		return false
+	}
+	p.excavation, p.general, p.design = e, g, d
+	return true
 }
 
 // resolveGeometry fixes Top and Bottom of every layer; it reports false when
@@ -201,6 +269,9 @@ func (p *Profile) resolveLayer(i int, ls LayerSpec, geometryOK bool, c *collecto
 	l.Name = ls.Name
 	if l.Name == "" {
 		l.Name = fmt.Sprintf("layer %d", i+1)
+	}
+	if geometryOK {
+		l.Removed = min(max(units.Length(p.design)-l.Top, 0), l.Bottom-l.Top)
 	}
 	l.Drainage = ls.Drainage
 	switch ls.Drainage {
@@ -291,9 +362,12 @@ func (p *Profile) resolveWeights(path string, l *Layer, ls LayerSpec, geometryOK
 	if len(c.errs) > n0 {
 		return
 	}
-	// Without usable depths, which weights are needed is unknown: ask for none.
-	needAbove := geometryOK && (p.noWater || float64(l.Top) < p.waterDepth)
-	needBelow := geometryOK && !p.noWater && float64(l.Bottom) > p.waterDepth
+	// Without usable depths, which weights are needed is unknown: ask for
+	// none. Only the soil below the design ground line weighs.
+	top := max(float64(l.Top), p.design)
+	remains := float64(l.Bottom) > p.design
+	needAbove := geometryOK && remains && (p.noWater || top < p.waterDepth)
+	needBelow := geometryOK && remains && !p.noWater && float64(l.Bottom) > p.waterDepth
 	gw := units.UnitWeight(p.gw)
 	phaseGiven := ls.DryUnitWeight != 0 || ls.VoidRatio != 0 || ls.WaterContent != 0 || ls.Gs != 0 || ls.Saturation != 0
 	if !phaseGiven {
@@ -423,7 +497,12 @@ func (p *Profile) precompute(pts []PorePoint) {
 		bs = append(bs, float64(pt.Depth))
 	}
 	if len(pts) > 0 && pts[0].U > 0 {
-		bs = append(bs, float64(pts[0].Depth)-float64(pts[0].U)/p.gw)
+		if z := float64(pts[0].Depth) - float64(pts[0].U)/p.gw; z > p.design {
+			bs = append(bs, z) // above the design ground u is free water's
+		}
+	}
+	if p.design > 0 {
+		bs = append(bs, p.design)
 	}
 	bs = slices.DeleteFunc(bs, func(z float64) bool { return !(z >= 0 && z <= depth) })
 	slices.Sort(bs)
@@ -431,9 +510,11 @@ func (p *Profile) precompute(pts []PorePoint) {
 
 	m := len(p.breaks) - 1
 	p.sig, p.dsig, p.u, p.du = make([]float64, m), make([]float64, m), make([]float64, m), make([]float64, m)
+	// At the design ground line (the surface without a cut): the
+	// surcharge and any free water standing above it.
 	sig := p.surcharge
-	if !p.noWater && p.waterDepth < 0 {
-		sig += p.gw * -p.waterDepth
+	if !p.noWater && p.waterDepth < p.design {
+		sig += p.gw * (p.design - p.waterDepth)
 	}
 	li := 0
 	for i := range m {
@@ -441,6 +522,14 @@ func (p *Profile) precompute(pts []PorePoint) {
 		mid := 0.5 * (top + bot)
 		for float64(p.layers[li].Bottom) < mid {
 			li++
+		}
+		if mid < p.design {
+			// Removed by the cut: free water below the water level, or air.
+			if !p.noWater && mid > p.waterDepth {
+				w := p.gw * (top - p.waterDepth)
+				p.sig[i], p.dsig[i], p.u[i], p.du[i] = w, p.gw, w, p.gw
+			}
+			continue
 		}
 		l := &p.layers[li]
 		g := float64(l.UnitWeight)
@@ -501,9 +590,37 @@ func (p *Profile) WaterUnitWeight() units.UnitWeight { return units.UnitWeight(p
 // Surcharge returns the uniform surface surcharge.
 func (p *Profile) Surcharge() units.Stress { return units.Stress(p.surcharge) }
 
+// DesignGround returns the depth of the design ground line below the
+// original ground surface: excavation plus general and local scour, zero
+// without a cut. Above it there is no soil: no shaft resistance and no tip.
+func (p *Profile) DesignGround() units.Length { return units.Length(p.design) }
+
+// OriginalGround returns the depth of the original ground surface, from
+// which every depth is measured: always zero. It is there so that code
+// drawing both lines reads plainly.
+func (p *Profile) OriginalGround() units.Length { return 0 }
+
+// Refs returns the sources of the design ground line: with scour given,
+// FHWA HEC-18 for its division of total scour into components that add;
+// nil otherwise (an excavation is plain mechanics).
+func (p *Profile) Refs() []cite.Ref {
+	if p.design <= p.excavation {
+		return nil
+	}
+	return []cite.Ref{{Source: cite.Richardson2001, Where: "ch. 2, total scour"}}
+}
+
+// GroundLines returns the depths of the original ground, the excavation
+// floor, the general scour line and the design ground line.
+func (p *Profile) GroundLines() GroundLines {
+	return GroundLines{Excavation: units.Length(p.excavation), GeneralScour: units.Length(p.general),
+		Design: units.Length(p.design)}
+}
+
 // Breaks returns, sorted and distinct, every depth where the profile
 // changes, from 0 to Depth() inclusive: layer boundaries, the water table,
-// pore-pressure points, and where u reaches zero above the first point.
+// pore-pressure points, where u reaches zero above the first point, and
+// the design ground line.
 // Between two consecutive breaks σv and u are linear, so a shaft cut at the
 // breaks integrates them exactly. The slice is a copy.
 func (p *Profile) Breaks() []units.Length {

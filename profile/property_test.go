@@ -157,3 +157,117 @@ func TestPropUSUnits(t *testing.T) {
 		}
 	})
 }
+
+// drawCut draws an excavation and scour for a profile depth deep, leaving
+// at least 5 % of it; with cut false the surcharge is cleared, as a cut
+// requires.
+func drawCut(t *rapid.T, spec *Spec, depth float64) {
+	d := rapid.Float64Range(0, 0.95).Draw(t, "cut fraction") * depth
+	e := d * rapid.Float64Range(0, 1).Draw(t, "excavation share")
+	g := (d - e) * rapid.Float64Range(0, 1).Draw(t, "general share")
+	spec.ExcavationDepth = units.Length(e)
+	spec.Scour = Scour{General: units.Length(g), Local: units.Length(max(0, d-e-g))}
+	spec.Surcharge = 0
+}
+
+// TestPropCutEqualsShifted: a profile cut down to the design ground line
+// zd has, at depth z ≥ zd, the stresses of the same ground built from zd
+// down (layers shifted up by zd, what lies above zd left out, the water
+// level kept where it is), at depth z − zd.
+func TestPropCutEqualsShifted(t *testing.T) {
+	rapid.Check(t, func(t *rapid.T) {
+		spec, gl := drawSpec(t)
+		var depth float64
+		for _, g := range gl {
+			depth += g.t
+		}
+		drawCut(t, &spec, depth)
+		cut, err := New(spec)
+		if err != nil {
+			t.Fatal(err)
+		}
+		zd := float64(cut.DesignGround())
+		var kept []genLayer
+		top := 0.0
+		for _, g := range gl {
+			bot := top + g.t
+			if bot-zd > 1e-9 {
+				h := g
+				h.t = bot - max(top, zd)
+				kept = append(kept, h)
+			}
+			top = bot
+		}
+		shifted := Spec{WaterDepth: spec.WaterDepth - units.Length(zd), Layers: layersOf(kept)}
+		ref, err := New(shifted)
+		if err != nil {
+			t.Fatal(err)
+		}
+		for range 20 {
+			z := rapid.Float64Range(zd, float64(cut.Depth())).Draw(t, "z")
+			a, err1 := cut.StressesAt(units.Length(z))
+			b, err2 := ref.StressesAt(min(units.Length(z-zd), ref.Depth()))
+			if err1 != nil || err2 != nil {
+				t.Fatal(err1, err2)
+			}
+			for _, p := range [][2]units.Stress{{a.Total, b.Total}, {a.Pore, b.Pore}, {a.Effective, b.Effective}} {
+				if !closeRel(float64(p[0]), float64(p[1]), 1e-9, 1e-4) {
+					t.Fatalf("z %v (zd %v): cut %+v, shifted %+v", z, zd, a, b)
+				}
+			}
+		}
+	})
+}
+
+// TestPropCutStresses: with a cut, σ′v is zero above the design ground
+// line, never negative, never falling with depth, and σv, u and σ′v are
+// continuous across every break (hydrostatic water: closed form).
+func TestPropCutStresses(t *testing.T) {
+	rapid.Check(t, func(t *rapid.T) {
+		spec, gl := drawSpec(t)
+		var depth float64
+		for _, g := range gl {
+			depth += g.t
+		}
+		drawCut(t, &spec, depth)
+		p, err := New(spec)
+		if err != nil {
+			t.Fatal(err)
+		}
+		zd := p.DesignGround()
+		prev := 0.0
+		steps := rapid.IntRange(2, 200).Draw(t, "steps")
+		for i := range steps + 1 {
+			z := min(p.Depth()*units.Length(i)/units.Length(steps), p.Depth())
+			s, err := p.StressesAt(z)
+			if err != nil {
+				t.Fatal(err)
+			}
+			if s.Effective < 0 || (z < zd && s.Effective != 0) {
+				t.Fatalf("σ′v(%v) = %v with the design ground line at %v", z, s.Effective, zd)
+			}
+			if float64(s.Effective) < prev-1e-9*prev {
+				t.Fatalf("σ′v fell from %v to %v at %v", prev, float64(s.Effective), z)
+			}
+			prev = float64(s.Effective)
+		}
+		// Continuity: just above each break against the break itself; the
+		// steepest gradient is that of γsat ≤ 23 kN/m³.
+		const eps = 1e-6
+		for _, b := range p.Breaks()[1:] {
+			if b < 2*eps {
+				continue // no room above it
+			}
+			a, err1 := p.StressesAt(b - eps)
+			c, err2 := p.StressesAt(b)
+			if err1 != nil || err2 != nil {
+				t.Fatal(err1, err2)
+			}
+			for _, d := range [][2]units.Stress{{a.Total, c.Total}, {a.Pore, c.Pore}, {a.Effective, c.Effective}} {
+				if math.Abs(float64(d[1]-d[0])) > 23e3*eps+1e-9*math.Abs(float64(d[1]))+1e-6 {
+					t.Fatalf("jump at %v (zd %v): %+v above, %+v at", b, zd, a, c)
+				}
+			}
+		}
+	})
+}

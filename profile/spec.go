@@ -43,9 +43,39 @@ type Spec struct {
 	// Depths must be ≥ 0 and strictly increasing.
 	PorePressures []PorePoint
 	// Surcharge is a uniform vertical stress on the ground surface, ≥ 0.
+	// It must be zero when the ground is cut (see ExcavationDepth).
 	Surcharge units.Stress
+	// ExcavationDepth is the depth of an excavation floor below the
+	// original ground surface, ≥ 0; zero means no excavation. The soil
+	// above it is removed (see the package doc).
+	ExcavationDepth units.Length
+	// Scour is the design scour below the excavation floor (or the
+	// original ground surface without one); the zero value means none.
+	Scour Scour
 	// WaterUnitWeight is γw; zero means phase.WaterUnitWeight (9.81 kN/m³).
 	WaterUnitWeight units.UnitWeight
+}
+
+// Scour is the design scour at a pier or abutment, as bridge hydraulics
+// separates it (FHWA HEC-18): the components add, each measured down from
+// the line the one before it leaves.
+type Scour struct {
+	// General is the lowering of the whole bed at the crossing: long-term
+	// degradation plus general (contraction) scour, below the excavation
+	// floor or, without one, the original ground surface; ≥ 0.
+	General units.Length
+	// Local is the local scour at the pier or abutment, below the general
+	// scour line; ≥ 0.
+	Local units.Length
+}
+
+// GroundLines are the depths, below the original ground surface, of the
+// lines a report draws: the original ground (always 0), the excavation
+// floor, the general scour line and the design ground line (the local
+// scour line), each at or below the one before. Without a cut all four are
+// zero.
+type GroundLines struct {
+	Original, Excavation, GeneralScour, Design units.Length
 }
 
 // PorePoint is a measured or designed pore pressure U at a depth.
@@ -142,9 +172,13 @@ type Layer struct {
 	SaturatedUnitWeight units.UnitWeight
 	SubmergedUnitWeight units.UnitWeight
 	Basis               Basis
-	OCR, Dr, N60        float64
-	E, G                units.Stress
-	Nu, Ir              float64
+	// Removed is the thickness cut from the top of the layer by excavation
+	// and scour: 0 for a layer wholly below the design ground line,
+	// Thickness() for one wholly above it.
+	Removed      units.Length
+	OCR, Dr, N60 float64
+	E, G         units.Stress
+	Nu, Ir       float64
 }
 
 // Thickness returns Bottom − Top.
