@@ -228,3 +228,31 @@ func TestErrorsKeepTheirChain(t *testing.T) {
 		t.Errorf("errors.As(*profile.FieldError) failed: %v", err)
 	}
 }
+
+// TestScourKeys: ground.excavation_depth and ground.scour reach the
+// profile: σ′v below the design ground line is counted from it (closed
+// form γ′·(z − zd) in the base file's uniform sand under water), and a
+// line below the profile is an error naming the key.
+func TestScourKeys(t *testing.T) {
+	src := strings.Replace(base, "  water_depth: 2 m\n", "  water_depth: -1 m\n  excavation_depth: 1 m\n  scour: {general: 0.5 m, local: 1.5 m}\n", 1)
+	r, err := Parse([]byte(src))
+	if err != nil {
+		t.Fatal(err)
+	}
+	const zd, gw = 3.0, 9.81 // design ground line 1 + 0.5 + 1.5 m; γw SI default
+	sv, err := r.Ground.EffectiveStress(10 * units.Metre)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if want := (20 - gw) * (10 - zd) * 1e3; math.Abs(float64(sv)-want) > 1e-6*want {
+		t.Errorf("σ′v(10 m) = %v, want %g Pa", sv, want)
+	}
+	if got := r.Ground.DesignGround(); math.Abs(float64(got)-zd) > 1e-12 {
+		t.Errorf("design ground %v, want %g m", got, zd)
+	}
+	bad := strings.Replace(base, "  water_depth: 2 m\n", "  water_depth: 2 m\n  scour: {general: 40 m}\n", 1)
+	ps := problems(t, bad)
+	if len(ps) == 0 || ps[0].Path != "ground.scour.general" {
+		t.Errorf("problems %v, want ground.scour.general", ps)
+	}
+}

@@ -38,7 +38,18 @@ type Ground struct {
 	WaterUnitWeight Value       `yaml:"water_unit_weight,omitempty" json:"water_unit_weight,omitempty" q:"unitweight,0," doc:"Unit weight of water; default 9.81 kN/m3 (SI) or 62.4 pcf (US)."`
 	Surcharge       Value       `yaml:"surcharge,omitempty" json:"surcharge,omitempty" q:"stress,0," doc:"Uniform surcharge on the ground surface."`
 	PorePressures   []PorePoint `yaml:"pore_pressures,omitempty" json:"pore_pressures,omitempty"`
+	// ExcavationDepth and Scour lower the ground to the design ground
+	// line; the soil above it gives no shaft or tip resistance and its
+	// weight leaves σ′v below (package profile).
+	ExcavationDepth Value       `yaml:"excavation_depth,omitempty" json:"excavation_depth,omitempty" q:"length,0," doc:"Depth of an excavation floor below the original ground; the soil above is removed from σ′v, shaft and tip."`
+	Scour           *Scour      `yaml:"scour,omitempty" json:"scour,omitempty" doc:"Design scour: general below the excavation floor (or the ground), local below the general scour line."`
 	Layers          []Layer     `yaml:"layers" json:"layers"`
+}
+
+// Scour is the design scour at a pier or abutment.
+type Scour struct {
+	General Value `yaml:"general,omitempty" json:"general,omitempty" q:"length,0," doc:"General scour (long-term degradation and contraction), below the excavation floor or the original ground."`
+	Local   Value `yaml:"local,omitempty" json:"local,omitempty" q:"length,0," doc:"Local scour at the pier or abutment, below the general scour line."`
 }
 
 // PorePoint is a pore pressure at a depth, for non-hydrostatic water.

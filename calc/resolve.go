@@ -171,6 +171,10 @@ func (r *resolver) ground(f *File, in *Inputs) {
 		s.WaterUnitWeight = 62.4 * units.PCF
 	}
 	s.Surcharge = r.stress(g.Surcharge, "ground.surcharge")
+	s.ExcavationDepth = r.length(g.ExcavationDepth, "ground.excavation_depth")
+	if g.Scour != nil {
+		s.Scour = profile.Scour{General: r.length(g.Scour.General, "ground.scour.general"), Local: r.length(g.Scour.Local, "ground.scour.local")}
+	}
 	for i, p := range g.PorePressures {
 		path := fmt.Sprintf("ground.pore_pressures[%d]", i)
 		if !p.Depth.IsSet() || !p.Pressure.IsSet() {
