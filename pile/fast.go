@@ -17,6 +17,9 @@ type interval struct {
 	e0, de   float64 // σ′v itself (not held) = e0 + de·(z − top)
 	held     bool    // below the critical depth
 	noShaft  bool    // in a zone without shaft friction
+	// drilledTop: in the top zone of a drilled-shaft α layer that carries
+	// no side resistance (O'Neill & Reese 1999)
+	drilledTop bool
 	// check: the layer's method, integrated in closed form here, refused
 	// the stresses at an end of the interval; segments inside it are then
 	// checked at their own ends (see markRanges).
@@ -96,10 +99,13 @@ func (a *Analysis) buildIntervals() error {
 		}
 		iv := interval{top: top, bot: bot, layer: li, s0: float64(st), ds: 2 * (float64(sm) - float64(st)) / (bot - top)}
 		iv.e0, iv.de = iv.s0, iv.ds
-		if a.zc > 0 && top >= a.zc {
+		// Critical depth: only β-family methods in drained layers hold σ′v.
+		if a.zc > 0 && top >= a.zc && a.plans[li].held {
 			iv.s0, iv.ds, iv.held = a.svc, 0, true
 		}
-		iv.noShaft = a.inZone((top + bot) / 2)
+		mid := (top + bot) / 2
+		iv.noShaft = a.inZone(mid) || (a.plans[li].drilled && mid < float64(a.pile.HeadDepth+DrilledTopZone))
+		iv.drilledTop = a.plans[li].drilled && mid < float64(a.pile.HeadDepth+DrilledTopZone)
 		a.iv = append(a.iv, iv)
 	}
 	return nil
