@@ -63,7 +63,7 @@ type TipBlock struct {
 	Strong, Weak units.Stress
 	H, WeakZone  units.Length
 	// Qp is the unit tip resistance used (net of σ′v with WeightNet).
-	Qp units.Stress
+	Qp    units.Stress
 	Area  units.Area
 	Force units.Force
 	Flags Flags
