@@ -166,7 +166,10 @@ type Methods struct {
 	// shorter than the profile.
 	Layers []LayerMethods
 	// CriticalDepth, if > 0, is the ratio n of the critical depth zc = n·D
-	// below which σ′v is held constant for shaft friction (5 to 50).
+	// below which σ′v is held constant for shaft friction (5 to 50), in
+	// drained layers whose shaft method is of the β family (β, β given,
+	// Burland's β, the API sand β, the drilled-shaft β); α, λ and other
+	// methods always take σ′v itself.
 	CriticalDepth float64
 	// NoShaft lists depth ranges that carry no shaft friction.
 	NoShaft []Zone
