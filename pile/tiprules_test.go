@@ -236,10 +236,7 @@ func TestDrilledZones(t *testing.T) {
 			t.Errorf("at %v: with depth %v, single %v", r.TipDepth, r.Shaft, s.Shaft)
 		}
 		L := r.TipDepth.Metres()
-		want := 0.55 * 50 * perim * max(0, L-1.5-0.6)
-		if L < 2.1 {
-			want = 0.55 * 50 * perim * max(0, min(L-0.6, L)-1.5)
-		}
+		want := 0.55 * 50 * perim * max(0, L-1.5-0.6) // friction from 1.5 m to L − D
 		near(t, "Qs with depth", r.Shaft.KN()+1e-12, want+1e-12, 1e-9)
 	}
 	ms := DefaultMethods()
