@@ -12,7 +12,7 @@ import (
 // Capacity is the axial capacity of the pile with its tip at one depth.
 type Capacity struct {
 	TipDepth units.Length // depth of the tip below ground
-	UnitTip  units.Stress // qp after limits and the layered rule (net of σ′v with WeightNet)
+	UnitTip  units.Stress // qp after limits, the embedment ramp, the layered and the weak-layer rules (net of σ′v with WeightNet)
 	Tip      units.Force  // Qp on the area of the governing plug mode
 	Shaft    units.Force  // Qs in compression, on the perimeter(s) of that mode
 	Weight   units.Force  // W′, the pile's effective weight (buoyant below water)
