@@ -42,9 +42,27 @@ type TipBlock struct {
 	Equation  string
 	Input     bearing.Input
 	Result    bearing.Result
+	// Own is the bearing layer's unit tip resistance by its own method at
+	// the tip (Result.Qp), before the rules below.
+	Own units.Stress
+	// Embedment ramp (Meyerhof 1976), where it applied: Lb the embedment
+	// in the drained top layer, EmbedLength = (Lb/D)cr·D, and
+	// EmbedFactor = Lb/EmbedLength (1 where the ramp did not apply).
+	Lb, EmbedLength units.Length
+	EmbedFactor     float64
 	// Upper is the upper layer's unit tip resistance where Meyerhof's
-	// layered rule applied (0 otherwise); Qp the unit tip resistance used.
+	// layered rule applied (0 otherwise).
 	Upper units.Stress
+	// Weak layer below (Meyerhof 1976), where the reduction applied
+	// (WeakLayer ≥ 0; −1 otherwise): q_strong (Strong, the value after the
+	// rules above), q_weak (Weak, the weaker layer's value at its top), H
+	// (the distance from the tip down to it) and WeakZone = 10·D, so that
+	//
+	//	Qp = Weak + (Strong − Weak)·H/WeakZone
+	WeakLayer    int
+	Strong, Weak units.Stress
+	H, WeakZone  units.Length
+	// Qp is the unit tip resistance used (net of σ′v with WeightNet).
 	Qp    units.Stress
 	Area  units.Area
 	Force units.Force
@@ -83,18 +101,21 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 			refs = append(refs, r...)
 		}
 	}
-	for k := range a.iv {
-		iv := &a.iv[k]
-		top, bot := max(head, iv.top), min(t, iv.bot)
-		if !(bot > top) {
-			continue
-		}
+	// The bottom diameter of drilled-shaft α layers carries no side
+	// resistance (see finish): rows there are split off and shown as none.
+	cut := t
+	if a.drilled {
+		cut = max(t-a.size, head)
+	}
+	addRow := func(iv *interval, top, bot float64, bottomZone bool) error {
 		var s sums
-		if err := a.segment(&s, iv, top, bot); err != nil {
-			return Breakdown{}, err
-		}
 		li := iv.layer
 		lp := &a.plans[li]
+		if !bottomZone {
+			if err := a.segment(&s, iv, top, bot); err != nil {
+				return err
+			}
+		}
 		row := Row{Top: units.Length(top), Bottom: units.Length(bot), Layer: li, LayerName: lp.layer.Name,
 			Drainage: lp.layer.Drainage, Perimeter: units.Length(perim), Flags: s.flags}
 		if lp.layer.HasSu {
@@ -103,6 +124,11 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 		s0, s1 := iv.sigma(top), iv.sigma(bot)
 		row.SigmaTop, row.SigmaBottom = units.Stress(s0), units.Stress(s1)
 		switch {
+		case bottomZone:
+			row.Method, row.Equation = "none", "fs = 0 (bottom diameter of a drilled shaft, O'Neill & Reese 1999)"
+			row.Flags |= DrilledZones
+		case iv.drilledTop:
+			row.Method, row.Equation = "none", "fs = 0 (top 1.5 m of a drilled shaft, O'Neill & Reese 1999)"
 		case lp.noShaft || iv.noShaft:
 			row.Method, row.Equation = "none", "fs = 0"
 		case lp.lambda:
@@ -118,7 +144,7 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 				sv := s0 + (s1-s0)*(z-top)/(bot-top)
 				r, err := lp.shaft.Unit(a.point(lp, units.Length(z), units.Stress(sv)))
 				if err != nil {
-					return Breakdown{}, fmt.Errorf("layers[%d] (%s).shaft at %.4g m: %w", li, lp.layer.Name, z, err)
+					return fmt.Errorf("layers[%d] (%s).shaft at %.4g m: %w", li, lp.layer.Name, z, err)
 				}
 				row.At[j] = r
 			}
@@ -126,6 +152,29 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 			row.Force = units.Force(s.outer * perim)
 		}
 		b.Rows = append(b.Rows, row)
+		return nil
+	}
+	for k := range a.iv {
+		iv := &a.iv[k]
+		top, bot := max(head, iv.top), min(t, iv.bot)
+		if !(bot > top) {
+			continue
+		}
+		zoned := a.plans[iv.layer].drilled && !iv.noShaft && bot > cut
+		if !zoned {
+			if err := addRow(iv, top, bot, false); err != nil {
+				return Breakdown{}, err
+			}
+			continue
+		}
+		if cut > top {
+			if err := addRow(iv, top, cut, false); err != nil {
+				return Breakdown{}, err
+			}
+		}
+		if err := addRow(iv, max(top, cut), bot, true); err != nil {
+			return Breakdown{}, err
+		}
 	}
 	// λ rows share the average friction of the whole λ length.
 	if all.lamLen > 0 {
@@ -169,8 +218,24 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 		area = a.mat
 	}
 	b.Tip = TipBlock{Depth: units.Length(t), Layer: tr.layer, LayerName: lp.layer.Name, Method: lp.tip.ID(),
-		Equation: lp.tip.Equation(), Input: td.in, Result: td.res, Upper: units.Stress(tr.upper),
+		Equation: lp.tip.Equation(), Input: td.in, Result: td.res, Own: units.Stress(tr.own),
+		EmbedFactor: tr.embed, Upper: units.Stress(tr.upper), WeakLayer: -1,
 		Qp: c.UnitTip, Area: units.Area(area), Force: c.Tip, Flags: tr.flags}
+	if tr.flags&EmbedmentRamp != 0 {
+		b.Tip.Lb = units.Length(t) - lp.layer.Top
+		b.Tip.EmbedLength = units.Length(a.embedN * a.size)
+		addRefs("embedment", []cite.Ref{{Source: cite.Meyerhof1976, Where: "growth of the point resistance with embedment up to the critical ratio"},
+			{Source: cite.Das2019, Where: "Meyerhof's method for piles in sand, critical embedment ratio"}})
+	}
+	if w := tr.weak; w.ok {
+		b.Tip.WeakLayer, b.Tip.Strong, b.Tip.Weak = w.layer, units.Stress(w.strong), units.Stress(w.weak)
+		b.Tip.H, b.Tip.WeakZone = units.Length(w.h), units.Length(WeakZoneRatio*a.size)
+		addRefs("weak-layer", []cite.Ref{{Source: cite.Meyerhof1976, Where: "point resistance of a pile in a strong layer above a weak one"}})
+	}
+	if c.Flags&DrilledZones != 0 {
+		addRefs("drilled-zones", []cite.Ref{{Source: cite.ONeillReese1999, Where: "α method: top 1.5 m and bottom diameter excluded"},
+			{Source: cite.Brown2010, Where: "ch. 13, side resistance in cohesive soil"}})
+	}
 	addRefs(lp.tip.ID(), lp.tip.Refs())
 	if a.zc > 0 {
 		addRefs("critical-depth", (shaft.CriticalDepth{}).Refs())

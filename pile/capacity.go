@@ -12,7 +12,7 @@ import (
 // Capacity is the axial capacity of the pile with its tip at one depth.
 type Capacity struct {
 	TipDepth units.Length // depth of the tip below ground
-	UnitTip  units.Stress // qp after limits and the layered rule (net of σ′v with WeightNet)
+	UnitTip  units.Stress // qp after limits, the embedment ramp, the layered and the weak-layer rules (net of σ′v with WeightNet)
 	Tip      units.Force  // Qp on the area of the governing plug mode
 	Shaft    units.Force  // Qs in compression, on the perimeter(s) of that mode
 	Weight   units.Force  // W′, the pile's effective weight (buoyant below water)
@@ -71,20 +71,7 @@ func (a *Analysis) CapacityAt(tip units.Length) (Capacity, error) {
 // addShaft adds the shaft from z0 to z1 (z0 < z1) to s, interval by
 // interval.
 func (a *Analysis) addShaft(s *sums, z0, z1 float64) error {
-	// the interval holding z0: the hint, or a binary search
-	lo, hi := 0, len(a.iv)-1
-	if k := s.k; k < len(a.iv) && a.iv[k].top <= z0 && z0 < a.iv[k].bot {
-		lo, hi = k, k
-	}
-	for lo < hi {
-		m := int(uint(lo+hi+1) >> 1)
-		if a.iv[m].top <= z0 {
-			lo = m
-		} else {
-			hi = m - 1
-		}
-	}
-	for k := lo; k < len(a.iv) && a.iv[k].top < z1; k++ {
+	for k := a.intervalFrom(z0, s.k); k < len(a.iv) && a.iv[k].top < z1; k++ {
 		s.k = k
 		iv := &a.iv[k]
 		top, bot := iv.top, iv.bot // plain comparisons: min and max handle NaN and cost more here
@@ -103,6 +90,51 @@ func (a *Analysis) addShaft(s *sums, z0, z1 float64) error {
 	return nil
 }
 
+// intervalFrom returns the index of the interval holding z0: the hint if
+// it holds it, else by binary search.
+func (a *Analysis) intervalFrom(z0 float64, hint int) int {
+	lo, hi := 0, len(a.iv)-1
+	if k := hint; k >= 0 && k < len(a.iv) && a.iv[k].top <= z0 && z0 < a.iv[k].bot {
+		return k
+	}
+	for lo < hi {
+		m := int(uint(lo+hi+1) >> 1)
+		if a.iv[m].top <= z0 {
+			lo = m
+		} else {
+			hi = m - 1
+		}
+	}
+	return lo
+}
+
+// drilledBottom returns the shaft integrals (plain, design and tension)
+// over [z0, z1] in layers with the drilled-shaft zones in force: the part
+// of the bottom diameter that carries no side resistance.
+func (a *Analysis) drilledBottom(z0, z1 float64, hint int) (outer, design, tension float64, err error) {
+	if !(z1 > z0) {
+		return 0, 0, 0, nil
+	}
+	for k := a.intervalFrom(z0, hint); k < len(a.iv) && a.iv[k].top < z1; k++ {
+		iv := &a.iv[k]
+		if !a.plans[iv.layer].drilled || iv.noShaft {
+			continue
+		}
+		top, bot := max(z0, iv.top), min(z1, iv.bot)
+		if !(bot > top) {
+			continue
+		}
+		var t sums
+		if err := a.segment(&t, iv, top, bot); err != nil {
+			return 0, 0, 0, err
+		}
+		outer += t.outer
+		design += t.design
+		tension += t.tension
+	}
+	return outer, design, tension, nil
+}
+
 // inZone reports whether depth z lies in a zone without shaft friction.
 func (a *Analysis) inZone(z float64) bool {
 	for _, zn := range a.methods.NoShaft {
@@ -119,6 +151,12 @@ func (a *Analysis) segment(s *sums, iv *interval, z0, z1 float64) error {
 	h := z1 - z0
 	s0, s1 := iv.sigma(z0), iv.sigma(z1)
 	s.weight += a.pileWeight(z0, z1)
+	if lp.drilledOff {
+		s.flags |= DrilledZonesOff
+	}
+	if iv.drilledTop {
+		s.flags |= DrilledZones
+	}
 	if lp.noShaft || iv.noShaft {
 		return nil
 	}
@@ -225,6 +263,20 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 		design += s.lamF * q
 		tension += s.lamFt * q
 	}
+	var zoneFlags Flags
+	if a.drilled {
+		// No side resistance in the bottom diameter of drilled-shaft α layers.
+		o, d, tn, err := a.drilledBottom(max(t-a.size, float64(a.pile.HeadDepth)), t, s.k)
+		if err != nil {
+			return err
+		}
+		if o != 0 {
+			outer -= o
+			design -= d
+			tension -= tn
+			zoneFlags = DrilledZones
+		}
+	}
 	var tr tipResult
 	if err := a.tipAt(t, &tr, nil, s.k); err != nil {
 		return err
@@ -234,7 +286,7 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 		qp = max(0, qp-tr.sigma)
 	}
 	c.UnitTip = units.Stress(qp)
-	c.Flags = s.flags | tr.flags | lamFlags
+	c.Flags = s.flags | tr.flags | lamFlags | zoneFlags
 	tf := a.tension.Value
 	c.Weight = units.Force(s.weight)
 	// Modes: plugged (gross area, outer perimeter) and unplugged (material
@@ -248,7 +300,13 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	if a.pile.Section.CanPlug() {
 		unTip, unShaft := qp*a.mat, outer*(a.outer+a.inner)
 		unDes := tr.f*qp*a.mat + design*(a.outer+a.inner)
-		useUn := a.pile.Plug == Unplugged || (a.pile.Plug == PlugLesser && unTip+unShaft < plTip+plShaft)
+		// The lesser mode: on the design resistance in a design case (the
+		// factors on tip and shaft differ), else on the characteristic one.
+		lesserUn := unTip+unShaft < plTip+plShaft
+		if a.useCase {
+			lesserUn = unDes < plDes
+		}
+		useUn := a.pile.Plug == Unplugged || (a.pile.Plug == PlugLesser && lesserUn)
 		if useUn {
 			c.Plugged = false
 			c.Tip, c.Shaft = units.Force(unTip), units.Force(unShaft)
@@ -282,6 +340,9 @@ type tipResult struct {
 	sigma float64 // σ′v at the tip
 	f     float64 // design multiplier of the tip method
 	upper float64 // the upper layer's qp where the layered rule applied
+	own   float64 // the bearing layer's own method at the tip, before the rules
+	embed float64 // the embedment factor (1 where the ramp does not apply)
+	weak  weakInfo
 	flags Flags
 }
 
@@ -358,20 +419,18 @@ func (a *Analysis) tipAt(z float64, out *tipResult, detail *tipDetail, hint int)
 	}
 	d := a.size
 	top := float64(lp.layer.Top)
-	// Meyerhof's (1976) rule: less than 10D into a stronger layer, the tip
-	// resistance grows linearly from the weaker layer's value, taken as the
-	// upper layer's unit tip resistance at the interface.
-	if a.methods.LayeredTip && li > 0 && z-top < 10*d {
-		up := &a.plans[li-1]
-		if up.errBot != nil {
-			return fmt.Errorf("layers[%d] (%s).tip, needed for the layered-tip rule at %.4g m: %w", li-1, up.layer.Name, top, up.errBot)
-		}
-		if up.qpBot < out.qp {
-			out.upper = up.qpBot
-			out.qp = out.upper + (out.qp-out.upper)*(z-top)/(10*d)
-			out.flags |= LayeredTip
-		}
+	out.own = out.qp
+	q, upper, embed, err := a.baseRules(li, z, out.qp, &out.flags)
+	if err != nil {
+		return err
 	}
+	out.upper, out.embed = upper, embed
+	out.weak = weakInfo{}
+	q, err = a.weakRule(li, z, q, &out.flags, &out.weak)
+	if err != nil {
+		return err
+	}
+	out.qp = q
 	if z-top < d && li > 0 || float64(lp.layer.Bottom)-z < d && li < len(a.plans)-1 {
 		out.flags |= TipNearBoundary
 	}

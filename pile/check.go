@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"strings"
 
 	"github.com/qultgeo/qult/profile"
 	"github.com/qultgeo/qult/units"
@@ -116,19 +117,56 @@ func Check(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads) (Design, 
 // Length is the result of a search for the shortest pile.
 type Length struct {
 	Found bool
-	// TipDepth is the shallowest candidate tip depth at which every case
-	// passes; Length = TipDepth − head depth.
+	// TipDepth is the shallowest candidate tip depth from which every
+	// longer candidate, down to the search limit, passes every case;
+	// Length = TipDepth − head depth.
 	TipDepth units.Length
 	Length   units.Length
 	// Governs names what governs at the found depth: the case and the
 	// direction ("DA1-2 compression").
 	Governs string
 	Use     float64 // the highest utilisation there
+	// The search: candidate tip depths from the head + Step down to
+	// MaxTip in steps of Step.
+	Step, MaxTip units.Length
+	// Passing lists the ranges of candidate tip depths that pass, shallow
+	// to deep (each range From to To, both candidates that pass). More
+	// than one range means a shorter pile passes where a longer one fails:
+	// Warnings then says so, and TipDepth is the top of the last range,
+	// and only if that range reaches MaxTip.
+	Passing []DepthRange
+	// Best is the candidate with the lowest utilisation and what governs
+	// there, so that a search that finds nothing says how near it came.
+	BestTipDepth units.Length
+	BestUse      float64
+	BestGoverns  string
+	// Warnings are sentences about the search (not-found, several passing
+	// ranges).
+	Warnings []string
+}
+
+// DepthRange is a range of tip depths, From ≤ To.
+type DepthRange struct{ From, To units.Length }
+
+// NotFound returns the sentence that explains a search that found no
+// length: the search limit, the step and the best utilisation reached; ""
+// when a length was found.
+func (l Length) NotFound() string {
+	if l.Found {
+		return ""
+	}
+	return fmt.Sprintf("no pile length passes: the search ran to a tip depth of %.4g m in steps of %.4g m; the best utilisation reached was %.3g (%s) with the tip at %.4g m",
+		l.MaxTip.Metres(), l.Step.Metres(), l.BestUse, l.BestGoverns, l.BestTipDepth.Metres())
 }
 
 // RequiredLength finds the shallowest tip depth, on a grid from the pile
-// head + step down to maxTip in steps of step, at which every case of
-// basis b passes. Each case is one pass down the pile with running sums,
+// head + step down to maxTip in steps of step, from which every candidate
+// down to maxTip passes every case of basis b: a length passes only if
+// every longer one up to the search limit passes too, since a pile driven
+// a little deeper than designed must not fail (a dense lens over a soft
+// layer can pass a short pile and fail longer ones). Where the passing
+// candidates form more than one range, the ranges are returned in Passing
+// with a warning. Each case is one pass down the pile with running sums,
 // not one analysis per depth. p.Length is ignored.
 func RequiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, step, maxTip units.Length) (Length, error) {
 	if b == nil {
@@ -145,6 +183,9 @@ func RequiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, 
 	}
 	if n := float64((maxTip - p.HeadDepth) / step); n > 1e6 {
 		return Length{}, fmt.Errorf("search.step: %v gives %.3g candidate depths; at most 1e6", step, n)
+	}
+	if p.HeadDepth+step > maxTip {
+		return Length{}, fmt.Errorf("search.step: %v is longer than the search range from the head (%v) to max_tip (%v)", step, p.HeadDepth, maxTip)
 	}
 	cases, err := b.Cases(p.Installation)
 	if err != nil {
@@ -165,24 +206,64 @@ func RequiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, 
 		}
 		rows = append(rows, r)
 	}
-	for j := range rows[0] {
-		ok, worst, gov := true, 0.0, ""
+	out := Length{Step: step, MaxTip: maxTip, BestUse: math.MaxFloat64}
+	n := len(rows[0])
+	pass := make([]bool, n)
+	use := make([]float64, n)
+	gov := make([]string, n)
+	for j := 0; j < n; j++ {
+		ok, worst, g := true, 0.0, ""
 		for i, cs := range cases {
 			v := Verify(rows[i][j], cs, l)
-			if v.CompressionUse > worst {
-				worst, gov = v.CompressionUse, cs.Name+" compression"
+			if v.CompressionUse > worst || g == "" {
+				worst, g = v.CompressionUse, cs.Name+" compression"
 			}
 			if v.TensionUse > worst {
-				worst, gov = v.TensionUse, cs.Name+" tension"
+				worst, g = v.TensionUse, cs.Name+" tension"
 			}
 			ok = ok && v.Pass
 		}
-		if ok {
-			t := rows[0][j].TipDepth
-			return Length{Found: true, TipDepth: t, Length: t - p.HeadDepth, Governs: gov, Use: worst}, nil
+		pass[j], use[j], gov[j] = ok, worst, g
+		if worst < out.BestUse {
+			out.BestUse, out.BestTipDepth, out.BestGoverns = worst, rows[0][j].TipDepth, g
 		}
 	}
-	return Length{}, nil
+	for j := 0; j < n; j++ {
+		if !pass[j] {
+			continue
+		}
+		if k := len(out.Passing); k > 0 && j > 0 && pass[j-1] {
+			out.Passing[k-1].To = rows[0][j].TipDepth
+		} else {
+			out.Passing = append(out.Passing, DepthRange{From: rows[0][j].TipDepth, To: rows[0][j].TipDepth})
+		}
+	}
+	if pass[n-1] {
+		j := n - 1
+		for j > 0 && pass[j-1] {
+			j--
+		}
+		t := rows[0][j].TipDepth
+		out.Found, out.TipDepth, out.Length, out.Governs, out.Use = true, t, t-p.HeadDepth, gov[j], use[j]
+	}
+	if len(out.Passing) > 1 {
+		var sb strings.Builder
+		for i, r := range out.Passing {
+			if i > 0 {
+				sb.WriteString(", ")
+			}
+			fmt.Fprintf(&sb, "%.4g to %.4g m", r.From.Metres(), r.To.Metres())
+		}
+		msg := "WARNING: the passing tip depths are not one range (" + sb.String() + "): a shorter pile passes where a longer one fails"
+		if out.Found {
+			msg += fmt.Sprintf("; the answer is the top of the deepest range, %.4g m", out.TipDepth.Metres())
+		}
+		out.Warnings = append(out.Warnings, msg)
+	}
+	if !out.Found {
+		out.Warnings = append(out.Warnings, out.NotFound())
+	}
+	return out, nil
 }
 
 // WithDepth returns the capacity for tip depths from `from` to `to` in steps

@@ -121,3 +121,44 @@ func TestDesignGroundShaftShifted(t *testing.T) {
 	}
 	near(t, "shaft, scoured vs shifted", ca.Shaft.KN(), cb.Shaft.KN(), 1e-6)
 }
+
+// TestEmbedmentFromDesignGround: below an excavation the embedment ramp
+// counts the embedment from the design ground line (closed form: with
+// (Lb/D)cr = 10 and Lb = 5·D the ramp halves the unit tip resistance), and
+// the layered rule does not reach into a layer wholly removed.
+func TestEmbedmentFromDesignGround(t *testing.T) {
+	// 4 m of soft clay excavated away over sand; tip 2.5 m into the sand.
+	prof, err := profile.New(profile.Spec{WaterDepth: 0, ExcavationDepth: 4 * m,
+		Layers: []profile.LayerSpec{
+			{Name: "clay", Thickness: 4 * m, Drainage: profile.Undrained, Su: 15 * units.Kilopascal, SaturatedUnitWeight: 17 * kNm},
+			{Name: "sand", Thickness: 30 * m, Drainage: profile.Drained, Phi: 34 * units.Degree, SaturatedUnitWeight: 20 * kNm}}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	p := Pile{Section: Section{Shape: Square, Width: 0.5 * m}, Length: 6.5 * m, Installation: DrivenHigh}
+	ms := DefaultMethods()
+	ms.TipDrained = bearing.GivenNq{Nq: 40}
+	on, err := NewAnalysis(prof, p, ms, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	ms.NoEmbedment = true
+	off, err := NewAnalysis(prof, p, ms, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	c1, err := on.Capacity()
+	if err != nil {
+		t.Fatal(err)
+	}
+	c2, err := off.Capacity()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r := float64(c1.UnitTip / c2.UnitTip); math.Abs(r-0.5) > 1e-12 {
+		t.Errorf("ramp factor %v, want 0.5 (Lb = 2.5 m from the design ground line, Lcr = 5 m)", r)
+	}
+	if c1.Flags&LayeredTip != 0 {
+		t.Errorf("layered rule applied from the excavated clay: flags %v", c1.Flags)
+	}
+}

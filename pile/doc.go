@@ -21,39 +21,92 @@
 // sums. Breakdown returns the same capacity with a row per shaft segment
 // and a tip block, the warnings and the sources.
 //
-// # Defaults and choices (where the issue or the sources were silent)
+// # Defaults a reviewer sees (each default, its value, its source, when it applies)
 //
-//   - Methods by drainage class, each overridable per layer: drained tip
-//     Meyerhof (1976) with its limit; undrained tip Nc = 9 (Skempton 1951);
-//     drained shaft the β method with K/K0 and δ/φ′ from Kulhawy (1984) by
-//     installation and surface (the middle of his ranges; CFA piles are
-//     taken as bored; see DefaultSurface); undrained shaft the API RP 2GEO
-//     α for driven piles and the drilled-shaft α of O'Neill & Reese (1999)
-//     for bored and CFA piles.
-//   - Every factor a method computes can be given instead, per layer,
-//     through the shaft and bearing packages' "given" methods (K, K/K0,
-//     K/Kp, δ, δ/φ′, α, β, Nq, Nc) or LayerMethods.LambdaValue for λ.
+//	default                      value                                   source                                   applies
+//	drained tip                  Meyerhof Nq*, qp ≤ 0.5·pa·Nq*·tanφ′,      Meyerhof (1976); Das, Nq* table           drained layers
+//	                             pa = 100 kPa
+//	undrained tip                qp = 9·su                               Skempton (1951)                          undrained layers
+//	drained shaft                β = K·tanδ, K/K0 the middle of          Kulhawy (1984)                           drained layers
+//	                             Kulhawy's range by installation (CFA
+//	                             as bored), δ/φ′ by surface
+//	interface (Pile.Surface 0)   rough concrete: bored, augered;         Kulhawy (1984) categories                drained shaft, β
+//	                             smooth steel: pipes, H-sections (new
+//	                             steel); smooth concrete: driven solid
+//	undrained shaft              API α (driven, jetted); drilled-shaft   API RP 2GEO (2011); O'Neill & Reese      undrained layers
+//	                             α (bored, augered)                      (1999)
+//	layered tip                  on (DefaultMethods): qp grows from the  Meyerhof (1976)                          tip < 10 D into a stronger layer
+//	                             upper layer's qp over 10 D
+//	weak layer below             on: qp = q_weak + (q_strong − q_weak)·  Meyerhof (1976) (from memory)            tip < 10 D above a weaker layer;
+//	                             H/(10 D) ≤ q_strong                                                               any drainage
+//	embedment ramp               on: qp·Lb/((Lb/D)cr·D), (Lb/D)cr = 10   Meyerhof (1976); Das, Meyerhof's         tip < 10 D into a drained top layer
+//	                                                                     method in sand
+//	weaker layer warning         WeakBelow flag within 3 D               our choice                               always
+//	critical depth               off; when given, σ′v held below n·D     Meyerhof (1976); Kulhawy (1984)          β-family shaft methods in drained
+//	                                                                                                              layers only
+//	drilled-shaft zones          on: no side resistance in the top       O'Neill & Reese (1999); FHWA GEC 10      bored and augered piles, layers
+//	                             1.5 m below the head and the bottom     (2010) (from memory)                     with the drilled-shaft α; compression
+//	                             diameter                                                                          and tension
+//	N60 missing                  an error naming layers[i].n60           our choice (no value is assumed)         methods that read N60
+//	plug mode                    lesser of plugged and unplugged:        common practice                          open pipes and H-sections
+//	                             characteristic values without a case,
+//	                             design values in a design case
+//	self-weight                  Rc = Qp + Qs                            Das (§ pile capacity)                    compression
+//	tension                      same unit friction as compression; W′   API RP 2GEO (2011) (from memory)         tension
+//	                             added at a factor of 1
+//	chart edges                  an error (Methods.Clamp reads at the    our choice                               chart methods
+//	                             edge with a warning)
+//	required length              the top of the deepest range of         our choice (a longer pile must not       RequiredLength
+//	                             passing tip depths that reaches the     fail)
+//	                             search limit
+//
+// Every rule that lowers capacity is on in the zero Methods value and is
+// turned off only by a No… field (NoWeakLayer, NoEmbedment,
+// NoDrilledZones), which raises a warning flag (WeakLayerOff,
+// EmbedmentOff, DrilledZonesOff) wherever the rule would have applied.
+//
+// # Methods and how they combine
+//
+//   - Methods by drainage class, each overridable per layer (see the
+//     table). Every factor a method computes can be given instead, per
+//     layer, through the shaft and bearing packages' "given" methods (K,
+//     K/K0, K/Kp, δ, δ/φ′, α, β, Nq, Nc) or LayerMethods.LambdaValue for λ.
 //   - The λ method (Vijayvergiya & Focht 1972) is applied to the undrained
 //     layers along the shaft: λ is read for the embedded length L (head to
 //     tip), and fav = λ·(σ̄′v + 2·s̄u) uses the means over the λ layers only.
 //   - The tip bears on the layer below when it sits on a boundary. It uses
 //     σ′v at the tip (no critical depth: methods carry their own limits).
-//     Meyerhof's rule for a tip less than ten diameters into a stronger
-//     layer (Methods.LayeredTip; on in DefaultMethods) grows qp linearly
-//     from the upper layer's unit tip resistance at the interface. A layer
-//     within Methods.WeakBelow diameters (default 3) below the tip whose
-//     unit tip resistance at its top is lower raises the WeakBelow warning.
+//     The layer's own method gives qp; then, in this order: the embedment
+//     ramp (a drained top layer only: the ground surface is the "weaker
+//     layer" above it, of zero resistance); the layered rule (the upper
+//     layer's value at the interface is that layer's value after these same
+//     rules); and the weak-layer rule (each weaker layer's q_weak is its
+//     value at its top after all the rules, so that a stack of layers is
+//     handled; with several weaker layers within 10 D, the least result
+//     governs). So built, qp is continuous in depth through every layer
+//     boundary and the edge of every zone (tests check it). A layer whose
+//     tip resistance cannot be evaluated is an error where one of these
+//     rules needs it.
+//   - The embedment ramp is Meyerhof's growth of the point resistance with
+//     the embedment in the bearing stratum up to the critical embedment
+//     ratio; (Lb/D)cr = 10 by default (the ratio at which his SPT rule
+//     0.4·pa·N60·L/D ≤ 4·pa·N60 reaches its limit, and that of his layered
+//     rule); Methods.EmbedmentRatio gives another. It multiplies the whole
+//     unit tip resistance (after the method's own limit).
+//   - The drilled-shaft zones: the top zone is measured from the pile head;
+//     the bottom one moves with the tip (in capacity with depth too). Both
+//     apply in tension as in compression (the conservative reading).
 //   - Open pipes and H-sections: plugged = tip on the gross (box) area and
 //     friction on the outer perimeter; unplugged = tip on the steel area
 //     and friction on the outer and inner perimeters with the same unit
 //     friction; PlugLesser (the default) takes the lesser compression
-//     capacity. In tension only the outer perimeter counts unless the pile
-//     is declared Unplugged.
+//     capacity, compared on design values in a design case. In tension only
+//     the outer perimeter counts unless the pile is declared Unplugged.
 //   - Self-weight: by default Rc = Qp + Qs (the pile's weight balances the
 //     overburden it displaces, as hand methods assume); WeightNet uses
 //     qp − σ′v at the tip; WeightGross subtracts W′. In tension the pile's
-//     effective weight W′ (buoyant below the water table) always adds to
-//     the shaft resistance, at a factor of 1.
+//     effective weight W′ (buoyant below the water table) adds to the shaft
+//     resistance.
 //   - Tension shaft resistance is the compression unit friction times a
 //     tension factor (TensionSame by default); design bases apply their
 //     own tension factors (EN 1997-1 γs,t; AASHTO φ for uplift).
@@ -62,6 +115,11 @@
 //     with sets R1 to R4, ξ3/ξ4 and a model factor; M2 soil factors for DA3
 //     divide tanφ′ and su). A basis gives one or more Cases; Check runs an
 //     analysis per case and Verify compares Ed with Rd.
+//   - RequiredLength checks every candidate tip depth on its grid; a depth
+//     is the answer only if every deeper candidate down to the search limit
+//     passes too. Passing ranges that are not one range are listed with a
+//     warning; a search that finds nothing states its limit, its step and
+//     the best utilisation reached, and where.
 //
 // Results are for qualified engineers: check them against local codes,
 // the site investigation and load tests.

@@ -17,6 +17,9 @@ type interval struct {
 	e0, de   float64 // σ′v itself (not held) = e0 + de·(z − top)
 	held     bool    // below the critical depth
 	noShaft  bool    // in a zone without shaft friction
+	// drilledTop: in the top zone of a drilled-shaft α layer that carries
+	// no side resistance (O'Neill & Reese 1999)
+	drilledTop bool
 	// check: the layer's method, integrated in closed form here, refused
 	// the stresses at an end of the interval; segments inside it are then
 	// checked at their own ends (see markRanges).
@@ -39,6 +42,13 @@ func (a *Analysis) markRanges() {
 			}
 		}
 	}
+}
+
+// drilledTop is the depth down to which drilled-shaft α layers carry no
+// side resistance: DrilledTopZone below the pile head, or below the design
+// ground line where that is deeper.
+func (a *Analysis) drilledTop() float64 {
+	return max(float64(a.pile.HeadDepth), float64(a.prof.DesignGround())) + float64(DrilledTopZone)
 }
 
 func (iv *interval) sigma(z float64) float64 { return iv.s0 + iv.ds*(z-iv.top) }
@@ -96,12 +106,17 @@ func (a *Analysis) buildIntervals() error {
 		}
 		iv := interval{top: top, bot: bot, layer: li, s0: float64(st), ds: 2 * (float64(sm) - float64(st)) / (bot - top)}
 		iv.e0, iv.de = iv.s0, iv.ds
-		if a.zc > 0 && top >= a.zc {
+		// Critical depth: only β-family methods in drained layers hold σ′v.
+		if a.zc > 0 && top >= a.zc && a.plans[li].held {
 			iv.s0, iv.ds, iv.held = a.svc, 0, true
 		}
-		// No shaft in a zone, nor above the design ground line (excavation
-		// and scour), which the profile makes a split.
-		iv.noShaft = a.inZone((top+bot)/2) || (top+bot)/2 < float64(a.prof.DesignGround())
+		// No shaft in a zone, above the design ground line (excavation and
+		// scour, which the profile makes a split), nor in the top
+		// DrilledTopZone of drilled-shaft α layers, measured from where the
+		// shaft meets the soil.
+		mid := (top + bot) / 2
+		iv.drilledTop = a.plans[li].drilled && mid < a.drilledTop()
+		iv.noShaft = a.inZone(mid) || mid < float64(a.prof.DesignGround()) || iv.drilledTop
 		a.iv = append(a.iv, iv)
 	}
 	return nil

@@ -29,6 +29,25 @@ const (
 	UnpluggedGoverns
 	// TipNearBoundary: the tip lies within one diameter of a layer boundary.
 	TipNearBoundary
+	// WeakLayerReduced: the tip is within WeakZoneRatio (10) diameters
+	// above a weaker layer and Meyerhof's (1976) reduction lowered qp.
+	WeakLayerReduced
+	// WeakLayerOff: the weak-layer reduction would apply here but
+	// Methods.NoWeakLayer switched it off (or a layer below could not be
+	// evaluated while it is off).
+	WeakLayerOff
+	// EmbedmentRamp: the tip is less than (Lb/D)cr diameters into a drained
+	// top layer and Meyerhof's (1976) embedment ramp lowered qp.
+	EmbedmentRamp
+	// EmbedmentOff: the embedment ramp would apply here but
+	// Methods.NoEmbedment switched it off.
+	EmbedmentOff
+	// DrilledZones: side resistance was left out of the top 1.5 m and the
+	// bottom diameter in drilled-shaft α layers (O'Neill & Reese 1999).
+	DrilledZones
+	// DrilledZonesOff: a bored or augered pile uses the drilled-shaft α
+	// with Methods.NoDrilledZones set, so those zones carry side resistance.
+	DrilledZonesOff
 )
 
 var flagText = [...]string{
@@ -41,6 +60,12 @@ var flagText = [...]string{
 	"a weaker layer lies within a few diameters below the tip",
 	"the unplugged mode governs",
 	"the tip lies within one diameter of a layer boundary",
+	"tip within 10 diameters above a weaker layer: Meyerhof's (1976) reduction applied",
+	"WARNING: Meyerhof's (1976) weak-layer reduction is switched off although a weaker layer lies within 10 diameters below the tip; the tip resistance may be unconservative",
+	"tip less than the critical embedment ratio into a drained layer from the ground surface: Meyerhof's (1976) embedment ramp applied",
+	"WARNING: Meyerhof's (1976) embedment ramp is switched off although the tip is shallower than the critical embedment ratio; the tip resistance may be unconservative",
+	"no side resistance counted in the top 1.5 m and the bottom diameter of drilled-shaft α layers (O'Neill & Reese 1999)",
+	"WARNING: the zones without side resistance of the drilled-shaft α (top 1.5 m, bottom diameter) are switched off; the shaft resistance may be unconservative",
 }
 
 // Messages returns one sentence per set flag.

@@ -38,15 +38,18 @@ func (p Pile) Tip() units.Length { return p.HeadDepth + p.Length }
 
 // DefaultSurface returns the interface used for δ/φ′ when Pile.Surface is
 // zero: rough concrete for bored and augered piles (concrete cast against
-// soil), rough steel for steel pipes and H-sections, and smooth concrete
-// for driven solid sections (precast). These are our defaults within
-// Kulhawy's (1984) categories; give Pile.Surface to choose another.
+// soil), smooth steel for steel pipes and H-sections (new steel, the
+// "coated or new" class of Kulhawy's (1984) δ/φ′ table; rough steel is for
+// corrugated or heavily rusted steel and must be chosen through
+// Pile.Surface), and smooth concrete for driven solid sections (precast).
+// These are our defaults within Kulhawy's (1984) categories; give
+// Pile.Surface to choose another.
 func DefaultSurface(sec Section, inst Installation) shaft.Surface {
 	switch {
 	case inst == Bored || inst == Augered:
 		return shaft.RoughConcrete
 	case sec.Shape == ClosedPipe || sec.Shape == OpenPipe || sec.Shape == HSection:
-		return shaft.RoughSteel
+		return shaft.SmoothSteel
 	default:
 		return shaft.SmoothConcrete
 	}
@@ -144,8 +147,11 @@ type Zone struct {
 	Top, Bottom units.Length // depths below ground, Top < Bottom
 }
 
-// Methods chooses the methods of an analysis. A nil method takes the
-// default:
+// Methods chooses the methods of an analysis. The zero value is a valid
+// choice: every rule that lowers capacity (the weak-layer reduction, the
+// embedment ramp, the drilled-shaft zones without side resistance) is on
+// in it and is switched off only through a No… field, which raises a
+// warning flag. A nil method takes the default:
 //
 //	TipDrained      bearing.Meyerhof{} (driven), bearing.Meyerhof{} (bored)
 //	TipUndrained    bearing.Skempton{} (Nc = 9)
@@ -162,7 +168,10 @@ type Methods struct {
 	// shorter than the profile.
 	Layers []LayerMethods
 	// CriticalDepth, if > 0, is the ratio n of the critical depth zc = n·D
-	// below which σ′v is held constant for shaft friction (5 to 50).
+	// below which σ′v is held constant for shaft friction (5 to 50), in
+	// drained layers whose shaft method is of the β family (β, β given,
+	// Burland's β, the API sand β, the drilled-shaft β); α, λ and other
+	// methods always take σ′v itself.
 	CriticalDepth float64
 	// NoShaft lists depth ranges that carry no shaft friction.
 	NoShaft []Zone
@@ -177,6 +186,25 @@ type Methods struct {
 	// weaker layer, in diameters; 0 means 3.
 	LayeredTip bool
 	WeakBelow  float64
+	// NoWeakLayer turns off Meyerhof's (1976) reduction of the unit tip
+	// resistance within WeakZoneRatio (10) diameters above a weaker layer
+	// (see WeakZoneRatio); the WeakLayerOff flag is then raised wherever
+	// the rule would have applied.
+	NoWeakLayer bool
+	// NoEmbedment turns off Meyerhof's (1976) ramp of the unit tip
+	// resistance with embedment in a drained bearing layer that starts at
+	// the ground surface (see EmbedmentRatio); the EmbedmentOff flag is then
+	// raised wherever the ramp would have applied.
+	NoEmbedment bool
+	// EmbedmentRatio is the critical embedment ratio (Lb/D)cr of that
+	// ramp; 0 means DefaultEmbedmentRatio (10), else 1 to 50.
+	EmbedmentRatio float64
+	// NoDrilledZones turns off, for bored and augered piles, the exclusion
+	// of side resistance from the top DrilledTopZone (1.5 m) and the bottom
+	// diameter of the shaft in layers using the drilled-shaft α
+	// (shaft.AlphaDrilled; O'Neill & Reese 1999); the DrilledZonesOff flag
+	// is then raised.
+	NoDrilledZones bool
 	// Clamp lets chart methods read outside their charts at the edge (a
 	// warning is raised) instead of failing.
 	Clamp bool
@@ -218,6 +246,20 @@ type layerPlan struct {
 	tm             tipModel
 	qpTop, qpBot   float64
 	errTop, errBot error
+	// the tip at the layer's top and bottom after the embedment ramp and
+	// the layered rule (base*), and at its top after the weak-layer rule
+	// too (effTop): the values the rules of the layers around it read
+	baseTop, baseBot float64
+	errBase          error
+	effTop           float64
+	errEff           error
+	// drilled: the layer's shaft is the drilled-shaft α of a bored or
+	// augered pile with the zones without side resistance in force.
+	// drilledOff: it would be, but Methods.NoDrilledZones is set.
+	drilled, drilledOff bool
+	// held: σ′v is held below the critical depth for this layer's shaft
+	// (β-family methods in drained layers only).
+	held bool
 	// closed-form integration (see classify)
 	kind  int
 	coef  float64
@@ -247,6 +289,8 @@ type Analysis struct {
 	useCase   bool
 	cs        Case
 	weakBelow float64
+	embedN    float64 // (Lb/D)cr of the embedment ramp
+	drilled   bool    // some layer has the drilled-shaft zones in force
 }
 
 // Validate checks the pile's geometry and installation.
@@ -321,6 +365,13 @@ func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analy
 	if !(a.weakBelow > 0 && a.weakBelow <= 20) {
 		return nil, fmt.Errorf("methods.weak_below: %g diameters is outside (0, 20]", m.WeakBelow)
 	}
+	a.embedN = m.EmbedmentRatio
+	if a.embedN == 0 {
+		a.embedN = DefaultEmbedmentRatio
+	}
+	if !(a.embedN >= 1 && a.embedN <= 50) {
+		return nil, fmt.Errorf("methods.embedment_ratio: %g is outside 1 to 50 (0 for %g)", m.EmbedmentRatio, float64(DefaultEmbedmentRatio))
+	}
 	if len(m.Layers) > prof.NumLayers() {
 		return nil, fmt.Errorf("methods.layers: %d entries for a profile of %d layers", len(m.Layers), prof.NumLayers())
 	}
@@ -369,6 +420,11 @@ func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analy
 	for _, z := range m.NoShaft {
 		a.splits = append(a.splits, float64(z.Top), float64(z.Bottom))
 	}
+	if a.drilled {
+		if zt := a.drilledTop(); zt < float64(prof.Depth()) {
+			a.splits = append(a.splits, zt)
+		}
+	}
 	a.splits = sortUnique(a.splits)
 	if err := a.buildIntervals(); err != nil {
 		return nil, err
@@ -386,6 +442,7 @@ func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analy
 		lp.qpTop, lp.errTop = a.directTip(lp, float64(lp.layer.Top))
 		lp.qpBot, lp.errBot = a.directTip(lp, float64(lp.layer.Bottom))
 	}
+	a.prepareTipRules()
 	return a, nil
 }
 
@@ -478,6 +535,25 @@ func (a *Analysis) plan(i int) (layerPlan, error) {
 		lp.shaft = shaft.AlphaDrilled{}
 	default:
 		lp.shaft = shaft.AlphaAPI{}
+	}
+	// Methods that need N60 and have none: an error naming the field, never
+	// a tip or a friction of zero.
+	if l.N60 == 0 {
+		if needsN60Tip(lp.tip) {
+			return lp, fmt.Errorf("layers[%d].n60: layer %q has no N60 and its tip method %q needs it; give n60 (above 0, at most 300) or choose another tip method", i, l.Name, lp.tip.ID())
+		}
+		if !lp.lambda && needsN60Shaft(lp.shaft) {
+			return lp, fmt.Errorf("layers[%d].n60: layer %q has no N60 and its shaft method %q needs it; give n60 (above 0, at most 300) or choose another shaft method", i, l.Name, lp.shaft.ID())
+		}
+	}
+	lp.held = drained && !lp.lambda && betaFamily(lp.shaft)
+	if !lp.lambda && !lp.noShaft && drilledAlpha(lp.shaft) && (a.pile.Installation == Bored || a.pile.Installation == Augered) {
+		if m.NoDrilledZones {
+			lp.drilledOff = true
+		} else {
+			lp.drilled = true
+			a.drilled = true
+		}
 	}
 	// Design multipliers.
 	lp.fTip, lp.fShaft, lp.fTension = 1, 1, 1
