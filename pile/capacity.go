@@ -5,6 +5,7 @@ import (
 	"math"
 
 	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/profile"
 	"github.com/qultgeo/qult/shaft"
 	"github.com/qultgeo/qult/units"
 )
@@ -35,7 +36,8 @@ type Capacity struct {
 type sums struct {
 	outer   float64 // ∫ fs dz, N/m, over layers not using λ
 	design  float64 // ∫ fShaft·fs dz
-	tension float64 // ∫ fTension·fs dz
+	tension float64 // ∫ fTension·t·fs dz, t the layer's tension factor
+	uplift  float64 // ∫ t·fs dz
 	// λ layers: ∫σ′v dz, ∫su dz and their length.
 	lamSig, lamSu, lamLen float64
 	lamF, lamFt           float64 // design multipliers of the λ method
@@ -123,11 +125,7 @@ func (a *Analysis) segment(s *sums, iv *interval, z0, z1 float64) error {
 		return nil
 	}
 	if a.useCase && (lp.fShaft == 0 || lp.fTension == 0) {
-		id := lambdaID
-		if !lp.lambda {
-			id = lp.shaft.ID()
-		}
-		return fmt.Errorf("layers[%d] (%s): design case %s has no resistance factor for shaft method %q; give one", iv.layer, lp.layer.Name, a.cs.Name, id)
+		return a.missingFactor(iv.layer, ShaftResistance)
 	}
 	if iv.held {
 		s.flags |= CriticalDepthApplied
@@ -177,9 +175,11 @@ func (a *Analysis) segment(s *sums, iv *interval, z0, z1 float64) error {
 		q = v
 		s.flags |= fl
 	}
+	t := a.tension.For(lp.layer.Drainage)
 	s.outer += q
 	s.design += lp.fShaft * q
-	s.tension += lp.fTension * q
+	s.tension += lp.fTension * t * q
+	s.uplift += t * q
 	return nil
 }
 
@@ -205,7 +205,7 @@ func (a *Analysis) pileWeight(z0, z1 float64) float64 {
 // finish adds the λ part and the tip, and assembles the capacity.
 func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	*c = Capacity{TipDepth: units.Length(t)}
-	outer, design, tension := s.outer, s.design, s.tension
+	outer, design, tension, uplift := s.outer, s.design, s.tension, s.uplift
 	var lamFlags Flags
 	if s.lamLen > 0 {
 		L := t - float64(a.pile.HeadDepth)
@@ -221,9 +221,11 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 			lamFlags = shaftFlags(r.Flags)
 		}
 		q := fav * s.lamLen
+		t := a.tension.For(profile.Undrained) // λ layers are undrained
 		outer += q
 		design += s.lamF * q
-		tension += s.lamFt * q
+		tension += s.lamFt * t * q
+		uplift += t * q
 	}
 	var tr tipResult
 	if err := a.tipAt(t, &tr, nil, s.k); err != nil {
@@ -235,7 +237,6 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	}
 	c.UnitTip = units.Stress(qp)
 	c.Flags = s.flags | tr.flags | lamFlags
-	tf := a.tension.Value
 	c.Weight = units.Force(s.weight)
 	// Modes: plugged (gross area, outer perimeter) and unplugged (material
 	// area, outer plus inner perimeter).
@@ -244,7 +245,7 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	c.Plugged = true
 	c.Tip, c.Shaft = units.Force(plTip), units.Force(plShaft)
 	desC := plDes
-	tenShaft, tenDes := tf*outer*a.outer, tf*tension*a.outer
+	tenShaft, tenDes := uplift*a.outer, tension*a.outer
 	if a.pile.Section.CanPlug() {
 		unTip, unShaft := qp*a.mat, outer*(a.outer+a.inner)
 		unDes := tr.f*qp*a.mat + design*(a.outer+a.inner)
@@ -258,7 +259,7 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 			}
 		}
 		if a.pile.Plug == Unplugged {
-			tenShaft, tenDes = tf*outer*(a.outer+a.inner), tf*tension*(a.outer+a.inner)
+			tenShaft, tenDes = uplift*(a.outer+a.inner), tension*(a.outer+a.inner)
 		}
 	}
 	c.Compression = c.Tip + c.Shaft
@@ -269,7 +270,7 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	c.TensionShaft = units.Force(tenShaft)
 	c.Tension = c.TensionShaft + c.Weight
 	c.DesignCompression = units.Force(desC)
-	c.DesignTension = units.Force(tenDes + s.weight)
+	c.DesignTension = units.Force(tenDes + a.upliftWeight()*s.weight)
 	return nil
 }
 
@@ -321,7 +322,7 @@ func (a *Analysis) tipAt(z float64, out *tipResult, detail *tipDetail, hint int)
 	li := ivk.layer
 	lp := &a.plans[li]
 	if a.useCase && lp.fTip == 0 {
-		return fmt.Errorf("layers[%d] (%s): design case %s has no resistance factor for tip method %q; give one", li, lp.layer.Name, a.cs.Name, lp.tip.ID())
+		return a.missingFactor(li, TipResistance)
 	}
 	if !direct && lp.tm.ok {
 		sv := ivk.effective(z)
