@@ -549,7 +549,8 @@ func (l LRFD) Cases(inst Installation) ([]Case, error) {
 	}
 	for i, r := range l.Rows {
 		if !(r.Value > 0 && r.Value <= 1) || r.Kind < TipResistance || r.Kind > TensionResistance {
-			return nil, &FieldError{Field: fmt.Sprintf("design.rows[%d] (%s %s)", i, r.Kind, r.Method), Value: r.Value, Range: "(0, 1]"}
+			return nil, &FieldError{Field: fmt.Sprintf("design.rows[%d]", i), Value: r.Value, Range: "(0, 1]",
+				Note: fmt.Sprintf("%s factor for %q", r.Kind, r.Method)}
 		}
 	}
 	if !(l.Permanent >= 1) || math.IsInf(l.Permanent, 0) {
