@@ -52,16 +52,32 @@
 //   - Self-weight: by default Rc = Qp + Qs (the pile's weight balances the
 //     overburden it displaces, as hand methods assume); WeightNet uses
 //     qp − σ′v at the tip; WeightGross subtracts W′. In tension the pile's
-//     effective weight W′ (buoyant below the water table) always adds to
-//     the shaft resistance, at a factor of 1.
+//     effective weight W′ (buoyant below the water table) adds to the shaft
+//     resistance: at 1 in characteristic values, and in a design case at
+//     the basis's factor on a favourable permanent action (Case.Weight:
+//     AASHTO's DC minimum 0.90, EN 1997-1 γG,fav = 1.0, 1/F under a factor
+//     of safety unless SafetyFactor.WeightUnfactored).
 //   - Tension shaft resistance is the compression unit friction times a
-//     tension factor (TensionSame by default); design bases apply their
-//     own tension factors (EN 1997-1 γs,t; AASHTO φ for uplift).
-//   - Design bases: SafetyFactor, LRFD (with the AASHTODrivenPiles and
-//     AASHTODrilledShafts presets) and Eurocode7 (EN 1997-1 DA1, DA2, DA3
-//     with sets R1 to R4, ξ3/ξ4 and a model factor; M2 soil factors for DA3
-//     divide tanφ′ and su). A basis gives one or more Cases; Check runs an
-//     analysis per case and Verify compares Ed with Rd.
+//     tension factor by drainage class (DefaultTension: 0.7 in drained
+//     layers after De Nicola & Randolph 1993, 1.0 in undrained layers);
+//     TensionSame, or a factor of 1 given for drained layers, switches the
+//     reduction off (TensionFactor.Unreduced, for a warning). Design bases
+//     apply their own tension factors on top (EN 1997-1 γs,t; AASHTO φ for
+//     uplift).
+//   - Design bases: SafetyFactor, LRFD and Eurocode7. LRFD factors belong to
+//     methods: a preset (AASHTODrivenPiles, AASHTODrilledShafts) holds its
+//     table as FactorRows (a tip factor may be paired with the shaft method
+//     of its bearing layer, a row may be limited to a drainage class), covers
+//     only the methods and installations it was calibrated for, and names
+//     them (LRFD.Calibrated, for defaults that follow the preset); a method
+//     without a factor is a *MissingFactorError naming the calc-file key.
+//     Eurocode7 (EN 1997-1 DA1, DA2, DA3 with sets R1 to R4, ξ3/ξ4 and a
+//     model factor; M2 soil factors for DA3 divide tanφ′ and su) takes Annex
+//     A's recommended values or given ones (EN7Factors; UKAnnex for the UK
+//     National Annex), and VerifyProfiles derives the characteristic
+//     resistance from several ground test profiles. A basis gives one or
+//     more Cases; Check runs an analysis per case and Verify compares Ed
+//     with Rd. Bad design input is a *FieldError naming the field.
 //
 // Results are for qualified engineers: check them against local codes,
 // the site investigation and load tests.
