@@ -528,6 +528,26 @@ func checkFactorMap(path string, m map[string]float64, known []string) error {
 	return nil
 }
 
+// Overridden returns the rows of the table that a map entry replaces (a
+// value given for a method the table already covers), so that the output
+// can say which published factors were set aside.
+func (l LRFD) Overridden() []FactorRow {
+	var out []FactorRow
+	for _, r := range l.Rows {
+		m := l.Tip
+		switch r.Kind {
+		case ShaftResistance:
+			m = l.Shaft
+		case TensionResistance:
+			m = l.Tension
+		}
+		if v, ok := m[r.Method]; ok && v != r.Value {
+			out = append(out, r)
+		}
+	}
+	return out
+}
+
 // Cases returns the single verification.
 func (l LRFD) Cases(inst Installation) ([]Case, error) {
 	if len(l.Installations) > 0 && !slices.Contains(l.Installations, inst) {

@@ -601,3 +601,21 @@ func TestFillKeepsGivenMethods(t *testing.T) {
 		t.Error("an unimplemented method accepted")
 	}
 }
+
+// TestOverridden: a factor given for a method the table covers replaces
+// the table's row, and Overridden lists the rows set aside.
+func TestOverridden(t *testing.T) {
+	l := AASHTODrivenPiles()
+	if len(l.Overridden()) != 0 {
+		t.Fatal("the preset overrides itself")
+	}
+	l.Shaft["beta"] = 0.3
+	cs := caseOf(t, l, DrivenHigh)
+	if v, _ := cs.lookup(ShaftResistance, "beta", "", profile.Undrained); v != 0.3 {
+		t.Errorf("given β factor: %g, want 0.3", v)
+	}
+	o := l.Overridden()
+	if len(o) != 1 || o[0].Method != "beta" || o[0].Value != 0.25 || o[0].Kind != ShaftResistance {
+		t.Errorf("Overridden: %+v", o)
+	}
+}

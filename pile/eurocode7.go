@@ -345,7 +345,13 @@ func CharacteristicXi(cal []units.Force, xi3, xi4 float64) (units.Force, error) 
 // is a favourable permanent action: γG,fav of the combination's set (1.0 in
 // A1 and A2). Bond & Harris (2008, §13.4) write it as a reduction of the
 // design tension action; adding it to the resistance, as here, gives the
-// same verdict at the limit (Ed ≤ Rd).
+// same verdict at the limit (Ed ≤ Rd). These are GEO verifications of the
+// pile's pull-out (§7.6.3). Where the tension comes from buoyancy of the
+// structure, EN 1997-1 also asks for the UPL limit state (§2.4.7.4, Annex
+// A.5), with γG,stb = 0.9 on stabilising permanent actions, γG,dst = 1.0,
+// γQ,dst = 1.5 and γs;t = 1.4 on tensile pile resistance (read in Tomlinson
+// & Woodward 2008, Tables 6.1 and 6.2, p. 312); qult does not build a UPL
+// case: check it separately.
 type Eurocode7 struct {
 	Approach Approach
 	// Total divides the total resistance by γt instead of tip and shaft
