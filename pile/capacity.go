@@ -221,11 +221,11 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 			lamFlags = shaftFlags(r.Flags)
 		}
 		q := fav * s.lamLen
-		t := a.tension.For(profile.Undrained) // λ layers are undrained
+		tu := a.tension.For(profile.Undrained) // λ layers are undrained
 		outer += q
 		design += s.lamF * q
-		tension += s.lamFt * t * q
-		uplift += t * q
+		tension += s.lamFt * tu * q
+		uplift += tu * q
 	}
 	var tr tipResult
 	if err := a.tipAt(t, &tr, nil, s.k); err != nil {
