@@ -3,8 +3,6 @@ package cite
 // Sources of the shaft package's rules for tension, interface friction and
 // the λ method's limit.
 var (
-	DeNicolaRandolph1993 = Source{Key: "denicola-randolph1993", Authors: "De Nicola, A., Randolph, M.F.", Year: 1993,
-		Title: "Tensile and compressive shaft capacity of piles in sand", Publication: "Géotechnique 43(4), 565-583"}
 	Fleming2009 = Source{Key: "fleming-piling-2009", Authors: "Fleming, W.G.K., Weltman, A.J., Randolph, M.F., Elson, W.K.", Year: 2009,
 		Title: "Piling Engineering", Publication: "3rd ed., Taylor & Francis, Abingdon"}
 	Potyondy1961 = Source{Key: "potyondy1961", Authors: "Potyondy, J.G.", Year: 1961,

@@ -5,6 +5,7 @@ import (
 	"math"
 
 	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/profile"
 	"github.com/qultgeo/qult/shaft"
 	"github.com/qultgeo/qult/units"
 )
@@ -35,7 +36,8 @@ type Capacity struct {
 type sums struct {
 	outer   float64 // ∫ fs dz, N/m, over layers not using λ
 	design  float64 // ∫ fShaft·fs dz
-	tension float64 // ∫ fTension·fs dz
+	tension float64 // ∫ fTension·t·fs dz, t the layer's tension factor
+	uplift  float64 // ∫ t·fs dz
 	// λ layers: ∫σ′v dz, ∫su dz and their length.
 	lamSig, lamSu, lamLen float64
 	lamF, lamFt           float64 // design multipliers of the λ method
@@ -108,12 +110,12 @@ func (a *Analysis) intervalFrom(z0 float64, hint int) int {
 	return lo
 }
 
-// drilledBottom returns the shaft integrals (plain, design and tension)
+// drilledBottom returns the shaft integrals (plain, design, tension, uplift)
 // over [z0, z1] in layers with the drilled-shaft zones in force: the part
 // of the bottom diameter that carries no side resistance.
-func (a *Analysis) drilledBottom(z0, z1 float64, hint int) (outer, design, tension float64, err error) {
+func (a *Analysis) drilledBottom(z0, z1 float64, hint int) (out sums, err error) {
 	if !(z1 > z0) {
-		return 0, 0, 0, nil
+		return out, nil
 	}
 	for k := a.intervalFrom(z0, hint); k < len(a.iv) && a.iv[k].top < z1; k++ {
 		iv := &a.iv[k]
@@ -126,13 +128,14 @@ func (a *Analysis) drilledBottom(z0, z1 float64, hint int) (outer, design, tensi
 		}
 		var t sums
 		if err := a.segment(&t, iv, top, bot); err != nil {
-			return 0, 0, 0, err
+			return sums{}, err
 		}
-		outer += t.outer
-		design += t.design
-		tension += t.tension
+		out.outer += t.outer
+		out.design += t.design
+		out.tension += t.tension
+		out.uplift += t.uplift
 	}
-	return outer, design, tension, nil
+	return out, nil
 }
 
 // inZone reports whether depth z lies in a zone without shaft friction.
@@ -161,11 +164,7 @@ func (a *Analysis) segment(s *sums, iv *interval, z0, z1 float64) error {
 		return nil
 	}
 	if a.useCase && (lp.fShaft == 0 || lp.fTension == 0) {
-		id := lambdaID
-		if !lp.lambda {
-			id = lp.shaft.ID()
-		}
-		return fmt.Errorf("layers[%d] (%s): design case %s has no resistance factor for shaft method %q; give one", iv.layer, lp.layer.Name, a.cs.Name, id)
+		return a.missingFactor(iv.layer, ShaftResistance)
 	}
 	if iv.held {
 		s.flags |= CriticalDepthApplied
@@ -215,9 +214,11 @@ func (a *Analysis) segment(s *sums, iv *interval, z0, z1 float64) error {
 		q = v
 		s.flags |= fl
 	}
+	t := a.tension.For(lp.layer.Drainage)
 	s.outer += q
 	s.design += lp.fShaft * q
-	s.tension += lp.fTension * q
+	s.tension += lp.fTension * t * q
+	s.uplift += t * q
 	return nil
 }
 
@@ -243,7 +244,7 @@ func (a *Analysis) pileWeight(z0, z1 float64) float64 {
 // finish adds the λ part and the tip, and assembles the capacity.
 func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	*c = Capacity{TipDepth: units.Length(t)}
-	outer, design, tension := s.outer, s.design, s.tension
+	outer, design, tension, uplift := s.outer, s.design, s.tension, s.uplift
 	var lamFlags Flags
 	if s.lamLen > 0 {
 		L := t - float64(a.pile.HeadDepth)
@@ -259,21 +260,24 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 			lamFlags = shaftFlags(r.Flags)
 		}
 		q := fav * s.lamLen
+		tu := a.tension.For(profile.Undrained) // λ layers are undrained
 		outer += q
 		design += s.lamF * q
-		tension += s.lamFt * q
+		tension += s.lamFt * tu * q
+		uplift += tu * q
 	}
 	var zoneFlags Flags
 	if a.drilled {
 		// No side resistance in the bottom diameter of drilled-shaft α layers.
-		o, d, tn, err := a.drilledBottom(max(t-a.size, float64(a.pile.HeadDepth)), t, s.k)
+		z, err := a.drilledBottom(max(t-a.size, float64(a.pile.HeadDepth)), t, s.k)
 		if err != nil {
 			return err
 		}
-		if o != 0 {
-			outer -= o
-			design -= d
-			tension -= tn
+		if z.outer != 0 {
+			outer -= z.outer
+			design -= z.design
+			tension -= z.tension
+			uplift -= z.uplift
 			zoneFlags = DrilledZones
 		}
 	}
@@ -287,7 +291,6 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	}
 	c.UnitTip = units.Stress(qp)
 	c.Flags = s.flags | tr.flags | lamFlags | zoneFlags
-	tf := a.tension.Value
 	c.Weight = units.Force(s.weight)
 	// Modes: plugged (gross area, outer perimeter) and unplugged (material
 	// area, outer plus inner perimeter).
@@ -296,7 +299,7 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	c.Plugged = true
 	c.Tip, c.Shaft = units.Force(plTip), units.Force(plShaft)
 	desC := plDes
-	tenShaft, tenDes := tf*outer*a.outer, tf*tension*a.outer
+	tenShaft, tenDes := uplift*a.outer, tension*a.outer
 	if a.pile.Section.CanPlug() {
 		unTip, unShaft := qp*a.mat, outer*(a.outer+a.inner)
 		unDes := tr.f*qp*a.mat + design*(a.outer+a.inner)
@@ -316,7 +319,7 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 			}
 		}
 		if a.pile.Plug == Unplugged {
-			tenShaft, tenDes = tf*outer*(a.outer+a.inner), tf*tension*(a.outer+a.inner)
+			tenShaft, tenDes = uplift*(a.outer+a.inner), tension*(a.outer+a.inner)
 		}
 	}
 	c.Compression = c.Tip + c.Shaft
@@ -327,7 +330,7 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	c.TensionShaft = units.Force(tenShaft)
 	c.Tension = c.TensionShaft + c.Weight
 	c.DesignCompression = units.Force(desC)
-	c.DesignTension = units.Force(tenDes + s.weight)
+	c.DesignTension = units.Force(tenDes + a.upliftWeight()*s.weight)
 	return nil
 }
 
@@ -388,7 +391,7 @@ func (a *Analysis) tipAt(z float64, out *tipResult, detail *tipDetail, hint int)
 	li := ivk.layer
 	lp := &a.plans[li]
 	if a.useCase && lp.fTip == 0 {
-		return fmt.Errorf("layers[%d] (%s): design case %s has no resistance factor for tip method %q; give one", li, lp.layer.Name, a.cs.Name, lp.tip.ID())
+		return a.missingFactor(li, TipResistance)
 	}
 	if !direct && lp.tm.ok {
 		sv := ivk.effective(z)

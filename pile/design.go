@@ -5,8 +5,12 @@ import (
 	"maps"
 	"math"
 	"slices"
+	"strings"
 
+	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/cite"
+	"github.com/qultgeo/qult/profile"
+	"github.com/qultgeo/qult/shaft"
 	"github.com/qultgeo/qult/units"
 )
 
@@ -37,42 +41,252 @@ func (l Loads) Validate(path string) error {
 		{"tension.permanent", l.Tension.Permanent}, {"tension.variable", l.Tension.Variable},
 	} {
 		if !(f.v >= 0) || math.IsInf(float64(f.v), 0) {
-			return fmt.Errorf("%s.%s: %v is outside 0 to ∞ kN", path, f.name, f.v)
+			return &FieldError{Field: path + "." + f.name, Value: f.v.KN(), Unit: "kN", Range: "0 to ∞"}
 		}
 	}
 	return nil
+}
+
+// FieldError is a design input outside its accepted range: the field path
+// (as in a calc file), the value and the range.
+type FieldError struct {
+	Field string  // such as `design.tip["nc9"]`
+	Value float64 // the value given, in Unit
+	Unit  string  // "" for a ratio
+	Range string  // the accepted range, such as "(0, 1]"
+	Note  string  // an optional explanation
+}
+
+func (e *FieldError) Error() string {
+	s := fmt.Sprintf("%s: %g", e.Field, e.Value)
+	if e.Unit != "" {
+		s += " " + e.Unit
+	}
+	s += " is outside " + e.Range
+	if e.Note != "" {
+		s += " (" + e.Note + ")"
+	}
+	return s
+}
+
+// Resistance names the part of a pile's resistance a factor multiplies.
+type Resistance uint8
+
+// The parts of the resistance.
+const (
+	TipResistance     Resistance = iota + 1 // tip (base) in compression
+	ShaftResistance                         // shaft in compression
+	TensionResistance                       // shaft in tension (uplift)
+)
+
+var resistanceIDs = [...]string{TipResistance: "tip", ShaftResistance: "shaft", TensionResistance: "tension"}
+
+// String returns "tip", "shaft" or "tension".
+func (r Resistance) String() string {
+	if r > 0 && int(r) < len(resistanceIDs) {
+		return resistanceIDs[r]
+	}
+	return fmt.Sprintf("Resistance(%d)", int(r))
+}
+
+// key returns the calc-file map that holds factors of this kind.
+func (r Resistance) key() string {
+	if r == TensionResistance {
+		return "design.uplift"
+	}
+	return "design." + r.String()
+}
+
+// FactorRow is one row of a published resistance factor table: the factor
+// on one part of the resistance when it is computed by one method,
+// optionally only with a given shaft method (for a tip method calibrated
+// together with a shaft method) and only in one drainage class.
+type FactorRow struct {
+	Kind   Resistance
+	Method string           // method identifier ("lambda" for the λ method)
+	With   string           // tip rows: the shaft method of the bearing layer it was calibrated with; "" for any
+	Class  profile.Drainage // DrainageUnset for either class
+	Value  float64          // the multiplier, (0, 1]
+	Where  string           // the table and its row, for the report
+}
+
+// matches reports whether row r applies to a method of kind k in a layer
+// of class cls whose shaft method is with.
+func (r FactorRow) matches(k Resistance, method, with string, cls profile.Drainage) bool {
+	return r.Kind == k && r.Method == method && (r.With == "" || r.With == with) &&
+		(r.Class == profile.DrainageUnset || r.Class == cls)
 }
 
 // Case is one verification a design basis asks for: multipliers on the
 // characteristic resistances, partial factors on the actions, and the
 // factors on soil strength the resistance is computed with.
 //
-//	Rd = Tip(method)·Rb + Σ Shaft(method)·Rs,i        (compression)
-//	Rd = Σ Tension(method)·Rs,i + weight term           (tension)
+//	Rd = f_tip·Rb + Σ f_shaft,i·Rs,i                 (compression)
+//	Rd = Σ f_tension,i·Rs,t,i + Weight·W′            (tension)
 //	Ed = Permanent·G + Variable·Q
+//
+// A layer's multiplier is found in this order: the map entry for its
+// method's identifier; else the most specific matching row of Rows (a row
+// naming the paired shaft method before one that does not, a row limited
+// to the layer's drainage class before one that is not); else the map
+// entry "" (a default for any method); else there is none, and an
+// analysis that needs it returns a *MissingFactorError.
 type Case struct {
 	Name string // such as "DA1-1" or "FS"
 
 	// Resistance multipliers (1/γ for partial and global factors, φ for
-	// LRFD), by method identifier; the entry "" is the default.
+	// LRFD) given by method identifier; the entry "" is the default.
 	Tip     map[string]float64
 	Shaft   map[string]float64
 	Tension map[string]float64
+	// Rows are a published table's factors (see FactorRow).
+	Rows []FactorRow
 
 	// Partial factors on the characteristic actions.
 	Permanent, Variable float64
+
+	// Weight multiplies the pile's effective weight W′ where it adds to the
+	// design resistance in tension: the basis's factor on a favourable
+	// permanent action (AASHTO γp,min for DC 0.90; EN 1997-1 γG,fav 1.0),
+	// 1/F with a factor of safety. 0 leaves the weight out.
+	Weight float64
 
 	// Soil factors: tanφ′ and su are divided by these before the
 	// resistance is computed (EN 1997-1 set M2); 1 means unfactored.
 	TanPhi, Su float64
 }
 
-// factor returns m[id], or m[""] when id has no entry, or 0 when neither.
-func factor(m map[string]float64, id string) float64 {
-	if v, ok := m[id]; ok {
-		return v
+// lookup returns the multiplier of case c on resistance k by method, for a
+// layer of class cls whose shaft method is with (see Case).
+func (c *Case) lookup(k Resistance, method, with string, cls profile.Drainage) (float64, bool) {
+	m := c.Tip
+	switch k {
+	case ShaftResistance:
+		m = c.Shaft
+	case TensionResistance:
+		m = c.Tension
 	}
-	return m[""]
+	if v, ok := m[method]; ok {
+		return v, true
+	}
+	best, score := 0.0, -1
+	for _, r := range c.Rows {
+		if !r.matches(k, method, with, cls) {
+			continue
+		}
+		s := 0
+		if r.With != "" {
+			s += 2
+		}
+		if r.Class != profile.DrainageUnset {
+			s++
+		}
+		if s > score {
+			best, score = r.Value, s
+		}
+	}
+	if score >= 0 {
+		return best, true
+	}
+	v, ok := m[""]
+	return v, ok
+}
+
+// shaftID returns the identifier under which a layer's shaft method finds
+// its factor: "lambda" for the λ method.
+func (lp *layerPlan) shaftID() string {
+	if lp.lambda || lp.shaft == nil {
+		return lambdaID
+	}
+	return lp.shaft.ID()
+}
+
+// baseID returns the identifier of the method inside a capped shaft
+// method ("beta-api" for "beta-api+limit-api"), or id itself.
+func baseID(id string) string {
+	if i := strings.IndexByte(id, '+'); i > 0 {
+		return id[:i]
+	}
+	return id
+}
+
+// resolveFactors sets every layer's design multipliers from the analysis'
+// design case (see Case for the order of look-up). A layer left with 0
+// has no factor: using it is an error (see MissingFactorError).
+func (a *Analysis) resolveFactors() {
+	if !a.useCase {
+		return
+	}
+	for i := range a.plans {
+		lp := &a.plans[i]
+		cls := lp.layer.Drainage
+		sid := lp.shaftID()
+		get := func(k Resistance, id, with string) float64 {
+			if v, ok := a.cs.lookup(k, id, with, cls); ok {
+				return v
+			}
+			if b := baseID(id); b != id {
+				v, _ := a.cs.lookup(k, b, with, cls)
+				return v
+			}
+			return 0
+		}
+		if lp.tip != nil {
+			lp.fTip = get(TipResistance, lp.tip.ID(), baseID(sid))
+		}
+		lp.fShaft = get(ShaftResistance, sid, "")
+		lp.fTension = get(TensionResistance, sid, "")
+	}
+}
+
+// MissingFactorError says that a design case has no resistance factor for
+// a method an analysis uses: the calc file must give one under Key().
+type MissingFactorError struct {
+	Case      string     // the design case, such as "aashto-driven"
+	Kind      Resistance // tip, shaft or tension
+	Method    string     // the method's identifier
+	With      string     // for a tip: the shaft method of the bearing layer
+	Class     profile.Drainage
+	Layer     int // layer index
+	LayerName string
+}
+
+// Key returns the calc-file key under which the factor can be given, such
+// as "design.tip.meyerhof" or "design.uplift.beta".
+func (e *MissingFactorError) Key() string { return e.Kind.key() + "." + e.Method }
+
+func (e *MissingFactorError) Error() string {
+	with := ""
+	if e.Kind == TipResistance && e.With != "" {
+		with = fmt.Sprintf(" (with shaft method %q)", e.With)
+	}
+	return fmt.Sprintf("layers[%d] (%s): design case %s has no resistance factor for %s method %q in a %s layer%s; give one as %s",
+		e.Layer, e.LayerName, e.Case, e.Kind, e.Method, e.Class, with, e.Key())
+}
+
+// missingFactor returns the error for layer i, whose factor of kind k is
+// missing (for the shaft: whichever of compression and tension is 0).
+func (a *Analysis) missingFactor(i int, k Resistance) error {
+	lp := &a.plans[i]
+	e := &MissingFactorError{Case: a.cs.Name, Kind: k, Class: lp.layer.Drainage, Layer: i, LayerName: lp.layer.Name}
+	if k == TipResistance {
+		e.Method, e.With = lp.tip.ID(), lp.shaftID()
+		return e
+	}
+	if lp.fShaft != 0 {
+		e.Kind = TensionResistance
+	}
+	e.Method = lp.shaftID()
+	return e
+}
+
+// upliftWeight returns the multiplier on W′ in the design tension
+// resistance: 1 for characteristic values, the case's Weight otherwise.
+func (a *Analysis) upliftWeight() float64 {
+	if !a.useCase {
+		return 1
+	}
+	return a.cs.Weight
 }
 
 // Basis is a design basis: it turns a pile's characteristic resistance and
@@ -88,15 +302,23 @@ type Basis interface {
 // SafetyFactor is the allowable-stress basis: resistance divided by a
 // global factor of safety, or by separate factors on tip and shaft,
 //
-//	Rd = Rb/Ftip + Rs/Fshaft,  Ed = G + Q (unfactored).
+//	Rd = Rb/Ftip + Rs/Fshaft,  Ed = G + Q (unfactored)
+//	Rt,d = Rs,t/Ft + W′/Ft     (WeightUnfactored: + W′)
 //
 // Set Global, or both Tip and Shaft. Tension divides the tension
 // resistance; 0 means Global, or Shaft when Global is 0.
+//
+// The pile's weight W′ is divided by the tension factor by default. Practice
+// often counts it unfactored or leaves it out; leaving it out is the
+// conservative habit Bond & Harris (2008, §13.4, tension piles) note, and
+// dividing by the factor is our default between the two. WeightUnfactored
+// counts W′ at its full value (a choice the output should show).
 type SafetyFactor struct {
-	Global  float64
-	Tip     float64
-	Shaft   float64
-	Tension float64
+	Global           float64
+	Tip              float64
+	Shaft            float64
+	Tension          float64
+	WeightUnfactored bool
 }
 
 // ID returns "safety-factor".
@@ -106,59 +328,154 @@ func (SafetyFactor) ID() string { return "safety-factor" }
 // for static analyses without load tests (Das 2019, §12.11; Tomlinson &
 // Woodward 2008, §4.1).
 func (SafetyFactor) Refs() []cite.Ref {
-	return []cite.Ref{{Source: cite.Das2019, Where: "factor of safety on static capacity"}}
+	return []cite.Ref{{Source: cite.Das2019, Where: "factor of safety on static capacity"},
+		{Source: cite.BondHarris2008, Where: "§13.4, pile self-weight in tension"}}
 }
 
 func checkFactor(field string, v float64) error {
 	if !(v >= 1) || math.IsInf(v, 0) {
-		return fmt.Errorf("%s: %g is outside 1 to ∞", field, v)
+		return &FieldError{Field: field, Value: v, Range: "1 to ∞"}
 	}
 	return nil
 }
 
 // Cases returns the single verification "FS".
 func (s SafetyFactor) Cases(Installation) ([]Case, error) {
-	tip, shaft, ten := s.Tip, s.Shaft, s.Tension
+	tip, sh, ten := s.Tip, s.Shaft, s.Tension
 	tipName, shaftName, tenName := "design.tip_factor", "design.shaft_factor", "design.tension_factor"
 	if s.Global != 0 {
-		if tip != 0 || shaft != 0 {
-			return nil, fmt.Errorf("design.factor: give either a global factor or factors on tip and shaft, not both")
+		if tip != 0 || sh != 0 {
+			return nil, &FieldError{Field: "design.factor", Value: s.Global, Range: "0 when tip and shaft factors are given",
+				Note: "give either a global factor or factors on tip and shaft, not both"}
 		}
-		tip, shaft = s.Global, s.Global
+		tip, sh = s.Global, s.Global
 		tipName, shaftName = "design.factor", "design.factor"
 	}
 	if ten == 0 {
-		ten, tenName = shaft, shaftName
+		ten, tenName = sh, shaftName
 	}
 	for _, f := range []struct {
 		n string
 		v float64
-	}{{tipName, tip}, {shaftName, shaft}, {tenName, ten}} {
+	}{{tipName, tip}, {shaftName, sh}, {tenName, ten}} {
 		if err := checkFactor(f.n, f.v); err != nil {
 			return nil, err
 		}
 	}
+	w := 1 / ten
+	if s.WeightUnfactored {
+		w = 1
+	}
 	return []Case{{
-		Name: "FS", Tip: map[string]float64{"": 1 / tip}, Shaft: map[string]float64{"": 1 / shaft},
-		Tension: map[string]float64{"": 1 / ten}, Permanent: 1, Variable: 1, TanPhi: 1, Su: 1,
+		Name: "FS", Tip: map[string]float64{"": 1 / tip}, Shaft: map[string]float64{"": 1 / sh},
+		Tension: map[string]float64{"": 1 / ten}, Permanent: 1, Variable: 1, Weight: w, TanPhi: 1, Su: 1,
 	}}, nil
+}
+
+// PresetMethods are the methods, by identifier and drainage class, that a
+// preset's factors were calibrated for; "" where the preset names none
+// that qult implements. A calc file that does not choose a method can take
+// these, so that the preset works with its own methods (see Fill).
+type PresetMethods struct {
+	TipDrained, TipUndrained     string
+	ShaftDrained, ShaftUndrained string
+}
+
+// presetMethod returns the method value of a preset's identifier.
+func presetTip(id string) (bearing.Tip, bool) {
+	switch id {
+	case "nc9":
+		return bearing.Skempton{}, true
+	case "shaft-n60-sand":
+		return bearing.ShaftSand{}, true
+	}
+	return nil, false
+}
+
+func presetShaft(id string) (shaft.Unit, bool) {
+	switch id {
+	case "alpha-api":
+		return shaft.AlphaAPI{}, true
+	case "alpha-drilled":
+		return shaft.AlphaDrilled{}, true
+	case "beta-drilled-sand":
+		return shaft.DrilledSand{}, true
+	case "beta-drilled-k0":
+		return shaft.DrilledSandK0{}, true
+	}
+	return nil, false
+}
+
+// Fill returns m with every method m leaves at its default replaced by
+// the preset's method for that drainage class, where the preset names one.
+// Methods m gives are kept (the preset's factors then decide whether they
+// are covered).
+func (p PresetMethods) Fill(m Methods) (Methods, error) {
+	for _, f := range []struct {
+		id  string
+		tip *bearing.Tip
+		sh  *shaft.Unit
+		lam bool
+	}{
+		{p.TipDrained, &m.TipDrained, nil, false}, {p.TipUndrained, &m.TipUndrained, nil, false},
+		{p.ShaftDrained, nil, &m.ShaftDrained, false}, {p.ShaftUndrained, nil, &m.ShaftUndrained, true},
+	} {
+		switch {
+		case f.id == "":
+		case f.tip != nil:
+			if *f.tip != nil {
+				continue
+			}
+			t, ok := presetTip(f.id)
+			if !ok {
+				return m, fmt.Errorf("design.preset: tip method %q has no implementation", f.id)
+			}
+			*f.tip = t
+		default:
+			if *f.sh != nil || (f.lam && m.UndrainedLambda) {
+				continue
+			}
+			if f.lam && f.id == lambdaID {
+				m.UndrainedLambda = true
+				continue
+			}
+			s, ok := presetShaft(f.id)
+			if !ok {
+				return m, fmt.Errorf("design.preset: shaft method %q has no implementation", f.id)
+			}
+			*f.sh = s
+		}
+	}
+	return m, nil
 }
 
 // LRFD is a load and resistance factor basis:
 //
-//	Rd = φtip·Rb + Σ φshaft,i·Rs,i,  Ed = γG·G + γQ·Q.
+//	Rd = φtip·Rb + Σ φshaft,i·Rs,i,   Rt,d = Σ φup,i·Rs,t,i + γW·W′
+//	Ed = γG·G + γQ·Q
 //
-// Resistance factors are keyed by method identifier ("" is the default
-// for any method not listed). Every factor the check needs must be there:
-// a method with no factor and no default is an error.
+// Resistance factors come from a published table (Rows, see FactorRow) and
+// from the maps Tip, Shaft and Tension keyed by method identifier ("" is a
+// default for any method not covered); a map entry for a method overrides
+// the table. Every method the check uses must have a factor: a method
+// without one is a *MissingFactorError naming the calc-file key to add.
 type LRFD struct {
 	Name      string             // identifier; "lrfd" when empty
 	Tip       map[string]float64 // φ on tip resistance, by tip method
 	Shaft     map[string]float64 // φ on shaft resistance, by shaft method
 	Tension   map[string]float64 // φ on uplift (shaft) resistance, by shaft method
+	Rows      []FactorRow        // the published table
 	Permanent float64            // γ on permanent loads, such as 1.25 (DC)
 	Variable  float64            // γ on variable loads, such as 1.75 (LL)
-	Sources   []cite.Ref
+	// Weight is the factor on the pile's weight W′ in design uplift
+	// resistance, a favourable permanent action (AASHTO DC minimum 0.90),
+	// 0 to 1; 0 leaves the weight out.
+	Weight float64
+	// Installations the table was calibrated for; empty means any.
+	Installations []Installation
+	// Calibrated are the methods the table names, by drainage class.
+	Calibrated PresetMethods
+	Sources    []cite.Ref
 }
 
 // ID returns the basis name.
@@ -172,254 +489,214 @@ func (l LRFD) ID() string {
 // Refs returns the sources of the factors.
 func (l LRFD) Refs() []cite.Ref { return l.Sources }
 
+// knownTips and knownShafts are the method identifiers a factor map may
+// name (a shaft method capped by a limit, "beta-api+limit-api", is found
+// under its method, the part before "+").
+var (
+	knownTips = func() []string {
+		var ids []string
+		for _, t := range []bearing.Tip{bearing.Meyerhof{}, bearing.Berezantzev{}, bearing.Janbu{}, bearing.Vesic{},
+			bearing.VesicUndrained{}, bearing.APISand{Class: 1}, bearing.APISand{Class: 2}, bearing.APISand{Class: 3},
+			bearing.APISand{Class: 4}, bearing.ShaftSand{}, bearing.Skempton{}, bearing.GivenNq{}, bearing.GivenNc{}} {
+			ids = append(ids, t.ID())
+		}
+		return ids
+	}()
+	knownShafts = func() []string {
+		ids := []string{lambdaID}
+		for _, s := range []shaft.Unit{shaft.Beta{}, shaft.BetaGiven{}, shaft.Burland{}, shaft.DrilledSand{},
+			shaft.DrilledSandK0{}, shaft.APIBeta{}, shaft.AlphaAPI{}, shaft.AlphaChart{}, shaft.AlphaDrilled{},
+			shaft.AlphaGiven{}} {
+			ids = append(ids, s.ID())
+		}
+		return ids
+	}()
+)
+
+// checkFactorMap checks a map of resistance factors: every key a known
+// method identifier (or "" for the default), every value in (0, 1].
+func checkFactorMap(path string, m map[string]float64, known []string) error {
+	for _, k := range slices.Sorted(maps.Keys(m)) { // sorted: the first bad key is the same on every run
+		if k != "" && !slices.Contains(known, baseID(k)) {
+			return &FieldError{Field: fmt.Sprintf("%s[%q]", path, k), Value: m[k], Range: "the keys of known methods",
+				Note: fmt.Sprintf("%q is not a method identifier; known: %s", k, strings.Join(known, ", "))}
+		}
+		if v := m[k]; !(v > 0 && v <= 1) {
+			return &FieldError{Field: fmt.Sprintf("%s[%q]", path, k), Value: v, Range: "(0, 1]"}
+		}
+	}
+	return nil
+}
+
+// Overridden returns the rows of the table that a map entry replaces (a
+// value given for a method the table already covers), so that the output
+// can say which published factors were set aside.
+func (l LRFD) Overridden() []FactorRow {
+	var out []FactorRow
+	for _, r := range l.Rows {
+		m := l.Tip
+		switch r.Kind {
+		case ShaftResistance:
+			m = l.Shaft
+		case TensionResistance:
+			m = l.Tension
+		}
+		if v, ok := m[r.Method]; ok && v != r.Value {
+			out = append(out, r)
+		}
+	}
+	return out
+}
+
 // Cases returns the single verification.
-func (l LRFD) Cases(Installation) ([]Case, error) {
+func (l LRFD) Cases(inst Installation) ([]Case, error) {
+	if len(l.Installations) > 0 && !slices.Contains(l.Installations, inst) {
+		var ids []string
+		for _, i := range l.Installations {
+			ids = append(ids, i.String())
+		}
+		return nil, fmt.Errorf("pile.installation: %s: the %s factors were calibrated for %s piles only; want one of those, or another basis",
+			inst, l.ID(), strings.Join(ids, ", "))
+	}
 	for _, m := range []struct {
-		n string
-		m map[string]float64
-	}{{"design.tip", l.Tip}, {"design.shaft", l.Shaft}, {"design.tension", l.Tension}} {
-		for _, k := range slices.Sorted(maps.Keys(m.m)) { // sorted: the first bad key is the same on every run
-			if v := m.m[k]; !(v > 0 && v <= 1) {
-				return nil, fmt.Errorf("%s[%q]: resistance factor %g is outside (0, 1]", m.n, k, v)
-			}
+		n     string
+		m     map[string]float64
+		known []string
+	}{{"design.tip", l.Tip, knownTips}, {"design.shaft", l.Shaft, knownShafts}, {"design.uplift", l.Tension, knownShafts}} {
+		if err := checkFactorMap(m.n, m.m, m.known); err != nil {
+			return nil, err
+		}
+	}
+	for i, r := range l.Rows {
+		if !(r.Value > 0 && r.Value <= 1) || r.Kind < TipResistance || r.Kind > TensionResistance {
+			return nil, &FieldError{Field: fmt.Sprintf("design.rows[%d]", i), Value: r.Value, Range: "(0, 1]",
+				Note: fmt.Sprintf("%s factor for %q", r.Kind, r.Method)}
 		}
 	}
 	if !(l.Permanent >= 1) || math.IsInf(l.Permanent, 0) {
-		return nil, fmt.Errorf("design.permanent: load factor %g is outside 1 to ∞", l.Permanent)
+		return nil, &FieldError{Field: "design.permanent", Value: l.Permanent, Range: "1 to ∞", Note: "load factor"}
 	}
 	if !(l.Variable >= 1) || math.IsInf(l.Variable, 0) {
-		return nil, fmt.Errorf("design.variable: load factor %g is outside 1 to ∞", l.Variable)
+		return nil, &FieldError{Field: "design.variable", Value: l.Variable, Range: "1 to ∞", Note: "load factor"}
 	}
-	return []Case{{Name: l.ID(), Tip: l.Tip, Shaft: l.Shaft, Tension: l.Tension,
-		Permanent: l.Permanent, Variable: l.Variable, TanPhi: 1, Su: 1}}, nil
+	if !(l.Weight >= 0 && l.Weight <= 1) {
+		return nil, &FieldError{Field: "design.weight", Value: l.Weight, Range: "0 to 1", Note: "factor on the pile's weight in uplift"}
+	}
+	return []Case{{Name: l.ID(), Tip: l.Tip, Shaft: l.Shaft, Tension: l.Tension, Rows: l.Rows,
+		Permanent: l.Permanent, Variable: l.Variable, Weight: l.Weight, TanPhi: 1, Su: 1}}, nil
 }
 
-// Approach is an EN 1997-1 design approach.
-type Approach int
+// aashtoDCMin is the minimum load factor on DC (dead load of structural
+// components) of AASHTO LRFD Table 3.4.1-2 (from memory), applied to the
+// pile's weight where it resists uplift.
+const aashtoDCMin = 0.90
 
-// The design approaches of EN 1997-1 §2.4.7.3.4.
-const (
-	DA1 Approach = iota + 1 // combination 1: A1+M1+R1; combination 2: A2+M1+R4
-	DA2                     // A1+M1+R2
-	DA3                     // A1 (structural actions, as a column load on a pile is) + M2 + R3
-)
-
-var approachIDs = [...]string{DA1: "DA1", DA2: "DA2", DA3: "DA3"}
-
-// String returns "DA1", "DA2" or "DA3".
-func (a Approach) String() string {
-	if a > 0 && int(a) < len(approachIDs) {
-		return approachIDs[a]
-	}
-	return fmt.Sprintf("Approach(%d)", int(a))
-}
-
-// ParseApproach reads "DA1", "DA2" or "DA3".
-func ParseApproach(s string) (Approach, error) {
-	for a := DA1; a <= DA3; a++ {
-		if approachIDs[a] == s {
-			return a, nil
-		}
-	}
-	return 0, fmt.Errorf("approach %q: want DA1, DA2 or DA3", s)
-}
-
-// Eurocode7 is the EN 1997-1 partial factor basis for axially loaded piles
-// whose resistance is calculated from ground test results (§7.6.2.3):
-//
-//	Rb,k = Rb,cal/(ξ·γRd),  Rs,k = Rs,cal/(ξ·γRd)
-//	Rc,d = Rb,k/γb + Rs,k/γs,  Rt,d = Rs,k/γs,t
-//	Fd = γG·Gk + γQ·Qk
-//
-// ξ is ξ3 for Profiles ground profiles (Table A.10): one calculated
-// resistance is both the mean and the minimum, so ξ3 ≥ ξ4 governs.
-// Profiles 0 means the "alternative procedure" of §7.6.2.3(8), with ξ = 1
-// and the model factor γRd alone (the UK National Annex sets γRd = 1.4).
-// Installation chooses the table: A.6 driven, A.7 bored, A.8 CFA.
-type Eurocode7 struct {
-	Approach Approach
-	// Total divides the total resistance by γt instead of tip and shaft
-	// by γb and γs (EN 1997-1 eq. 7.6 against 7.7; both are allowed).
-	Total       bool
-	Profiles    int     // number of ground test profiles n, 0 to use the model factor alone
-	ModelFactor float64 // γRd; 0 means 1.0
-}
-
-// ID returns "en1997".
-func (Eurocode7) ID() string { return "en1997" }
-
-// Refs returns EN 1997-1 Annex A and §7.6.2.3.
-func (Eurocode7) Refs() []cite.Ref {
-	return []cite.Ref{
-		{Source: cite.EN1997, Where: "§2.4.7.3.4, §7.6.2.3, Annex A Tables A.3, A.4, A.6-A.8, A.10"},
-	}
-}
-
-// Partial resistance factors of EN 1997-1 Annex A for sets R1 to R4.
-type rset struct{ b, s, t, st [4]float64 }
-
-// Tables A.6 (driven), A.7 (bored) and A.8 (CFA): γb, γs, γt, γs,t for
-// R1, R2, R3, R4.
-var (
-	en7Driven = rset{b: [4]float64{1.0, 1.1, 1.0, 1.3}, s: [4]float64{1.0, 1.1, 1.0, 1.3},
-		t: [4]float64{1.0, 1.1, 1.0, 1.3}, st: [4]float64{1.25, 1.15, 1.1, 1.6}}
-	en7Bored = rset{b: [4]float64{1.25, 1.1, 1.0, 1.6}, s: [4]float64{1.0, 1.1, 1.0, 1.3},
-		t: [4]float64{1.15, 1.1, 1.0, 1.5}, st: [4]float64{1.25, 1.15, 1.1, 1.6}}
-	en7CFA = rset{b: [4]float64{1.1, 1.1, 1.0, 1.45}, s: [4]float64{1.0, 1.1, 1.0, 1.3},
-		t: [4]float64{1.1, 1.1, 1.0, 1.4}, st: [4]float64{1.25, 1.15, 1.1, 1.6}}
-)
-
-// Table A.10: ξ3 and ξ4 for n = 1, 2, 3, 4, 5, 7, 10 profiles.
-var (
-	xiN = [...]int{1, 2, 3, 4, 5, 7, 10}
-	xi3 = [...]float64{1.40, 1.35, 1.33, 1.31, 1.29, 1.27, 1.25}
-	xi4 = [...]float64{1.40, 1.27, 1.23, 1.20, 1.15, 1.12, 1.08}
-)
-
-// Xi returns the correlation factors ξ3 and ξ4 of EN 1997-1 Table A.10 for
-// n ground profiles. Between tabulated n the factor of the next smaller
-// tabulated n is taken (the safe side); n above 10 takes n = 10.
-func Xi(n int) (xi3v, xi4v float64, err error) {
-	if n < 1 {
-		return 0, 0, fmt.Errorf("design.profiles: %d is outside 1 to ∞", n)
-	}
-	i := 0
-	for j, m := range xiN {
-		if n >= m {
-			i = j
-		}
-	}
-	return xi3[i], xi4[i], nil
-}
-
-// Characteristic returns the characteristic resistance from resistances
-// calculated on n = len(cal) ground profiles, EN 1997-1 eq. 7.8:
-//
-//	Rk = min(mean(Rcal)/ξ3, min(Rcal)/ξ4)
-func Characteristic(cal []units.Force) (units.Force, error) {
-	if len(cal) == 0 {
-		return 0, fmt.Errorf("design.profiles: no calculated resistances given")
-	}
-	x3, x4, err := Xi(len(cal))
-	if err != nil {
-		return 0, err
-	}
-	sum, lo := 0.0, math.Inf(1)
-	for i, r := range cal {
-		if !(r >= 0) || math.IsInf(float64(r), 0) {
-			return 0, fmt.Errorf("design.profiles[%d]: %v is outside 0 to ∞ kN", i, r)
-		}
-		sum += float64(r)
-		lo = min(lo, float64(r))
-	}
-	mean := sum / float64(len(cal))
-	return units.Force(min(mean/x3, lo/x4)), nil
-}
-
-// Cases returns DA1-1 and DA1-2 for DA1, and one case otherwise.
-func (e Eurocode7) Cases(inst Installation) ([]Case, error) {
-	var rs rset
-	switch inst {
-	case DrivenHigh, DrivenLow, Jetted:
-		rs = en7Driven
-	case Bored:
-		rs = en7Bored
-	case Augered:
-		rs = en7CFA
-	default:
-		return nil, fmt.Errorf("pile.installation: %v has no EN 1997-1 resistance table", inst)
-	}
-	gRd := e.ModelFactor
-	if gRd == 0 {
-		gRd = 1
-	}
-	if !(gRd >= 1) || math.IsInf(gRd, 0) {
-		return nil, fmt.Errorf("design.model_factor: %g is outside 1 to ∞", gRd)
-	}
-	xi := 1.0
-	if e.Profiles != 0 {
-		x3, _, err := Xi(e.Profiles)
-		if err != nil {
-			return nil, err
-		}
-		xi = x3
-	}
-	mk := func(name string, r int, gG, gQ, tanPhi, su float64) Case {
-		k := xi * gRd
-		gb, gs := rs.b[r], rs.s[r]
-		if e.Total {
-			gb, gs = rs.t[r], rs.t[r]
-		}
-		return Case{Name: name,
-			Tip:     map[string]float64{"": 1 / (k * gb)},
-			Shaft:   map[string]float64{"": 1 / (k * gs)},
-			Tension: map[string]float64{"": 1 / (k * rs.st[r])},
-			// Table A.3: A1 γG = 1.35, γQ = 1.5; A2 γG = 1.0, γQ = 1.3.
-			Permanent: gG, Variable: gQ, TanPhi: tanPhi, Su: su}
-	}
-	switch e.Approach {
-	case DA1:
-		return []Case{mk("DA1-1", 0, 1.35, 1.5, 1, 1), mk("DA1-2", 3, 1.0, 1.3, 1, 1)}, nil
-	case DA2:
-		return []Case{mk("DA2", 1, 1.35, 1.5, 1, 1)}, nil
-	case DA3:
-		// The load on a pile head is a structural action, so A1 applies
-		// (§2.4.7.3.4.4, note on structural actions); Table A.4, M2:
-		// γφ′ = 1.25 on tanφ′, γcu = 1.4.
-		return []Case{mk("DA3", 2, 1.35, 1.5, 1.25, 1.4)}, nil
-	}
-	return nil, fmt.Errorf("design.approach: %v: want DA1, DA2 or DA3", e.Approach)
-}
-
-// Method families of the AASHTO resistance factor tables, by our method
-// identifiers.
-var (
-	alphaIDs = []string{"alpha-api", "alpha-chart", "alpha-drilled", "alpha-given"}
-	betaIDs  = []string{"beta", "beta-given", "beta-burland", "beta-api", "beta-drilled-sand", "beta-drilled-k0"}
-)
-
-func family(ids []string, phi float64, into map[string]float64) {
+// rows adds a row per method of ids.
+func rows(dst []FactorRow, k Resistance, ids []string, with string, cls profile.Drainage, v float64, where string) []FactorRow {
 	for _, id := range ids {
-		into[id] = phi
+		dst = append(dst, FactorRow{Kind: k, Method: id, With: with, Class: cls, Value: v, Where: where})
 	}
+	return dst
 }
 
-// AASHTODrivenPiles returns the resistance factors for static analysis of
-// driven piles of AASHTO LRFD Bridge Design Specifications Table
-// 10.5.5.2.3-1 (as reproduced in FHWA GEC 12, Hannigan et al. 2016,
-// Table 7-1): side and tip in clay by the α method 0.35, β method 0.25,
-// λ method 0.40; end bearing in clay (Skempton, our "nc9") 0.40; uplift
-// α 0.25, β 0.20, λ 0.30. Strength I load factors: permanent (DC) 1.25,
-// variable (LL) 1.75. Methods for sand tips outside the table (the table's
-// sand method is Nordlund's, which qult does not implement) have no factor:
-// give them in Tip.
+// AASHTODrivenPiles returns the resistance factors for the nominal
+// resistance of single driven piles from static analysis of AASHTO LRFD
+// Bridge Design Specifications Table 10.5.5.2.3-1, as reproduced in FHWA
+// GEC 12 (Hannigan et al. 2016, ch. 7). The values are from memory: the
+// table could not be read here; check them against the table before use.
+//
+// Skin friction and end bearing in clay and mixed soils, each shaft method
+// paired with Skempton's (1951) end bearing (our "nc9"), the tip taking
+// the factor of the shaft method of its bearing layer:
+//
+//	α-method (Tomlinson 1987; Skempton 1951)          0.35   uplift 0.25
+//	β-method (Esrig & Kirby 1979; Skempton 1951)      0.25   uplift 0.20
+//	λ-method (Vijayvergiya & Focht 1972; Skempton)    0.40   uplift 0.30
+//
+// The table's α-method is the total-stress α of driven piles; we take
+// qult's α rules for driven piles (alpha-api, alpha-chart, alpha-given)
+// as that method, not the drilled-shaft α. Its β-method is an effective
+// stress β for clay: it covers beta-burland, beta-given and beta (K and δ
+// given) in undrained layers only; the table has no β for sand. Its sand
+// methods (Nordlund/Thurman 0.45, SPT 0.30, CPT 0.50; uplift 0.35, 0.25,
+// 0.40) have no implementation in qult, so a drained layer needs a factor
+// given for its methods (a *MissingFactorError names the key).
+//
+// Strength I load factors (AASHTO Tables 3.4.1-1 and 3.4.1-2): permanent
+// (DC) 1.25, variable (LL) 1.75; the pile's weight in uplift takes the DC
+// minimum 0.90. The preset covers driven installations only.
 func AASHTODrivenPiles() LRFD {
-	l := LRFD{Name: "aashto-driven", Tip: map[string]float64{"nc9": 0.40}, Shaft: map[string]float64{},
-		Tension: map[string]float64{}, Permanent: 1.25, Variable: 1.75,
-		Sources: []cite.Ref{{Source: cite.AASHTO2020, Where: "Table 10.5.5.2.3-1; Table 3.4.1-1, -2"},
-			{Source: cite.Hannigan2016, Where: "Table 7-1"}}}
-	family(alphaIDs, 0.35, l.Shaft)
-	family(betaIDs, 0.25, l.Shaft)
-	l.Shaft[lambdaID] = 0.40
-	family(alphaIDs, 0.25, l.Tension)
-	family(betaIDs, 0.20, l.Tension)
-	l.Tension[lambdaID] = 0.30
-	return l
+	const where = "AASHTO Table 10.5.5.2.3-1, "
+	alpha := []string{"alpha-api", "alpha-chart", "alpha-given"}
+	beta := []string{"beta-burland", "beta-given", "beta"}
+	u := profile.Undrained
+	var r []FactorRow
+	r = rows(r, ShaftResistance, alpha, "", u, 0.35, where+"α-method (Tomlinson 1987; Skempton 1951)")
+	r = rows(r, ShaftResistance, beta, "", u, 0.25, where+"β-method (Esrig & Kirby 1979; Skempton 1951)")
+	r = rows(r, ShaftResistance, []string{lambdaID}, "", u, 0.40, where+"λ-method (Vijayvergiya & Focht 1972; Skempton 1951)")
+	for _, a := range alpha {
+		r = rows(r, TipResistance, []string{"nc9"}, a, u, 0.35, where+"α-method (Tomlinson 1987; Skempton 1951)")
+	}
+	for _, b := range beta {
+		r = rows(r, TipResistance, []string{"nc9"}, b, u, 0.25, where+"β-method (Esrig & Kirby 1979; Skempton 1951)")
+	}
+	r = rows(r, TipResistance, []string{"nc9"}, lambdaID, u, 0.40, where+"λ-method (Vijayvergiya & Focht 1972; Skempton 1951)")
+	r = rows(r, TensionResistance, alpha, "", u, 0.25, where+"uplift, α-method")
+	r = rows(r, TensionResistance, beta, "", u, 0.20, where+"uplift, β-method")
+	r = rows(r, TensionResistance, []string{lambdaID}, "", u, 0.30, where+"uplift, λ-method")
+	return LRFD{Name: "aashto-driven", Tip: map[string]float64{}, Shaft: map[string]float64{}, Tension: map[string]float64{},
+		Rows: r, Permanent: 1.25, Variable: 1.75, Weight: aashtoDCMin,
+		Installations: []Installation{DrivenHigh, DrivenLow, Jetted},
+		Calibrated:    PresetMethods{TipUndrained: "nc9", ShaftUndrained: "alpha-api"},
+		Sources: []cite.Ref{{Source: cite.AASHTO2020, Where: "Table 10.5.5.2.3-1; Tables 3.4.1-1, 3.4.1-2 (from memory)"},
+			{Source: cite.Hannigan2016, Where: "ch. 7, resistance factors for static analysis"}}}
 }
 
-// AASHTODrilledShafts returns the resistance factors for drilled shafts of
-// AASHTO LRFD Bridge Design Specifications Table 10.5.5.2.4-1 (as applied
-// in FHWA GEC 10, Brown et al. 2018, Appendix A): side in clay (α) 0.45,
-// tip in clay 0.40, side in sand (β) 0.55, tip in sand 0.50; uplift in
-// clay 0.35, in sand 0.45. Strength I load factors 1.25 and 1.75.
+// AASHTODrilledShafts returns the resistance factors for the nominal
+// axial resistance of single drilled shafts of AASHTO LRFD Bridge Design
+// Specifications Table 10.5.5.2.4-1, as applied in FHWA GEC 10 (Brown et
+// al. 2018, Appendix A, Pier 2: side in sand 0.55, side in clay 0.45, tip
+// in sand 0.50, read through the factored resistances of its Table A-4);
+// the other values are from memory:
+//
+//	side, clay: α-method (O'Neill & Reese 1999)        0.45   uplift 0.35
+//	tip, clay: total stress (O'Neill & Reese 1999)     0.40
+//	side, sand: β-method (O'Neill & Reese 1999)        0.55   uplift 0.45
+//	tip, sand: O'Neill & Reese (1999)                  0.50
+//
+// Methods covered: alpha-drilled in undrained layers, beta-drilled-sand and
+// beta-drilled-k0 in drained layers, nc9 (Nc = 9, O'Neill & Reese's Nc for
+// a base deeper than 2.5 diameters) and shaft-n60-sand. A given α or β
+// (the 2018 α, or K0 computed by hand) is the engineer's to declare: give
+// its factor under design.shaft and design.uplift. Rock and IGM rows have
+// no method in qult. Strength I load factors 1.25 and 1.75; the shaft's
+// weight in uplift takes the DC minimum 0.90. Bored piles only.
 func AASHTODrilledShafts() LRFD {
-	l := LRFD{Name: "aashto-drilled", Tip: map[string]float64{"nc9": 0.40, "shaft-n60-sand": 0.50},
-		Shaft: map[string]float64{}, Tension: map[string]float64{}, Permanent: 1.25, Variable: 1.75,
-		Sources: []cite.Ref{{Source: cite.AASHTO2020, Where: "Table 10.5.5.2.4-1; Table 3.4.1-1, -2"},
-			{Source: cite.Brown2018, Where: "Appendix A, resistance factors applied"}}}
-	family(alphaIDs, 0.45, l.Shaft)
-	family(betaIDs, 0.55, l.Shaft)
-	family(alphaIDs, 0.35, l.Tension)
-	family(betaIDs, 0.45, l.Tension)
-	return l
+	const where = "AASHTO Table 10.5.5.2.4-1, "
+	d, u := profile.Drained, profile.Undrained
+	sand := []string{"beta-drilled-sand", "beta-drilled-k0"}
+	var r []FactorRow
+	r = rows(r, ShaftResistance, []string{"alpha-drilled"}, "", u, 0.45, where+"side resistance in clay, α-method")
+	r = rows(r, TipResistance, []string{"nc9"}, "", u, 0.40, where+"tip resistance in clay, total stress")
+	r = rows(r, ShaftResistance, sand, "", d, 0.55, where+"side resistance in sand, β-method")
+	r = rows(r, TipResistance, []string{"shaft-n60-sand"}, "", d, 0.50, where+"tip resistance in sand")
+	r = rows(r, TensionResistance, []string{"alpha-drilled"}, "", u, 0.35, where+"uplift in clay, α-method")
+	r = rows(r, TensionResistance, sand, "", d, 0.45, where+"uplift in sand, β-method")
+	return LRFD{Name: "aashto-drilled", Tip: map[string]float64{}, Shaft: map[string]float64{}, Tension: map[string]float64{},
+		Rows: r, Permanent: 1.25, Variable: 1.75, Weight: aashtoDCMin,
+		Installations: []Installation{Bored},
+		Calibrated: PresetMethods{TipDrained: "shaft-n60-sand", TipUndrained: "nc9",
+			ShaftDrained: "beta-drilled-sand", ShaftUndrained: "alpha-drilled"},
+		Sources: []cite.Ref{{Source: cite.AASHTO2020, Where: "Table 10.5.5.2.4-1; Tables 3.4.1-1, 3.4.1-2 (from memory)"},
+			{Source: cite.Brown2018, Where: "Appendix A, Pier 2, resistance factors applied (Table A-4)"}}}
+}
+
+// factor returns m[id], or m[""] when id has no entry, or 0 when neither:
+// a first pass over the maps alone, before resolveFactors applies the
+// case's rows.
+func factor(m map[string]float64, id string) float64 {
+	if v, ok := m[id]; ok {
+		return v
+	}
+	return m[""]
 }

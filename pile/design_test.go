@@ -1,6 +1,7 @@
 package pile
 
 import (
+	"errors"
 	"math"
 	"strings"
 	"testing"
@@ -214,6 +215,13 @@ func TestGEC10DrilledShaftLRFD(t *testing.T) {
 	l := AASHTODrilledShafts()
 	// The manual's demand is already factored: load factors of 1.
 	l.Permanent, l.Variable = 1, 1
+	// The β and α here are given (K0 and the 2018 α worked by hand as the
+	// manual does), so the engineer declares them the table's β-method
+	// and α-method: side in sand 0.55, side in clay 0.45 (uplift 0.45 and
+	// 0.35, not used by this compression check). The tip in sand is the
+	// preset's own method, shaft-n60-sand (0.50).
+	l.Shaft["beta"], l.Shaft["alpha-given"] = 0.55, 0.45
+	l.Tension["beta"], l.Tension["alpha-given"] = 0.45, 0.35
 	d, err := Check(prof, pile, ms, l, Loads{Compression: Action{Permanent: 3389.47 * kip}})
 	if err != nil {
 		t.Fatal(err)
@@ -249,15 +257,40 @@ func TestSafetyFactorClosedForm(t *testing.T) {
 	}
 }
 
-// TestMissingFactorIsAnError: an LRFD basis without a factor for the tip
-// method in use refuses, naming the method; it never takes φ = 0.
+// TestMissingFactorIsAnError: an LRFD basis without a factor for a method
+// in use refuses with a *MissingFactorError naming the method, the kind
+// and the calc-file key; it never takes φ = 0. The AASHTO driven-pile table
+// has no row for the β method in sand nor for Meyerhof's tip.
 func TestMissingFactorIsAnError(t *testing.T) {
 	prof := mustProfile(t, profile.Spec{NoWater: true, Layers: []profile.LayerSpec{
 		{Name: "sand", Thickness: 30 * m, Drainage: profile.Drained, Phi: 34 * deg, UnitWeight: 19 * kNm},
 	}})
 	p := Pile{Section: Section{Shape: Circle, Diameter: 0.5 * m}, Length: 12 * m, Installation: DrivenHigh}
-	_, err := Check(prof, p, Methods{}, AASHTODrivenPiles(), Loads{Compression: Action{Permanent: 100 * kN}})
-	if err == nil || !strings.Contains(err.Error(), `"meyerhof"`) {
-		t.Errorf("missing tip factor: %v", err)
+	loads := Loads{Compression: Action{Permanent: 100 * kN}}
+	cases := []struct {
+		name   string
+		edit   func(l *LRFD)
+		kind   Resistance
+		method string
+		key    string
+	}{
+		{"shaft", func(*LRFD) {}, ShaftResistance, "beta", "design.shaft.beta"},
+		{"uplift", func(l *LRFD) { l.Shaft["beta"] = 0.3 }, TensionResistance, "beta", "design.uplift.beta"},
+		{"tip", func(l *LRFD) { l.Shaft["beta"], l.Tension["beta"] = 0.3, 0.2 }, TipResistance, "meyerhof", "design.tip.meyerhof"},
+	}
+	for _, c := range cases {
+		l := AASHTODrivenPiles()
+		c.edit(&l)
+		_, err := Check(prof, p, Methods{}, l, loads)
+		var me *MissingFactorError
+		if !errors.As(err, &me) {
+			t.Fatalf("%s: %v is not a *MissingFactorError", c.name, err)
+		}
+		if me.Kind != c.kind || me.Method != c.method || me.Key() != c.key || me.Layer != 0 || me.Case != "aashto-driven" {
+			t.Errorf("%s: %+v, key %s", c.name, *me, me.Key())
+		}
+		if !strings.Contains(err.Error(), `"`+c.method+`"`) || !strings.Contains(err.Error(), c.key) {
+			t.Errorf("%s: message %q names neither the method nor the key", c.name, err)
+		}
 	}
 }

@@ -93,7 +93,8 @@
 //     0.4·pa·N60·L/D ≤ 4·pa·N60 reaches its limit, and that of his layered
 //     rule); Methods.EmbedmentRatio gives another. It multiplies the whole
 //     unit tip resistance (after the method's own limit).
-//   - The drilled-shaft zones: the top zone is measured from the pile head;
+//   - The drilled-shaft zones: the top zone is measured from the pile head
+//     (or the design ground line, where that is deeper);
 //     the bottom one moves with the tip (in capacity with depth too). Both
 //     apply in tension as in compression (the conservative reading).
 //   - Open pipes and H-sections: plugged = tip on the gross (box) area and
@@ -106,15 +107,31 @@
 //     overburden it displaces, as hand methods assume); WeightNet uses
 //     qp − σ′v at the tip; WeightGross subtracts W′. In tension the pile's
 //     effective weight W′ (buoyant below the water table) adds to the shaft
-//     resistance.
+//     resistance: at 1 in characteristic values, and in a design case at
+//     the basis's factor on a favourable permanent action (Case.Weight:
+//     AASHTO's DC minimum 0.90, EN 1997-1 γG,fav = 1.0, 1/F under a factor
+//     of safety unless SafetyFactor.WeightUnfactored).
 //   - Tension shaft resistance is the compression unit friction times a
-//     tension factor (TensionSame by default); design bases apply their
-//     own tension factors (EN 1997-1 γs,t; AASHTO φ for uplift).
-//   - Design bases: SafetyFactor, LRFD (with the AASHTODrivenPiles and
-//     AASHTODrilledShafts presets) and Eurocode7 (EN 1997-1 DA1, DA2, DA3
-//     with sets R1 to R4, ξ3/ξ4 and a model factor; M2 soil factors for DA3
-//     divide tanφ′ and su). A basis gives one or more Cases; Check runs an
-//     analysis per case and Verify compares Ed with Rd.
+//     tension factor by drainage class (DefaultTension: 0.7 in drained
+//     layers after De Nicola & Randolph 1993, 1.0 in undrained layers);
+//     TensionSame, or a factor of 1 given for drained layers, switches the
+//     reduction off (TensionFactor.Unreduced, for a warning). Design bases
+//     apply their own tension factors on top (EN 1997-1 γs,t; AASHTO φ for
+//     uplift).
+//   - Design bases: SafetyFactor, LRFD and Eurocode7. LRFD factors belong to
+//     methods: a preset (AASHTODrivenPiles, AASHTODrilledShafts) holds its
+//     table as FactorRows (a tip factor may be paired with the shaft method
+//     of its bearing layer, a row may be limited to a drainage class), covers
+//     only the methods and installations it was calibrated for, and names
+//     them (LRFD.Calibrated, for defaults that follow the preset); a method
+//     without a factor is a *MissingFactorError naming the calc-file key.
+//     Eurocode7 (EN 1997-1 DA1, DA2, DA3 with sets R1 to R4, ξ3/ξ4 and a
+//     model factor; M2 soil factors for DA3 divide tanφ′ and su) takes Annex
+//     A's recommended values or given ones (EN7Factors; UKAnnex for the UK
+//     National Annex), and VerifyProfiles derives the characteristic
+//     resistance from several ground test profiles. A basis gives one or
+//     more Cases; Check runs an analysis per case and Verify compares Ed
+//     with Rd. Bad design input is a *FieldError naming the field.
 //   - RequiredLength checks every candidate tip depth on its grid; a depth
 //     is the answer only if every deeper candidate down to the search limit
 //     passes too. Passing ranges that are not one range are listed with a
