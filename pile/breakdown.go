@@ -187,17 +187,11 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 				lamVal = a.plans[i].lamVal
 			}
 		}
-		if lamVal > 0 {
-			fav = units.Stress(lamVal * (all.lamSig + 2*all.lamSu) / all.lamLen)
-			lr = shaft.LambdaResult{Fav: fav, Lambda: lamVal, Length: L,
-				SigmaV: units.Stress(all.lamSig / all.lamLen), Su: units.Stress(all.lamSu / all.lamLen)}
-		} else {
-			lr, err = a.lambda.Average(L, units.Stress(all.lamSig/all.lamLen), units.Stress(all.lamSu/all.lamLen))
-			if err != nil {
-				return Breakdown{}, err
-			}
-			fav = lr.Fav
+		lr, err = a.lambdaAverage(lamVal, L, units.Stress(all.lamSig/all.lamLen), units.Stress(all.lamSu/all.lamLen))
+		if err != nil {
+			return Breakdown{}, err
 		}
+		fav = lr.Fav
 		b.Lambda = &lr
 		for i := range b.Rows {
 			if b.Rows[i].Method == lambdaID {

@@ -241,6 +241,16 @@ func (a *Analysis) pileWeight(z0, z1 float64) float64 {
 	return g*a.mat*(float64(zw)-z0) + (g-gw)*a.mat*(z1-float64(zw))
 }
 
+// lambdaAverage returns the λ method's mean unit friction over the λ
+// layers: with λ read from the table, or given (lamVal > 0); either way
+// capped at s̄u unless Methods.NoLambdaCap.
+func (a *Analysis) lambdaAverage(lamVal float64, L units.Length, sig, su units.Stress) (shaft.LambdaResult, error) {
+	if lamVal > 0 {
+		return shaft.LambdaGiven{Lambda: lamVal, NoCap: a.methods.NoLambdaCap}.Average(L, sig, su)
+	}
+	return a.lambda.Average(L, sig, su)
+}
+
 // finish adds the λ part and the tip, and assembles the capacity.
 func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	*c = Capacity{TipDepth: units.Length(t)}
@@ -248,17 +258,12 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	var lamFlags Flags
 	if s.lamLen > 0 {
 		L := t - float64(a.pile.HeadDepth)
-		var fav float64
-		if s.lamVal > 0 {
-			fav = s.lamVal * (s.lamSig + 2*s.lamSu) / s.lamLen
-		} else {
-			r, err := a.lambda.Average(units.Length(L), units.Stress(s.lamSig/s.lamLen), units.Stress(s.lamSu/s.lamLen))
-			if err != nil {
-				return fmt.Errorf("shaft (λ method): %w", err)
-			}
-			fav = float64(r.Fav)
-			lamFlags = shaftFlags(r.Flags)
+		r, err := a.lambdaAverage(s.lamVal, units.Length(L), units.Stress(s.lamSig/s.lamLen), units.Stress(s.lamSu/s.lamLen))
+		if err != nil {
+			return fmt.Errorf("shaft (λ method): %w", err)
 		}
+		fav := float64(r.Fav)
+		lamFlags = shaftFlags(r.Flags)
 		q := fav * s.lamLen
 		tu := a.tension.For(profile.Undrained) // λ layers are undrained
 		outer += q
@@ -358,6 +363,7 @@ func (a *Analysis) tipInput(lp *layerPlan, z float64) (bearing.Input, error) {
 	in := bearing.Input{
 		Phi: lp.phi, C: lp.c, Q: sv, K0: lp.k0, Ir: lp.layer.Ir, G: lp.layer.G,
 		L: units.Length(z), D: units.Length(a.size), N60: lp.layer.N60, Clamp: a.methods.Clamp,
+		Pa: a.methods.Pa, Delta: lp.layer.Delta,
 	}
 	if lp.layer.HasSu {
 		zz := min(max(units.Length(z), lp.layer.Top), lp.layer.Bottom)
@@ -459,6 +465,15 @@ func tipFlags(f bearing.Flags) Flags {
 	}
 	if f&bearing.Clamped != 0 {
 		out |= ChartEdge
+	}
+	if f&bearing.VolumeChangeIgnored != 0 {
+		out |= VolumeChangeIgnored
+	}
+	if f&bearing.ReductionOff != 0 {
+		out |= TipReductionOff
+	}
+	if f&bearing.CapGoverns != 0 {
+		out |= TipCapGoverns
 	}
 	return out
 }

@@ -29,7 +29,7 @@ func Example() {
 	}
 	p := pile.Pile{
 		Section:      pile.Section{Shape: pile.Circle, Diameter: 0.6 * m},
-		Length:       20 * m,
+		Length:       30 * m,
 		Installation: pile.Bored,
 	}
 	a, err := pile.NewAnalysis(ground, p, pile.DefaultMethods(), nil)
@@ -44,7 +44,7 @@ func Example() {
 	}
 	fmt.Printf("tip %.0f kN, shaft %.0f kN, compression %.0f kN\n", c.Tip.KN(), c.Shaft.KN(), c.Compression.KN())
 	d, err := pile.Check(ground, p, pile.DefaultMethods(), pile.Eurocode7{Approach: pile.DA1, Profiles: 1},
-		pile.Loads{Compression: pile.Action{Permanent: 900 * units.Kilonewton, Variable: 300 * units.Kilonewton}})
+		pile.Loads{Compression: pile.Action{Permanent: 800 * units.Kilonewton, Variable: 250 * units.Kilonewton}})
 	if err != nil {
 		fmt.Println(err)
 		return
@@ -53,7 +53,7 @@ func Example() {
 		fmt.Printf("%s: Ed %.0f kN, Rd %.0f kN, utilisation %.2f\n", v.Case, v.CompressionEd.KN(), v.CompressionRd.KN(), v.CompressionUse)
 	}
 	// Output:
-	// tip 2067 kN, shaft 933 kN, compression 2999 kN
-	// DA1-1: Ed 1665 kN, Rd 1847 kN, utilisation 0.90
-	// DA1-2: Ed 1290 kN, Rd 1435 kN, utilisation 0.90
+	// tip 689 kN, shaft 2093 kN, compression 2782 kN
+	// DA1-1: Ed 1455 kN, Rd 1889 kN, utilisation 0.77
+	// DA1-2: Ed 1125 kN, Rd 1458 kN, utilisation 0.77
 }

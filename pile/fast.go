@@ -188,8 +188,9 @@ func (a *Analysis) buildTipModel(lp *layerPlan) tipModel {
 		tm.limFric = true
 	case bearing.Janbu, bearing.GivenNq, bearing.APISand:
 	case bearing.Vesic:
-		if lp.layer.Ir <= 0 {
-			return tm // Ir from G depends on q′
+		v := lp.tip.(bearing.Vesic)
+		if lp.layer.Ir <= 0 || (v.Volume == bearing.VolumeCorrelated && lp.layer.Delta == 0) {
+			return tm // Ir from G, or Δ from the correlation, depends on q′
 		}
 	case bearing.Skempton, bearing.GivenNc:
 		tm.useSu = true
@@ -216,7 +217,7 @@ func (a *Analysis) buildTipModel(lp *layerPlan) tipModel {
 		return tipModel{}
 	}
 	tm.nq, tm.nc, tm.limit = r.Nq, r.Nc, float64(r.Limit)
-	tm.flags = r.Flags & bearing.Clamped
+	tm.flags = r.Flags & (bearing.Clamped | bearing.VolumeChangeIgnored) // the flags that do not change with depth
 	if tm.fixed != 0 {
 		tm.fixed = float64(r.Unlimited)
 	} else {

@@ -4,7 +4,7 @@ import "strings"
 
 // Flags are warnings raised by an analysis, as a bitmask so that the
 // capacity path allocates nothing. Breakdown turns them into messages.
-type Flags uint16
+type Flags uint32
 
 const (
 	// ShaftLimit: a limiting unit shaft friction capped fs somewhere.
@@ -48,6 +48,17 @@ const (
 	// DrilledZonesOff: a bored or augered pile uses the drilled-shaft α
 	// with Methods.NoDrilledZones set, so those zones carry side resistance.
 	DrilledZonesOff
+	// LambdaCapped: the λ method's unit friction was capped at s̄u (α ≤ 1).
+	LambdaCapped
+	// LambdaCapOff: the λ method's cap was switched off.
+	LambdaCapOff
+	// VolumeChangeIgnored: a Vesic tip took Irr = Ir (Δ = 0).
+	VolumeChangeIgnored
+	// TipReductionOff: a rule that lowers a bored pile's tip (the cap or the
+	// large-base reduction) was switched off.
+	TipReductionOff
+	// TipCapGoverns: the bored-pile tip cap governs.
+	TipCapGoverns
 )
 
 var flagText = [...]string{
@@ -66,6 +77,11 @@ var flagText = [...]string{
 	"WARNING: Meyerhof's (1976) embedment ramp is switched off although the tip is shallower than the critical embedment ratio; the tip resistance may be unconservative",
 	"no side resistance counted in the top 1.5 m and the bottom diameter of drilled-shaft α layers (O'Neill & Reese 1999)",
 	"WARNING: the zones without side resistance of the drilled-shaft α (top 1.5 m, bottom diameter) are switched off; the shaft resistance may be unconservative",
+	"the λ method's unit friction is capped at the mean su (α ≤ 1)",
+	"WARNING: the λ method's cap fav ≤ s̄u is switched off; the shaft resistance may be unconservative",
+	"WARNING: Vesic's tip took Irr = Ir (no volumetric strain Δ): the tip resistance may be unconservative in compressible sand",
+	"WARNING: a rule that lowers a bored pile's tip resistance (the cap or the large-base reduction) is switched off",
+	"the bored-pile tip cap governs",
 }
 
 // Messages returns one sentence per set flag.

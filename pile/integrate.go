@@ -107,6 +107,7 @@ func (a *Analysis) point(lp *layerPlan, z units.Length, sv units.Stress) shaft.P
 		Su:       lp.suAt(z),
 		Diameter: units.Length(a.size),
 		N60:      lp.layer.N60,
+		Pa:       a.methods.Pa,
 	}
 }
 
@@ -221,6 +222,12 @@ func shaftFlags(f shaft.Flags) Flags {
 	}
 	if f&shaft.ChartEdge != 0 {
 		out |= ChartEdge
+	}
+	if f&shaft.LambdaCapped != 0 {
+		out |= LambdaCapped
+	}
+	if f&shaft.LambdaCapOff != 0 {
+		out |= LambdaCapOff
 	}
 	return out
 }

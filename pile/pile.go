@@ -209,7 +209,9 @@ type Zone struct {
 // in it and is switched off only through a No… field, which raises a
 // warning flag. A nil method takes the default:
 //
-//	TipDrained      bearing.Meyerhof{} (driven), bearing.Meyerhof{} (bored)
+//	TipDrained      bearing.Meyerhof{} (driven, jetted), bearing.BoredSand{} (bored, augered:
+//	                the drilled-shaft N60 rule where N60 is given, else ⅓ of Meyerhof's
+//	                driven value, capped, with the large-base reduction)
 //	TipUndrained    bearing.Skempton{} (Nc = 9)
 //	ShaftDrained    shaft.Beta{K: Kulhawy K/K0 by installation, δ: Kulhawy δ/φ′ by surface}
 //	ShaftUndrained  shaft.AlphaAPI{} (driven), shaft.AlphaDrilled{} (bored, augered)
@@ -261,9 +263,18 @@ type Methods struct {
 	// (shaft.AlphaDrilled; O'Neill & Reese 1999); the DrilledZonesOff flag
 	// is then raised.
 	NoDrilledZones bool
+	// NoLambdaCap switches off the λ method's cap fav ≤ s̄u (α ≤ 1), with
+	// the warning LambdaCapOff.
+	NoLambdaCap bool
 	// Clamp lets chart methods read outside their charts at the edge (a
 	// warning is raised) instead of failing.
 	Clamp bool
+	// Pa is the atmospheric (reference) pressure of the methods that read
+	// one (Meyerhof's limit, the drilled-shaft α and β, Vesic's Δ
+	// correlation, the bored-pile rules); zero means 100 kPa. US practice
+	// often writes 2000 psf (Das) or 2116 psf (one atmosphere); the methods
+	// accept 80 to 120 kPa.
+	Pa units.Stress
 }
 
 // DefaultMethods returns the defaults described on Methods, with
@@ -406,7 +417,7 @@ func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analy
 	a.inner = float64(p.Section.InnerPerimeter())
 	a.gross = float64(p.Section.GrossArea())
 	a.mat = float64(p.Section.MaterialArea())
-	a.lambda = shaft.Lambda{Extrapolate: m.Clamp}
+	a.lambda = shaft.Lambda{Extrapolate: m.Clamp, NoCap: m.NoLambdaCap}
 	a.tension = m.Tension
 	if a.tension.Name == "" && a.tension.Value == 0 && a.tension.Drained == 0 && a.tension.Undrained == 0 {
 		a.tension = DefaultTension()
@@ -549,6 +560,10 @@ func (a *Analysis) plan(i int) (layerPlan, error) {
 		lp.tip = over.Tip
 	case drained && m.TipDrained != nil:
 		lp.tip = m.TipDrained
+	case drained && (a.pile.Installation == Bored || a.pile.Installation == Augered):
+		// The driven-pile chart and limit unreduced overstate a bored
+		// pile's tip; see bearing.BoredSand.
+		lp.tip = bearing.BoredSand{}
 	case drained:
 		lp.tip = bearing.Meyerhof{}
 	case m.TipUndrained != nil:

@@ -326,6 +326,7 @@ func (p *Profile) resolveLayer(i int, ls LayerSpec, geometryOK bool, c *collecto
 		{"g", float64(ls.G), 0, math.Inf(1), true, "(0, ∞) Pa"},
 		{"nu", ls.Nu, 0, 0.5, true, "(0, 0.5]"},
 		{"ir", ls.Ir, 1, math.Inf(1), false, "[1, ∞)"},
+		{"delta", ls.Delta, 0, 0.5, true, "(0, 0.5]"},
 	}
 	for _, o := range opt {
 		if o.v == 0 {
@@ -336,6 +337,7 @@ func (p *Profile) resolveLayer(i int, ls LayerSpec, geometryOK bool, c *collecto
 		}
 	}
 	l.OCR, l.Dr, l.N60, l.E, l.G, l.Nu, l.Ir = ls.OCR, ls.Dr, ls.N60, ls.E, ls.G, ls.Nu, ls.Ir
+	l.Delta = ls.Delta
 
 	p.resolveWeights(path, l, ls, geometryOK, c)
 }

@@ -116,6 +116,9 @@ type LayerSpec struct {
 	G   units.Stress // shear modulus, > 0
 	Nu  float64      // Poisson's ratio ν, (0, 0.5]
 	Ir  float64      // rigidity index, ≥ 1
+	// Delta is Vesic's (1977) average volumetric strain Δ in the plastic
+	// zone around a pile tip, (0, 0.5]; zero means not given.
+	Delta float64
 }
 
 // Basis records how a layer's unit weights were obtained.
@@ -179,6 +182,7 @@ type Layer struct {
 	OCR, Dr, N60 float64
 	E, G         units.Stress
 	Nu, Ir       float64
+	Delta        float64 // Vesic's volumetric strain Δ; 0 when not given
 }
 
 // Thickness returns Bottom − Top.
