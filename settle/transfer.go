@@ -78,6 +78,7 @@ type Solver struct {
 	shaftCap, capacity, tolF   float64
 	wLimit                     float64 // a head displacement beyond which every spring is on its tail
 	maxIt                      int
+	kmax                       float64 // the largest EA/h
 	softening                  bool
 	w, r, diag, rhs, cp, dp, v []float64
 	wtrial                     []float64
@@ -211,6 +212,7 @@ func NewSolver(m Model, opt *Options) (*Solver, error) {
 			h := zb - za
 			s.depth[e+1] = zb
 			s.kcol[e] = float64(m.EA) / h
+			s.kmax = max(s.kmax, s.kcol[e])
 			s.hcap[2*e] = p * h / 2 * fs(za)
 			s.hcap[2*e+1] = p * h / 2 * fs(zb)
 			s.hcur[2*e], s.hcur[2*e+1] = ci, ci
@@ -333,6 +335,8 @@ func (s *Solver) thomas(x []float64) {
 	}
 }
 
+const epsilon = 0x1p-52
+
 // errNoConvergence is returned when a Newton solve exceeds its limit.
 type convergenceError struct {
 	what  string
@@ -353,9 +357,12 @@ func (s *Solver) solveHead(w0 float64) (float64, error) {
 		s.w[i] += shift
 	}
 	s.w[0] = w0
+	// The tolerance, or the floating-point floor of the column forces at
+	// this displacement when that is larger.
+	tol := max(s.tolF, 64*epsilon*s.kmax*math.Abs(w0))
 	worst := s.residual(s.w)
 	it := 0
-	for worst > s.tolF {
+	for worst > tol {
 		if it >= s.maxIt {
 			return 0, &convergenceError{what: "equilibrium for a head displacement", limit: s.maxIt, value: w0}
 		}
@@ -450,6 +457,11 @@ func (s *Solver) solveLoad(p float64) error {
 			next = math.Inf(1)
 		}
 		// Keep the guess inside the bracket; bisect or expand otherwise.
+		if math.IsInf(hi, 1) {
+			// Expand by at most a doubling, so that the head never runs far
+			// beyond the tails of the curves.
+			next = min(next, max(2*lo, lo+s.wLimit/64))
+		}
 		switch {
 		case next <= lo || next >= hi:
 			if !math.IsInf(hi, 1) {
@@ -478,7 +490,7 @@ func (s *Solver) solveLoad(p float64) error {
 		} else {
 			hi, phi = w0, P
 		}
-		if hi-lo <= 1e-15*max(1, math.Abs(hi)) {
+		if !math.IsInf(hi, 1) && hi-lo <= 1e-15*max(1, hi) {
 			return nil // the bracket is as narrow as floating point allows
 		}
 	}
