@@ -654,13 +654,12 @@ func (s *Solver) Run(loads []units.Force) (Result, error) {
 	fb := make([]units.Force, (s.n+1)*len(loads))
 	mb := make([]units.Length, (s.n+1)*len(loads))
 	for k, p := range loads {
-		err := s.solveLoad(float64(p))
-		var pe *PlungeError
-		if errors.As(err, &pe) {
-			r.Plunged, r.PlungeLoad, r.PlungeTarget = true, pe.Load, pe.Target
-			break
-		}
-		if err != nil {
+		if err := s.solveLoad(float64(p)); err != nil {
+			var pe *PlungeError
+			if errors.As(err, &pe) {
+				r.Plunged, r.PlungeLoad, r.PlungeTarget = true, pe.Load, pe.Target
+				break
+			}
 			return Result{}, err
 		}
 		s.record(&r, fb[k*(s.n+1):], mb[k*(s.n+1):])
