@@ -134,7 +134,7 @@ func Points(z, ratio []float64, perDiameter bool) (Curve, error) {
 		return Curve{}, fmt.Errorf("points[%d].ratio: %v; the last point must reach 1 (full mobilisation)", len(ratio)-1, ratio[len(ratio)-1])
 	}
 	return Curve{id: "points", z: append([]float64(nil), z...), r: append([]float64(nil), ratio...),
-		perDiameter: perDiameter, refs: []cite.Ref{{Source: cite.Source{Key: "given", Authors: "engineer", Title: "load-transfer curve given as points"}, Where: "calc file"}}}, nil
+		perDiameter: perDiameter}, nil // the engineer's own data: no published source
 }
 
 // scaled is a curve in metres, ready for the solver: displacements z (m),
