@@ -176,8 +176,9 @@ func TestJSONSameAsYAML(t *testing.T) {
 func TestUSUnitsSame(t *testing.T) {
 	ft := func(m float64) float64 { return m / 0.3048 }
 	pcf := func(kn float64) float64 { return kn * 1000 / (4.4482216152605 / (0.3048 * 0.3048 * 0.3048)) }
-	// γw defaults differ by system (9.81 kN/m³ SI, 62.4 pcf US): give it.
-	si := strings.Replace(base, "  water_depth: 2 m\n", "  water_depth: 2 m\n  water_unit_weight: 9.81 kN/m3\n", 1)
+	// γw and pa defaults differ by system (9.81 kN/m³ and 100 kPa SI, 62.4
+	// pcf and 2000 psf US): give them.
+	si := strings.Replace(base, "  water_depth: 2 m\n", "  water_depth: 2 m\n  water_unit_weight: 9.81 kN/m3\n", 1) + "methods: {pa: 100 kPa}\n"
 	us := strings.NewReplacer(
 		"9.81 kN/m3", fmtF(pcf(9.81)),
 		"units: SI", "units: US",

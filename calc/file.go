@@ -87,13 +87,14 @@ type Layer struct {
 	Cohesion          Value     `yaml:"cohesion,omitempty" json:"cohesion,omitempty" q:"stress,0," doc:"Effective cohesion c′."`
 	UndrainedStrength *Strength `yaml:"undrained_strength,omitempty" json:"undrained_strength,omitempty"`
 
-	OCR             Value `yaml:"ocr,omitempty" json:"ocr,omitempty" q:"number,0,1000000" doc:"Overconsolidation ratio OCR."`
-	RelativeDensity Value `yaml:"relative_density,omitempty" json:"relative_density,omitempty" q:"fraction" doc:"Relative density Dr, as a fraction or a percentage."`
-	N60             Value `yaml:"n60,omitempty" json:"n60,omitempty" q:"number,0,1000000" doc:"SPT blow count corrected to 60 % energy, N60 (blows/0.3 m)."`
-	YoungsModulus   Value `yaml:"youngs_modulus,omitempty" json:"youngs_modulus,omitempty" q:"stress,0," doc:"Young's modulus of the soil."`
-	PoissonsRatio   Value `yaml:"poissons_ratio,omitempty" json:"poissons_ratio,omitempty" q:"number,0,1000000" doc:"Poisson's ratio of the soil."`
-	ShearModulus    Value `yaml:"shear_modulus,omitempty" json:"shear_modulus,omitempty" q:"stress,0," doc:"Shear modulus of the soil G."`
-	RigidityIndex   Value `yaml:"rigidity_index,omitempty" json:"rigidity_index,omitempty" q:"number,0,1000000000" doc:"Rigidity index Ir (for Vesic's tip)."`
+	OCR              Value `yaml:"ocr,omitempty" json:"ocr,omitempty" q:"number,0,1000000" doc:"Overconsolidation ratio OCR."`
+	RelativeDensity  Value `yaml:"relative_density,omitempty" json:"relative_density,omitempty" q:"fraction" doc:"Relative density Dr, as a fraction or a percentage."`
+	N60              Value `yaml:"n60,omitempty" json:"n60,omitempty" q:"number,0,1000000" doc:"SPT blow count corrected to 60 % energy, N60 (blows/0.3 m)."`
+	YoungsModulus    Value `yaml:"youngs_modulus,omitempty" json:"youngs_modulus,omitempty" q:"stress,0," doc:"Young's modulus of the soil."`
+	PoissonsRatio    Value `yaml:"poissons_ratio,omitempty" json:"poissons_ratio,omitempty" q:"number,0,1000000" doc:"Poisson's ratio of the soil."`
+	ShearModulus     Value `yaml:"shear_modulus,omitempty" json:"shear_modulus,omitempty" q:"stress,0," doc:"Shear modulus of the soil G."`
+	RigidityIndex    Value `yaml:"rigidity_index,omitempty" json:"rigidity_index,omitempty" q:"number,0,1000000000" doc:"Rigidity index Ir (for Vesic's tip)."`
+	VolumetricStrain Value `yaml:"volumetric_strain,omitempty" json:"volumetric_strain,omitempty" q:"number,0,0.5" doc:"Vesic's average volumetric strain Δ in the plastic zone at the tip; absent: Vesic's correlation with φ′ and q′."`
 
 	// Shaft and Tip override the methods for this layer.
 	Shaft *ShaftChoice `yaml:"shaft,omitempty" json:"shaft,omitempty"`
@@ -137,6 +138,8 @@ type TipChoice struct {
 	Limit  Value  `yaml:"limit,omitempty" json:"limit,omitempty" q:"stress,0," doc:"Limiting unit tip resistance."`
 	// Eta is Janbu's plastic-zone angle η′ (default 90 deg).
 	Eta Value `yaml:"eta,omitempty" json:"eta,omitempty" q:"angle,0,180" doc:"Janbu's plastic-zone angle η′ (deg; default 90)."`
+	// Nsigma is Vesic's Nσ* for vesic-given.
+	Nsigma Value `yaml:"nsigma,omitempty" json:"nsigma,omitempty" q:"number,0,100000" doc:"Vesic's bearing factor Nσ*, given (vesic-given)."`
 }
 
 // Section is a pile cross-section. Each shape reads its own keys, and a
@@ -198,9 +201,19 @@ type Methods struct {
 	// SelfWeight: ignored (default), net or gross.
 	SelfWeight string `yaml:"self_weight,omitempty" json:"self_weight,omitempty"`
 	// TensionFactor multiplies shaft resistance in tension (default 1).
-	TensionFactor Value  `yaml:"tension_factor,omitempty" json:"tension_factor,omitempty" q:"number,0,1000" doc:"Factor on shaft resistance in tension."`
-	ClampCharts   bool   `yaml:"clamp_charts,omitempty" json:"clamp_charts,omitempty"`
-	NoShaft       []Zone `yaml:"no_shaft,omitempty" json:"no_shaft,omitempty"`
+	TensionFactor Value `yaml:"tension_factor,omitempty" json:"tension_factor,omitempty" q:"number,0,1000" doc:"Factor on shaft resistance in tension."`
+	ClampCharts   bool  `yaml:"clamp_charts,omitempty" json:"clamp_charts,omitempty"`
+	// Pa is the atmospheric (reference) pressure of the methods that read
+	// one; default 100 kPa in SI files and 2000 psf in US files.
+	Pa Value `yaml:"pa,omitempty" json:"pa,omitempty" q:"stress,0," doc:"Atmospheric (reference) pressure pa; default 100 kPa (SI) or 2000 psf (US); 80 to 120 kPa."`
+	// Rules that lower capacity, on unless set to false (a warning then
+	// says so where the rule would have applied).
+	WeakLayer      *bool  `yaml:"weak_layer,omitempty" json:"weak_layer,omitempty" doc:"Meyerhof's reduction of the tip within 10 D above a weaker layer (default true)."`
+	Embedment      *bool  `yaml:"embedment,omitempty" json:"embedment,omitempty" doc:"Meyerhof's ramp of the tip with embedment below the critical embedment ratio (default true)."`
+	EmbedmentRatio Value  `yaml:"embedment_ratio,omitempty" json:"embedment_ratio,omitempty" q:"number,1,50" doc:"Critical embedment ratio (Lb/D)cr of the embedment ramp (default 10)."`
+	DrilledZones   *bool  `yaml:"drilled_zones,omitempty" json:"drilled_zones,omitempty" doc:"No side resistance in the top 1.5 m and the bottom diameter of drilled-shaft α layers (default true)."`
+	LambdaCap      *bool  `yaml:"lambda_cap,omitempty" json:"lambda_cap,omitempty" doc:"The λ method's unit friction capped at the mean su (default true)."`
+	NoShaft        []Zone `yaml:"no_shaft,omitempty" json:"no_shaft,omitempty"`
 }
 
 // Design is the design basis.
@@ -227,6 +240,35 @@ type Design struct {
 	Profiles    Value  `yaml:"profiles,omitempty" json:"profiles,omitempty" q:"integer,0,1000" doc:"Number of ground test profiles n for ξ3/ξ4 (en1997)."`
 	ModelFactor Value  `yaml:"model_factor,omitempty" json:"model_factor,omitempty" q:"number,0,10" doc:"Model factor γRd (en1997)."`
 	Total       bool   `yaml:"total,omitempty" json:"total,omitempty"`
+	// en1997: the annex whose factors apply (recommended, the default:
+	// EN 1997-1 Annex A; uk: the UK National Annex), sls_verified for
+	// the UK annex's lower R4 factors, given ξ3 and ξ4, and factor tables
+	// that replace the annex's for this pile's installation.
+	Annex       string              `yaml:"annex,omitempty" json:"annex,omitempty"`
+	SLSVerified bool                `yaml:"sls_verified,omitempty" json:"sls_verified,omitempty"`
+	Xi3         Value               `yaml:"xi3,omitempty" json:"xi3,omitempty" q:"number,1,3" doc:"Correlation factor ξ3, given (en1997)."`
+	Xi4         Value               `yaml:"xi4,omitempty" json:"xi4,omitempty" q:"number,1,3" doc:"Correlation factor ξ4, given (en1997)."`
+	Resistance  map[string]RFactors `yaml:"resistance_factors,omitempty" json:"resistance_factors,omitempty" doc:"Partial resistance factors by set (R1 to R4) for this pile's installation, replacing the annex's (en1997)."`
+	Actions     map[string]AFactors `yaml:"action_factors,omitempty" json:"action_factors,omitempty" doc:"Partial factors on actions by set (A1, A2), replacing the annex's (en1997)."`
+	// lrfd: the factor on the pile's weight W′ in uplift; safety-factor:
+	// weight_unfactored counts W′ in full instead of W′/F.
+	Weight           Value `yaml:"weight,omitempty" json:"weight,omitempty" q:"number,0,1" doc:"Factor on the pile's effective weight in uplift (lrfd; preset default 0.9)."`
+	WeightUnfactored bool  `yaml:"weight_unfactored,omitempty" json:"weight_unfactored,omitempty" doc:"Count the pile's weight in uplift in full, not divided by the factor (safety-factor)."`
+}
+
+// RFactors are the partial resistance factors of one set (R1 to R4).
+type RFactors struct {
+	Base    Value `yaml:"base,omitempty" json:"base,omitempty" q:"number,1,5" doc:"γb on base resistance."`
+	Shaft   Value `yaml:"shaft,omitempty" json:"shaft,omitempty" q:"number,1,5" doc:"γs on shaft resistance in compression."`
+	Total   Value `yaml:"total,omitempty" json:"total,omitempty" q:"number,1,5" doc:"γt on total resistance."`
+	Tension Value `yaml:"tension,omitempty" json:"tension,omitempty" q:"number,1,5" doc:"γs;t on shaft resistance in tension."`
+}
+
+// AFactors are the partial factors on actions of one set (A1, A2).
+type AFactors struct {
+	G    Value `yaml:"g,omitempty" json:"g,omitempty" q:"number,0,5" doc:"γG on unfavourable permanent actions."`
+	GFav Value `yaml:"g_fav,omitempty" json:"g_fav,omitempty" q:"number,0,5" doc:"γG,fav on favourable permanent actions."`
+	Q    Value `yaml:"q,omitempty" json:"q,omitempty" q:"number,0,5" doc:"γQ on unfavourable variable actions."`
 }
 
 // Load is a characteristic load given as its permanent and variable parts

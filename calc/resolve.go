@@ -3,6 +3,7 @@ package calc
 import (
 	"errors"
 	"fmt"
+	"maps"
 	"math"
 	"slices"
 	"sort"
@@ -232,6 +233,7 @@ func (r *resolver) ground(f *File, in *Inputs) {
 		ls.G = r.stress(l.ShearModulus, path+".shear_modulus")
 		ls.Nu = r.num(l.PoissonsRatio, path+".poissons_ratio", 0, 1e6)
 		ls.Ir = r.num(l.RigidityIndex, path+".rigidity_index", 0, 1e9)
+		ls.Delta = r.num(l.VolumetricStrain, path+".volumetric_strain", 0, 0.5)
 		s.Layers = append(s.Layers, ls)
 	}
 }
@@ -318,8 +320,8 @@ func (r *resolver) sectionKeys(shape pile.Shape, sec Section) {
 }
 
 // tipMethods and shaftMethods list the identifiers accepted in calc files.
-var tipIDs = []string{"meyerhof", "vesic", "berezantzev", "janbu", "api-sand-1", "api-sand-2", "api-sand-3",
-	"api-sand-4", "shaft-n60-sand", "given-nq", "nc9", "vesic-undrained", "given-nc"}
+var tipIDs = []string{"meyerhof", "vesic", "vesic-given", "berezantzev", "janbu", "api-sand-1", "api-sand-2", "api-sand-3",
+	"api-sand-4", "shaft-n60-sand", "bored-sand", "bored-phi", "given-nq", "nc9", "vesic-undrained", "given-nc"}
 
 var shaftIDs = []string{"beta", "beta-given", "beta-burland", "beta-drilled-sand", "beta-drilled-k0", "beta-api",
 	"alpha-api", "alpha-chart", "alpha-drilled", "alpha-given", "lambda", "none"}
@@ -340,7 +342,21 @@ func (r *resolver) tip(id string, c *TipChoice, path string) bearing.Tip {
 	case "meyerhof":
 		return bearing.Meyerhof{}
 	case "vesic":
-		return bearing.Vesic{}
+		// Δ from the layer's volumetric_strain, else Vesic's correlation.
+		return bearing.Vesic{Volume: bearing.VolumeCorrelated}
+	case "vesic-given":
+		ns := 0.0
+		if c != nil {
+			ns = r.num(c.Nsigma, path+".nsigma", 0, 1e5)
+		}
+		if ns == 0 {
+			r.add(path+".nsigma", 0, "vesic-given needs nsigma (Nσ*)")
+		}
+		return bearing.VesicGiven{Nsigma: ns, Nc: nc}
+	case "bored-sand":
+		return bearing.BoredSand{}
+	case "bored-phi":
+		return bearing.BoredPhi{}
 	case "berezantzev":
 		return bearing.Berezantzev{}
 	case "janbu":
@@ -517,6 +533,11 @@ func finishBeta(m shaft.Unit, p pile.Pile) shaft.Unit {
 
 func (r *resolver) methods(f *File, in *Inputs) {
 	ms := pile.DefaultMethods()
+	if r.sys == units.US {
+		// Das presents Meyerhof's limit and the SPT rules with pa = 2000
+		// psf in US units; 2116 psf (one atmosphere) can be given.
+		ms.Pa = 2000 * units.PSF
+	}
 	inst := in.Pile.Installation
 	if m := f.Methods; m != nil {
 		if m.TipDrained != "" {
@@ -556,6 +577,18 @@ func (r *resolver) methods(f *File, in *Inputs) {
 			ms.Tension = pile.TensionFactor{Name: "given", Value: r.num(m.TensionFactor, "methods.tension_factor", 0, 1e3)}
 		}
 		ms.Clamp = m.ClampCharts
+		if m.Pa.IsSet() {
+			ms.Pa = r.stress(m.Pa, "methods.pa")
+			if ms.Pa < 80*units.Kilopascal || ms.Pa > 120*units.Kilopascal {
+				r.add("methods.pa", m.Pa.Line, "%q is outside 80 to 120 kPa (1671 to 2506 psf)", m.Pa.Raw)
+			}
+		}
+		off := func(b *bool) bool { return b != nil && !*b }
+		ms.NoWeakLayer, ms.NoEmbedment = off(m.WeakLayer), off(m.Embedment)
+		ms.NoDrilledZones, ms.NoLambdaCap = off(m.DrilledZones), off(m.LambdaCap)
+		if m.EmbedmentRatio.IsSet() {
+			ms.EmbedmentRatio = r.num(m.EmbedmentRatio, "methods.embedment_ratio", 1, 50)
+		}
 		for i, z := range m.NoShaft {
 			path := fmt.Sprintf("methods.no_shaft[%d]", i)
 			ms.NoShaft = append(ms.NoShaft, pile.Zone{Top: r.length(z.Top, path+".top"), Bottom: r.length(z.Bottom, path+".bottom")})
@@ -623,7 +656,7 @@ func (r *resolver) design(f *File, in *Inputs) {
 	case "safety-factor":
 		in.Basis = pile.SafetyFactor{Global: r.num(d.Factor, "design.factor", 0, 100),
 			Tip: r.num(d.TipFactor, "design.tip_factor", 0, 100), Shaft: r.num(d.ShaftFactor, "design.shaft_factor", 0, 100),
-			Tension: r.num(d.TensionFactor, "design.tension_factor", 0, 100)}
+			Tension: r.num(d.TensionFactor, "design.tension_factor", 0, 100), WeightUnfactored: d.WeightUnfactored}
 	case "lrfd":
 		var l pile.LRFD
 		switch d.Preset {
@@ -652,6 +685,16 @@ func (r *resolver) design(f *File, in *Inputs) {
 		if d.Variable.IsSet() {
 			l.Variable = r.num(d.Variable, "design.variable", 0, 10)
 		}
+		if d.Weight.IsSet() {
+			l.Weight = r.num(d.Weight, "design.weight", 0, 1)
+		}
+		// A preset's own methods are the defaults where the file names
+		// none, so a preset works with qult's defaults out of the box.
+		if ms, err := l.Calibrated.Fill(in.Methods); err == nil {
+			in.Methods = ms
+		} else {
+			r.add("design.preset", 0, "%v", err)
+		}
 		in.Basis = l
 	case "en1997":
 		ap, err := pile.ParseApproach(strings.ToUpper(strings.TrimSpace(d.Approach)))
@@ -665,7 +708,26 @@ func (r *resolver) design(f *File, in *Inputs) {
 		if prof != math.Trunc(prof) {
 			r.add("design.profiles", d.Profiles.Line, "%g: want a whole number of ground profiles", prof)
 		}
-		in.Basis = pile.Eurocode7{Approach: ap, Profiles: int(prof), ModelFactor: r.num(d.ModelFactor, "design.model_factor", 0, 10), Total: d.Total}
+		e := pile.Eurocode7{Approach: ap, Profiles: int(prof), ModelFactor: r.num(d.ModelFactor, "design.model_factor", 0, 10), Total: d.Total}
+		e.Xi3, e.Xi4 = r.num(d.Xi3, "design.xi3", 1, 3), r.num(d.Xi4, "design.xi4", 1, 3)
+		if (e.Xi3 == 0) != (e.Xi4 == 0) {
+			r.add("design.xi3", 0, "give both xi3 and xi4, or neither")
+		}
+		var fs pile.EN7Factors
+		switch strings.TrimSpace(d.Annex) {
+		case "", "recommended":
+			fs = pile.EN1997Recommended()
+			if d.SLSVerified {
+				r.add("design.sls_verified", 0, "only the uk annex reads sls_verified")
+			}
+		case "uk":
+			fs = pile.UKAnnex(d.SLSVerified)
+		default:
+			r.add("design.annex", 0, "%q: want recommended (EN 1997-1 Annex A) or uk (the UK National Annex)", d.Annex)
+		}
+		r.en7Tables(d, &fs, in.Pile.Installation)
+		e.Factors = &fs
+		in.Basis = e
 	case "":
 		r.add("design.basis", 0, "not given; want safety-factor, lrfd or en1997")
 	default:
@@ -675,9 +737,66 @@ func (r *resolver) design(f *File, in *Inputs) {
 
 // designKeysOf lists the design keys each basis reads.
 var designKeysOf = map[string][]string{
-	"safety-factor": {"factor", "tip_factor", "shaft_factor", "tension_factor"},
-	"lrfd":          {"preset", "tip", "shaft", "uplift", "permanent", "variable"},
-	"en1997":        {"approach", "profiles", "model_factor", "total"},
+	"safety-factor": {"factor", "tip_factor", "shaft_factor", "tension_factor", "weight_unfactored"},
+	"lrfd":          {"preset", "tip", "shaft", "uplift", "permanent", "variable", "weight"},
+	"en1997": {"approach", "profiles", "model_factor", "total", "annex", "sls_verified", "xi3", "xi4",
+		"resistance_factors", "action_factors"},
+}
+
+// en7Tables replaces the annex's factors with the file's: resistance sets
+// R1 to R4 for the pile's installation, action sets A1 and A2.
+func (r *resolver) en7Tables(d *Design, fs *pile.EN7Factors, inst pile.Installation) {
+	rs := &fs.Driven
+	switch inst {
+	case pile.Bored:
+		rs = &fs.Bored
+	case pile.Augered:
+		rs = &fs.CFA
+	}
+	for _, k := range slices.Sorted(maps.Keys(d.Resistance)) {
+		path := "design.resistance_factors." + k
+		i := slices.Index([]string{"R1", "R2", "R3", "R4"}, k)
+		if i < 0 {
+			r.add(path, 0, "%q: want R1, R2, R3 or R4", k)
+			continue
+		}
+		v := d.Resistance[k]
+		for _, f := range []struct {
+			key string
+			val Value
+			dst *float64
+		}{{"base", v.Base, &rs.Base[i]}, {"shaft", v.Shaft, &rs.Shaft[i]}, {"total", v.Total, &rs.Total[i]}, {"tension", v.Tension, &rs.Tension[i]}} {
+			if f.val.IsSet() {
+				*f.dst = r.num(f.val, path+"."+f.key, 1, 5)
+			}
+		}
+	}
+	for _, k := range slices.Sorted(maps.Keys(d.Actions)) {
+		path := "design.action_factors." + k
+		var a *pile.ActionSet
+		switch k {
+		case "A1":
+			a = &fs.A1
+		case "A2":
+			a = &fs.A2
+		default:
+			r.add(path, 0, "%q: want A1 or A2", k)
+			continue
+		}
+		v := d.Actions[k]
+		for _, f := range []struct {
+			key string
+			val Value
+			dst *float64
+		}{{"g", v.G, &a.G}, {"g_fav", v.GFav, &a.GFav}, {"q", v.Q, &a.Q}} {
+			if f.val.IsSet() {
+				*f.dst = r.num(f.val, path+"."+f.key, 0, 5)
+			}
+		}
+	}
+	if len(d.Resistance) > 0 || len(d.Actions) > 0 {
+		fs.Name += "+given"
+	}
 }
 
 // designKeys refuses keys that the chosen basis does not read (a preset
@@ -692,10 +811,13 @@ func (r *resolver) designKeys(d *Design) {
 		"tension_factor": d.TensionFactor.IsSet(), "preset": d.Preset != "", "tip": d.Tip != nil,
 		"shaft": d.Shaft != nil, "uplift": d.Uplift != nil, "permanent": d.Permanent.IsSet(),
 		"variable": d.Variable.IsSet(), "approach": d.Approach != "", "profiles": d.Profiles.IsSet(),
-		"model_factor": d.ModelFactor.IsSet(), "total": d.Total,
+		"model_factor": d.ModelFactor.IsSet(), "total": d.Total, "weight_unfactored": d.WeightUnfactored,
+		"weight": d.Weight.IsSet(), "annex": d.Annex != "", "sls_verified": d.SLSVerified, "xi3": d.Xi3.IsSet(),
+		"xi4": d.Xi4.IsSet(), "resistance_factors": d.Resistance != nil, "action_factors": d.Actions != nil,
 	}
-	for _, k := range []string{"factor", "tip_factor", "shaft_factor", "tension_factor", "preset", "tip", "shaft",
-		"uplift", "permanent", "variable", "approach", "profiles", "model_factor", "total"} {
+	for _, k := range []string{"factor", "tip_factor", "shaft_factor", "tension_factor", "weight_unfactored", "preset",
+		"tip", "shaft", "uplift", "permanent", "variable", "weight", "approach", "profiles", "model_factor", "total",
+		"annex", "sls_verified", "xi3", "xi4", "resistance_factors", "action_factors"} {
 		if set[k] && !slices.Contains(reads, k) {
 			r.add("design."+k, 0, "basis %s does not use %s; it reads %s", strings.TrimSpace(d.Basis), k, strings.Join(reads, ", "))
 		}

@@ -201,7 +201,23 @@ func translate(f *File, err error) error {
 	var ps Problems
 	for _, e := range errs {
 		var fe *profile.FieldError
+		var mf *pile.MissingFactorError
+		var pf *pile.FieldError
 		var path, msg string
+		switch {
+		case errors.As(e, &mf):
+			// The key to add does not exist yet: the line is that of the
+			// design section.
+			ps = append(ps, Problem{Path: mf.Key(), Line: lineOf(f, "design"), Msg: strings.TrimPrefix(mf.Error(), "pile: "), Err: e})
+			continue
+		case errors.As(e, &pf):
+			path, msg = pf.Field, strings.TrimPrefix(pf.Error(), pf.Field+": ")
+			if !strings.HasPrefix(path, "design") && !strings.HasPrefix(path, "loads") && !strings.HasPrefix(path, "methods") && !strings.HasPrefix(path, "pile") {
+				path = "design." + path
+			}
+			ps = append(ps, Problem{Path: path, Line: lineOf(f, path), Msg: msg, Err: e})
+			continue
+		}
 		if errors.As(e, &fe) {
 			path, msg = fe.Path, fe.Msg
 			if i := strings.LastIndexByte(path, '.'); i >= 0 {

@@ -24,6 +24,7 @@ var enums = map[string][]string{
 	"basis":        {"safety-factor", "lrfd", "en1997"},
 	"preset":       {"aashto-driven", "aashto-drilled"},
 	"approach":     {"DA1", "DA2", "DA3"},
+	"annex":        {"recommended", "uk"},
 	"self_weight":  {"ignored", "net", "gross"},
 	"k0":           {"jaky", "ocr"},
 	"sand_class":   {"api-medium-dense-sand-silt", "api-medium-dense-sand", "api-dense-sand", "api-very-dense-sand"},

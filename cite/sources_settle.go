@@ -5,8 +5,6 @@ package cite
 var (
 	RandolphWroth1978 = Source{Key: "randolph-wroth1978", Authors: "Randolph, M.F., Wroth, C.P.", Year: 1978,
 		Title: "Analysis of deformation of vertically loaded piles", Publication: "J. Geotech. Eng. Div. ASCE 104(GT12), 1465-1488"}
-	Fleming2009 = Source{Key: "fleming-piling2009", Authors: "Fleming, W.G.K., Weltman, A.J., Randolph, M.F., Elson, W.K.", Year: 2009,
-		Title: "Piling Engineering", Publication: "3rd ed., Taylor & Francis, Abingdon"}
 	Davisson1972 = Source{Key: "davisson1972", Authors: "Davisson, M.T.", Year: 1972,
 		Title: "High capacity piles", Publication: "Proc. Lecture Series on Innovations in Foundation Construction, ASCE Illinois Section, Chicago, 81-112"}
 	Chin1970 = Source{Key: "chin1970", Authors: "Chin, F.K.", Year: 1970,
