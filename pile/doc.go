@@ -92,7 +92,10 @@
 //     ratio; (Lb/D)cr = 10 by default (the ratio at which his SPT rule
 //     0.4·pa·N60·L/D ≤ 4·pa·N60 reaches its limit, and that of his layered
 //     rule); Methods.EmbedmentRatio gives another. It multiplies the whole
-//     unit tip resistance (after the method's own limit).
+//     unit tip resistance (after the method's own limit). It belongs to
+//     the bearing-factor methods: the SPT rules (the drilled-shaft N60
+//     rule, and the bored-pile rule where N60 is given) are correlations
+//     that already cover embedment, and take no ramp.
 //   - The drilled-shaft zones: the top zone is measured from the pile head
 //     (or the design ground line, where that is deeper);
 //     the bottom one moves with the tip (in capacity with depth too). Both

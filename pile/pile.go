@@ -327,6 +327,10 @@ type layerPlan struct {
 	// held: σ′v is held below the critical depth for this layer's shaft
 	// (β-family methods in drained layers only).
 	held bool
+	// spt: the tip method is an SPT rule (the drilled-shaft N60 rule),
+	// whose calibration already covers embedment, so Meyerhof's
+	// embedment ramp, a rule of his bearing-factor method, does not apply.
+	spt bool
 	// closed-form integration (see classify)
 	kind  int
 	coef  float64
@@ -570,6 +574,12 @@ func (a *Analysis) plan(i int) (layerPlan, error) {
 		lp.tip = m.TipUndrained
 	default:
 		lp.tip = bearing.Skempton{}
+	}
+	switch lp.tip.(type) {
+	case bearing.ShaftSand:
+		lp.spt = true
+	case bearing.BoredSand:
+		lp.spt = l.N60 > 0 // BoredSand takes the N60 rule where N60 is given
 	}
 	// Shaft.
 	lp.noShaft = over.NoShaft

@@ -83,7 +83,9 @@ type weakInfo struct {
 //
 // Embedment ramp (Meyerhof 1976; Das, chapter on pile foundations: qp
 // grows with the embedment Lb in the bearing stratum up to the critical
-// embedment ratio): in a drained top layer, with Lcr = (Lb/D)cr·D,
+// embedment ratio): in a drained top layer, with Lcr = (Lb/D)cr·D, for the
+// tip methods built on bearing factors (not the SPT rules, whose
+// correlation already covers embedment),
 //
 //	qp = q·Lb/Lcr   (Lb < Lcr)
 //
@@ -102,7 +104,7 @@ func (a *Analysis) baseRules(li int, z, q float64, fl *Flags) (qp, upper, embed 
 	top := max(float64(lp.layer.Top), zd)
 	first := li == 0 || float64(a.plans[li-1].layer.Bottom) <= zd
 	embed = 1
-	if first && lp.layer.Drainage == profile.Drained {
+	if first && lp.layer.Drainage == profile.Drained && !lp.spt {
 		if lcr := a.embedN * d; z-top < lcr && q > 0 {
 			if a.methods.NoEmbedment {
 				*fl |= EmbedmentOff
