@@ -14,7 +14,13 @@
 //	phase    three-phase relations of one soil element
 //	bearing  tip resistance: bearing-capacity factors and unit tip resistance
 //	shaft    unit shaft resistance: β, α and λ methods, with limits
-//	profile  the ground: layers, groundwater, total and effective vertical stress
+//	profile  the ground: layers, groundwater, excavation and scour, total and effective vertical stress
+//	pile     capacity of a pile in the ground, design bases, required length
+//	settle   single-pile settlement and static load-test interpretation
+//	calc     the calc file: decoding, validation, the run and its result
+//	report   text, CSV, JSON, Markdown and HTML calculation packages
+//
+// The command-line tool is cmd/qult.
 //
 // # Units
 //
