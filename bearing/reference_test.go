@@ -415,7 +415,7 @@ func TestShaftSand(t *testing.T) {
 			t.Errorf("N60 = %g: qp = %.2f kPa, flags %q; want %.2f kPa (O'Neill & Reese 1999)", c.n60, r.Qp.KPa(), r.Flags, c.want)
 		}
 	}
-	// The SI round numbers quoted for the rule (lead's brief, from memory):
+	// The SI round numbers usually quoted for the rule (from memory):
 	// 57.5·N60 kPa and 2.9 MPa, within 0.5 %.
 	r, _ := ShaftSand{}.Tip(Input{N60: 20})
 	if relErr(r.Qp.KPa(), 57.5*20) > closedTol || relErr(r.Limit.MPa(), 2.9) > 0.01 {

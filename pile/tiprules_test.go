@@ -22,8 +22,8 @@ import (
 //   - Meyerhof's (1976) weak-layer rule, qp = ql + (q0 − ql)·H/(10·B) ≤ q0
 //     for a pile in a strong layer at a height H above a weak one: from
 //     memory (the paper could not be reached); the linear form and the
-//     10·B zone are as the issue states them and as Tomlinson & Woodward
-//     present Meyerhof's rule (from memory).
+//     10·B zone are as Tomlinson & Woodward present Meyerhof's rule
+//     (from memory).
 //   - The growth of qp with embedment up to the critical embedment ratio:
 //     Das, same chapter, section on Meyerhof's method in sand, figure of
 //     the variation of qp with L/D in a homogeneous sand (read: qp grows
@@ -31,7 +31,7 @@ import (
 //     is that of Meyerhof's (1976) SPT rule qp = 0.4·pa·N60·L/D ≤ 4·pa·N60
 //     (from memory).
 
-// sandOverClay is the issue's case: dense dry sand (φ′ 38°, γ 19 kN/m³)
+// sandOverClay is a dense dry sand (φ′ 38°, γ 19 kN/m³)
 // 10 m thick over soft clay (su 15 kPa), a scenario of our own.
 func sandOverClay(t *testing.T) *profile.Profile {
 	return mustProfile(t, profile.Spec{NoWater: true, Layers: []profile.LayerSpec{
@@ -48,7 +48,7 @@ func closedPipe(d units.Length) Pile {
 // clay. q_strong is Meyerhof's limit (σ′v·Nq* = 188·231 kPa exceeds it),
 // q_weak = 9·15 kPa, H = 0.1 m, 10·D = 5 m:
 //
-//	qp = 135 + (ql − 135)·0.1/5 ≈ 312 kPa   (about 300 kPa, as the issue says)
+//	qp = 135 + (ql − 135)·0.1/5 ≈ 312 kPa   (about 300 kPa)
 //
 // against about 9,000 kPa without the rule.
 func TestWeakLayerBelow(t *testing.T) {

@@ -77,7 +77,7 @@
 //     reaches must lie above the bottom of the profile; the error names
 //     the field and its range there.
 //
-// Choices made where the brief was silent:
+// Choices made where the sources are silent:
 //
 //   - Depth zero is the ground surface. Spec.WaterDepth is the depth of the
 //     water table; negative means free water standing above the ground (a

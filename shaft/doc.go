@@ -51,7 +51,7 @@
 // caller hold σ′v below the critical depth, which, with the shaft split at
 // zc, keeps the β-method integral exact.
 //
-// # Choices where the sources or the issue were silent
+// # Choices where the sources are silent
 //
 //   - Defaults within a published range (KOverK0For, DeltaOverPhiFor) take
 //     the middle of the range: K/K0 = 0.583 jetted, 0.833 bored, 1.0 driven

@@ -152,8 +152,7 @@ func TestUnitMethods(t *testing.T) {
 			26.92375, 0.2692375, beta, 0, 1e-5, "Burland (1973), closed form"},
 		// O'Neill & Reese (1999) / Brown et al. (2010, GEC 10):
 		// β = 1.5 − 0.135·√(z/ft); z = 25 ft: 1.5 − 0.675 = 0.825.
-		// Form and bounds from memory (as in /work/shared/REFERENCES.md's
-		// brief for issue 5); the arithmetic is closed form.
+		// Form and bounds from memory; the arithmetic is closed form.
 		{"drilled sand 25 ft", DrilledSand{}, Point{SigmaV: 100 * kPa, Depth: 25 * units.Foot, N60: 30},
 			82.5, 0.825, beta, 0, 1e-9, "O'Neill & Reese (1999), closed form"},
 		// Same, SI form 1.5 − 0.245·√(z/m) at 9 m: 0.765; the exact US form

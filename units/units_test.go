@@ -58,7 +58,7 @@ func TestNIST(t *testing.T) {
 		// B.8: pound-force per foot = 1.459 390 E+01 N/m.
 		{"lbf/ft", PoundForcePerFoot.NewtonsPerMetre(), 1.459390e1, seven},
 		// pcf = lbf/ft³: 4.448 222 E+00 N / 2.831 685 E-02 m³ = 157.087 46 N/m³
-		// (the value given in the project's issue 2, from NIST factors).
+		// (NIST SP 811 factors).
 		{"pcf", PCF.NewtonsPerCubicMetre(), 157.08746, seven},
 		{"pcf-from-factors", PCF.NewtonsPerCubicMetre(), 4.448222 / 2.831685e-2, 1e-6},
 		// B.8: degree = 1.745 329 E-02 rad.
