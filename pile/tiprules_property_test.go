@@ -1,5 +1,8 @@
 package pile
 
+// Sources: none needed; the properties are closed form consequences of the
+// rules, drawn on invented soils.
+
 import (
 	"math"
 	"testing"

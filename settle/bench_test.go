@@ -1,5 +1,7 @@
 package settle
 
+// Sources: none; the benchmark runs an invented scenario.
+
 import (
 	"math"
 	"testing"

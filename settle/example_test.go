@@ -1,5 +1,7 @@
 package settle_test
 
+// Sources: none; the examples are invented scenarios (documentation).
+
 import (
 	"fmt"
 	"math"

@@ -1,5 +1,7 @@
 package settle
 
+// Sources: none; fuzz seeds are invented inputs.
+
 import (
 	"errors"
 	"math"
