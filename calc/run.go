@@ -160,9 +160,7 @@ func warnings(r *Result) []string {
 			w = append(w, fmt.Sprintf("layer %q: unit weights %s (an assumption; give the weights to remove it)", l.Name, l.Basis))
 		}
 	}
-	for _, m := range r.Breakdown.Warnings {
-		w = append(w, m)
-	}
+	w = append(w, r.Breakdown.Warnings...)
 	if r.Design != nil && !r.Design.Pass {
 		w = append(w, "the design check fails: utilisation above 1")
 	}

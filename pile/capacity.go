@@ -342,8 +342,6 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 // tipResult is the unit tip resistance at a depth with what made it.
 type tipResult struct {
 	layer int
-	in    bearing.Input
-	res   bearing.Result
 	qp    float64 // after limits and the layered rule
 	sigma float64 // σ′v at the tip
 	f     float64 // design multiplier of the tip method

@@ -317,7 +317,6 @@ type layerPlan struct {
 	// the layered rule (base*), and at its top after the weak-layer rule
 	// too (effTop): the values the rules of the layers around it read
 	baseTop, baseBot float64
-	errBase          error
 	effTop           float64
 	errEff           error
 	// drilled: the layer's shaft is the drilled-shaft α of a bored or

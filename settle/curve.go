@@ -180,10 +180,4 @@ func (s *scaled) eval(w float64) (ratio, slope float64) {
 }
 
 // peak is the largest ratio of the curve.
-func (s *scaled) peak() float64 {
-	m := 0.0
-	for _, v := range s.r {
-		m = max(m, v)
-	}
-	return m
-}
+

@@ -4,7 +4,6 @@ import (
 	"bytes"
 	"errors"
 	"flag"
-	"fmt"
 	"path/filepath"
 	"strings"
 
@@ -152,5 +151,3 @@ func (c *cmd) problems(file string, err error) {
 	}
 }
 
-// sysName returns the display name of a unit system for messages.
-func sysName(s units.System) string { return fmt.Sprint(s) }

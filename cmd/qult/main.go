@@ -31,7 +31,6 @@
 package main
 
 import (
-	"errors"
 	"fmt"
 	"io"
 	"os"
@@ -179,5 +178,3 @@ func setVersion() {
 	setCalcVersion(version)
 }
 
-// errUsage marks an error as a usage error (exit 2 with a pointer to help).
-var errUsage = errors.New("usage")
