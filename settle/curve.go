@@ -180,4 +180,3 @@ func (s *scaled) eval(w float64) (ratio, slope float64) {
 }
 
 // peak is the largest ratio of the curve.
-

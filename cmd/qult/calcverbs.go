@@ -150,4 +150,3 @@ func (c *cmd) problems(file string, err error) {
 		c.errorf("%s: %v", file, err)
 	}
 }
-

@@ -177,4 +177,3 @@ func setVersion() {
 	}
 	setCalcVersion(version)
 }
-
