@@ -170,10 +170,45 @@ func writeUsage(w io.Writer) {
 // setVersion settles the version string and hands it to package calc.
 func setVersion() {
 	if version == "" {
-		version = "dev"
-		if bi, ok := debug.ReadBuildInfo(); ok && bi.Main.Version != "" && bi.Main.Version != "(devel)" {
-			version = bi.Main.Version
-		}
+		bi, _ := debug.ReadBuildInfo()
+		version = versionOf(bi)
 	}
 	setCalcVersion(version)
+}
+
+// versionOf returns the module version of a build (go install …@v0.1.0),
+// or, for a build from a clone, "dev" with the revision and time of the
+// commit it was built from ("dev+4f3c2a1b9e0d 2026-12-02T07:12:04Z", with
+// "+dirty" when the tree had changes), or "dev" alone.
+func versionOf(bi *debug.BuildInfo) string {
+	if bi == nil {
+		return "dev"
+	}
+	if v := bi.Main.Version; v != "" && v != "(devel)" {
+		return v
+	}
+	var rev, at, dirty string
+	for _, s := range bi.Settings {
+		switch s.Key {
+		case "vcs.revision":
+			rev = s.Value
+		case "vcs.time":
+			at = s.Value
+		case "vcs.modified":
+			if s.Value == "true" {
+				dirty = "+dirty"
+			}
+		}
+	}
+	if rev == "" {
+		return "dev"
+	}
+	if len(rev) > 12 {
+		rev = rev[:12]
+	}
+	v := "dev+" + rev + dirty
+	if at != "" {
+		v += " " + at
+	}
+	return v
 }

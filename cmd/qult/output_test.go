@@ -7,6 +7,7 @@ import (
 	"fmt"
 	"os"
 	"path/filepath"
+	"runtime/debug"
 	"strings"
 	"testing"
 )
@@ -136,5 +137,26 @@ func TestBatchBOM(t *testing.T) {
 	r := runQ(t, slow, "\ufeff"+first+"\n", "batch")
 	if r.code > 1 || strings.Contains(r.stdout, `"error"`) {
 		t.Errorf("batch with a BOM: exit %d, %.300s %s", r.code, r.stdout, r.stderr)
+	}
+}
+
+// TestVersionOf: the version comes from the build information: the module
+// version when installed at a version, else the commit (closed form).
+func TestVersionOf(t *testing.T) {
+	cases := []struct {
+		bi   *debug.BuildInfo
+		want string
+	}{
+		{nil, "dev"},
+		{&debug.BuildInfo{Main: debug.Module{Version: "v0.1.0"}}, "v0.1.0"},
+		{&debug.BuildInfo{Main: debug.Module{Version: "(devel)"}}, "dev"},
+		{&debug.BuildInfo{Main: debug.Module{Version: "(devel)"}, Settings: []debug.BuildSetting{
+			{Key: "vcs.revision", Value: "4f3c2a1b9e0d77aa"}, {Key: "vcs.time", Value: "2026-12-02T07:12:04Z"},
+			{Key: "vcs.modified", Value: "true"}}}, "dev+4f3c2a1b9e0d+dirty 2026-12-02T07:12:04Z"},
+	}
+	for _, c := range cases {
+		if got := versionOf(c.bi); got != c.want {
+			t.Errorf("versionOf = %q, want %q", got, c.want)
+		}
 	}
 }
