@@ -293,14 +293,15 @@ type jRange struct {
 }
 
 type jDepthRow struct {
-	TipDepth          qty  `json:"tip_depth"`
-	UnitTip           qty  `json:"qp"`
-	Tip               qty  `json:"tip"`
-	Shaft             qty  `json:"shaft"`
-	Weight            qty  `json:"weight"`
-	Compression       qty  `json:"compression"`
-	Tension           qty  `json:"tension"`
-	DesignCompression *qty `json:"design_compression,omitempty"`
+	TipDepth          qty      `json:"tip_depth"`
+	UnitTip           qty      `json:"qp"`
+	Tip               qty      `json:"tip"`
+	Shaft             qty      `json:"shaft"`
+	Weight            qty      `json:"weight"`
+	Compression       qty      `json:"compression"`
+	Tension           qty      `json:"tension"`
+	DesignCompression *qty     `json:"design_compression,omitempty"`
+	TipRules          []string `json:"tip_rules"`
 }
 
 type jSource struct {
@@ -462,7 +463,8 @@ func toJSON(r *calc.Result, o Options) *jResult {
 	}
 	des := len(r.DesignWithDepth) == len(r.WithDepth)
 	for i, w := range r.WithDepth {
-		row := jDepthRow{c.L(w.TipDepth), c.S(w.UnitTip), c.F(w.Tip), c.F(w.Shaft), c.F(w.Weight), c.F(w.Compression), c.F(w.Tension), nil}
+		row := jDepthRow{c.L(w.TipDepth), c.S(w.UnitTip), c.F(w.Tip), c.F(w.Shaft), c.F(w.Weight), c.F(w.Compression), c.F(w.Tension), nil,
+			nonNil(tipRuleNames(w.Flags))}
 		if des {
 			q := c.F(r.DesignWithDepth[i])
 			row.DesignCompression = &q

@@ -580,22 +580,41 @@ func withDepthTable(r *calc.Result, c conv) *table {
 	if des {
 		t.cols = append(t.cols, column{"Rc,d", c.uF()})
 	}
+	t.cols = append(t.cols, column{"Tip rules", ""})
 	for i, k := range r.WithDepth {
 		row := []cell{num(c.L(k.TipDepth)), num(c.S(k.UnitTip)), num(c.F(k.Tip)), num(c.F(k.Shaft)), num(c.F(k.Weight)),
 			num(c.F(k.Compression)), num(c.F(k.Tension))}
 		if des {
 			row = append(row, num(c.F(r.DesignWithDepth[i])))
 		}
+		row = append(row, txt(dash(strings.Join(tipRuleNames(k.Flags), ", "))))
 		t.rows = append(t.rows, row)
 	}
 	return t
+}
+
+// tipRuleNames are short names of the tip rules that act at one tip depth
+// (for the capacity with depth); a rule switched off where it would act is
+// named in capitals.
+func tipRuleNames(f pile.Flags) []string {
+	var out []string
+	for _, n := range []struct {
+		f    pile.Flags
+		name string
+	}{{pile.TipLimit, "limit"}, {pile.EmbedmentRamp, "ramp"}, {pile.EmbedmentOff, "RAMP OFF"}, {pile.LayeredTip, "layered"},
+		{pile.WeakLayerReduced, "weak below"}, {pile.WeakLayerOff, "WEAK BELOW OFF"}} {
+		if f&n.f != 0 {
+			out = append(out, n.name)
+		}
+	}
+	return out
 }
 
 func secWithDepth(r *calc.Result, c conv) section {
 	if len(r.WithDepth) == 0 {
 		return section{heading: "Capacity with depth", blocks: []block{{para: "Not computed (see the warnings)."}}}
 	}
-	p := "Characteristic capacity for each tip depth (same pile, head fixed)."
+	p := "Characteristic capacity for each tip depth (same pile, head fixed). Tip rules names those acting on qp at that depth: the method's limit, Meyerhof's embedment ramp, the layered transition into a stronger layer and the reduction above a weaker layer (in capitals where switched off)."
 	if len(r.DesignWithDepth) == len(r.WithDepth) {
 		p += " Rc,d is the design compression resistance of the governing case."
 	}

@@ -582,3 +582,40 @@ func TestEscapingRules(t *testing.T) {
 		t.Error("Markdown: the weak layer's name is not escaped")
 	}
 }
+
+// TestTipRulesWithDepth checks the rules named at each depth of the
+// capacity with depth, from the geometry of the weak-layer scenario:
+// design ground 2 m, (Lb/D)cr·D = 5 m, clay from 8 m, 10 D = 5 m.
+func TestTipRulesWithDepth(t *testing.T) {
+	r := weakResult(t, "soft clay")
+	j := jsonDoc(t, r, Options{View: ViewLength})
+	rows, _ := at(t, j, "capacity_with_depth").([]any)
+	want := map[float64][2]bool{ // depth: ramp, weak below
+		6:   {true, true},  // 4 m into the sand, 2 m above the clay
+		7:   {false, true}, // 5 m into the sand: the ramp is done
+		8.5: {false, false}, // in the clay
+	}
+	seen := 0
+	for _, row := range rows {
+		z := value(t, row, "tip_depth")
+		w, ok := want[z]
+		if !ok {
+			continue
+		}
+		seen++
+		names, _ := at(t, row, "tip_rules").([]any)
+		has := map[string]bool{}
+		for _, n := range names {
+			has[n.(string)] = true
+		}
+		if has["ramp"] != w[0] || has["weak below"] != w[1] {
+			t.Errorf("tip at %v m: rules %v, want ramp %v, weak below %v", z, names, w[0], w[1])
+		}
+	}
+	if seen != len(want) {
+		t.Errorf("%d of the depths found", seen)
+	}
+	if !regexp.MustCompile(`\n +6 .*ramp, weak below\n`).MatchString(render(t, r, Text, Options{View: ViewLength})) {
+		t.Error("text: the 6 m row does not name the ramp and the weak-layer rule")
+	}
+}
