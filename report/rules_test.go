@@ -591,8 +591,8 @@ func TestTipRulesWithDepth(t *testing.T) {
 	j := jsonDoc(t, r, Options{View: ViewLength})
 	rows, _ := at(t, j, "capacity_with_depth").([]any)
 	want := map[float64][2]bool{ // depth: ramp, weak below
-		6:   {true, true},  // 4 m into the sand, 2 m above the clay
-		7:   {false, true}, // 5 m into the sand: the ramp is done
+		6:   {true, true},   // 4 m into the sand, 2 m above the clay
+		7:   {false, true},  // 5 m into the sand: the ramp is done
 		8.5: {false, false}, // in the clay
 	}
 	seen := 0
