@@ -153,6 +153,26 @@ func allWarnings(r *calc.Result, c conv) []string {
 		add(w.Flags.Messages()...)
 	}
 	add(bearingWarnings(b.Tip.Result.Flags)...)
+	if r.Design != nil {
+		add(r.Design.Characteristic.Flags.Messages()...)
+	}
+	// A rule switched off at other tip depths matters to the capacity with
+	// depth and the required length: say where.
+	for _, f := range []pile.Flags{pile.WeakLayerOff, pile.EmbedmentOff, pile.DrilledZonesOff} {
+		lo, hi, n := units.Length(0), units.Length(0), 0
+		for _, k := range r.WithDepth {
+			if k.Flags&f != 0 {
+				if n == 0 {
+					lo = k.TipDepth
+				}
+				hi = k.TipDepth
+				n++
+			}
+		}
+		if n > 0 {
+			add(fmt.Sprintf("%s (capacity with depth: %d tip depths from %s to %s)", f.Messages()[0], n, c.ls(lo), c.ls(hi)))
+		}
+	}
 	if l := r.Length; l != nil {
 		nf := l.NotFound()
 		for _, w := range l.Warnings {

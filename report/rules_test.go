@@ -305,6 +305,16 @@ func TestWarningsEveryFormat(t *testing.T) {
 	if !strings.Contains(us, "tip depth of 59.06 ft in steps of 1.64 ft") {
 		t.Errorf("US not-found sentence not in feet:\n%s", us)
 	}
+	// A rule switched off at other tip depths of the capacity with depth
+	// is named with where it is off.
+	for i := range r.WithDepth {
+		if z := r.WithDepth[i].TipDepth; z == 3*units.Metre || z == 3.5*units.Metre {
+			r.WithDepth[i].Flags |= pile.WeakLayerOff
+		}
+	}
+	if w := pile.WeakLayerOff.Messages()[0] + " (capacity with depth: 2 tip depths from 3 m to 3.5 m)"; !strings.Contains(flat(render(t, r, Text, Options{View: ViewLength})), w) {
+		t.Errorf("warning %q missing", w)
+	}
 	// The defaults table marks the switched-off rules off.
 	states := map[string]string{}
 	for _, d := range defaultRows(r, conv{units.SI}) {
