@@ -9,11 +9,15 @@
 // # Views
 //
 //	ViewCheck     loads, characteristic capacity totals, each design case with Ed, Rd and Ed/Rd, warnings
-//	ViewCapacity  the per-segment shaft table, the tip block, each equation once with substituted numbers, totals, warnings
-//	ViewLength    the required length and the capacity with depth, warnings
-//	ViewReport    all of it: title block, pile, ground profile with derived unit weights, vertical stresses,
-//	              loads, shaft and tip with worked equations, totals, design check, required length,
-//	              capacity with depth, warnings, sources cited and cautions
+//	ViewCapacity  the per-segment shaft table (with why a segment carries no friction), the tip block with every
+//	              tip rule applied and its worked equation, totals, the defaults and rules in force, warnings
+//	ViewLength    the required length (the search, its passing ranges, or why none was found) and the
+//	              capacity with depth, warnings
+//	ViewReport    all of it: title block, pile, ground profile with derived unit weights (and, below an
+//	              excavation or scour, the original and design ground lines and the thickness removed from
+//	              each layer), vertical stresses, loads, shaft and tip with worked equations, totals, design
+//	              check, required length, capacity with depth, the defaults and rules in force, warnings,
+//	              sources cited and cautions
 //
 // Each format renders the view as follows.
 //
@@ -50,6 +54,23 @@
 // backslashes in Markdown. CSV text cells starting with =, +, -, @ are
 // prefixed with an apostrophe so that spreadsheets do not read them as
 // formulas.
+//
+// # Tip rules, warnings and defaults
+//
+// The tip block writes one worked equation per rule, in the order the
+// rules apply: Vesic's Irr (with Δ as it was obtained, or Irr = Ir where Δ
+// was not used), the method's qp and its limit, a bored-pile rule's factor,
+// the drilled-shaft cap and the large-base reduction, the embedment ramp,
+// the layered transition and the weak-layer reduction, then Qp = qp·A; and
+// it states the settlement basis of the tip value (bearing.SettlementBasis
+// of the rule or method used). The warnings section gathers, without
+// repeats, the run's warnings, the flags of the capacity, the tip and every
+// shaft segment, the tip method's own warnings (a reducing rule switched
+// off, volume change ignored) and the required-length search's; CSV, one
+// table, carries none. The section "Defaults and rules in force" is built
+// from the result and the calc file resolved again (for the switches the
+// result does not carry): each rule, its value, its source, and whether it
+// is applied, on, off or not applicable for this pile.
 //
 // # Choices
 //

@@ -6,6 +6,7 @@ import (
 	"math"
 	"strconv"
 
+	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/calc"
 	"github.com/qultgeo/qult/pile"
 	"github.com/qultgeo/qult/units"
@@ -64,28 +65,29 @@ func optNumJ(x float64) *jnum {
 }
 
 type jResult struct {
-	Schema    string      `json:"schema"`
-	Version   string      `json:"qult_version"`
-	Title     string      `json:"title"`
-	Project   string      `json:"project,omitempty"`
-	Revision  string      `json:"revision,omitempty"`
-	Engineer  string      `json:"engineer,omitempty"`
-	Date      string      `json:"date,omitempty"`
-	Units     string      `json:"units"`
-	Source    string      `json:"source,omitempty"`
-	Pile      jPile       `json:"pile"`
-	Ground    jGround     `json:"ground"`
-	Loads     jLoads      `json:"loads"`
-	Segments  []jSegment  `json:"shaft_segments"`
-	Lambda    *jLambda    `json:"lambda,omitempty"`
-	Tip       jTip        `json:"tip"`
-	Capacity  jCapacity   `json:"capacity"`
-	Design    *jDesign    `json:"design"`
-	Length    *jLength    `json:"required_length"`
-	WithDepth []jDepthRow `json:"capacity_with_depth"`
-	Warnings  []string    `json:"warnings"`
-	Sources   []jSource   `json:"sources"`
-	Cautions  []string    `json:"cautions"`
+	Schema    string       `json:"schema"`
+	Version   string       `json:"qult_version"`
+	Title     string       `json:"title"`
+	Project   string       `json:"project,omitempty"`
+	Revision  string       `json:"revision,omitempty"`
+	Engineer  string       `json:"engineer,omitempty"`
+	Date      string       `json:"date,omitempty"`
+	Units     string       `json:"units"`
+	Source    string       `json:"source,omitempty"`
+	Pile      jPile        `json:"pile"`
+	Ground    jGround      `json:"ground"`
+	Loads     jLoads       `json:"loads"`
+	Segments  []jSegment   `json:"shaft_segments"`
+	Lambda    *jLambda     `json:"lambda,omitempty"`
+	Tip       jTip         `json:"tip"`
+	Capacity  jCapacity    `json:"capacity"`
+	Design    *jDesign     `json:"design"`
+	Length    *jLength     `json:"required_length"`
+	WithDepth []jDepthRow  `json:"capacity_with_depth"`
+	Warnings  []string     `json:"warnings"`
+	Defaults  []defaultRow `json:"defaults"`
+	Sources   []jSource    `json:"sources"`
+	Cautions  []string     `json:"cautions"`
 }
 
 type jPile struct {
@@ -109,6 +111,14 @@ type jGround struct {
 	WaterUnitWeight qty       `json:"water_unit_weight"`
 	Layers          []jLayer  `json:"layers"`
 	Stresses        []jStress `json:"stresses"`
+	Lines           *jLines   `json:"ground_lines"`
+}
+
+type jLines struct {
+	Original     qty `json:"original"`
+	Excavation   qty `json:"excavation_floor"`
+	GeneralScour qty `json:"general_scour"`
+	Design       qty `json:"design"`
 }
 
 type jLayer struct {
@@ -126,6 +136,7 @@ type jLayer struct {
 	WeightsBasis        string `json:"weights_basis"`
 	ShaftMethod         string `json:"shaft_method,omitempty"`
 	TipMethod           string `json:"tip_method,omitempty"`
+	Removed             qty    `json:"removed"`
 }
 
 type jStress struct {
@@ -143,27 +154,28 @@ type jLoads struct {
 }
 
 type jSegment struct {
-	Top         qty      `json:"top"`
-	Bottom      qty      `json:"bottom"`
-	Layer       int      `json:"layer"`
-	LayerName   string   `json:"layer_name"`
-	Drainage    string   `json:"drainage"`
-	Method      string   `json:"method"`
-	Equation    string   `json:"equation"`
-	SigmaTop    qty      `json:"sigma_v_top"`
-	SigmaBottom qty      `json:"sigma_v_bottom"`
-	SuTop       *qty     `json:"su_top,omitempty"`
-	SuBottom    *qty     `json:"su_bottom,omitempty"`
-	FsTop       *qty     `json:"fs_top,omitempty"`
-	FsBottom    *qty     `json:"fs_bottom,omitempty"`
-	K           *jnum    `json:"k,omitempty"`
-	Delta       *qty     `json:"delta,omitempty"`
-	Beta        *jnum    `json:"beta,omitempty"`
-	Alpha       *jnum    `json:"alpha,omitempty"`
-	Integral    qty      `json:"integral"`
-	Perimeter   qty      `json:"perimeter"`
-	Force       qty      `json:"force"`
-	Flags       []string `json:"flags"`
+	Top          qty      `json:"top"`
+	Bottom       qty      `json:"bottom"`
+	Layer        int      `json:"layer"`
+	LayerName    string   `json:"layer_name"`
+	Drainage     string   `json:"drainage"`
+	Method       string   `json:"method"`
+	Equation     string   `json:"equation"`
+	SigmaTop     qty      `json:"sigma_v_top"`
+	SigmaBottom  qty      `json:"sigma_v_bottom"`
+	SuTop        *qty     `json:"su_top,omitempty"`
+	SuBottom     *qty     `json:"su_bottom,omitempty"`
+	FsTop        *qty     `json:"fs_top,omitempty"`
+	FsBottom     *qty     `json:"fs_bottom,omitempty"`
+	K            *jnum    `json:"k,omitempty"`
+	Delta        *qty     `json:"delta,omitempty"`
+	Beta         *jnum    `json:"beta,omitempty"`
+	Alpha        *jnum    `json:"alpha,omitempty"`
+	Integral     qty      `json:"integral"`
+	Perimeter    qty      `json:"perimeter"`
+	Force        qty      `json:"force"`
+	Flags        []string `json:"flags"`
+	NoResistance string   `json:"no_resistance,omitempty"`
 }
 
 type jLambda struct {
@@ -193,6 +205,39 @@ type jTip struct {
 	Area      qty      `json:"area"`
 	Force     qty      `json:"force"`
 	Flags     []string `json:"flags"`
+
+	N60             *jnum       `json:"n60,omitempty"`
+	Ir              *jnum       `json:"ir,omitempty"`
+	VesicDelta      *jnum       `json:"vesic_delta,omitempty"`
+	VesicDeltaBasis string      `json:"vesic_delta_basis,omitempty"`
+	Rule            string      `json:"rule,omitempty"`
+	Reduction       *jnum       `json:"reduction_factor,omitempty"`
+	BoredFactor     *jnum       `json:"bored_factor,omitempty"`
+	LargeBaseFactor *jnum       `json:"large_base_factor,omitempty"`
+	Cap             *qty        `json:"cap,omitempty"`
+	SettlementBasis string      `json:"settlement_basis,omitempty"`
+	MethodQp        qty         `json:"qp_method"`
+	Embedment       *jEmbedment `json:"embedment,omitempty"`
+	WeakLayer       *jWeak      `json:"weak_layer,omitempty"`
+	MethodFlags     []string    `json:"method_flags"`
+	Steps           []string    `json:"worked_equations"`
+}
+
+type jEmbedment struct {
+	Lb             qty  `json:"lb"`
+	CriticalLength qty  `json:"critical_length"`
+	CriticalRatio  jnum `json:"critical_ratio"`
+	Factor         jnum `json:"factor"`
+}
+
+type jWeak struct {
+	Layer     int    `json:"layer"`
+	LayerName string `json:"layer_name"`
+	QStrong   qty    `json:"q_strong"`
+	QWeak     qty    `json:"q_weak"`
+	H         qty    `json:"h"`
+	Zone      qty    `json:"zone"`
+	Qp        qty    `json:"qp"`
 }
 
 type jCapacity struct {
@@ -231,17 +276,32 @@ type jLength struct {
 	Length   *qty   `json:"length,omitempty"`
 	Governs  string `json:"governs,omitempty"`
 	Use      *jnum  `json:"utilisation,omitempty"`
+
+	Step         qty      `json:"step"`
+	MaxTip       qty      `json:"max_tip"`
+	Passing      []jRange `json:"passing"`
+	BestTipDepth qty      `json:"best_tip_depth"`
+	BestUse      jnum     `json:"best_utilisation"`
+	BestGoverns  string   `json:"best_governs,omitempty"`
+	NotFound     string   `json:"not_found,omitempty"`
+	Warnings     []string `json:"warnings"`
+}
+
+type jRange struct {
+	From qty `json:"from"`
+	To   qty `json:"to"`
 }
 
 type jDepthRow struct {
-	TipDepth          qty  `json:"tip_depth"`
-	UnitTip           qty  `json:"qp"`
-	Tip               qty  `json:"tip"`
-	Shaft             qty  `json:"shaft"`
-	Weight            qty  `json:"weight"`
-	Compression       qty  `json:"compression"`
-	Tension           qty  `json:"tension"`
-	DesignCompression *qty `json:"design_compression,omitempty"`
+	TipDepth          qty      `json:"tip_depth"`
+	UnitTip           qty      `json:"qp"`
+	Tip               qty      `json:"tip"`
+	Shaft             qty      `json:"shaft"`
+	Weight            qty      `json:"weight"`
+	Compression       qty      `json:"compression"`
+	Tension           qty      `json:"tension"`
+	DesignCompression *qty     `json:"design_compression,omitempty"`
+	TipRules          []string `json:"tip_rules"`
 }
 
 type jSource struct {
@@ -277,7 +337,7 @@ func toJSON(r *calc.Result, o Options) *jResult {
 	}
 	j := &jResult{Schema: schema, Version: r.Version, Title: r.Title, Project: r.Project, Revision: r.Revision,
 		Engineer: r.Engineer, Date: date(r, o), Units: o.Units.String(), Source: string(r.Source),
-		Warnings: nonNil(r.Warnings), Cautions: nonNil(r.Cautions), Sources: []jSource{}, WithDepth: []jDepthRow{}, Segments: []jSegment{}}
+		Warnings: nonNil(allWarnings(r, c.conv)), Defaults: defaultRows(r, c.conv), Cautions: nonNil(r.Cautions), Sources: []jSource{}, WithDepth: []jDepthRow{}, Segments: []jSegment{}}
 	p := r.Pile
 	s := p.Section
 	j.Pile = jPile{Shape: s.Shape.String(), Size: c.L(s.Size()), Wall: opt(c.L(s.Wall), s.Wall > 0),
@@ -291,6 +351,8 @@ func toJSON(r *calc.Result, o Options) *jResult {
 		zw, wet := r.Ground.WaterDepth()
 		j.Ground.WaterDepth = opt(c.L(zw), wet)
 		j.Ground.WaterUnitWeight = c.G(r.Ground.WaterUnitWeight())
+		gl := r.Ground.GroundLines()
+		j.Ground.Lines = &jLines{c.L(gl.Original), c.L(gl.Excavation), c.L(gl.GeneralScour), c.L(gl.Design)}
 	}
 	j.Ground.Layers = []jLayer{}
 	for i, l := range r.Layers {
@@ -298,7 +360,8 @@ func toJSON(r *calc.Result, o Options) *jResult {
 			FrictionAngle: opt(c.deg(l.Phi), l.Phi > 0), Cohesion: opt(c.S(l.Cohesion), l.Cohesion > 0),
 			SuTop: opt(c.S(l.SuTop), l.HasSu), SuBottom: opt(c.S(l.SuBottom), l.HasSu),
 			UnitWeight: opt(c.G(l.UnitWeight), l.UnitWeight > 0), SaturatedUnitWeight: opt(c.G(l.SaturatedUnitWeight), l.SaturatedUnitWeight > 0),
-			SubmergedUnitWeight: opt(c.G(l.SubmergedUnitWeight), l.SaturatedUnitWeight > 0), WeightsBasis: l.Basis.String()}
+			SubmergedUnitWeight: opt(c.G(l.SubmergedUnitWeight), l.SaturatedUnitWeight > 0), WeightsBasis: l.Basis.String(),
+			Removed: c.L(l.Removed)}
 		if i < len(r.Methods) {
 			jl.ShaftMethod, jl.TipMethod = r.Methods[i].Shaft, r.Methods[i].Tip
 		}
@@ -321,6 +384,9 @@ func toJSON(r *calc.Result, o Options) *jResult {
 			FsTop: opt(c.S(w.At[0].Fs), fsOK), FsBottom: opt(c.S(w.At[1].Fs), fsOK),
 			K: optNumJ(a.K), Delta: opt(c.deg(a.Delta), a.Delta > 0), Beta: optNumJ(a.Beta), Alpha: optNumJ(a.Alpha),
 			Integral: c.Q(w.Integral), Perimeter: c.L(w.Perimeter), Force: c.F(w.Force), Flags: flagList(w.Flags)}
+		if w.Method == "none" {
+			seg.NoResistance = noShaftReason(r, w)
+		}
 		j.Segments = append(j.Segments, seg)
 	}
 	if b.Lambda != nil {
@@ -331,7 +397,34 @@ func toJSON(r *calc.Result, o Options) *jResult {
 		Q: c.S(t.Input.Q), Phi: opt(c.deg(t.Input.Phi), t.Input.Phi > 0), Su: opt(c.S(t.Input.Su), t.Input.Su > 0),
 		Nq: optNumJ(t.Result.Nq), Nc: optNumJ(t.Result.Nc), Irr: optNumJ(t.Result.Irr), Unlimited: c.S(t.Result.Unlimited),
 		Limit: opt(c.S(t.Result.Limit), t.Result.Limit > 0), Upper: opt(c.S(t.Upper), t.Upper > 0),
-		Qp: c.S(t.Qp), Area: c.A(t.Area), Force: c.F(t.Force), Flags: flagList(t.Flags)}
+		Qp: c.S(t.Qp), Area: c.A(t.Area), Force: c.F(t.Force), Flags: flagList(t.Flags),
+		N60: optNumJ(t.Input.N60), Ir: optNumJ(t.Result.Ir), Rule: t.Result.Rule, Reduction: optNumJ(t.Result.Reduction),
+		Cap: opt(c.S(t.Result.Cap), t.Result.Cap > 0), SettlementBasis: settlementBasis(t), MethodQp: c.S(t.Own),
+		MethodFlags: nonNil(bearingNotes(t.Result.Flags)), Steps: nonNil(tipSteps(r, c.conv))}
+	if t.Result.Ir > 0 {
+		j.Tip.VesicDeltaBasis = t.Result.DeltaBy.String()
+		if t.Result.DeltaBy == bearing.DeltaGiven || t.Result.DeltaBy == bearing.DeltaCorrelation {
+			d := jnum(t.Result.Delta)
+			j.Tip.VesicDelta = &d
+		}
+	}
+	if t.Result.Reduction > 0 {
+		j.Tip.BoredFactor, j.Tip.LargeBaseFactor = optNumJ(boredFactor(t)), optNumJ(largeBaseFactor(t))
+	}
+	if t.Flags&pile.EmbedmentRamp != 0 {
+		j.Tip.Embedment = &jEmbedment{Lb: c.L(embedment(r)), CriticalLength: c.L(t.EmbedLength), Factor: jnum(t.EmbedFactor)}
+		if d := r.Pile.Section.Size(); d > 0 {
+			j.Tip.Embedment.CriticalRatio = jnum(float64(t.EmbedLength / d))
+		}
+	}
+	if t.WeakLayer >= 0 {
+		name := ""
+		if t.WeakLayer < len(r.Layers) {
+			name = r.Layers[t.WeakLayer].Name
+		}
+		v := t.Weak + (t.Strong-t.Weak)*units.Stress(float64(t.H)/float64(t.WeakZone))
+		j.Tip.WeakLayer = &jWeak{t.WeakLayer, name, c.S(t.Strong), c.S(t.Weak), c.L(t.H), c.L(t.WeakZone), c.S(v)}
+	}
 	k := b.Capacity
 	j.Capacity = jCapacity{c.F(k.Tip), c.F(k.Shaft), c.F(k.Weight), c.F(k.Compression), c.F(k.TensionShaft), c.F(k.Tension), k.Plugged, flagList(k.Flags)}
 	if d := r.Design; d != nil {
@@ -346,7 +439,21 @@ func toJSON(r *calc.Result, o Options) *jResult {
 		j.Design = jd
 	}
 	if ln := r.Length; ln != nil {
-		jl := &jLength{Found: ln.Found}
+		jl := &jLength{Found: ln.Found, Step: c.L(ln.Step), MaxTip: c.L(ln.MaxTip), Passing: []jRange{},
+			BestTipDepth: c.L(ln.BestTipDepth), BestUse: jnum(ln.BestUse), BestGoverns: ln.BestGoverns, Warnings: []string{}}
+		for _, p := range ln.Passing {
+			jl.Passing = append(jl.Passing, jRange{c.L(p.From), c.L(p.To)})
+		}
+		nf := ln.NotFound()
+		if nf != "" {
+			jl.NotFound = notFound(*ln, c.conv)
+		}
+		for _, w := range ln.Warnings {
+			if nf != "" && w == nf {
+				w = jl.NotFound
+			}
+			jl.Warnings = append(jl.Warnings, w)
+		}
 		if ln.Found {
 			u := jnum(ln.Use)
 			tip, length := c.L(ln.TipDepth), c.L(ln.Length)
@@ -356,14 +463,15 @@ func toJSON(r *calc.Result, o Options) *jResult {
 	}
 	des := len(r.DesignWithDepth) == len(r.WithDepth)
 	for i, w := range r.WithDepth {
-		row := jDepthRow{c.L(w.TipDepth), c.S(w.UnitTip), c.F(w.Tip), c.F(w.Shaft), c.F(w.Weight), c.F(w.Compression), c.F(w.Tension), nil}
+		row := jDepthRow{c.L(w.TipDepth), c.S(w.UnitTip), c.F(w.Tip), c.F(w.Shaft), c.F(w.Weight), c.F(w.Compression), c.F(w.Tension), nil,
+			nonNil(tipRuleNames(w.Flags))}
 		if des {
 			q := c.F(r.DesignWithDepth[i])
 			row.DesignCompression = &q
 		}
 		j.WithDepth = append(j.WithDepth, row)
 	}
-	for _, s := range r.Sources {
+	for _, s := range sources(r) {
 		j.Sources = append(j.Sources, jSource{s.Key, s.Authors, s.Year, s.Title, s.Publication, s.String()})
 	}
 	return j

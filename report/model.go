@@ -5,7 +5,10 @@ import (
 	"math"
 	"strings"
 
+	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/calc"
+	"github.com/qultgeo/qult/pile"
+	"github.com/qultgeo/qult/units"
 )
 
 // The text, Markdown and HTML writers render one document model: sections
@@ -41,6 +44,9 @@ func (c column) header() string {
 type table struct {
 	cols []column
 	rows [][]cell
+	// listInText renders the table in Text as one wrapped list entry per
+	// row (for tables of sentences, too wide for columns).
+	listInText bool
 }
 
 type item struct {
@@ -94,6 +100,7 @@ func build(r *calc.Result, o Options) *doc {
 		add(secShaft(r, c))
 		add(secTip(r, c))
 		add(secTotals(r, c))
+		add(secDefaults(r, c))
 	case ViewLength:
 		add(secLength(r, c))
 		add(secWithDepth(r, c))
@@ -108,12 +115,13 @@ func build(r *calc.Result, o Options) *doc {
 		add(secDesign(r, c))
 		add(secLength(r, c))
 		add(secWithDepth(r, c))
+		add(secDefaults(r, c))
 	}
-	add(secList("Warnings", r.Warnings))
+	add(secList("Warnings", allWarnings(r, c)))
 	if o.View == ViewReport {
-		src := make([]string, len(r.Sources))
-		for i, s := range r.Sources {
-			src[i] = s.String()
+		var src []string
+		for _, s := range sources(r) {
+			src = append(src, s.String())
 		}
 		add(secList("Sources cited", src))
 		add(secList("Cautions", r.Cautions))
@@ -175,6 +183,11 @@ func secLayers(r *calc.Result, c conv) section {
 	t := &table{cols: []column{{"Layer", ""}, {"Top", c.uL()}, {"Bottom", c.uL()}, {"Drainage", ""},
 		{"φ′", "deg"}, {"c′", c.uS()}, {"su top", c.uS()}, {"su bottom", c.uS()},
 		{"γ", c.uG()}, {"γsat", c.uG()}, {"γ′", c.uG()}, {"Weights", ""}, {"Shaft", ""}, {"Tip", ""}}}
+	zd := designGround(r)
+	cut := zd > 0
+	if cut {
+		t.cols = append(t.cols, column{"Removed", c.uL()})
+	}
 	for i, l := range r.Layers {
 		row := []cell{txt(l.Name), num(c.L(l.Top)), num(c.L(l.Bottom)), txt(l.Drainage.String()),
 			optNum(l.Phi.Degrees(), l.Phi > 0), optNum(c.S(l.Cohesion), l.Cohesion > 0),
@@ -186,6 +199,9 @@ func secLayers(r *calc.Result, c conv) section {
 			shaftM, tipM = r.Methods[i].Shaft, r.Methods[i].Tip
 		}
 		row = append(row, txt(dash(shaftM)), txt(dash(tipM)))
+		if cut {
+			row = append(row, optNum(c.L(l.Removed), l.Removed > 0))
+		}
 		t.rows = append(t.rows, row)
 	}
 	zw, wet := r.Ground.WaterDepth()
@@ -196,11 +212,25 @@ func secLayers(r *calc.Result, c conv) section {
 			water = c.ls(-zw) + " of free water above ground"
 		}
 	}
-	return section{heading: "Ground profile", blocks: []block{
-		{items: []item{{"Water table", txt(water), ""}, {"γw", num(c.G(r.Ground.WaterUnitWeight())), c.uG()}}},
-		{tbl: t},
+	gi := []item{{"Water table", txt(water), ""}, {"γw", num(c.G(r.Ground.WaterUnitWeight())), c.uG()}}
+	var cutNote []block
+	if cut {
+		gl := r.Ground.GroundLines()
+		gi = append(gi, item{"Original ground line", num(c.L(gl.Original)), c.uL()})
+		if gl.Excavation > 0 {
+			gi = append(gi, item{"Excavation floor", num(c.L(gl.Excavation)), c.uL()})
+		}
+		if gl.GeneralScour > gl.Excavation {
+			gi = append(gi, item{"General scour line", num(c.L(gl.GeneralScour)), c.uL()})
+		}
+		gi = append(gi, item{"Design ground line", num(c.L(gl.Design)), c.uL()})
+		cutNote = []block{{para: fmt.Sprintf("The soil above the design ground line at %s (excavation and scour; depths from the original ground) is removed: its weight is left out of σ′v below, and it gives no shaft or tip resistance. Removed is the thickness cut from each layer.", c.ls(gl.Design))}}
+	}
+	return section{heading: "Ground profile", blocks: append([]block{
+		{items: gi},
+		{tbl: t}}, append(cutNote, []block{
 		{para: "Weights: given = as entered; phase = derived from dry unit weight, void ratio, water content or specific gravity by phase relations; assumed-dry and assumed-saturated mark an assumption where data were missing. γ′ = γsat − γw."},
-	}}
+	}...)...)}
 }
 
 func dash(s string) string {
@@ -262,10 +292,41 @@ func secShaft(r *calc.Result, c conv) section {
 		blocks = append(blocks, block{para: fmt.Sprintf("λ method: embedded length L = %s, mean σ′v = %s and mean su = %s over the layers using it, λ = %s, fs,av = %s (its rows show no end values).",
 			c.ls(l.Length), c.ss(l.SigmaV), c.ss(l.Su), fmtNum(l.Lambda, sig), c.ss(l.Fav))})
 	}
+	if z := noShaftList(r, c); len(z) > 0 {
+		blocks = append(blocks, block{para: "Segments without side resistance, and why:"}, block{list: z})
+	}
 	if eq := shaftEquations(r, c); len(eq) > 0 {
 		blocks = append(blocks, block{para: "Worked equations (the bottom of the first segment of each method):"}, block{eqs: eq})
 	}
 	return section{heading: "Shaft resistance", blocks: blocks}
+}
+
+// noShaftList names each stretch of shaft without side resistance and says
+// why; adjacent segments of one layer with the same reason (split at the
+// water table, say) are one stretch.
+func noShaftList(r *calc.Result, c conv) []string {
+	type stretch struct {
+		top, bot    units.Length
+		layer       int
+		name, cause string
+	}
+	var ss []stretch
+	for _, w := range r.Breakdown.Rows {
+		if w.Method != "none" {
+			continue
+		}
+		why := noShaftReason(r, w)
+		if n := len(ss); n > 0 && ss[n-1].layer == w.Layer && ss[n-1].cause == why && ss[n-1].bot == w.Top {
+			ss[n-1].bot = w.Bottom
+			continue
+		}
+		ss = append(ss, stretch{w.Top, w.Bottom, w.Layer, w.LayerName, why})
+	}
+	var out []string
+	for _, s := range ss {
+		out = append(out, fmt.Sprintf("%s to %s (%s): %s", c.ls(s.top), c.ls(s.bot), s.name, s.cause))
+	}
+	return out
 }
 
 // shaftEquations writes each shaft method's equation once with the
@@ -319,20 +380,40 @@ func secTip(r *calc.Result, c conv) section {
 		{"Tip depth", num(c.L(t.Depth)), c.uL()},
 		{"Layer", txt(t.LayerName), ""},
 		{"Method", txt(t.Method), ""},
-		{"Equation", txt(t.Equation), ""},
-		{"q′ = σ′v at the tip", num(c.S(t.Input.Q)), c.uS()},
 	}
+	if res.Rule != "" {
+		it = append(it, item{"Rule used by the method", txt(res.Rule), ""})
+	}
+	it = append(it, item{"q′ = σ′v at the tip", num(c.S(t.Input.Q)), c.uS()})
 	if t.Input.Phi > 0 {
 		it = append(it, item{"φ′", num(t.Input.Phi.Degrees()), "deg"})
 	}
 	if t.Input.Su > 0 {
 		it = append(it, item{"su", num(c.S(t.Input.Su)), c.uS()})
 	}
+	if t.Input.N60 > 0 {
+		it = append(it, item{"N60", num(t.Input.N60), ""})
+	}
 	if res.Nq > 0 {
 		it = append(it, item{"Nq", num(res.Nq), ""})
 	}
 	if res.Nc > 0 {
 		it = append(it, item{"Nc", num(res.Nc), ""})
+	}
+	if res.Ir > 0 {
+		it = append(it, item{"Ir", num(res.Ir), ""})
+		if res.DeltaBy == bearing.DeltaGiven || res.DeltaBy == bearing.DeltaCorrelation {
+			it = append(it, item{"Δ (" + res.DeltaBy.String() + ")", num(res.Delta), ""})
+		} else {
+			why := "not used"
+			switch {
+			case res.DeltaBy == bearing.DeltaUndrained:
+				why = "0 (undrained)"
+			case res.Flags&bearing.VolumeChangeIgnored != 0:
+				why = "not used (volume change ignored)"
+			}
+			it = append(it, item{"Δ", txt(why), ""})
+		}
 	}
 	if res.Irr > 0 {
 		it = append(it, item{"Irr", num(res.Irr), ""})
@@ -341,50 +422,50 @@ func secTip(r *calc.Result, c conv) section {
 	if res.Limit > 0 {
 		it = append(it, item{"Limit", num(c.S(res.Limit)), c.uS()})
 	}
+	if res.Reduction > 0 {
+		it = append(it, item{"Reduction factor (installation, size)", num(res.Reduction), ""})
+	}
+	if res.Cap > 0 {
+		it = append(it, item{"Drilled-shaft cap", num(c.S(res.Cap)), c.uS()})
+	}
+	it = append(it, item{"Method's own qp", num(c.S(t.Own)), c.uS()})
+	if t.Flags&pile.EmbedmentRamp != 0 {
+		it = append(it, item{"Embedment Lb", num(c.L(embedment(r))), c.uL()},
+			item{"(Lb/D)cr·D", num(c.L(t.EmbedLength)), c.uL()},
+			item{"Embedment factor", num(t.EmbedFactor), ""})
+	}
 	if t.Upper > 0 {
 		it = append(it, item{"Upper layer's qp (layered rule)", num(c.S(t.Upper)), c.uS()})
+	}
+	if t.WeakLayer >= 0 {
+		it = append(it, item{"q_strong", num(c.S(t.Strong)), c.uS()},
+			item{"q_weak (weaker layer below)", num(c.S(t.Weak)), c.uS()},
+			item{"H to the weaker layer", num(c.L(t.H)), c.uL()},
+			item{"10 D", num(c.L(t.WeakZone)), c.uL()})
 	}
 	it = append(it, item{"qp used", num(c.S(t.Qp)), c.uS()},
 		item{"Area", num(c.A(t.Area)), c.uA()},
 		item{"Qp", num(c.F(t.Force)), c.uF()})
-	if t.Flags != 0 {
-		it = append(it, item{"Notes", txt(t.Flags.String()), ""})
+	blocks := []block{{items: it}, {para: "Method's equation: " + t.Equation}}
+	if b := settlementBasis(t); b != "" {
+		blocks = append(blocks, block{para: "Settlement basis of qp: " + b + "."})
 	}
-	return section{heading: "Tip resistance", blocks: []block{{items: it}, {para: "Worked equation:"}, {eqs: tipEquations(r, c)}}}
+	if m := append(t.Flags.Messages(), bearingNotes(res.Flags)...); len(m) > 0 {
+		blocks = append(blocks, block{para: "Notes: " + strings.Join(m, "; ") + "."})
+	}
+	blocks = append(blocks, block{para: "Worked equations, each rule in the order applied:"}, block{eqs: tipSteps(r, c)})
+	return section{heading: "Tip resistance", blocks: blocks}
 }
 
-func tipEquations(r *calc.Result, c conv) []string {
-	t := r.Breakdown.Tip
-	res := t.Result
-	var out []string
-	var terms, vals []string
-	if res.Nq > 0 {
-		sym := "q′"
-		if math.Abs(float64(res.Sigma-t.Input.Q)) > 1e-9*math.Abs(float64(t.Input.Q)) {
-			sym = "σ′o"
-		}
-		terms = append(terms, sym+"·Nq")
-		vals = append(vals, fmt.Sprintf("%s × %s", c.ss(res.Sigma), fmtNum(res.Nq, sig)))
+// bearingNotes names the tip method's own notes that the pile's flags do
+// not already carry (the limit and a chart edge reach them as TipLimit and
+// ChartEdge).
+func bearingNotes(f bearing.Flags) []string {
+	f &^= bearing.LimitGoverns | bearing.Clamped
+	if f == 0 {
+		return nil
 	}
-	if res.Nc > 0 {
-		terms = append(terms, "c·Nc")
-		vals = append(vals, fmt.Sprintf("%s × %s", c.ss(res.C), fmtNum(res.Nc, sig)))
-	}
-	if len(terms) > 0 {
-		out = append(out, fmt.Sprintf("qp = %s = %s = %s", strings.Join(terms, " + "), strings.Join(vals, " + "), c.ss(res.Unlimited)))
-	} else {
-		out = append(out, fmt.Sprintf("%s gives qp = %s", t.Equation, c.ss(res.Unlimited)))
-	}
-	if res.Limit > 0 {
-		out = append(out, fmt.Sprintf("qp ≤ limit %s, so qp = min(%s, %s) = %s", c.ss(res.Limit), c.ss(res.Unlimited), c.ss(res.Limit), c.ss(res.Qp)))
-	}
-	if t.Upper > 0 {
-		out = append(out, fmt.Sprintf("tip less than 10 diameters into a stronger layer: qp grows from the upper layer's %s to %s (Meyerhof 1976), qp = %s", c.ss(t.Upper), c.ss(res.Qp), c.ss(t.Qp)))
-	} else if t.Qp != res.Qp {
-		out = append(out, fmt.Sprintf("qp used = %s", c.ss(t.Qp)))
-	}
-	out = append(out, fmt.Sprintf("Qp = qp·A = %s × %s = %s", c.ss(t.Qp), c.as(t.Area), c.fs(t.Force)))
-	return out
+	return strings.Split(f.String(), "; ")
 }
 
 func secTotals(r *calc.Result, c conv) section {
@@ -456,15 +537,39 @@ func secLength(r *calc.Result, c conv) section {
 		}
 		return section{heading: "Required length", blocks: []block{{para: msg}}}
 	}
+	search := block{para: fmt.Sprintf("Search: candidate tip depths from one step below the head down to %s in steps of %s; a tip passes only where every deeper candidate down to that limit passes too.",
+		c.ls(l.MaxTip), c.ls(l.Step))}
+	var blocks []block
 	if !l.Found {
-		return section{heading: "Required length", blocks: []block{{para: "No tip depth within the search passes every design case."}}}
+		blocks = []block{{para: "No tip depth within the search passes every design case: " + strings.TrimPrefix(notFound(*l, c), "no pile length passes: ") + "."}, search}
+	} else {
+		blocks = []block{{items: []item{
+			{"Tip depth", num(c.L(l.TipDepth)), c.uL()},
+			{"Length", num(c.L(l.Length)), c.uL()},
+			{"Governs", txt(l.Governs), ""},
+			{"Utilisation there", useCell(l.Use), ""},
+		}}, search}
 	}
-	return section{heading: "Required length", blocks: []block{{items: []item{
-		{"Tip depth", num(c.L(l.TipDepth)), c.uL()},
-		{"Length", num(c.L(l.Length)), c.uL()},
-		{"Governs", txt(l.Governs), ""},
-		{"Utilisation there", useCell(l.Use), ""},
-	}}}}
+	if len(l.Passing) > 1 || (!l.Found && len(l.Passing) > 0) {
+		t := &table{cols: []column{{"Passing from", c.uL()}, {"to", c.uL()}}}
+		for _, p := range l.Passing {
+			t.rows = append(t.rows, []cell{num(c.L(p.From)), num(c.L(p.To))})
+		}
+		blocks = append(blocks, block{para: "Ranges of tip depth that pass (a shorter pile passes where a longer one fails):"}, block{tbl: t})
+	}
+	if len(l.Warnings) > 0 {
+		var w []string
+		nf := l.NotFound()
+		for _, s := range l.Warnings {
+			if s != nf { // the not-found sentence is the paragraph above
+				w = append(w, s)
+			}
+		}
+		if len(w) > 0 {
+			blocks = append(blocks, block{list: w})
+		}
+	}
+	return section{heading: "Required length", blocks: blocks}
 }
 
 // withDepthTable is the capacity with depth.
@@ -475,22 +580,41 @@ func withDepthTable(r *calc.Result, c conv) *table {
 	if des {
 		t.cols = append(t.cols, column{"Rc,d", c.uF()})
 	}
+	t.cols = append(t.cols, column{"Tip rules", ""})
 	for i, k := range r.WithDepth {
 		row := []cell{num(c.L(k.TipDepth)), num(c.S(k.UnitTip)), num(c.F(k.Tip)), num(c.F(k.Shaft)), num(c.F(k.Weight)),
 			num(c.F(k.Compression)), num(c.F(k.Tension))}
 		if des {
 			row = append(row, num(c.F(r.DesignWithDepth[i])))
 		}
+		row = append(row, txt(dash(strings.Join(tipRuleNames(k.Flags), ", "))))
 		t.rows = append(t.rows, row)
 	}
 	return t
+}
+
+// tipRuleNames are short names of the tip rules that act at one tip depth
+// (for the capacity with depth); a rule switched off where it would act is
+// named in capitals.
+func tipRuleNames(f pile.Flags) []string {
+	var out []string
+	for _, n := range []struct {
+		f    pile.Flags
+		name string
+	}{{pile.TipLimit, "limit"}, {pile.EmbedmentRamp, "ramp"}, {pile.EmbedmentOff, "RAMP OFF"}, {pile.LayeredTip, "layered"},
+		{pile.WeakLayerReduced, "weak below"}, {pile.WeakLayerOff, "WEAK BELOW OFF"}} {
+		if f&n.f != 0 {
+			out = append(out, n.name)
+		}
+	}
+	return out
 }
 
 func secWithDepth(r *calc.Result, c conv) section {
 	if len(r.WithDepth) == 0 {
 		return section{heading: "Capacity with depth", blocks: []block{{para: "Not computed (see the warnings)."}}}
 	}
-	p := "Characteristic capacity for each tip depth (same pile, head fixed)."
+	p := "Characteristic capacity for each tip depth (same pile, head fixed). Tip rules names those acting on qp at that depth: the method's limit, Meyerhof's embedment ramp, the layered transition into a stronger layer and the reduction above a weaker layer (in capitals where switched off)."
 	if len(r.DesignWithDepth) == len(r.WithDepth) {
 		p += " Rc,d is the design compression resistance of the governing case."
 	}

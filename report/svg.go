@@ -93,6 +93,10 @@ func groundSVG(r *calc.Result, c conv) string {
 		}
 		fmt.Fprintf(&b, `<text x="%g" y="%.2f" dominant-baseline="middle">%s</text>`+"\n", labelX, ly, esc(label))
 	}
+	// The soil removed above the design ground line is shaded out.
+	if zd := float64(r.Ground.DesignGround()); zd > 0 {
+		fmt.Fprintf(&b, `<rect x="%g" y="%.2f" width="%g" height="%.2f" fill="#ffffff" fill-opacity="0.65" stroke="none"/>`+"\n", left, y(0), right-left, y(zd)-y(0))
+	}
 	// depth axis in display units
 	dispBot := c.L(units.Length(zBot))
 	dispTop := c.L(units.Length(zTop))
@@ -129,6 +133,24 @@ func groundSVG(r *calc.Result, c conv) string {
 		fmt.Fprintf(&b, `<text x="%g" y="%.2f" fill="%s" stroke="#fff" stroke-width="3" paint-order="stroke" text-anchor="end">%s</text>`+"\n", tx-10, yw-4, waterColour, esc(wl))
 	}
 	fmt.Fprintf(&b, `<line x1="%g" y1="%.2f" x2="%g" y2="%.2f" stroke="#000" stroke-width="1.5"/>`+"\n", left-4, y(0), right+4, y(0))
+	// The design ground line (excavation and scour) and the lines above
+	// it, labelled with the original ground line.
+	if zd := float64(r.Ground.DesignGround()); zd > 0 {
+		gl := r.Ground.GroundLines()
+		for _, ln := range []struct {
+			z    units.Length
+			name string
+		}{{gl.Excavation, "excavation floor"}, {gl.GeneralScour, "general scour line"}} {
+			if ln.z > 0 && float64(ln.z) < zd {
+				fmt.Fprintf(&b, `<line x1="%g" y1="%.2f" x2="%g" y2="%.2f" stroke="#7a4a12" stroke-dasharray="2 3"/>`+"\n", left, y(float64(ln.z)), right, y(float64(ln.z)))
+				fmt.Fprintf(&b, `<text x="%g" y="%.2f" fill="#7a4a12" stroke="#fff" stroke-width="3" paint-order="stroke">%s</text>`+"\n", left+4, y(float64(ln.z))-3, esc(ln.name+" "+c.ls(ln.z)))
+			}
+		}
+		yd := y(zd)
+		fmt.Fprintf(&b, `<line x1="%g" y1="%.2f" x2="%g" y2="%.2f" stroke="#7a4a12" stroke-width="2"/>`+"\n", left-4, yd, right+4, yd)
+		fmt.Fprintf(&b, `<text x="%g" y="%.2f" fill="#7a4a12" stroke="#fff" stroke-width="3" paint-order="stroke">%s</text>`+"\n", left+4, yd-4, esc("design ground line "+c.ls(units.Length(zd))))
+		fmt.Fprintf(&b, `<text x="%g" y="%.2f" stroke="#fff" stroke-width="3" paint-order="stroke">original ground line</text>`+"\n", left+4, y(0)-4)
+	}
 	b.WriteString("</g>\n</svg>")
 	return b.String()
 }

@@ -93,6 +93,8 @@ func textBlock(b *bufio.Writer, bl block) {
 			}
 			b.WriteString("\n")
 		}
+	case bl.tbl != nil && bl.tbl.listInText:
+		textBlock(b, block{list: tableList(bl.tbl)})
 	case bl.tbl != nil:
 		textTable(b, bl.tbl)
 	case len(bl.eqs) > 0:
@@ -159,4 +161,26 @@ func textTable(b *bufio.Writer, t *table) {
 	for _, r := range cells {
 		line(r)
 	}
+}
+
+// tableList turns each row into one line: the first cell, then each other
+// column as "name: value".
+func tableList(t *table) []string {
+	var out []string
+	for _, row := range t.rows {
+		var parts []string
+		for j, c := range row {
+			v := c.str(sig)
+			if j == 0 {
+				parts = append(parts, v+".")
+				continue
+			}
+			if v == "-" || v == "" {
+				continue
+			}
+			parts = append(parts, t.cols[j].header()+": "+v+".")
+		}
+		out = append(out, strings.Join(parts, " "))
+	}
+	return out
 }
