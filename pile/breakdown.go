@@ -216,7 +216,7 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 		EmbedFactor: tr.embed, Upper: units.Stress(tr.upper), WeakLayer: -1,
 		Qp: c.UnitTip, Area: units.Area(area), Force: c.Tip, Flags: tr.flags}
 	if tr.flags&EmbedmentRamp != 0 {
-		b.Tip.Lb = units.Length(t) - lp.layer.Top
+		b.Tip.Lb = units.Length(t) - max(lp.layer.Top, a.prof.DesignGround()) // the embedment the ramp used
 		b.Tip.EmbedLength = units.Length(a.embedN * a.size)
 		addRefs("embedment", []cite.Ref{{Source: cite.Meyerhof1976, Where: "growth of the point resistance with embedment up to the critical ratio"},
 			{Source: cite.Das2019, Where: "Meyerhof's method for piles in sand, critical embedment ratio"}})

@@ -162,3 +162,26 @@ func TestEmbedmentFromDesignGround(t *testing.T) {
 		t.Errorf("layered rule applied from the excavated clay: flags %v", c1.Flags)
 	}
 }
+
+// TestEmbedmentLbInBreakdown: the tip block reports the embedment the ramp
+// used, counted from the design ground line (closed form: Lb = 2.5 m).
+func TestEmbedmentLbInBreakdown(t *testing.T) {
+	prof, err := profile.New(profile.Spec{WaterDepth: 0, ExcavationDepth: 4 * m,
+		Layers: []profile.LayerSpec{{Name: "sand", Thickness: 30 * m, Drainage: profile.Drained, Phi: 34 * units.Degree, SaturatedUnitWeight: 20 * kNm}}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	ms := DefaultMethods()
+	ms.TipDrained = bearing.GivenNq{Nq: 40}
+	a, err := NewAnalysis(prof, Pile{Section: Section{Shape: Square, Width: 0.5 * m}, Length: 6.5 * m, Installation: DrivenHigh}, ms, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	b, err := a.Breakdown()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if math.Abs(float64(b.Tip.Lb)-2.5) > 1e-12 || math.Abs(b.Tip.EmbedFactor-0.5) > 1e-12 {
+		t.Errorf("Lb %v, factor %v; want 2.5 m and 0.5", b.Tip.Lb, b.Tip.EmbedFactor)
+	}
+}

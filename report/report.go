@@ -230,7 +230,6 @@ func (c conv) ss(v units.Stress) string         { return fmtNum(c.S(v), sig) + "
 func (c conv) fs(v units.Force) string          { return fmtNum(c.F(v), sig) + " " + c.uF() }
 func (c conv) as(v units.Area) string           { return fmtNum(c.A(v), sig) + " " + c.uA() }
 func (c conv) qs(v units.ForcePerLength) string { return fmtNum(c.Q(v), sig) + " " + c.uQ() }
-func (c conv) gs(v units.UnitWeight) string     { return fmtNum(c.G(v), sig) + " " + c.uG() }
 
 // modulus returns a modulus in MPa (SI) or ksi (US), units that suit
 // stiffnesses better than kPa and ksf.

@@ -36,6 +36,9 @@ func load(t testing.TB, path string, edit func(string) string) *calc.Result {
 	s := string(data)
 	if edit != nil {
 		s = edit(s)
+		if s == string(data) {
+			t.Fatalf("%s: the edit changed nothing (the example changed?)", path)
+		}
 	}
 	r, err := calc.Parse([]byte(s))
 	if err != nil {

@@ -377,7 +377,7 @@ func TestDefaultsTable(t *testing.T) {
 // when Δ was given or correlated.
 func TestVesicIrr(t *testing.T) {
 	r := load(t, example, func(s string) string {
-		s = strings.Replace(s, "tip_drained: meyerhof", "tip_drained: vesic", 1)
+		s = strings.Replace(s, "      rigidity_index: 80\n", "      rigidity_index: 80\n      tip: {method: vesic}\n", 1)
 		return regexp.MustCompile(`(?m)^  length: .*$`).ReplaceAllString(s, "  length: 20 m")
 	})
 	res := r.Breakdown.Tip.Result
@@ -424,7 +424,7 @@ func TestVesicIrr(t *testing.T) {
 func boredResult(t *testing.T, m bearing.Tip, in bearing.Input) *calc.Result {
 	t.Helper()
 	r := load(t, example, func(s string) string {
-		return strings.Replace(s, "diameter: 750 mm", "diameter: 1.8 m", 1)
+		return strings.Replace(s, "diameter: 1050 mm", "diameter: 1.8 m", 1)
 	})
 	in.D = 1.8 * units.Metre
 	res, err := m.Tip(in)
