@@ -24,8 +24,12 @@ func CautionText() []string {
 		"These results are for qualified geotechnical engineers. Check them against the codes of practice that govern the project, the site investigation and load tests.",
 		"Each method carries the limitations stated in its source; values read from charts carry the stated reading tolerance.",
 		"qult is not a substitute for the judgement of a licensed professional engineer, who remains responsible for any design that uses it.",
+		"Where the governing code, local practice or the engineer of record differs from qult, they prevail.",
 	}
 }
+
+// CautionLine is the cautions in one short line, for tables and CSV.
+const CautionLine = "For qualified engineers only: check against the governing code, the site investigation and load tests; the code and licensed practice prevail."
 
 // Parse decodes and runs a calc file.
 func Parse(data []byte) (*Result, error) {

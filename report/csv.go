@@ -75,7 +75,12 @@ func writeCSV(b *bufio.Writer, r *calc.Result, o Options) error {
 		}
 	}
 	w.Flush()
-	return w.Error()
+	if err := w.Error(); err != nil {
+		return err
+	}
+	// The cautions as a last comment line (read CSV with comment='#').
+	_, err := b.WriteString("# " + calc.CautionLine + "\n")
+	return err
 }
 
 // csvText guards text cells against formula injection in spreadsheets: a

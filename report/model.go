@@ -124,8 +124,13 @@ func build(r *calc.Result, o Options) *doc {
 			src = append(src, s.String())
 		}
 		add(secList("Sources cited", src))
-		add(secList("Cautions", r.Cautions))
 	}
+	// Every view an engineer may act on carries the cautions.
+	cautions := r.Cautions
+	if len(cautions) == 0 {
+		cautions = calc.CautionText()
+	}
+	add(secList("Cautions", cautions))
 	return d
 }
 

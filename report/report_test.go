@@ -233,10 +233,15 @@ func checkJSON(t *testing.T, name, out string) {
 
 func checkCSV(t *testing.T, name, out string) {
 	t.Helper()
-	recs, err := csv.NewReader(strings.NewReader(out)).ReadAll()
+	r := csv.NewReader(strings.NewReader(out))
+	r.Comment = '#' // the cautions line
+	recs, err := r.ReadAll()
 	if err != nil {
 		t.Errorf("%s: invalid CSV: %v", name, err)
 		return
+	}
+	if !strings.Contains(out, "\n# For qualified engineers") {
+		t.Errorf("%s: no cautions line", name)
 	}
 	if len(recs) < 2 {
 		t.Errorf("%s: %d records, want a header and rows", name, len(recs))

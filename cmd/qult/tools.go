@@ -11,6 +11,7 @@ import (
 	"strings"
 
 	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/calc"
 	"github.com/qultgeo/qult/phase"
 	"github.com/qultgeo/qult/units"
 )
@@ -316,10 +317,11 @@ func writePhase(b *bytes.Buffer, format string, st phase.State, isGiven phase.Se
 			Given  bool        `json:"given"`
 		}
 		out := struct {
-			Schema     string `json:"schema"`
-			Units      string `json:"units"`
-			Quantities []jrow `json:"quantities"`
-		}{Schema: "qult.phase/1", Units: sys.String()}
+			Schema     string   `json:"schema"`
+			Units      string   `json:"units"`
+			Quantities []jrow   `json:"quantities"`
+			Cautions   []string `json:"cautions"`
+		}{Schema: "qult.phase/1", Units: sys.String(), Cautions: calc.CautionText()}
 		for _, r := range rows {
 			out.Quantities = append(out.Quantities, jrow{r.sym, r.name, jsonNum(r.v), r.unit, r.given})
 		}
@@ -344,10 +346,13 @@ func emit(b *bytes.Buffer, format string, t *table) {
 	switch format {
 	case "csv":
 		t.csv(b)
+		b.WriteString("# " + calc.CautionLine + "\n")
 	case "md":
 		t.md(b)
+		b.WriteString("\n" + calc.CautionLine + "\n")
 	default:
 		t.text(b)
+		b.WriteString("\n" + calc.CautionLine + "\n")
 	}
 }
 
