@@ -185,3 +185,34 @@ func TestEmbedmentLbInBreakdown(t *testing.T) {
 		t.Errorf("Lb %v, factor %v; want 2.5 m and 0.5", b.Tip.Lb, b.Tip.EmbedFactor)
 	}
 }
+
+// TestLayeredTipOffWarns: with Meyerhof's transition switched off, a tip
+// less than 10 D into a stronger layer carries the LayeredTipOff warning
+// (and the full value of the bearing layer); with it on, LayeredTip.
+func TestLayeredTipOffWarns(t *testing.T) {
+	prof, err := profile.New(profile.Spec{WaterDepth: 0, Layers: []profile.LayerSpec{
+		{Name: "clay", Thickness: 4 * m, Drainage: profile.Undrained, Su: 15 * units.Kilopascal, SaturatedUnitWeight: 17 * kNm},
+		{Name: "sand", Thickness: 30 * m, Drainage: profile.Drained, Phi: 34 * units.Degree, SaturatedUnitWeight: 20 * kNm}}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	p := Pile{Section: Section{Shape: Square, Width: 0.5 * m}, Length: 6.5 * m, Installation: DrivenHigh}
+	for _, on := range []bool{true, false} {
+		ms := DefaultMethods()
+		ms.LayeredTip = on
+		a, err := NewAnalysis(prof, p, ms, nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		c, err := a.Capacity()
+		if err != nil {
+			t.Fatal(err)
+		}
+		if on && (c.Flags&LayeredTip == 0 || c.Flags&LayeredTipOff != 0) {
+			t.Errorf("on: flags %v", c.Flags)
+		}
+		if !on && (c.Flags&LayeredTipOff == 0 || c.Flags&LayeredTip != 0) {
+			t.Errorf("off: flags %v", c.Flags)
+		}
+	}
+}

@@ -59,6 +59,10 @@ const (
 	TipReductionOff
 	// TipCapGoverns: the bored-pile tip cap governs.
 	TipCapGoverns
+	// LayeredTipOff: the tip is less than 10 diameters into a stronger
+	// layer but Methods.LayeredTip is false, so the transition was not
+	// applied.
+	LayeredTipOff
 )
 
 var flagText = [...]string{
@@ -82,6 +86,7 @@ var flagText = [...]string{
 	"WARNING: Vesic's tip took Irr = Ir (no volumetric strain Δ): the tip resistance may be unconservative in compressible sand",
 	"WARNING: a rule that lowers a bored pile's tip resistance (the cap or the large-base reduction) is switched off",
 	"the bored-pile tip cap governs",
+	"WARNING: Meyerhof's (1976) transition for a tip less than 10 diameters into a stronger layer is switched off; the tip resistance may be unconservative",
 }
 
 // Messages returns one sentence per set flag.

@@ -115,12 +115,16 @@ func (a *Analysis) baseRules(li int, z, q float64, fl *Flags) (qp, upper, embed 
 			}
 		}
 	}
-	if a.methods.LayeredTip && !first && z-top < 10*d {
+	if !first && z-top < 10*d {
 		up := &a.plans[li-1]
-		if up.errBot != nil {
+		switch {
+		case !a.methods.LayeredTip:
+			if up.errBot != nil || up.baseBot < q {
+				*fl |= LayeredTipOff
+			}
+		case up.errBot != nil:
 			return 0, 0, 0, fmt.Errorf("layers[%d] (%s).tip, needed for the layered-tip rule at %.4g m: %w", li-1, up.layer.Name, top, up.errBot)
-		}
-		if up.baseBot < q {
+		case up.baseBot < q:
 			upper = up.baseBot
 			q = upper + (q-upper)*(z-top)/(10*d)
 			*fl |= LayeredTip
