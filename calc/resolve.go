@@ -7,10 +7,12 @@ import (
 	"math"
 	"slices"
 	"sort"
+	"strconv"
 	"strings"
 
 	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/cite"
+	"github.com/qultgeo/qult/phase"
 	"github.com/qultgeo/qult/pile"
 	"github.com/qultgeo/qult/profile"
 	"github.com/qultgeo/qult/shaft"
@@ -112,6 +114,19 @@ func (r *resolver) num(v Value, path string, lo, hi float64) float64 {
 		return 0
 	}
 	return x
+}
+
+// zeroValue reports whether v reads as a number equal to zero ("0",
+// "0 kPa", "0 %"), as opposed to a value that failed to parse (already
+// reported) and so resolved to zero.
+func zeroValue(v Value) bool {
+	num, _, ok := strings.Cut(strings.TrimSpace(v.Raw)+" ", " ")
+	if !ok {
+		return false
+	}
+	num = strings.TrimRight(num, "%°")
+	x, err := strconv.ParseFloat(num, 64)
+	return err == nil && x == 0
 }
 
 // fraction reads a fraction that may be written as a percentage ("25 %").
@@ -234,6 +249,46 @@ func (r *resolver) ground(f *File, in *Inputs) {
 		ls.Nu = r.num(l.PoissonsRatio, path+".poissons_ratio", 0, 1e6)
 		ls.Ir = r.num(l.RigidityIndex, path+".rigidity_index", 0, 1e9)
 		ls.Delta = r.num(l.VolumetricStrain, path+".volumetric_strain", 0, 0.5)
+		// An explicit zero is a value, not "not given": where the library
+		// reads zero as absent, a zero given in the file is refused; where
+		// zero is a real state (a dry soil), it is passed on as one.
+		for _, z := range []struct {
+			key string
+			v   Value
+			x   float64
+		}{
+			{"unit_weight", l.UnitWeight, float64(ls.UnitWeight)}, {"saturated_unit_weight", l.SaturatedUnitWeight, float64(ls.SaturatedUnitWeight)},
+			{"dry_unit_weight", l.DryUnitWeight, float64(ls.DryUnitWeight)}, {"void_ratio", l.VoidRatio, ls.VoidRatio},
+			{"specific_gravity", l.SpecificGravity, ls.Gs},
+			{"ocr", l.OCR, ls.OCR}, {"relative_density", l.RelativeDensity, ls.Dr}, {"n60", l.N60, ls.N60},
+			{"youngs_modulus", l.YoungsModulus, float64(ls.E)}, {"shear_modulus", l.ShearModulus, float64(ls.G)},
+			{"poissons_ratio", l.PoissonsRatio, ls.Nu}, {"rigidity_index", l.RigidityIndex, ls.Ir},
+			{"volumetric_strain", l.VolumetricStrain, ls.Delta},
+		} {
+			if z.v.IsSet() && z.x == 0 && zeroValue(z.v) {
+				r.add(path+"."+z.key, z.v.Line, "%q: zero is not an accepted value here (it must be above 0); leave the key out if it is not known", z.v.Raw)
+			}
+		}
+		if ls.Drainage == profile.Drained && l.FrictionAngle.IsSet() && ls.Phi == 0 && zeroValue(l.FrictionAngle) {
+			r.add(path+".friction_angle", l.FrictionAngle.Line, "%q: a drained layer needs φ′ above 0 deg", l.FrictionAngle.Raw)
+		}
+		if su := l.UndrainedStrength; su != nil {
+			for _, v := range []struct {
+				key string
+				v   Value
+				x   units.Stress
+			}{{"undrained_strength", su.Value, ls.Su}, {"undrained_strength.top", su.Top, ls.SuTop}, {"undrained_strength.bottom", su.Bottom, ls.SuBottom}} {
+				if v.v.IsSet() && v.x == 0 && zeroValue(v.v) {
+					r.add(path+"."+v.key, v.v.Line, "%q: zero is not an accepted value here (su must be above 0)", v.v.Raw)
+				}
+			}
+		}
+		if l.WaterContent.IsSet() && ls.WaterContent == 0 && zeroValue(l.WaterContent) {
+			ls.Zero |= phase.Of(phase.W)
+		}
+		if l.Saturation.IsSet() && ls.Saturation == 0 && zeroValue(l.Saturation) {
+			ls.Zero |= phase.Of(phase.S)
+		}
 		s.Layers = append(s.Layers, ls)
 	}
 }

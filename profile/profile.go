@@ -398,10 +398,11 @@ func (p *Profile) resolveWeights(path string, l *Layer, ls LayerSpec, geometryOK
 		return
 	}
 	in := phase.Input{Gs: ls.Gs, E: ls.VoidRatio, W: ls.WaterContent, S: ls.Saturation,
-		Gamma: ls.UnitWeight, GammaD: ls.DryUnitWeight, GammaSat: ls.SaturatedUnitWeight, GammaW: gw}
+		Gamma: ls.UnitWeight, GammaD: ls.DryUnitWeight, GammaSat: ls.SaturatedUnitWeight, GammaW: gw,
+		Zero: ls.Zero & phase.Of(phase.S, phase.W)}
 	st, err := phase.Solve(in)
 	var ie *phase.InsufficientError
-	if errors.As(err, &ie) && ls.Saturation == 0 && ls.UnitWeight == 0 {
+	if errors.As(err, &ie) && ls.Saturation == 0 && ls.UnitWeight == 0 && ls.Zero == 0 {
 		if ls.WaterContent == 0 {
 			in.Zero = phase.Of(phase.S, phase.W)
 			if st, err = phase.Solve(in); err == nil {
@@ -485,9 +486,36 @@ func (p *Profile) porePressure(z float64, pts []PorePoint) float64 {
 	return float64(a.U) + f*float64(b.U-a.U)
 }
 
+// boundaries returns the depths of the layer bottoms.
+func (p *Profile) boundaries() []float64 {
+	out := make([]float64, len(p.layers))
+	for i, l := range p.layers {
+		out[i] = float64(l.Bottom)
+	}
+	return out
+}
+
+// breakTol is the relative distance within which two break depths are
+// taken as one (a nanometre on a metre).
+const breakTol = 1e-9
+
 // precompute builds the breaks and the per-interval stresses.
 func (p *Profile) precompute(pts []PorePoint) {
 	depth := float64(p.layers[len(p.layers)-1].Bottom)
+	// A water table or design ground line a rounding error away from the
+	// surface or a layer boundary is taken at it.
+	snap := func(z float64) float64 {
+		for _, b := range append([]float64{0}, p.boundaries()...) {
+			if math.Abs(z-b) <= breakTol*math.Max(1, math.Abs(b)) {
+				return b
+			}
+		}
+		return z
+	}
+	if !p.noWater {
+		p.waterDepth = snap(p.waterDepth)
+	}
+	p.design = snap(p.design)
 	bs := []float64{0, depth}
 	for _, l := range p.layers[:len(p.layers)-1] {
 		bs = append(bs, float64(l.Bottom))
@@ -508,7 +536,10 @@ func (p *Profile) precompute(pts []PorePoint) {
 	}
 	bs = slices.DeleteFunc(bs, func(z float64) bool { return !(z >= 0 && z <= depth) })
 	slices.Sort(bs)
-	p.breaks = slices.Clip(slices.Compact(bs))
+	// Depths that differ by rounding only (decimal thicknesses that add up
+	// to the water depth: 0.01 + 0.05 against 0.06) are one break.
+	bs = slices.CompactFunc(bs, func(a, b float64) bool { return math.Abs(a-b) <= breakTol*math.Max(1, math.Abs(a)) })
+	p.breaks = slices.Clip(bs)
 
 	m := len(p.breaks) - 1
 	p.sig, p.dsig, p.u, p.du = make([]float64, m), make([]float64, m), make([]float64, m), make([]float64, m)
@@ -543,7 +574,9 @@ func (p *Profile) precompute(pts []PorePoint) {
 		uTop := p.porePressure(top, pts)
 		uBot := p.porePressure(mid, pts) // u is linear inside the interval
 		p.u[i] = uTop
-		p.du[i] = (uBot - uTop) / (mid - top)
+		if mid > top {
+			p.du[i] = (uBot - uTop) / (mid - top)
+		}
 		if len(pts) > 0 && pts[0].U < 0 && top < float64(pts[0].Depth) {
 			// Above a suction point u is zero; avoid round-off from the mid-point slope.
 			p.u[i], p.du[i] = 0, 0

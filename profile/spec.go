@@ -1,6 +1,7 @@
 package profile
 
 import (
+	"github.com/qultgeo/qult/phase"
 	"strings"
 
 	"github.com/qultgeo/qult/units"
@@ -107,6 +108,10 @@ type LayerSpec struct {
 	WaterContent  float64 // fraction, 0.25 for 25 %
 	Gs            float64
 	Saturation    float64 // fraction
+	// Zero marks the phase quantities given as exactly zero (phase.S,
+	// phase.W), which the fields above cannot tell from "not given": a dry
+	// soil with S = 0 and w = 0.
+	Zero phase.Set
 
 	// Optional parameters for later design steps.
 	OCR float64      // overconsolidation ratio, [1, 100]

@@ -3,6 +3,7 @@ package profile
 import (
 	"errors"
 	"math"
+	"strconv"
 	"strings"
 	"testing"
 
@@ -176,5 +177,36 @@ func TestQueryAllocs(t *testing.T) {
 	z := 0.37 * p.Depth()
 	if n := testing.AllocsPerRun(100, func() { _, _ = p.EffectiveStress(z); _, _ = p.LayerAt(z); _, _ = p.StressesAt(z) }); n != 0 {
 		t.Errorf("queries allocate %v times, want 0", n)
+	}
+}
+
+// TestDecimalThicknessesMeetWater: layer thicknesses written as decimals
+// that add up to the water depth only to within rounding (0.01 + 0.05
+// against 0.06) give a valid profile with finite stresses (closed form:
+// σ′v(5 m) = γ·zw + (γsat − γw)·(5 m − zw)).
+func TestDecimalThicknessesMeetWater(t *testing.T) {
+	for _, c := range [][3]string{{"0.01", "0.05", "0.06"}, {"0.01", "0.17", "0.18"}, {"0.1", "0.2", "0.3"}, {"0.7", "0.1", "0.8"}} {
+		num := func(s string) units.Length {
+			x, err := strconv.ParseFloat(s, 64)
+			if err != nil {
+				t.Fatal(err)
+			}
+			return units.Length(x)
+		}
+		a, b, w := num(c[0]), num(c[1]), num(c[2])
+		kNm := units.KilonewtonPerCubicMetre
+		p, err := New(Spec{WaterDepth: w, Layers: []LayerSpec{
+			{Name: "a", Thickness: a, Drainage: Drained, Phi: 30 * units.Degree, UnitWeight: 18 * kNm, SaturatedUnitWeight: 20 * kNm},
+			{Name: "b", Thickness: b, Drainage: Drained, Phi: 30 * units.Degree, UnitWeight: 18 * kNm, SaturatedUnitWeight: 20 * kNm},
+			{Name: "c", Thickness: 10, Drainage: Drained, Phi: 30 * units.Degree, UnitWeight: 18 * kNm, SaturatedUnitWeight: 20 * kNm}}})
+		if err != nil {
+			t.Errorf("%v: %v", c, err)
+			continue
+		}
+		s, err := p.EffectiveStress(5 * units.Metre)
+		want := 18e3*float64(w) + (20e3-9810)*(5-float64(w))
+		if err != nil || math.Abs(float64(s)-want) > 1e-6*want {
+			t.Errorf("%v: σ′v(5 m) = %v (%v), want %g Pa", c, s, err, want)
+		}
 	}
 }
