@@ -8,6 +8,7 @@ import (
 	"strings"
 	"testing"
 
+	"github.com/qultgeo/qult/pile"
 	"github.com/qultgeo/qult/profile"
 	"github.com/qultgeo/qult/units"
 )
@@ -255,5 +256,24 @@ func TestScourKeys(t *testing.T) {
 	ps := problems(t, bad)
 	if len(ps) == 0 || ps[0].Path != "ground.scour.general" {
 		t.Errorf("problems %v, want ground.scour.general", ps)
+	}
+}
+
+// TestPileErrorsKeepTheirType: a pile error reaches the caller of Parse as
+// a *pile.PathError with its field, and the problem carries the calc-file
+// key and line.
+func TestPileErrorsKeepTheirType(t *testing.T) {
+	src := strings.Replace(base, "length: 15 m", "length: 45 m", 1) // below the 30 m profile
+	if src == base {
+		t.Fatal("base file changed")
+	}
+	_, err := Parse([]byte(src))
+	var pe *pile.PathError
+	if !errors.As(err, &pe) || pe.Path != "pile.length" {
+		t.Fatalf("errors.As(*pile.PathError): %v", err)
+	}
+	var ps Problems
+	if !errors.As(err, &ps) || ps[0].Path != "pile.length" || ps[0].Line != 14 {
+		t.Errorf("problems %v, want pile.length at line 14", ps)
 	}
 }

@@ -205,12 +205,20 @@ func translate(f *File, err error) error {
 		var fe *profile.FieldError
 		var mf *pile.MissingFactorError
 		var pf *pile.FieldError
+		var pp *pile.PathError
 		var path, msg string
 		switch {
 		case errors.As(e, &mf):
 			// The key to add does not exist yet: the line is that of the
 			// design section.
 			ps = append(ps, Problem{Path: mf.Key(), Line: lineOf(f, "design"), Msg: strings.TrimPrefix(mf.Error(), "pile: "), Err: e})
+			continue
+		case errors.As(e, &pp):
+			path = pp.Path
+			if strings.HasPrefix(path, "layers[") {
+				path = "ground." + path
+			}
+			ps = append(ps, Problem{Path: path, Line: lineOf(f, path), Msg: pp.Msg, Err: e})
 			continue
 		case errors.As(e, &pf):
 			path, msg = pf.Field, strings.TrimPrefix(pf.Error(), pf.Field+": ")

@@ -144,7 +144,7 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 				sv := s0 + (s1-s0)*(z-top)/(bot-top)
 				r, err := lp.shaft.Unit(a.point(lp, units.Length(z), units.Stress(sv)))
 				if err != nil {
-					return fmt.Errorf("layers[%d] (%s).shaft at %.4g m: %w", li, lp.layer.Name, z, err)
+					return pathErrorf(fmt.Sprintf("layers[%d].shaft", li), "layer %q at %.4g m: %w", lp.layer.Name, z, err)
 				}
 				row.At[j] = r
 			}

@@ -179,7 +179,7 @@ func (a *Analysis) segment(s *sums, iv *interval, z0, z1 float64) error {
 	if iv.check && lp.kind != kindGeneral {
 		for _, z := range endPoints(z0, z1) {
 			if _, err := lp.shaft.Unit(a.point(lp, units.Length(z), units.Stress(iv.sigma(z)))); err != nil {
-				return fmt.Errorf("layers[%d] (%s).shaft at %.4g m: %w", iv.layer, lp.layer.Name, z, err)
+				return pathErrorf(fmt.Sprintf("layers[%d].shaft", iv.layer), "layer %q at %.4g m: %w", lp.layer.Name, z, err)
 			}
 		}
 	}
@@ -202,14 +202,14 @@ func (a *Analysis) segment(s *sums, iv *interval, z0, z1 float64) error {
 	case kindAlphaAPI:
 		v, fl, err := shaft.AlphaAPI{}.Integral(lp.su0, units.Stress(s0), units.Stress(s1), units.Length(h))
 		if err != nil {
-			return fmt.Errorf("layers[%d] (%s).shaft at %.4g to %.4g m: %w", iv.layer, lp.layer.Name, z0, z1, err)
+			return pathErrorf(fmt.Sprintf("layers[%d].shaft", iv.layer), "layer %q at %.4g to %.4g m: %w", lp.layer.Name, z0, z1, err)
 		}
 		q = float64(v)
 		s.flags |= shaftFlags(fl)
 	default:
 		v, fl, err := a.quad(lp, z0, z1, s0, s1, 0)
 		if err != nil {
-			return fmt.Errorf("layers[%d] (%s).shaft at %.4g to %.4g m: %w", iv.layer, lp.layer.Name, z0, z1, err)
+			return pathErrorf(fmt.Sprintf("layers[%d].shaft", iv.layer), "layer %q at %.4g to %.4g m: %w", lp.layer.Name, z0, z1, err)
 		}
 		q = v
 		s.flags |= fl
@@ -416,7 +416,7 @@ func (a *Analysis) tipAt(z float64, out *tipResult, detail *tipDetail, hint int)
 		}
 		r, err := lp.tip.Tip(in)
 		if err != nil {
-			return fmt.Errorf("layers[%d] (%s).tip at %.4g m: %w", li, lp.layer.Name, z, err)
+			return pathErrorf(fmt.Sprintf("layers[%d].tip", li), "layer %q at %.4g m: %w", lp.layer.Name, z, err)
 		}
 		*out = tipResult{layer: li, qp: float64(r.Qp), sigma: float64(in.Q), f: lp.fTip}
 		out.flags = tipFlags(r.Flags)
@@ -450,7 +450,7 @@ func (a *Analysis) tipAt(z float64, out *tipResult, detail *tipDetail, hint int)
 		}
 	}
 	if math.IsNaN(out.qp) || math.IsInf(out.qp, 0) {
-		return fmt.Errorf("layers[%d] (%s).tip: no finite resistance at %.4g m", li, lp.layer.Name, z)
+		return pathErrorf(fmt.Sprintf("layers[%d].tip", li), "layer %q: no finite resistance at %.4g m", lp.layer.Name, z)
 	}
 	return nil
 }

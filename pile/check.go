@@ -176,16 +176,16 @@ func RequiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, 
 		return Length{}, err
 	}
 	if !(step > 0) || math.IsInf(float64(step), 0) {
-		return Length{}, fmt.Errorf("search.step: %v is outside (0, ∞) m", step)
+		return Length{}, pathErrorf("search.step", "%v is outside (0, ∞) m", step)
 	}
 	if maxTip > prof.Depth() || maxTip <= p.HeadDepth {
-		return Length{}, fmt.Errorf("search.max_tip: %v: want below the head (%v) and within the profile (to %v)", maxTip, p.HeadDepth, prof.Depth())
+		return Length{}, pathErrorf("search.max_tip", "%v: want below the head (%v) and within the profile (to %v)", maxTip, p.HeadDepth, prof.Depth())
 	}
 	if n := float64((maxTip - p.HeadDepth) / step); n > 1e6 {
-		return Length{}, fmt.Errorf("search.step: %v gives %.3g candidate depths; at most 1e6", step, n)
+		return Length{}, pathErrorf("search.step", "%v gives %.3g candidate depths; at most 1e6", step, n)
 	}
 	if p.HeadDepth+step > maxTip {
-		return Length{}, fmt.Errorf("search.step: %v is longer than the search range from the head (%v) to max_tip (%v)", step, p.HeadDepth, maxTip)
+		return Length{}, pathErrorf("search.step", "%v is longer than the search range from the head (%v) to max_tip (%v)", step, p.HeadDepth, maxTip)
 	}
 	cases, err := b.Cases(p.Installation)
 	if err != nil {

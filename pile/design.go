@@ -428,7 +428,7 @@ func (p PresetMethods) Fill(m Methods) (Methods, error) {
 			}
 			t, ok := presetTip(f.id)
 			if !ok {
-				return m, fmt.Errorf("design.preset: tip method %q has no implementation", f.id)
+				return m, pathErrorf("design.preset", "tip method %q has no implementation", f.id)
 			}
 			*f.tip = t
 		default:
@@ -441,7 +441,7 @@ func (p PresetMethods) Fill(m Methods) (Methods, error) {
 			}
 			s, ok := presetShaft(f.id)
 			if !ok {
-				return m, fmt.Errorf("design.preset: shaft method %q has no implementation", f.id)
+				return m, pathErrorf("design.preset", "shaft method %q has no implementation", f.id)
 			}
 			*f.sh = s
 		}
@@ -555,7 +555,7 @@ func (l LRFD) Cases(inst Installation) ([]Case, error) {
 		for _, i := range l.Installations {
 			ids = append(ids, i.String())
 		}
-		return nil, fmt.Errorf("pile.installation: %s: the %s factors were calibrated for %s piles only; want one of those, or another basis",
+		return nil, pathErrorf("pile.installation", "%s: the %s factors were calibrated for %s piles only; want one of those, or another basis",
 			inst, l.ID(), strings.Join(ids, ", "))
 	}
 	for _, m := range []struct {

@@ -182,7 +182,7 @@ func (f *EN7Factors) set(inst Installation) (RSet, string, error) {
 	case Augered:
 		return f.CFA, "cfa", nil
 	}
-	return RSet{}, "", fmt.Errorf("pile.installation: %v has no EN 1997-1 resistance table", inst)
+	return RSet{}, "", pathErrorf("pile.installation", "%v has no EN 1997-1 resistance table", inst)
 }
 
 // Validate checks every factor: resistance, model and soil factors and γG,
@@ -393,10 +393,10 @@ func (e Eurocode7) resolve(inst Installation) (EN7Factors, RSet, float64, error)
 		return f, RSet{}, 0, err
 	}
 	if len(f.Approaches) > 0 && !slices.Contains(f.Approaches, e.Approach) {
-		return f, RSet{}, 0, fmt.Errorf("design.approach: %v: the %s factors are for %v only", e.Approach, f.Name, f.Approaches)
+		return f, RSet{}, 0, pathErrorf("design.approach", "%v: the %s factors are for %v only", e.Approach, f.Name, f.Approaches)
 	}
 	if e.Approach < DA1 || e.Approach > DA3 {
-		return f, RSet{}, 0, fmt.Errorf("design.approach: %v: want DA1, DA2 or DA3", e.Approach)
+		return f, RSet{}, 0, pathErrorf("design.approach", "%v: want DA1, DA2 or DA3", e.Approach)
 	}
 	rs, _, err := f.set(inst)
 	if err != nil {
@@ -507,7 +507,7 @@ func (e Eurocode7) VerifyProfiles(inst Installation, cal []ProfileResistance, we
 		return Design{}, err
 	}
 	if e.Approach == DA3 {
-		return Design{}, fmt.Errorf("design.approach: DA3 factors the soil strength (set M2); compute each profile with it, or use DA1 or DA2")
+		return Design{}, pathErrorf("design.approach", "DA3 factors the soil strength (set M2); compute each profile with it, or use DA1 or DA2")
 	}
 	if err := l.Validate("loads"); err != nil {
 		return Design{}, err

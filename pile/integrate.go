@@ -36,7 +36,7 @@ func (a *Analysis) classify(i int, lp *layerPlan) error {
 	if c, ok := m.(shaft.Capped); ok && c.Method != nil && c.Limit != nil {
 		v, err := c.Limit.Max()
 		if err != nil {
-			return fmt.Errorf("layers[%d] (%s).shaft: %w", i, lp.layer.Name, err)
+			return pathErrorf(fmt.Sprintf("layers[%d].shaft", i), "layer %q: %w", lp.layer.Name, err)
 		}
 		capv, m = v, c.Method
 	}
@@ -73,7 +73,7 @@ func (a *Analysis) classify(i int, lp *layerPlan) error {
 	}
 	r, err := m.Unit(a.point(lp, zm, sv))
 	if err != nil {
-		return fmt.Errorf("layers[%d] (%s).shaft: %w", i, lp.layer.Name, err)
+		return pathErrorf(fmt.Sprintf("layers[%d].shaft", i), "layer %q: %w", lp.layer.Name, err)
 	}
 	switch kind {
 	case kindBeta:
@@ -81,7 +81,7 @@ func (a *Analysis) classify(i int, lp *layerPlan) error {
 		if ab, ok := m.(shaft.APIBeta); ok {
 			_, fl, err := ab.Class.API()
 			if err != nil {
-				return fmt.Errorf("layers[%d] (%s).shaft: %w", i, lp.layer.Name, err)
+				return pathErrorf(fmt.Sprintf("layers[%d].shaft", i), "layer %q: %w", lp.layer.Name, err)
 			}
 			if capv == 0 || fl < capv {
 				capv = fl

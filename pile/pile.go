@@ -370,22 +370,22 @@ func (p Pile) Validate() error {
 		errs = append(errs, err)
 	}
 	if !(p.Length > 0) || math.IsInf(float64(p.Length), 0) {
-		errs = append(errs, fmt.Errorf("pile.length: %v is outside (0, ∞) m", p.Length))
+		errs = append(errs, pathErrorf("pile.length", "%v is outside (0, ∞) m", p.Length))
 	}
 	if !(p.HeadDepth >= 0) || math.IsInf(float64(p.HeadDepth), 0) {
-		errs = append(errs, fmt.Errorf("pile.head_depth: %v is outside 0 to ∞ m", p.HeadDepth))
+		errs = append(errs, pathErrorf("pile.head_depth", "%v is outside 0 to ∞ m", p.HeadDepth))
 	}
 	if p.Installation < DrivenHigh || p.Installation > Jetted {
-		errs = append(errs, fmt.Errorf("pile.installation: %d: want one of driven-high, driven-low, bored, augered, jetted", int(p.Installation)))
+		errs = append(errs, pathErrorf("pile.installation", "%d: want one of driven-high, driven-low, bored, augered, jetted", int(p.Installation)))
 	}
 	if p.Plug < PlugLesser || p.Plug > Unplugged {
-		errs = append(errs, fmt.Errorf("pile.plug: %d: want lesser, plugged or unplugged", int(p.Plug)))
+		errs = append(errs, pathErrorf("pile.plug", "%d: want lesser, plugged or unplugged", int(p.Plug)))
 	}
 	if !(p.UnitWeight >= 0) || p.UnitWeight > 100*units.KilonewtonPerCubicMetre {
-		errs = append(errs, fmt.Errorf("pile.unit_weight: %v is outside 0 to 100 kN/m3", p.UnitWeight))
+		errs = append(errs, pathErrorf("pile.unit_weight", "%v is outside 0 to 100 kN/m3", p.UnitWeight))
 	}
 	if !(p.Modulus >= 0) || math.IsInf(float64(p.Modulus), 0) {
-		errs = append(errs, fmt.Errorf("pile.youngs_modulus: %v is outside 0 to ∞ kPa", p.Modulus))
+		errs = append(errs, pathErrorf("pile.youngs_modulus", "%v is outside 0 to ∞ kPa", p.Modulus))
 	}
 	return errors.Join(errs...)
 }
@@ -400,10 +400,10 @@ func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analy
 		return nil, err
 	}
 	if p.Tip() > prof.Depth() {
-		return nil, fmt.Errorf("pile.length: tip at %v is below the bottom of the ground profile at %v; extend the profile or shorten the pile", p.Tip(), prof.Depth())
+		return nil, pathErrorf("pile.length", "tip at %v is below the bottom of the ground profile at %v; extend the profile or shorten the pile", p.Tip(), prof.Depth())
 	}
 	if zd := prof.DesignGround(); p.Tip() <= zd {
-		return nil, fmt.Errorf("pile.length: tip at %v is not below the design ground line at %v (excavation and scour); lengthen the pile", p.Tip(), zd)
+		return nil, pathErrorf("pile.length", "tip at %v is not below the design ground line at %v (excavation and scour); lengthen the pile", p.Tip(), zd)
 	}
 	a := &Analysis{prof: prof, pile: p, methods: m}
 	if opt != nil && opt.Case != nil {
@@ -413,7 +413,7 @@ func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analy
 		a.cs = Case{TanPhi: 1, Su: 1}
 	}
 	if !(a.cs.TanPhi >= 1) || !(a.cs.Su >= 1) || math.IsInf(a.cs.TanPhi, 0) || math.IsInf(a.cs.Su, 0) {
-		return nil, fmt.Errorf("design: soil factors on tanφ′ (%g) and su (%g) must be 1 or more", a.cs.TanPhi, a.cs.Su)
+		return nil, pathErrorf("design", "soil factors on tanφ′ (%g) and su (%g) must be 1 or more", a.cs.TanPhi, a.cs.Su)
 	}
 	a.size = float64(p.Section.Size())
 	a.outer = float64(p.Section.OuterPerimeter())
@@ -433,22 +433,22 @@ func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analy
 		a.weakBelow = 3
 	}
 	if !(a.weakBelow > 0 && a.weakBelow <= 20) {
-		return nil, fmt.Errorf("methods.weak_below: %g diameters is outside (0, 20]", m.WeakBelow)
+		return nil, pathErrorf("methods.weak_below", "%g diameters is outside (0, 20]", m.WeakBelow)
 	}
 	a.embedN = m.EmbedmentRatio
 	if a.embedN == 0 {
 		a.embedN = DefaultEmbedmentRatio
 	}
 	if !(a.embedN >= 1 && a.embedN <= 50) {
-		return nil, fmt.Errorf("methods.embedment_ratio: %g is outside 1 to 50 (0 for %g)", m.EmbedmentRatio, float64(DefaultEmbedmentRatio))
+		return nil, pathErrorf("methods.embedment_ratio", "%g is outside 1 to 50 (0 for %g)", m.EmbedmentRatio, float64(DefaultEmbedmentRatio))
 	}
 	if len(m.Layers) > prof.NumLayers() {
-		return nil, fmt.Errorf("methods.layers: %d entries for a profile of %d layers", len(m.Layers), prof.NumLayers())
+		return nil, pathErrorf("methods.layers", "%d entries for a profile of %d layers", len(m.Layers), prof.NumLayers())
 	}
 	if m.CriticalDepth != 0 {
 		zc, err := (shaft.CriticalDepth{Ratio: m.CriticalDepth}).Depth(p.Section.Size())
 		if err != nil {
-			return nil, fmt.Errorf("methods.critical_depth: %w", err)
+			return nil, pathErrorf("methods.critical_depth", "%w", err)
 		}
 		a.zc = float64(zc)
 		if zc >= prof.Depth() {
@@ -474,7 +474,7 @@ func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analy
 	}
 	for i, z := range m.NoShaft {
 		if !(z.Top >= 0 && z.Bottom > z.Top) || math.IsInf(float64(z.Bottom), 0) {
-			errs = append(errs, fmt.Errorf("methods.no_shaft[%d]: from %v to %v: want 0 ≤ top < bottom", i, z.Top, z.Bottom))
+			errs = append(errs, pathErrorf(fmt.Sprintf("methods.no_shaft[%d]", i), "from %v to %v: want 0 ≤ top < bottom", z.Top, z.Bottom))
 		}
 	}
 	if err := errors.Join(errs...); err != nil {
@@ -587,19 +587,19 @@ func (a *Analysis) plan(i int) (layerPlan, error) {
 		lp.shaft = over.Shaft
 	case over.Lambda || (!drained && m.UndrainedLambda):
 		if drained {
-			return lp, fmt.Errorf("%s.shaft: the λ method applies to undrained layers only", path)
+			return lp, pathErrorf(fmt.Sprintf("%s.shaft", path), "the λ method applies to undrained layers only")
 		}
 		lp.lambda = true
 		lp.lamVal = over.LambdaValue
 		if over.LambdaValue != 0 && !(over.LambdaValue > 0 && over.LambdaValue <= 1) {
-			return lp, fmt.Errorf("%s.shaft.lambda: %g is outside (0, 1]", path, over.LambdaValue)
+			return lp, pathErrorf(fmt.Sprintf("%s.shaft.lambda", path), "%g is outside (0, 1]", over.LambdaValue)
 		}
 	case drained && m.ShaftDrained != nil:
 		lp.shaft = m.ShaftDrained
 	case drained:
 		k, err := shaft.KOverK0For(shaftInstallation(a.pile.Installation))
 		if err != nil {
-			return lp, fmt.Errorf("%s.shaft: %w", path, err)
+			return lp, pathErrorf(fmt.Sprintf("%s.shaft", path), "%w", err)
 		}
 		surf := a.pile.Surface
 		if surf == 0 {
@@ -607,7 +607,7 @@ func (a *Analysis) plan(i int) (layerPlan, error) {
 		}
 		d, err := shaft.DeltaOverPhiFor(surf)
 		if err != nil {
-			return lp, fmt.Errorf("%s.shaft: %w", path, err)
+			return lp, pathErrorf(fmt.Sprintf("%s.shaft", path), "%w", err)
 		}
 		lp.shaft = shaft.Beta{K: k, Delta: d}
 	case m.ShaftUndrained != nil:
@@ -621,10 +621,10 @@ func (a *Analysis) plan(i int) (layerPlan, error) {
 	// a tip or a friction of zero.
 	if l.N60 == 0 {
 		if needsN60Tip(lp.tip) {
-			return lp, fmt.Errorf("layers[%d].n60: layer %q has no N60 and its tip method %q needs it; give n60 (above 0, at most 300) or choose another tip method", i, l.Name, lp.tip.ID())
+			return lp, pathErrorf(fmt.Sprintf("layers[%d].n60", i), "layer %q has no N60 and its tip method %q needs it; give n60 (above 0, at most 300) or choose another tip method", l.Name, lp.tip.ID())
 		}
 		if !lp.lambda && needsN60Shaft(lp.shaft) {
-			return lp, fmt.Errorf("layers[%d].n60: layer %q has no N60 and its shaft method %q needs it; give n60 (above 0, at most 300) or choose another shaft method", i, l.Name, lp.shaft.ID())
+			return lp, pathErrorf(fmt.Sprintf("layers[%d].n60", i), "layer %q has no N60 and its shaft method %q needs it; give n60 (above 0, at most 300) or choose another shaft method", l.Name, lp.shaft.ID())
 		}
 	}
 	lp.held = drained && !lp.lambda && betaFamily(lp.shaft)

@@ -1,6 +1,7 @@
 package pile
 
 import (
+	"errors"
 	"math"
 	"strings"
 	"testing"
@@ -180,8 +181,9 @@ func TestBadInput(t *testing.T) {
 	if err == nil {
 		_, err = a.Capacity()
 	}
-	if err == nil || !strings.Contains(err.Error(), "layers[0] (clay)") {
-		t.Errorf("β in a clay without φ′: %v, want an error naming layers[0] (clay)", err)
+	var pe *PathError
+	if !errors.As(err, &pe) || pe.Path != "layers[0].shaft" || !strings.Contains(err.Error(), `layer "clay"`) {
+		t.Errorf("β in a clay without φ′: %v, want a *PathError at layers[0].shaft naming the clay", err)
 	}
 }
 

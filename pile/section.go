@@ -1,7 +1,6 @@
 package pile
 
 import (
-	"errors"
 	"fmt"
 	"math"
 
@@ -123,11 +122,11 @@ func positive(field string, v units.Length) error {
 	if v > 0 && v <= maxSize {
 		return nil
 	}
-	msg := fmt.Sprintf("%s: %v is outside (0, %v]", field, v, maxSize)
+	msg := fmt.Sprintf("%v is outside (0, %v]", v, maxSize)
 	if v > maxSize && v/1000 <= maxSize && !math.IsInf(float64(v), 0) {
 		msg += fmt.Sprintf(" (if millimetres were meant: %g mm)", float64(v))
 	}
-	return errors.New(msg)
+	return &PathError{Path: field, Msg: msg}
 }
 
 // Validate checks that the fields the shape uses are positive and finite
@@ -148,7 +147,7 @@ func (s Section) Validate(path string) error {
 			return err
 		}
 		if s.Wall >= s.Diameter/2 {
-			return fmt.Errorf("%s: %v must be less than half the diameter (%v)", p("wall"), s.Wall, s.Diameter/2)
+			return pathErrorf(p("wall"), "%v must be less than half the diameter (%v)", s.Wall, s.Diameter/2)
 		}
 	case HSection:
 		for _, f := range []struct {
@@ -160,21 +159,21 @@ func (s Section) Validate(path string) error {
 			}
 		}
 		if s.Web >= s.Width {
-			return fmt.Errorf("%s: %v must be less than the flange width (%v)", p("web"), s.Web, s.Width)
+			return pathErrorf(p("web"), "%v must be less than the flange width (%v)", s.Web, s.Width)
 		}
 		if 2*s.Flange >= s.Depth {
-			return fmt.Errorf("%s: %v must be less than half the depth (%v)", p("flange"), s.Flange, s.Depth/2)
+			return pathErrorf(p("flange"), "%v must be less than half the depth (%v)", s.Flange, s.Depth/2)
 		}
 	case GivenSection:
 		if !(s.Area > 0 && s.Area <= maxArea) {
-			return fmt.Errorf("%s: %v is outside (0, %v]", p("area"), s.Area, maxArea)
+			return pathErrorf(p("area"), "%v is outside (0, %v]", s.Area, maxArea)
 		}
 		if !(s.Perimeter > 0 && s.Perimeter <= maxPerimeter) {
-			return fmt.Errorf("%s: %v is outside (0, %v]", p("perimeter"), s.Perimeter, maxPerimeter)
+			return pathErrorf(p("perimeter"), "%v is outside (0, %v]", s.Perimeter, maxPerimeter)
 		}
 		return positive(p("width"), s.Width)
 	default:
-		return fmt.Errorf("%s: unknown shape %d: want circle, square, closed-pipe, open-pipe, h-section or given", p("shape"), int(s.Shape))
+		return pathErrorf(p("shape"), "unknown shape %d: want circle, square, closed-pipe, open-pipe, h-section or given", int(s.Shape))
 	}
 	return nil
 }

@@ -123,7 +123,7 @@ func (a *Analysis) baseRules(li int, z, q float64, fl *Flags) (qp, upper, embed 
 				*fl |= LayeredTipOff
 			}
 		case up.errBot != nil:
-			return 0, 0, 0, fmt.Errorf("layers[%d] (%s).tip, needed for the layered-tip rule at %.4g m: %w", li-1, up.layer.Name, top, up.errBot)
+			return 0, 0, 0, pathErrorf(fmt.Sprintf("layers[%d].tip", li-1), "layer %q, needed for the layered-tip rule at %.4g m: %w", up.layer.Name, top, up.errBot)
 		case up.baseBot < q:
 			upper = up.baseBot
 			q = upper + (q-upper)*(z-top)/(10*d)
@@ -154,7 +154,7 @@ func (a *Analysis) weakRule(li int, z, q float64, fl *Flags, w *weakInfo) (float
 				*fl |= WeakLayerOff
 				continue
 			}
-			return 0, fmt.Errorf("layers[%d] (%s).tip, needed for the weak-layer rule with the tip at %.4g m: %w", k, pk.layer.Name, z, pk.errEff)
+			return 0, pathErrorf(fmt.Sprintf("layers[%d].tip", k), "layer %q, needed for the weak-layer rule with the tip at %.4g m: %w", pk.layer.Name, z, pk.errEff)
 		}
 		if !(pk.effTop < q) {
 			continue
