@@ -4,6 +4,7 @@ import (
 	"errors"
 	"math"
 	"os"
+	"slices"
 	"strconv"
 	"strings"
 	"testing"
@@ -275,5 +276,20 @@ func TestPileErrorsKeepTheirType(t *testing.T) {
 	var ps Problems
 	if !errors.As(err, &ps) || ps[0].Path != "pile.length" || ps[0].Line != 14 {
 		t.Errorf("problems %v, want pile.length at line 14", ps)
+	}
+}
+
+// TestProblemsAcrossStages: a problem found while resolving (a bare load)
+// and one the pile analysis finds (a tip below the profile) are reported
+// together.
+func TestProblemsAcrossStages(t *testing.T) {
+	src := strings.Replace(base, "length: 15 m", "length: 45 m", 1) + "loads: {compression: 800 kN}\n"
+	ps := problems(t, src)
+	var paths []string
+	for _, p := range ps {
+		paths = append(paths, p.Path)
+	}
+	if !slices.Contains(paths, "loads.compression") || !slices.Contains(paths, "pile.length") {
+		t.Errorf("problems %v, want loads.compression and pile.length together", paths)
 	}
 }

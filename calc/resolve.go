@@ -143,7 +143,9 @@ func (r *resolver) fraction(v Value, path string) float64 {
 }
 
 // Resolve checks a decoded file and turns it into library inputs. Every
-// problem found is reported, with its path and line, as Problems.
+// problem found is reported, with its path and line, as Problems; the
+// Inputs returned with them hold what could be resolved (Run uses them to
+// report the library's problems with the other sections at once).
 func Resolve(f *File) (*Inputs, error) {
 	r := &resolver{f: f}
 	in := &Inputs{}
@@ -166,7 +168,7 @@ func Resolve(f *File) (*Inputs, error) {
 	r.loads(f, in)
 	r.search(f, in)
 	if len(r.probs) > 0 {
-		return nil, r.probs
+		return in, r.probs
 	}
 	return in, nil
 }

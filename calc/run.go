@@ -51,7 +51,7 @@ func Parse(data []byte) (*Result, error) {
 func Run(f *File) (*Result, error) {
 	in, err := Resolve(f)
 	if err != nil {
-		return nil, err
+		return nil, alsoLibrary(f, in, err)
 	}
 	prof, err := profile.New(in.Ground)
 	if err != nil {
@@ -181,6 +181,58 @@ func layerMethods(prof *profile.Profile, b pile.Breakdown) []LayerMethods {
 	}
 	out[b.Tip.Layer].Tip = b.Tip.Method
 	return out
+}
+
+// alsoLibrary adds to the problems of resolution those the library finds
+// in the sections that resolved cleanly: the ground profile when no
+// problem touches the ground, then the pile analysis and the design check
+// when none touches what they read. So a file with a bad thickness and a
+// pile too long for a good profile is not the only problem reported.
+func alsoLibrary(f *File, in *Inputs, err error) error {
+	var probs Problems
+	if !errors.As(err, &probs) || in == nil {
+		return err
+	}
+	touches := func(prefixes ...string) bool {
+		for _, p := range probs {
+			if p.Path == "" || p.Path == "units" || p.Path == "qult" {
+				return true
+			}
+			for _, pre := range prefixes {
+				if p.Path == pre || strings.HasPrefix(p.Path, pre+".") || strings.HasPrefix(p.Path, pre+"[") {
+					return true
+				}
+			}
+		}
+		return false
+	}
+	add := func(e error) {
+		var more Problems
+		if errors.As(translate(f, e), &more) {
+			probs = append(probs, more...)
+		}
+	}
+	if touches("ground") {
+		return probs
+	}
+	prof, perr := profile.New(in.Ground)
+	if perr != nil {
+		add(perr)
+		return probs
+	}
+	if touches("pile", "methods") {
+		return probs
+	}
+	if _, aerr := pile.NewAnalysis(prof, in.Pile, in.Methods, nil); aerr != nil {
+		add(aerr)
+		return probs
+	}
+	if in.Basis != nil && !touches("design", "loads") {
+		if _, cerr := pile.Check(prof, in.Pile, in.Methods, in.Basis, in.Loads); cerr != nil {
+			add(cerr)
+		}
+	}
+	return probs
 }
 
 // profileRename maps the profile package's field names onto the calc
