@@ -331,6 +331,9 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	if a.methods.SelfWeight == WeightGross {
 		c.Compression -= c.Weight
 		desC -= s.weight
+		if c.Compression < 0 {
+			c.Flags |= WeightExceedsResistance
+		}
 	}
 	c.TensionShaft = units.Force(tenShaft)
 	c.Tension = c.TensionShaft + c.Weight

@@ -216,3 +216,29 @@ func TestLayeredTipOffWarns(t *testing.T) {
 		}
 	}
 }
+
+// TestGrossWeightWarns: with the gross self-weight option a heavy pile in
+// very soft clay has Rc = Qp + Qs − W′ below zero, and says so (closed
+// form: W′ = 24 kN/m³ × π/4 × 1.5² m² × 20 m ≈ 848 kN on a dry site,
+// against Qp + Qs of a few hundred kN).
+func TestGrossWeightWarns(t *testing.T) {
+	prof, err := profile.New(profile.Spec{NoWater: true, Layers: []profile.LayerSpec{
+		{Name: "very soft clay", Thickness: 30 * m, Drainage: profile.Undrained, Su: 5 * units.Kilopascal, UnitWeight: 15 * kNm}}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	ms := DefaultMethods()
+	ms.SelfWeight = WeightGross
+	a, err := NewAnalysis(prof, Pile{Section: Section{Shape: Circle, Diameter: 1.5 * m}, Length: 20 * m,
+		Installation: Bored, UnitWeight: 24 * kNm}, ms, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	c, err := a.Capacity()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !(c.Compression < 0) || c.Flags&WeightExceedsResistance == 0 {
+		t.Errorf("Rc = %v with flags %v; want a negative Rc flagged", c.Compression, c.Flags)
+	}
+}

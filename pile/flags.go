@@ -63,6 +63,9 @@ const (
 	// layer but Methods.LayeredTip is false, so the transition was not
 	// applied.
 	LayeredTipOff
+	// WeightExceedsResistance: with the gross self-weight option the
+	// pile's weight W′ exceeds Qp + Qs, so Rc is negative.
+	WeightExceedsResistance
 )
 
 var flagText = [...]string{
@@ -87,6 +90,7 @@ var flagText = [...]string{
 	"WARNING: a rule that lowers a bored pile's tip resistance (the cap or the large-base reduction) is switched off",
 	"the bored-pile tip cap governs",
 	"WARNING: Meyerhof's (1976) transition for a tip less than 10 diameters into a stronger layer is switched off; the tip resistance may be unconservative",
+	"WARNING: the pile's effective weight W′ exceeds Qp + Qs, so the compression resistance Rc = Qp + Qs − W′ is negative",
 }
 
 // Messages returns one sentence per set flag.

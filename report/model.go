@@ -492,7 +492,8 @@ func secTotals(r *calc.Result, c conv) section {
 	}
 	rc := "Rc = Qp + Qs = " + c.fs(k.Tip) + " + " + c.fs(k.Shaft)
 	if math.Abs(float64(k.Compression-k.Tip-k.Shaft)) > 1e-6*math.Abs(float64(k.Compression))+1e-9 {
-		rc += " − " + c.fs(k.Weight)
+		// The gross self-weight option subtracts W′: the symbols say so.
+		rc = "Rc = Qp + Qs − W′ = " + c.fs(k.Tip) + " + " + c.fs(k.Shaft) + " − " + c.fs(k.Weight)
 	}
 	rc += " = " + c.fs(k.Compression)
 	rt := "Rt = Qs,t + W′ = " + c.fs(k.TensionShaft) + " + " + c.fs(k.Weight) + " = " + c.fs(k.Tension)
