@@ -113,7 +113,7 @@ func (b Berezantzev) Nq(phi units.Angle, ld float64, clamp bool) (nq float64, cl
 	}
 	if d < 23-degEps || d > 39+degEps {
 		if !clamp {
-			return 0, false, rangeErr(b.ID(), "phi", d, 23, 39, "deg", "23 to 39 deg (Berezantzev chart); set Clamp to read at the edge")
+			return 0, false, rangeErr(b.ID(), "phi", d, 23, 39, "deg", "23 to 39 deg (Berezantzev chart); reading at the chart's edge (clamping) can be asked for")
 		}
 		d = math.Min(math.Max(d, 23), 39)
 		clamped = true
@@ -123,7 +123,7 @@ func (b Berezantzev) Nq(phi units.Angle, ld float64, clamp bool) (nq float64, cl
 	}
 	if ld < 4 {
 		if !clamp {
-			return 0, false, rangeErr(b.ID(), "l/d", ld, 4, math.Inf(1), "", "4 and above (Berezantzev chart); set Clamp to read at the edge")
+			return 0, false, rangeErr(b.ID(), "l/d", ld, 4, math.Inf(1), "", "4 and above (Berezantzev chart); reading at the chart's edge (clamping) can be asked for")
 		}
 		ld = 4
 		clamped = true

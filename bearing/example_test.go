@@ -48,7 +48,7 @@ func ExampleBerezantzev_Tip() {
 	r, _ := bearing.Berezantzev{}.Tip(in)
 	fmt.Printf("Nq = %.1f, qp = %.0f kPa (%s)\n", r.Nq, r.Qp.KPa(), r.Flags)
 	// Output:
-	// bearing: berezantzev: phi: 42 deg is outside 23 to 39 deg (Berezantzev chart); set Clamp to read at the edge
+	// bearing: berezantzev: phi: 42 deg is outside 23 to 39 deg (Berezantzev chart); reading at the chart's edge (clamping) can be asked for
 	// Nq = 200.2, qp = 30030 kPa (clamped to chart edge)
 }
 

@@ -89,7 +89,7 @@ func (m Meyerhof) NqStar(phi units.Angle, clamp bool) (nq float64, clamped bool,
 	}
 	if d < 20-degEps || d > 45+degEps {
 		if !clamp {
-			return 0, false, rangeErr(m.ID(), "phi", d, 20, 45, "deg", "20 to 45 deg (Meyerhof chart); set Clamp to read at the edge")
+			return 0, false, rangeErr(m.ID(), "phi", d, 20, 45, "deg", "20 to 45 deg (Meyerhof chart); reading at the chart's edge (clamping) can be asked for")
 		}
 		d = math.Min(math.Max(d, 20), 45)
 		clamped = true

@@ -113,7 +113,7 @@ func (v Vesic) Range() string {
 func VesicDelta(phi units.Angle, q, pa units.Stress) (float64, error) {
 	if err := checkPhi("vesic", phi, 25, 45); err != nil {
 		if re, ok := err.(*RangeError); ok {
-			re.Range = "25 to 45 deg (Vesic's Δ correlation); give delta, or set Clamp"
+			re.Range = "25 to 45 deg (Vesic's Δ correlation); give the volumetric strain Δ, or ask for clamping at the edge"
 		}
 		return 0, err
 	}
@@ -267,7 +267,7 @@ func (v Vesic) Tip(in Input) (Result, error) {
 		d := in.Phi.Degrees()
 		if d < 25-degEps || d > 45+degEps {
 			if !in.Clamp {
-				return Result{}, rangeErr(id, "phi", d, 25, 45, "deg", "25 to 45 deg (Vesic's Δ correlation); give delta, or set Clamp")
+				return Result{}, rangeErr(id, "phi", d, 25, 45, "deg", "25 to 45 deg (Vesic's Δ correlation); give the volumetric strain Δ, or ask for clamping at the edge")
 			}
 			d = math.Min(math.Max(d, 25), 45)
 			r.Flags |= Clamped
