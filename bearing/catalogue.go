@@ -148,13 +148,25 @@ var catalogue = []Descriptor{
 // Methods returns the catalogue of tip methods: every method a calc file
 // can name, in a fixed order. The slice is a copy; the table itself does
 // not change.
-func Methods() []Descriptor { return append([]Descriptor(nil), catalogue...) }
+func Methods() []Descriptor {
+	out := make([]Descriptor, len(catalogue))
+	for i, d := range catalogue {
+		out[i] = d.clone()
+	}
+	return out
+}
+
+// clone returns d with its own copy of the parameters.
+func (d Descriptor) clone() Descriptor {
+	d.Params = append([]Param(nil), d.Params...)
+	return d
+}
 
 // Lookup returns the catalogue entry with the given identifier.
 func Lookup(id string) (Descriptor, bool) {
 	for _, d := range catalogue {
 		if d.ID == id {
-			return d, true
+			return d.clone(), true
 		}
 	}
 	return Descriptor{}, false
