@@ -492,7 +492,11 @@ func (r *resolver) tip(id string, given map[string]Value, path, methodPath strin
 	id = strings.TrimSpace(id)
 	d, ok := bearing.Lookup(id)
 	if !ok {
-		r.unknownMethod(id, methodPath, "tip", bearing.IDs())
+		ids := bearing.IDs()
+		if path == "" {
+			ids = pileTipIDs()
+		}
+		r.unknownMethod(id, methodPath, "tip", ids)
 		return nil
 	}
 	num, _, ok := r.params(id, tipParams(d), given, path, methodPath)
@@ -514,7 +518,14 @@ func (r *resolver) shaftMethod(id string, given map[string]Value, path, methodPa
 	id = strings.TrimSpace(id)
 	d, ok := shaft.Lookup(id)
 	if !ok {
-		r.unknownMethod(id, methodPath, "shaft", shaft.IDs())
+		ids := shaft.IDs()
+		switch methodPath {
+		case "methods.shaft_drained":
+			ids = pileShaftIDs(false)
+		case "methods.shaft_undrained":
+			ids = pileShaftIDs(true)
+		}
+		r.unknownMethod(id, methodPath, "shaft", ids)
 		return 0, false
 	}
 	num, word, ok := r.params(id, shaftParams(d), given, path, methodPath)

@@ -99,6 +99,10 @@ var badCases = []badCase{
 	{file: "71-unknown-preset-with-factors", want: []string{"design.preset", "no-such-code"}},
 	{file: "72-misspelt-factor-key", want: []string{"design.shaft.betta", "not a method identifier"}},
 	{file: "73-huge-load", want: []string{"loads.compression.permanent (line 25)", "outside 0 to 1000000 kN"}},
+	{file: "74-nq-on-meyerhof-tip", want: []string{"ground.layers[1].tip.nq (line 17)", "meyerhof does not read nq; it reads: (none)"}},
+	{file: "75-k-on-drilled-sand-shaft", want: []string{"ground.layers[1].shaft.k_over_k0 (line 17)", "beta-drilled-sand does not read k_over_k0; it reads: limit"}},
+	{file: "76-unknown-layer-tip-method", want: []string{"ground.layers[1].tip.method (line 17)", `"meyerhoff" is not a tip method`, "meyerhof, vesic"}},
+	{file: "77-limit-on-lambda", want: []string{"ground.layers[1].shaft.limit (line 17)", "lambda does not read limit; it reads: lambda"}},
 }
 
 const badTimeout = 5 * time.Second
