@@ -191,3 +191,22 @@ func TestCatalogueHasEveryMethod(t *testing.T) {
 		}
 	}
 }
+
+// The package documentation lists every identifier of the catalogue and
+// every key its methods read.
+func TestCatalogueDocumented(t *testing.T) {
+	doc, err := os.ReadFile("doc.go")
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, d := range Methods() {
+		if !strings.Contains(string(doc), d.ID) {
+			t.Errorf("doc.go does not list %s", d.ID)
+		}
+		for _, p := range d.Params {
+			if !strings.Contains(string(doc), p.Key) {
+				t.Errorf("doc.go does not list %s's key %s", d.ID, p.Key)
+			}
+		}
+	}
+}
