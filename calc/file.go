@@ -187,10 +187,16 @@ type Zone struct {
 
 // Methods are the methods for the whole pile, by drainage class.
 type Methods struct {
-	TipDrained     string `yaml:"tip_drained,omitempty" json:"tip_drained,omitempty"`
-	TipUndrained   string `yaml:"tip_undrained,omitempty" json:"tip_undrained,omitempty"`
-	ShaftDrained   string `yaml:"shaft_drained,omitempty" json:"shaft_drained,omitempty"`
-	ShaftUndrained string `yaml:"shaft_undrained,omitempty" json:"shaft_undrained,omitempty"`
+	// TipDrained, TipUndrained, ShaftDrained and ShaftUndrained are
+	// identifiers of the catalogues (bearing.Methods, shaft.Methods) for
+	// every layer of a drainage class, among those that need no key (a
+	// given factor is chosen on a layer); shaft_drained takes a method that
+	// gives fs at each depth, shaft_undrained also lambda. Absent: the
+	// defaults of package pile for the installation.
+	TipDrained     string `yaml:"tip_drained,omitempty" json:"tip_drained,omitempty" doc:"Tip method for drained layers (an identifier of the tip catalogue); absent: the default for the installation."`
+	TipUndrained   string `yaml:"tip_undrained,omitempty" json:"tip_undrained,omitempty" doc:"Tip method for undrained layers (an identifier of the tip catalogue); absent: the default."`
+	ShaftDrained   string `yaml:"shaft_drained,omitempty" json:"shaft_drained,omitempty" doc:"Shaft method for drained layers (an identifier of the shaft catalogue); absent: the default."`
+	ShaftUndrained string `yaml:"shaft_undrained,omitempty" json:"shaft_undrained,omitempty" doc:"Shaft method for undrained layers (an identifier of the shaft catalogue, or lambda); absent: the default."`
 	// CriticalDepth is the ratio n of zc = n·D; 0 or absent for none.
 	CriticalDepth Value `yaml:"critical_depth,omitempty" json:"critical_depth,omitempty" q:"number,0,1000" doc:"Critical depth ratio n of zc = n·D (β methods in drained layers); absent for none."`
 	// LayeredTip turns Meyerhof's rule for a tip near a weaker layer above
