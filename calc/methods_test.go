@@ -7,6 +7,7 @@ package calc
 // shaft documents them.
 
 import (
+	"encoding/json"
 	"errors"
 	"strings"
 	"testing"
@@ -157,5 +158,20 @@ func TestMethodValues(t *testing.T) {
 	_, err = Parse([]byte(strings.Replace(base, "friction_angle: 34 deg", "friction_angle: 34 deg\n      shaft: {method: beta, delta: 3 m}", 1)))
 	if !errors.Is(err, units.ErrDimension) {
 		t.Errorf("δ in metres: %v does not wrap units.ErrDimension", err)
+	}
+}
+
+// A layer's choice marshals as the calc file writes it: method and its keys
+// side by side.
+func TestChoiceJSON(t *testing.T) {
+	b, err := json.Marshal(Layer{Name: "sand", Tip: &TipChoice{Method: "given-nq", Params: map[string]Value{"nq": V("40")}},
+		Shaft: &ShaftChoice{Method: "beta", Params: map[string]Value{"k0": V("jaky")}}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, want := range []string{`"tip":{"method":"given-nq","nq":"40"}`, `"shaft":{"k0":"jaky","method":"beta"}`} {
+		if !strings.Contains(string(b), want) {
+			t.Errorf("%s lacks %s", b, want)
+		}
 	}
 }
