@@ -10,17 +10,17 @@ type Row struct {
 	Err      error   // why the method could not be applied, or nil
 }
 
-// Drained returns the drained (friction) tip methods, in a fixed order:
-// Meyerhof, Vesic, Berezantzev, Janbu at η′ = 90 deg, the four API sand
-// classes, and the SPT method for drilled shafts.
-func Drained() []Tip {
-	return []Tip{Meyerhof{}, Vesic{}, Berezantzev{}, Janbu{},
-		APISand{Class: 1}, APISand{Class: 2}, APISand{Class: 3}, APISand{Class: 4}, ShaftSand{}}
-}
+// Drained returns the drained (friction) tip methods of the catalogue
+// that need no given value, built as a calc file builds them with no key
+// beside method:, in the catalogue's order (Methods): Meyerhof, Vesic
+// with Δ by its correlation, Berezantzev, Janbu at η′ = 90 deg, the four
+// API sand classes, the SPT method for drilled shafts and the two
+// bored-pile rules.
+func Drained() []Tip { return of(DrainedLayers) }
 
-// Undrained returns the undrained tip methods: Skempton's Nc = 9 and
-// Vesic's undrained Nc*.
-func Undrained() []Tip { return []Tip{Skempton{}, VesicUndrained{}} }
+// Undrained returns the undrained tip methods of the catalogue that need
+// no given value: Skempton's Nc = 9 and Vesic's undrained Nc*.
+func Undrained() []Tip { return of(UndrainedLayers) }
 
 // Compare evaluates every method that applies to in and returns one row
 // each: the drained methods when φ′ or q′ is given (the SPT method only

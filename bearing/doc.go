@@ -17,7 +17,8 @@
 //	vesic-given       VesicGiven{Nsigma, Nc}  qp = c′Nc* + σ′o·Nσ*, factors given
 //	berezantzev       Berezantzev{}           qp = q′·Nq(φ′, L/D), from chart
 //	janbu             Janbu{Eta}              qp = c′Nc* + q′Nq*(φ′, η′)
-//	api-sand-1 … -4   APISand{Class}          qp = min(q′Nq, q_L) by sand class
+//	api-sand-1 … -4   APISand{Class}          qp = min(q′Nq, q_L) by sand class (api-sand-1, api-sand-2,
+//	                                          api-sand-3, api-sand-4)
 //	shaft-n60-sand    ShaftSand{}             qp = 0.6·N60 tsf ≤ 30 tsf (at 5 % base settlement)
 //	bored-phi         BoredPhi{NoCap}         qp = min(1/3·qp,Meyerhof, 30 tsf)
 //	bored-sand        BoredSand{…}            shaft-n60-sand if N60 given, else bored-phi; × 1.27 m/B for B > 1.27 m
@@ -26,6 +27,28 @@
 //	nc9               Skempton{}              qp = 9·su
 //	vesic-undrained   VesicUndrained{}        qp = [(4/3)(ln Irr + 1) + π/2 + 1]·su
 //	given-nc          GivenNc{Nc}             qp = Nc·su
+//
+// # The catalogue
+//
+// Methods returns the table above as data, one Descriptor per identifier
+// a calc file can name: its drainage class, its scope, the keys it reads
+// beside method: (Param: key, dimension, range, default, meaning, required
+// or not), its Equation, Range and Refs, and New, which builds the method
+// from the values given. Lookup finds an entry, IDs lists them. Package
+// calc, its JSON Schema and the factors tool read this table, so a method
+// is added by one entry. The keys:
+//
+//	janbu         eta     η′, 60 to 105 deg (default 90 deg)
+//	vesic-given   nsigma  Nσ*, 1 to 1e4 (required); nc  Nc*, 0 to 1e4 (default 0)
+//	given-nq      nq      Nq, 1 to 1e4 (required); nc  0 to 1e4 (default 0); limit  ≥ 0 (default none)
+//	given-nc      nc      Nc, 1 to 100 (required)
+//
+// Every other method reads no key: its inputs come from the layer (φ′,
+// c′, su, N60, Ir, Δ) and the pile. In a calc file, vesic takes Δ from the
+// layer's volumetric_strain or, when none is given, from Vesic's
+// correlation (Vesic{Volume: VolumeCorrelated}). Drained and Undrained
+// build the entries of a drainage class that need no key, in the table's
+// order, for Compare.
 //
 // The classical shallow factors PrandtlNq, PrandtlNc and VesicNgamma, and
 // Vesic's VesicNsigma and VesicNc, are exported as building blocks.

@@ -53,7 +53,10 @@ func ExampleBerezantzev_Tip() {
 }
 
 // Compare lists every applicable method for one tip, as the factors tool
-// does. The soil and pile are our own example.
+// does. The soil and pile are our own example. Checks by hand: Vesic's
+// Δ = 0.005·(1 − 8/20)·1.2 = 0.0036 gives Irr = 60/1.216 = 49.34 and
+// Nσ* = 49.44 by Vesic's closed form; bored-phi is 3117/3 = 1039 kPa;
+// bored-sand takes the SPT rule, N60 being given.
 func ExampleCompare() {
 	in := bearing.Input{Phi: 33 * units.Degree, Q: 120 * units.Kilopascal, Ir: 60, L: 16, D: 0.6, N60: 28}
 	for _, row := range bearing.Compare(in) {
@@ -65,7 +68,7 @@ func ExampleCompare() {
 	}
 	// Output:
 	// meyerhof        factor   96.00  qp   3117 kPa
-	// vesic           factor   54.20  qp   4143 kPa
+	// vesic           factor   49.44  qp   3779 kPa
 	// berezantzev     factor   58.69  qp   7043 kPa
 	// janbu           factor   26.09  qp   3131 kPa
 	// api-sand-1      factor   12.00  qp   1440 kPa
@@ -73,6 +76,8 @@ func ExampleCompare() {
 	// api-sand-3      factor   40.00  qp   4800 kPa
 	// api-sand-4      factor   50.00  qp   6000 kPa
 	// shaft-n60-sand  factor    0.00  qp   1609 kPa
+	// bored-phi       factor   96.00  qp   1039 kPa
+	// bored-sand      factor    0.00  qp   1609 kPa
 }
 
 // Vesic's method with the volume change of the sand taken from the

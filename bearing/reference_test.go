@@ -471,7 +471,7 @@ func TestRangeErrorMessage(t *testing.T) {
 
 func TestIdentifiersUnique(t *testing.T) {
 	seen := map[string]bool{}
-	all := append(append(Drained(), Undrained()...), GivenNq{}, GivenNc{}, VesicGiven{}, BoredPhi{}, BoredSand{}, LargeBase{Of: Meyerhof{}})
+	all := append(append(Drained(), Undrained()...), GivenNq{}, GivenNc{}, VesicGiven{}, LargeBase{Of: Meyerhof{}})
 	for _, m := range all {
 		if seen[m.ID()] {
 			t.Errorf("identifier %q used twice", m.ID())
@@ -554,7 +554,7 @@ func TestCompareRows(t *testing.T) {
 			t.Errorf("%s: %v", r.ID, r.Err)
 		}
 	}
-	want := []string{"meyerhof", "vesic", "berezantzev", "janbu", "api-sand-1", "api-sand-2", "api-sand-3", "api-sand-4", "nc9", "vesic-undrained"}
+	want := []string{"meyerhof", "vesic", "berezantzev", "janbu", "api-sand-1", "api-sand-2", "api-sand-3", "api-sand-4", "bored-phi", "bored-sand", "nc9", "vesic-undrained"}
 	if len(ids) != len(want) {
 		t.Fatalf("ids %v, want %v", ids, want)
 	}
@@ -568,8 +568,8 @@ func TestCompareRows(t *testing.T) {
 	if rows[0].Factor != 56.7 && relErr(rows[0].Factor, 56.7) > 1e-9 {
 		t.Errorf("meyerhof factor %g, want 56.7 (Das 2019)", rows[0].Factor)
 	}
-	if rows[8].Factor != 9 {
-		t.Errorf("nc9 factor %g, want 9 (Skempton 1951)", rows[8].Factor)
+	if rows[10].Factor != 9 {
+		t.Errorf("nc9 factor %g, want 9 (Skempton 1951)", rows[10].Factor)
 	}
 	// An SPT-only input gives the drilled-shaft row alone; an error row
 	// keeps its reason.

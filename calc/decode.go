@@ -368,8 +368,14 @@ func (d *decoder) mapping(n *yaml.Node, v reflect.Value, path string, depth int)
 	t := v.Type()
 	fields := map[string]int{}
 	var names []string
+	inline := -1 // a map field that takes every other key (the keys of a method)
 	for i := 0; i < t.NumField(); i++ {
-		tag := strings.Split(t.Field(i).Tag.Get("yaml"), ",")[0]
+		parts := strings.Split(t.Field(i).Tag.Get("yaml"), ",")
+		tag := parts[0]
+		if tag == "" && len(parts) > 1 && parts[1] == "inline" && t.Field(i).Type.Kind() == reflect.Map {
+			inline = i
+			continue
+		}
 		if tag == "" || tag == "-" {
 			continue
 		}
@@ -390,6 +396,21 @@ func (d *decoder) mapping(n *yaml.Node, v reflect.Value, path string, depth int)
 		}
 		p := join(path, k.Value)
 		fi, ok := fields[k.Value]
+		if !ok && inline >= 0 {
+			if seen[k.Value] {
+				d.add(p, k.Line, "given twice")
+				continue
+			}
+			seen[k.Value] = true
+			m := v.Field(inline)
+			if m.IsNil() {
+				m.Set(reflect.MakeMap(m.Type()))
+			}
+			e := reflect.New(m.Type().Elem()).Elem()
+			d.value(c, e, p, depth+1)
+			m.SetMapIndex(reflect.ValueOf(k.Value), e)
+			continue
+		}
 		if !ok {
 			d.add(p, k.Line, "unknown key %q; accepted here: %s", k.Value, strings.Join(names, ", "))
 			continue

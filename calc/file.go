@@ -1,5 +1,7 @@
 package calc
 
+import "encoding/json"
+
 // FormatVersion is the version of the calc file format this package reads.
 const FormatVersion = 1
 
@@ -102,44 +104,43 @@ type Layer struct {
 }
 
 // ShaftChoice picks a shaft method for a layer and gives the values it
-// takes instead of computing them.
+// reads instead of computing them. Method is an identifier of the shaft
+// catalogue (shaft.Methods); Params are the other keys, each one the
+// method reads (shaft.Descriptor.Params): for beta, K by one of k,
+// k_over_k0, k_over_kp, k0 (jaky or ocr) and δ by one of delta,
+// delta_over_phi, with defaults by the pile's installation and surface;
+// beta-given its beta, alpha-given its alpha, beta-api its sand_class,
+// lambda its lambda; every method that gives fs at a depth a limit. A key
+// the method does not read is an error.
 type ShaftChoice struct {
-	// Method is a shaft method identifier: beta, beta-given, beta-burland,
-	// beta-drilled-sand, beta-drilled-k0, beta-api, alpha-api, alpha-chart,
-	// alpha-drilled, alpha-given, lambda, none.
-	Method string `yaml:"method" json:"method"`
-	// For beta: K by one of k, k_over_k0, k_over_kp, k0 ("jaky" or "ocr");
-	// δ by delta or delta_over_phi. Unset ones take the defaults.
-	K            Value  `yaml:"k,omitempty" json:"k,omitempty" q:"number,0,10" doc:"Earth pressure coefficient K, given."`
-	KOverK0      Value  `yaml:"k_over_k0,omitempty" json:"k_over_k0,omitempty" q:"number,0,3" doc:"K/K0, given."`
-	KOverKp      Value  `yaml:"k_over_kp,omitempty" json:"k_over_kp,omitempty" q:"number,0,1" doc:"K/Kp, given."`
-	K0           string `yaml:"k0,omitempty" json:"k0,omitempty"`
-	Delta        Value  `yaml:"delta,omitempty" json:"delta,omitempty" q:"angle,0,50" doc:"Interface friction angle δ, given (deg)."`
-	DeltaOverPhi Value  `yaml:"delta_over_phi,omitempty" json:"delta_over_phi,omitempty" q:"number,0,1" doc:"δ/φ′, given."`
-	Beta         Value  `yaml:"beta,omitempty" json:"beta,omitempty" q:"number,0,3" doc:"β = K·tanδ, given (beta-given)."`
-	Alpha        Value  `yaml:"alpha,omitempty" json:"alpha,omitempty" q:"number,0,1.5" doc:"Adhesion factor α, given (alpha-given)."`
-	Lambda       Value  `yaml:"lambda,omitempty" json:"lambda,omitempty" q:"number,0,1" doc:"λ, given instead of read from the table (lambda)."`
-	// SandClass is the API RP 2GEO class for beta-api (and for an API
-	// limit): api-medium-dense-sand-silt, api-medium-dense-sand,
-	// api-dense-sand, api-very-dense-sand.
-	SandClass string `yaml:"sand_class,omitempty" json:"sand_class,omitempty"`
-	// Limit is a limiting unit shaft friction.
-	Limit Value `yaml:"limit,omitempty" json:"limit,omitempty" q:"stress,0," doc:"Limiting unit shaft friction."`
+	Method string           `yaml:"method" json:"method"`
+	Params map[string]Value `yaml:",inline" json:"-"`
 }
 
-// TipChoice picks a tip method for a layer.
+// TipChoice picks a tip method for a layer. Method is an identifier of
+// the tip catalogue (bearing.Methods); Params are the other keys, each one
+// the method reads (bearing.Descriptor.Params): nq, nc and limit for
+// given-nq, nsigma and nc for vesic-given, nc for given-nc, eta for janbu.
+// A key the method does not read is an error.
 type TipChoice struct {
-	// Method is a tip method identifier: meyerhof, vesic, berezantzev,
-	// janbu, api-sand-1 to api-sand-4, shaft-n60-sand, given-nq, nc9,
-	// vesic-undrained, given-nc.
-	Method string `yaml:"method" json:"method"`
-	Nq     Value  `yaml:"nq,omitempty" json:"nq,omitempty" q:"number,0,10000" doc:"Bearing capacity factor Nq, given (given-nq)."`
-	Nc     Value  `yaml:"nc,omitempty" json:"nc,omitempty" q:"number,0,10000" doc:"Bearing capacity factor Nc, given (given-nc, given-nq)."`
-	Limit  Value  `yaml:"limit,omitempty" json:"limit,omitempty" q:"stress,0," doc:"Limiting unit tip resistance."`
-	// Eta is Janbu's plastic-zone angle η′ (default 90 deg).
-	Eta Value `yaml:"eta,omitempty" json:"eta,omitempty" q:"angle,0,180" doc:"Janbu's plastic-zone angle η′ (deg; default 90)."`
-	// Nsigma is Vesic's Nσ* for vesic-given.
-	Nsigma Value `yaml:"nsigma,omitempty" json:"nsigma,omitempty" q:"number,0,100000" doc:"Vesic's bearing factor Nσ*, given (vesic-given)."`
+	Method string           `yaml:"method" json:"method"`
+	Params map[string]Value `yaml:",inline" json:"-"`
+}
+
+// MarshalJSON writes the choice as the calc file has it: method and its
+// keys side by side.
+func (c ShaftChoice) MarshalJSON() ([]byte, error) { return choiceJSON(c.Method, c.Params) }
+
+// MarshalJSON writes the choice as the calc file has it: method and its
+// keys side by side.
+func (c TipChoice) MarshalJSON() ([]byte, error) { return choiceJSON(c.Method, c.Params) }
+
+func choiceJSON(method string, params map[string]Value) ([]byte, error) {
+	m := map[string]string{"method": method}
+	for k, v := range params {
+		m[k] = v.Raw
+	}
+	return json.Marshal(m)
 }
 
 // Section is a pile cross-section. Each shape reads its own keys, and a
@@ -186,10 +187,16 @@ type Zone struct {
 
 // Methods are the methods for the whole pile, by drainage class.
 type Methods struct {
-	TipDrained     string `yaml:"tip_drained,omitempty" json:"tip_drained,omitempty"`
-	TipUndrained   string `yaml:"tip_undrained,omitempty" json:"tip_undrained,omitempty"`
-	ShaftDrained   string `yaml:"shaft_drained,omitempty" json:"shaft_drained,omitempty"`
-	ShaftUndrained string `yaml:"shaft_undrained,omitempty" json:"shaft_undrained,omitempty"`
+	// TipDrained, TipUndrained, ShaftDrained and ShaftUndrained are
+	// identifiers of the catalogues (bearing.Methods, shaft.Methods) for
+	// every layer of a drainage class, among those that need no key (a
+	// given factor is chosen on a layer); shaft_drained takes a method that
+	// gives fs at each depth, shaft_undrained also lambda. Absent: the
+	// defaults of package pile for the installation.
+	TipDrained     string `yaml:"tip_drained,omitempty" json:"tip_drained,omitempty" doc:"Tip method for drained layers (an identifier of the tip catalogue); absent: the default for the installation."`
+	TipUndrained   string `yaml:"tip_undrained,omitempty" json:"tip_undrained,omitempty" doc:"Tip method for undrained layers (an identifier of the tip catalogue); absent: the default."`
+	ShaftDrained   string `yaml:"shaft_drained,omitempty" json:"shaft_drained,omitempty" doc:"Shaft method for drained layers (an identifier of the shaft catalogue); absent: the default."`
+	ShaftUndrained string `yaml:"shaft_undrained,omitempty" json:"shaft_undrained,omitempty" doc:"Shaft method for undrained layers (an identifier of the shaft catalogue, or lambda); absent: the default."`
 	// CriticalDepth is the ratio n of zc = n·D; 0 or absent for none.
 	CriticalDepth Value `yaml:"critical_depth,omitempty" json:"critical_depth,omitempty" q:"number,0,1000" doc:"Critical depth ratio n of zc = n·D (β methods in drained layers); absent for none."`
 	// LayeredTip turns Meyerhof's rule for a tip near a weaker layer above

@@ -4,6 +4,7 @@ import (
 	"errors"
 	"math"
 	"strconv"
+	"strings"
 	"testing"
 	"time"
 )
@@ -17,6 +18,10 @@ func FuzzParse(f *testing.F) {
 	f.Add([]byte("{\"title\": 1}"))
 	f.Add([]byte(base + "design: {basis: en1997, approach: DA1}\nloads: {compression: {permanent: 500 kN}}\n"))
 	f.Add([]byte(base + "methods: {shaft_undrained: lambda, critical_depth: 20}\n"))
+	// Layer methods with the keys of the catalogues (an inline map in the
+	// decoder).
+	f.Add([]byte(strings.Replace(base, "friction_angle: 34 deg", "friction_angle: 34 deg\n      tip: {method: given-nq, nq: 40, nc: 5, limit: 8 MPa}\n      shaft: {method: beta, k0: ocr, delta: 30 deg, limit: 90 kPa}", 1)))
+	f.Add([]byte(strings.Replace(base, "friction_angle: 34 deg", "friction_angle: 34 deg\n      tip: {method: janbu, eta: 80, eta: 90}\n      shaft: {method: beta, k: 1, k_over_kp: 0.2, nq: [1]}", 1)))
 	f.Fuzz(func(t *testing.T, data []byte) {
 		done := make(chan struct{})
 		var r *Result

@@ -11,7 +11,6 @@ import (
 	"strings"
 
 	"github.com/qultgeo/qult/bearing"
-	"github.com/qultgeo/qult/cite"
 	"github.com/qultgeo/qult/phase"
 	"github.com/qultgeo/qult/pile"
 	"github.com/qultgeo/qult/profile"
@@ -376,182 +375,237 @@ func (r *resolver) sectionKeys(shape pile.Shape, sec Section) {
 	}
 }
 
-// tipMethods and shaftMethods list the identifiers accepted in calc files.
-var tipIDs = []string{"meyerhof", "vesic", "vesic-given", "berezantzev", "janbu", "api-sand-1", "api-sand-2", "api-sand-3",
-	"api-sand-4", "shaft-n60-sand", "bored-sand", "bored-phi", "given-nq", "nc9", "vesic-undrained", "given-nc"}
-
-var shaftIDs = []string{"beta", "beta-given", "beta-burland", "beta-drilled-sand", "beta-drilled-k0", "beta-api",
-	"alpha-api", "alpha-chart", "alpha-drilled", "alpha-given", "lambda", "none"}
-
-// tip builds a tip method from its identifier and values.
-func (r *resolver) tip(id string, c *TipChoice, path string) bearing.Tip {
-	id = strings.TrimSpace(id)
-	var nq, nc float64
-	var lim units.Stress
-	var eta units.Angle
-	if c != nil {
-		nq = r.num(c.Nq, path+".nq", 0, 1e4)
-		nc = r.num(c.Nc, path+".nc", 0, 1e4)
-		lim = r.stress(c.Limit, path+".limit")
-		eta = r.angle(c.Eta, path+".eta")
-	}
-	switch id {
-	case "meyerhof":
-		return bearing.Meyerhof{}
-	case "vesic":
-		// Δ from the layer's volumetric_strain, else Vesic's correlation.
-		return bearing.Vesic{Volume: bearing.VolumeCorrelated}
-	case "vesic-given":
-		ns := 0.0
-		if c != nil {
-			ns = r.num(c.Nsigma, path+".nsigma", 0, 1e5)
-		}
-		if ns == 0 {
-			r.add(path+".nsigma", 0, "vesic-given needs nsigma (Nσ*)")
-		}
-		return bearing.VesicGiven{Nsigma: ns, Nc: nc}
-	case "bored-sand":
-		return bearing.BoredSand{}
-	case "bored-phi":
-		return bearing.BoredPhi{}
-	case "berezantzev":
-		return bearing.Berezantzev{}
-	case "janbu":
-		return bearing.Janbu{Eta: eta}
-	case "api-sand-1", "api-sand-2", "api-sand-3", "api-sand-4":
-		return bearing.APISand{Class: int(id[len(id)-1] - '0')}
-	case "shaft-n60-sand":
-		return bearing.ShaftSand{}
-	case "given-nq":
-		if nq == 0 {
-			r.add(path+".nq", 0, "given-nq needs nq")
-		}
-		return bearing.GivenNq{Nq: nq, Nc: nc, Limit: lim}
-	case "nc9":
-		return bearing.Skempton{}
-	case "vesic-undrained":
-		return bearing.VesicUndrained{}
-	case "given-nc":
-		if nc == 0 {
-			r.add(path+".nc", 0, "given-nc needs nc")
-		}
-		return bearing.GivenNc{Nc: nc}
-	}
-	r.add(path+".method", 0, "%q: want one of %s", id, strings.Join(tipIDs, ", "))
-	return nil
+// param is a catalogue parameter as calc reads it, from either method
+// package.
+type param struct {
+	key, dim string
+	min, max float64
+	minOpen  bool
+	words    []string
+	group    string
+	required bool
+	meaning  string
 }
 
-// shaftUnit builds a layer's shaft method; lambda and none are returned
-// through the LayerMethods flags.
-func (r *resolver) shaftUnit(c *ShaftChoice, path string, inst pile.Installation, lm *pile.LayerMethods) shaft.Unit {
-	id := strings.TrimSpace(c.Method)
-	var m shaft.Unit
-	switch id {
-	case "beta":
-		m = r.beta(c, path, inst)
-	case "beta-given":
-		b := r.num(c.Beta, path+".beta", 0, 3)
-		if !c.Beta.IsSet() {
-			r.add(path+".beta", 0, "beta-given needs beta")
-		}
-		m = shaft.BetaGiven{Beta: b}
-	case "beta-burland":
-		m = shaft.Burland{}
-	case "beta-drilled-sand":
-		m = shaft.DrilledSand{}
-	case "beta-drilled-k0":
-		m = shaft.DrilledSandK0{}
-	case "beta-api":
-		cl, err := shaft.ParseSandClass(c.SandClass)
-		if err != nil {
-			r.add(path+".sand_class", 0, "%v", err)
-		}
-		m = shaft.APIBeta{Class: cl}
-	case "alpha-api":
-		m = shaft.AlphaAPI{}
-	case "alpha-chart":
-		m = shaft.AlphaChart{}
-	case "alpha-drilled":
-		m = shaft.AlphaDrilled{}
-	case "alpha-given":
-		a := r.num(c.Alpha, path+".alpha", 0, 1.5)
-		if !c.Alpha.IsSet() {
-			r.add(path+".alpha", 0, "alpha-given needs alpha")
-		}
-		m = shaft.AlphaGiven{Alpha: a}
-	case "lambda":
-		lm.Lambda = true
-		lm.LambdaValue = r.num(c.Lambda, path+".lambda", 0, 1)
-		return nil
-	case "none":
-		lm.NoShaft = true
-		return nil
-	default:
-		r.add(path+".method", 0, "%q: want one of %s", id, strings.Join(shaftIDs, ", "))
-		return nil
+func tipParams(d bearing.Descriptor) []param {
+	ps := make([]param, len(d.Params))
+	for i, p := range d.Params {
+		ps[i] = param{key: p.Key, dim: p.Dim, min: p.Min, max: p.Max, required: p.Required, meaning: p.Meaning}
 	}
-	if c.Limit.IsSet() {
-		m = shaft.Capped{Method: m, Limit: shaft.LimitGiven{Fs: r.stress(c.Limit, path+".limit")}}
-	}
-	return m
+	return ps
 }
 
-// beta builds the β method from K and δ choices, with the defaults of
-// package pile for what is not given.
-func (r *resolver) beta(c *ShaftChoice, path string, inst pile.Installation) shaft.Unit {
-	var k shaft.KRule
-	n := 0
-	if c.K.IsSet() {
-		k, n = shaft.KGiven{K: r.num(c.K, path+".k", 0, 10)}, n+1
+func shaftParams(d shaft.Descriptor) []param {
+	ps := make([]param, len(d.Params))
+	for i, p := range d.Params {
+		ps[i] = param{key: p.Key, dim: p.Dim, min: p.Min, max: p.Max, minOpen: p.MinOpen, words: p.Words,
+			group: p.Group, required: p.Required, meaning: p.Meaning}
 	}
-	if c.KOverK0.IsSet() {
-		k, n = shaft.KOverK0{Ratio: r.num(c.KOverK0, path+".k_over_k0", 0, 3)}, n+1
+	return ps
+}
+
+// keyList writes the keys of ps for a message, or "(none)".
+func keyList(ps []param) string {
+	if len(ps) == 0 {
+		return "(none)"
 	}
-	if c.KOverKp.IsSet() {
-		k, n = shaft.KOverKp{Ratio: r.num(c.KOverKp, path+".k_over_kp", 0, 1)}, n+1
+	keys := make([]string, len(ps))
+	for i, p := range ps {
+		keys[i] = p.key
 	}
-	switch c.K0 {
-	case "":
-	case "jaky":
-		k, n = shaft.KJaky{}, n+1
-	case "ocr":
-		k, n = shaft.KMayneKulhawy{}, n+1
-	default:
-		r.add(path+".k0", 0, "%q: want jaky or ocr", c.K0)
+	return strings.Join(keys, ", ")
+}
+
+// dimOf maps a catalogue dimension onto the units dimension and the unit
+// its bounds are written in.
+var dimOf = map[string]struct {
+	d    units.Dimension
+	unit float64 // SI value of one unit of the bounds
+}{
+	"angle":  {units.DimAngle, float64(units.Degree)},
+	"stress": {units.DimStress, float64(units.Kilopascal)},
+}
+
+// bounds writes p's accepted range in the file's units.
+func (r *resolver) bounds(p param) string {
+	lo, hi, unit := p.min, p.max, ""
+	if dd, ok := dimOf[p.dim]; ok {
+		lo, unit = r.sys.In(p.min*dd.unit, dd.d)
+		hi, _ = r.sys.In(p.max*dd.unit, dd.d)
+		unit = " " + unit
+		if p.dim == "angle" {
+			unit = " deg"
+		}
 	}
-	if n > 1 {
-		r.add(path, 0, "give one of k, k_over_k0, k_over_kp, k0")
-	}
-	if k == nil {
-		kk, _ := shaft.KOverK0For(shaftInst(inst))
-		k = kk
-	}
-	var d shaft.DeltaRule
-	if c.Delta.IsSet() && c.DeltaOverPhi.IsSet() {
-		r.add(path, 0, "give delta or delta_over_phi, not both")
-	}
+	f := func(x float64) string { return strconv.FormatFloat(x, 'g', 4, 64) }
 	switch {
-	case c.Delta.IsSet():
-		d = shaft.DeltaGiven{Delta: r.angle(c.Delta, path+".delta")}
-	case c.DeltaOverPhi.IsSet():
-		d = shaft.DeltaOverPhi{Ratio: r.num(c.DeltaOverPhi, path+".delta_over_phi", 0, 1)}
+	case math.IsInf(p.max, 1) && p.minOpen:
+		return "above " + f(lo) + unit
+	case math.IsInf(p.max, 1):
+		return f(lo) + unit + " or more"
+	case p.minOpen:
+		return "above " + f(lo) + " and at most " + f(hi) + unit
 	}
-	return betaWith{k: k, d: d}
+	return f(lo) + " to " + f(hi) + unit
 }
 
-// betaWith is a β method whose δ rule may still be the pile's default,
-// filled in by methods() once the surface is known.
-type betaWith struct {
-	k shaft.KRule
-	d shaft.DeltaRule
+// params checks the keys given beside a method (under path; "" for a
+// method chosen for the whole pile at methodPath, which takes no keys)
+// against the parameters it reads and reads their values: numbers as they are, angles in radians,
+// stresses in Pa, words as written. A key the method does not read, a
+// value outside its range, two keys of one group and a required key not
+// given are problems; ok is false when there was any.
+func (r *resolver) params(id string, ps []param, given map[string]Value, path, methodPath string) (num map[string]float64, word map[string]string, ok bool) {
+	before := len(r.probs)
+	num, word = map[string]float64{}, map[string]string{}
+	byKey := map[string]param{}
+	for _, p := range ps {
+		byKey[p.key] = p
+	}
+	groups := map[string][]string{}
+	for _, k := range slices.Sorted(maps.Keys(given)) {
+		v := given[k]
+		kpath := path + "." + k
+		p, known := byKey[k]
+		if !known {
+			r.add(kpath, v.Line, "%s does not read %s; it reads: %s", id, k, keyList(ps))
+			continue
+		}
+		if !v.IsSet() {
+			r.add(kpath, v.Line, "given empty; give %s (%s), or leave the key out", k, p.meaning)
+			continue
+		}
+		if p.group != "" {
+			groups[p.group] = append(groups[p.group], k)
+		}
+		if p.dim == "word" {
+			w := strings.TrimSpace(v.Raw)
+			if !slices.Contains(p.words, w) {
+				r.add(kpath, v.Line, "%q: want one of %s", v.Raw, strings.Join(p.words, ", "))
+				continue
+			}
+			word[k] = w
+			continue
+		}
+		var x, scale float64 = 0, 1
+		if dd, isQty := dimOf[p.dim]; isQty {
+			n := len(r.probs)
+			x = r.q(v, kpath, dd.d)
+			if len(r.probs) > n {
+				continue
+			}
+			scale = dd.unit
+		} else {
+			var err error
+			if x, err = v.number(); err != nil {
+				r.add(kpath, v.Line, "%v", err)
+				continue
+			}
+		}
+		lo, hi := p.min*scale, p.max*scale
+		if x < lo || x > hi || (p.minOpen && x == lo) {
+			r.add(kpath, v.Line, "%q is outside %s (%s)", v.Raw, r.bounds(p), p.meaning)
+			continue
+		}
+		num[k] = x
+	}
+	for _, g := range slices.Sorted(maps.Keys(groups)) {
+		if keys := groups[g]; len(keys) > 1 {
+			var all []string
+			for _, p := range ps {
+				if p.group == g {
+					all = append(all, p.key)
+				}
+			}
+			r.add(path+"."+keys[1], given[keys[1]].Line, "give at most one of %s (they set %s); %s are given",
+				strings.Join(all, ", "), g, strings.Join(keys, " and "))
+		}
+	}
+	for _, p := range ps {
+		if _, isGiven := given[p.key]; p.required && !isGiven {
+			if path == "" {
+				r.add(methodPath, 0, "%s needs %s (%s), which only a layer gives: choose it on the layer, as {method: %s, %s: …}", id, p.key, p.meaning, id, p.key)
+				continue
+			}
+			r.add(path+"."+p.key, 0, "not given; %s needs %s (%s)", id, p.key, p.meaning)
+		}
+	}
+	return num, word, len(r.probs) == before
 }
 
-func (b betaWith) ID() string       { return "beta" }
-func (b betaWith) Equation() string { return "" }
-func (b betaWith) Valid() string    { return "" }
-func (b betaWith) Refs() []cite.Ref { return nil }
-func (b betaWith) Unit(shaft.Point) (shaft.Result, error) {
-	return shaft.Result{}, errors.New("calc: unresolved β")
+// unknownMethod reports an identifier that is not in a catalogue.
+func (r *resolver) unknownMethod(id, path, what string, ids []string) {
+	if id == "" {
+		r.add(path, 0, "not given; want one of the %s methods: %s", what, strings.Join(ids, ", "))
+		return
+	}
+	r.add(path, 0, "%q is not a %s method; want one of %s", id, what, strings.Join(ids, ", "))
+}
+
+// tip builds a tip method from its catalogue entry and the keys given
+// beside it; nil after a problem.
+func (r *resolver) tip(id string, given map[string]Value, path, methodPath string) bearing.Tip {
+	id = strings.TrimSpace(id)
+	d, ok := bearing.Lookup(id)
+	if !ok {
+		ids := bearing.IDs()
+		if path == "" {
+			ids = pileTipIDs()
+		}
+		r.unknownMethod(id, methodPath, "tip", ids)
+		return nil
+	}
+	num, _, ok := r.params(id, tipParams(d), given, path, methodPath)
+	if !ok {
+		return nil
+	}
+	t, err := d.New(num)
+	if err != nil {
+		r.add(methodPath, 0, "%v", err)
+		return nil
+	}
+	return t
+}
+
+// shaftMethod builds a shaft method from its catalogue entry and the keys
+// given beside it into lm: a point method, the λ method or no shaft.
+// It returns the entry's kind; ok is false after a problem.
+func (r *resolver) shaftMethod(id string, given map[string]Value, path, methodPath string, p pile.Pile, lm *pile.LayerMethods) (shaft.Kind, bool) {
+	id = strings.TrimSpace(id)
+	d, ok := shaft.Lookup(id)
+	if !ok {
+		ids := shaft.IDs()
+		switch methodPath {
+		case "methods.shaft_drained":
+			ids = pileShaftIDs(false)
+		case "methods.shaft_undrained":
+			ids = pileShaftIDs(true)
+		}
+		r.unknownMethod(id, methodPath, "shaft", ids)
+		return 0, false
+	}
+	num, word, ok := r.params(id, shaftParams(d), given, path, methodPath)
+	if !ok {
+		return d.Kind, false
+	}
+	surf := p.Surface
+	if surf == 0 {
+		surf = pile.DefaultSurface(p.Section, p.Installation)
+	}
+	c, err := d.New(shaft.Values{Num: num, Word: word, Installation: shaftInst(p.Installation), Surface: surf})
+	if err != nil {
+		r.add(methodPath, 0, "%v", err)
+		return d.Kind, false
+	}
+	switch d.Kind {
+	case shaft.WholePile:
+		lm.Lambda, lm.LambdaValue = true, c.LambdaValue
+	case shaft.NoResistance:
+		lm.NoShaft = true
+	default:
+		lm.Shaft = c.Unit
+	}
+	return d.Kind, true
 }
 
 func shaftInst(i pile.Installation) shaft.Installation {
@@ -566,28 +620,6 @@ func shaftInst(i pile.Installation) shaft.Installation {
 	return shaft.Bored
 }
 
-// finishBeta replaces a betaWith by a shaft.Beta with the default δ rule
-// for the pile's surface where none was given.
-func finishBeta(m shaft.Unit, p pile.Pile) shaft.Unit {
-	switch b := m.(type) {
-	case betaWith:
-		d := b.d
-		if d == nil {
-			surf := p.Surface
-			if surf == 0 {
-				surf = pile.DefaultSurface(p.Section, p.Installation)
-			}
-			dd, _ := shaft.DeltaOverPhiFor(surf)
-			d = dd
-		}
-		return shaft.Beta{K: b.k, Delta: d}
-	case shaft.Capped:
-		b.Method = finishBeta(b.Method, p)
-		return b
-	}
-	return m
-}
-
 func (r *resolver) methods(f *File, in *Inputs) {
 	ms := pile.DefaultMethods()
 	if r.sys == units.US {
@@ -595,27 +627,27 @@ func (r *resolver) methods(f *File, in *Inputs) {
 		// psf in US units; 2116 psf (one atmosphere) can be given.
 		ms.Pa = 2000 * units.PSF
 	}
-	inst := in.Pile.Installation
 	if m := f.Methods; m != nil {
 		if m.TipDrained != "" {
-			ms.TipDrained = r.tip(m.TipDrained, nil, "methods.tip_drained")
+			ms.TipDrained = r.tip(m.TipDrained, nil, "", "methods.tip_drained")
 		}
 		if m.TipUndrained != "" {
-			ms.TipUndrained = r.tip(m.TipUndrained, nil, "methods.tip_undrained")
+			ms.TipUndrained = r.tip(m.TipUndrained, nil, "", "methods.tip_undrained")
 		}
 		if m.ShaftDrained != "" {
 			var lm pile.LayerMethods
-			ms.ShaftDrained = r.shaftUnit(&ShaftChoice{Method: m.ShaftDrained}, "methods.shaft_drained", inst, &lm)
-			if lm.Lambda || lm.NoShaft {
-				r.add("methods.shaft_drained", 0, "%q cannot apply to every drained layer", m.ShaftDrained)
+			kind, ok := r.shaftMethod(m.ShaftDrained, nil, "", "methods.shaft_drained", in.Pile, &lm)
+			ms.ShaftDrained = lm.Shaft
+			if ok && kind != shaft.PointMethod {
+				r.add("methods.shaft_drained", 0, "%q cannot apply to every drained layer; give it on a layer, or choose a method that gives fs at each depth", m.ShaftDrained)
 			}
 		}
 		if m.ShaftUndrained != "" {
 			var lm pile.LayerMethods
-			ms.ShaftUndrained = r.shaftUnit(&ShaftChoice{Method: m.ShaftUndrained}, "methods.shaft_undrained", inst, &lm)
-			ms.UndrainedLambda = lm.Lambda
-			if lm.NoShaft {
-				r.add("methods.shaft_undrained", 0, "\"none\" cannot apply to every undrained layer; use none on a layer")
+			kind, ok := r.shaftMethod(m.ShaftUndrained, nil, "", "methods.shaft_undrained", in.Pile, &lm)
+			ms.ShaftUndrained, ms.UndrainedLambda = lm.Shaft, lm.Lambda
+			if ok && kind == shaft.NoResistance {
+				r.add("methods.shaft_undrained", 0, "%q cannot apply to every undrained layer; give it on a layer", m.ShaftUndrained)
 			}
 		}
 		ms.CriticalDepth = r.num(m.CriticalDepth, "methods.critical_depth", 0, 1e3)
@@ -655,23 +687,12 @@ func (r *resolver) methods(f *File, in *Inputs) {
 		var lm pile.LayerMethods
 		path := fmt.Sprintf("ground.layers[%d]", i)
 		if l.Shaft != nil {
-			lm.Shaft = r.shaftUnit(l.Shaft, path+".shaft", inst, &lm)
+			r.shaftMethod(l.Shaft.Method, l.Shaft.Params, path+".shaft", path+".shaft.method", in.Pile, &lm)
 		}
 		if l.Tip != nil {
-			lm.Tip = r.tip(l.Tip.Method, l.Tip, path+".tip")
+			lm.Tip = r.tip(l.Tip.Method, l.Tip.Params, path+".tip", path+".tip.method")
 		}
 		ms.Layers = append(ms.Layers, lm)
-	}
-	if ms.ShaftDrained != nil {
-		ms.ShaftDrained = finishBeta(ms.ShaftDrained, in.Pile)
-	}
-	if ms.ShaftUndrained != nil {
-		ms.ShaftUndrained = finishBeta(ms.ShaftUndrained, in.Pile)
-	}
-	for i := range ms.Layers {
-		if ms.Layers[i].Shaft != nil {
-			ms.Layers[i].Shaft = finishBeta(ms.Layers[i].Shaft, in.Pile)
-		}
 	}
 	in.Methods = ms
 }
@@ -727,13 +748,13 @@ func (r *resolver) design(f *File, in *Inputs) {
 			r.add("design.preset", 0, "%q: want aashto-driven or aashto-drilled", d.Preset)
 			l = pile.LRFD{Tip: map[string]float64{}, Shaft: map[string]float64{}, Tension: map[string]float64{}}
 		}
-		for k, v := range r.factorMap(d.Tip, "design.tip", tipIDs) {
+		for k, v := range r.factorMap(d.Tip, "design.tip", bearing.IDs()) {
 			l.Tip[k] = v
 		}
-		for k, v := range r.factorMap(d.Shaft, "design.shaft", shaftIDs) {
+		for k, v := range r.factorMap(d.Shaft, "design.shaft", shaft.ResistanceIDs()) {
 			l.Shaft[k] = v
 		}
-		for k, v := range r.factorMap(d.Uplift, "design.uplift", shaftIDs) {
+		for k, v := range r.factorMap(d.Uplift, "design.uplift", shaft.ResistanceIDs()) {
 			l.Tension[k] = v
 		}
 		if d.Permanent.IsSet() {

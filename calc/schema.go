@@ -2,12 +2,22 @@ package calc
 
 import (
 	"encoding/json"
+	"maps"
+	"math"
 	"reflect"
 	"regexp"
+	"slices"
 	"strconv"
 	"strings"
 
+	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/shaft"
 	"github.com/qultgeo/qult/units"
+)
+
+var (
+	tipChoiceT   = reflect.TypeOf(TipChoice{})
+	shaftChoiceT = reflect.TypeOf(ShaftChoice{})
 )
 
 // SchemaID is the identifier of the calc file's JSON Schema.
@@ -27,21 +37,172 @@ var enums = map[string][]string{
 	"annex":        {"recommended", "uk"},
 	"self_weight":  {"ignored", "net", "gross"},
 	"k0":           {"jaky", "ocr"},
-	"sand_class":   {"api-medium-dense-sand-silt", "api-medium-dense-sand", "api-dense-sand", "api-very-dense-sand"},
+	// The methods chosen for the whole pile: those that need no key (a
+	// given value belongs to a layer); shaft_drained takes a method that
+	// gives fs at each depth, shaft_undrained also the λ method.
+	"tip_drained":     pileTipIDs(),
+	"tip_undrained":   pileTipIDs(),
+	"shaft_drained":   pileShaftIDs(false),
+	"shaft_undrained": pileShaftIDs(true),
+}
+
+// factorKeys lists the keys of the resistance-factor maps of design: the
+// methods of the catalogues and "*" for any other.
+var factorKeys = map[string][]string{
+	"tip":    append(bearing.IDs(), "*"),
+	"shaft":  append(shaft.ResistanceIDs(), "*"),
+	"uplift": append(shaft.ResistanceIDs(), "*"),
+}
+
+func needsNothing(ps []param) bool {
+	for _, p := range ps {
+		if p.required {
+			return false
+		}
+	}
+	return true
+}
+
+func pileTipIDs() []string {
+	var ids []string
+	for _, d := range bearing.Methods() {
+		if needsNothing(tipParams(d)) {
+			ids = append(ids, d.ID)
+		}
+	}
+	return ids
+}
+
+func pileShaftIDs(lambda bool) []string {
+	var ids []string
+	for _, d := range shaft.Methods() {
+		if needsNothing(shaftParams(d)) && (d.Kind == shaft.PointMethod || lambda && d.Kind == shaft.WholePile) {
+			ids = append(ids, d.ID)
+		}
+	}
+	return ids
+}
+
+// entry is a catalogue method as the schema sees it.
+type entry struct {
+	id     string
+	params []param
+}
+
+func tipEntries() []entry {
+	var es []entry
+	for _, d := range bearing.Methods() {
+		es = append(es, entry{d.ID, tipParams(d)})
+	}
+	return es
+}
+
+func shaftEntries() []entry {
+	var es []entry
+	for _, d := range shaft.Methods() {
+		es = append(es, entry{d.ID, shaftParams(d)})
+	}
+	return es
+}
+
+// paramSchema is the schema of one method parameter.
+func paramSchema(p param, doc string) map[string]any {
+	if p.dim == "word" {
+		return map[string]any{"type": "string", "enum": p.words, "description": doc}
+	}
+	lo := strconv.FormatFloat(p.min, 'g', -1, 64)
+	hi := ""
+	if !math.IsInf(p.max, 1) {
+		hi = strconv.FormatFloat(p.max, 'g', -1, 64)
+	}
+	m := fieldSchema(p.dim+","+lo+","+hi, doc)
+	if p.minOpen {
+		num := m["oneOf"].([]any)[0].(map[string]any)
+		delete(num, "minimum")
+		num["exclusiveMinimum"] = p.min
+	}
+	return m
+}
+
+// choiceSchema is the schema of a layer's tip or shaft: method, one of the
+// catalogue's identifiers, and beside it only the keys that method reads,
+// with their ranges; required keys required, and at most one key of a
+// group.
+func choiceSchema(what string, es []entry) map[string]any {
+	var ids []string
+	union := map[string]param{}
+	readBy := map[string][]string{}
+	var order []string
+	for _, e := range es {
+		ids = append(ids, e.id)
+		for _, p := range e.params {
+			u, seen := union[p.key]
+			if !seen {
+				order = append(order, p.key)
+				u = p
+			} else {
+				// The loosest range of the methods that read the key.
+				u.minOpen = u.minOpen && p.minOpen && p.min == u.min
+				u.min, u.max = math.Min(u.min, p.min), math.Max(u.max, p.max)
+			}
+			union[p.key] = u
+			readBy[p.key] = append(readBy[p.key], e.id)
+		}
+	}
+	props := map[string]any{"method": map[string]any{"type": "string", "enum": ids,
+		"description": "The " + what + " method: an identifier of the catalogue; the other keys are the values it reads."}}
+	for _, k := range order {
+		u := union[k]
+		props[k] = paramSchema(u, u.meaning+" (read by "+strings.Join(readBy[k], ", ")+")")
+	}
+	var cases []any
+	for _, e := range es {
+		then := map[string]any{"properties": map[string]any{"method": true}, "additionalProperties": false}
+		var req []string
+		groups := map[string][]string{}
+		for _, p := range e.params {
+			then["properties"].(map[string]any)[p.key] = paramSchema(p, p.meaning)
+			if p.required {
+				req = append(req, p.key)
+			}
+			if p.group != "" {
+				groups[p.group] = append(groups[p.group], p.key)
+			}
+		}
+		if len(req) > 0 {
+			then["required"] = req
+		}
+		var nots []any
+		for _, g := range slices.Sorted(maps.Keys(groups)) {
+			keys := groups[g]
+			for i := range keys {
+				for j := i + 1; j < len(keys); j++ {
+					nots = append(nots, map[string]any{"not": map[string]any{"required": []string{keys[i], keys[j]}}})
+				}
+			}
+		}
+		if len(nots) > 0 {
+			then["allOf"] = nots
+		}
+		cases = append(cases, map[string]any{
+			"if":   map[string]any{"properties": map[string]any{"method": map[string]any{"const": e.id}}, "required": []string{"method"}},
+			"then": then,
+		})
+	}
+	return map[string]any{"type": "object", "properties": props, "additionalProperties": false,
+		"required": []string{"method"}, "allOf": cases}
 }
 
 // required lists the keys each struct needs.
 var required = map[reflect.Type][]string{
-	reflect.TypeOf(File{}):        {"ground", "pile"},
-	reflect.TypeOf(Ground{}):      {"water_depth", "layers"},
-	reflect.TypeOf(Layer{}):       {"drainage"},
-	reflect.TypeOf(Pile{}):        {"section", "length", "installation"},
-	reflect.TypeOf(Section{}):     {"shape"},
-	reflect.TypeOf(ShaftChoice{}): {"method"},
-	reflect.TypeOf(TipChoice{}):   {"method"},
-	reflect.TypeOf(Design{}):      {"basis"},
-	reflect.TypeOf(Zone{}):        {"top", "bottom"},
-	reflect.TypeOf(PorePoint{}):   {"depth", "pressure"},
+	reflect.TypeOf(File{}):      {"ground", "pile"},
+	reflect.TypeOf(Ground{}):    {"water_depth", "layers"},
+	reflect.TypeOf(Layer{}):     {"drainage"},
+	reflect.TypeOf(Pile{}):      {"section", "length", "installation"},
+	reflect.TypeOf(Section{}):   {"shape"},
+	reflect.TypeOf(Design{}):    {"basis"},
+	reflect.TypeOf(Zone{}):      {"top", "bottom"},
+	reflect.TypeOf(PorePoint{}): {"depth", "pressure"},
 }
 
 var quantity = map[string]any{
@@ -122,7 +283,10 @@ func fieldSchema(tag, doc string) map[string]any {
 		if kind == "length-or-none" {
 			str["pattern"] = `^ *(none|[-+]?(` + numberRE + `)([eE][-+]?[0-9]+)? *(` + unitAlternation(d) + `)?) *$`
 		}
-		if kind == "angle" && hi != "" {
+		if kind == "angle" && hi != "" && !angleBoundable(hi) {
+			// Degrees bounded on the bare number only; a string by form.
+			str["pattern"] = `^ *` + sign + `(` + numberRE + `)([eE][-+]?[0-9]+)? *(deg|°|rad)? *$`
+		} else if kind == "angle" && hi != "" {
 			// Degrees bounded as the bare number is; radians only by form.
 			str["pattern"] = `^ *\+?(0*(` + belowRE(int(atof(hi))) + `)(\.[0-9]*)?|0*` + hi + `(\.0*)?|\.[0-9]+) *(deg|°)? *$|^ *\+?(` + numberRE + `) *rad *$`
 		} else {
@@ -164,6 +328,12 @@ func belowRE(n int) string {
 	return re
 }
 
+// angleBoundable reports whether belowRE can write the bound hi (degrees).
+func angleBoundable(hi string) bool {
+	n := atof(hi)
+	return n == math.Trunc(n) && int(n)%10 == 0 && n >= 20 && n <= 990
+}
+
 func atof(s string) float64 {
 	x, err := strconv.ParseFloat(s, 64)
 	if err != nil {
@@ -194,6 +364,10 @@ func schemaOf(t reflect.Type, key string) map[string]any {
 		return map[string]any{"oneOf": []any{copyMap(quantity), obj}}
 	case t == loadT: // permanent and variable parts only: a bare load is refused
 		return object(t)
+	case t == tipChoiceT:
+		return choiceSchema("tip", tipEntries())
+	case t == shaftChoiceT:
+		return choiceSchema("shaft", shaftEntries())
 	}
 	switch t.Kind() {
 	case reflect.Struct:
@@ -225,7 +399,11 @@ func object(t reflect.Type) map[string]any {
 			continue
 		}
 		if q := f.Tag.Get("q"); q != "" {
-			props[name] = fieldSchema(q, f.Tag.Get("doc"))
+			fs := fieldSchema(q, f.Tag.Get("doc"))
+			if keys, ok := factorKeys[name]; ok && strings.HasPrefix(q, "factormap") {
+				fs["propertyNames"] = map[string]any{"enum": keys}
+			}
+			props[name] = fs
 			continue
 		}
 		props[name] = schemaOf(f.Type, name)

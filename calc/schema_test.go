@@ -109,6 +109,27 @@ func TestSchemaAcceptsExamples(t *testing.T) {
 	if err := sch.Validate(instance(t, []byte(base))); err != nil {
 		t.Errorf("base file: %v", err)
 	}
+	// Method choices the decoder accepts, the schema accepts too.
+	for _, add := range []string{
+		"tip: {method: given-nq, nq: 40, nc: 12, limit: 9 MPa}",
+		"tip: {method: janbu, eta: 75 deg}",
+		"shaft: {method: beta, k0: ocr, delta: 28 deg, limit: 90 kPa}",
+		"shaft: {method: beta, k_over_kp: 0.2, delta_over_phi: 0.75}",
+		"shaft: {method: beta-api, sand_class: api-dense-sand}",
+		"shaft: {method: none}",
+	} {
+		src := strings.Replace(base, "friction_angle: 34 deg", "friction_angle: 34 deg\n      "+add, 1)
+		if err := sch.Validate(instance(t, []byte(src))); err != nil {
+			t.Errorf("%s: %v", add, err)
+		}
+		if _, err := Parse([]byte(src)); err != nil {
+			t.Errorf("%s: refused by the decoder: %v", add, err)
+		}
+	}
+	src := strings.Replace(base, "pile:", "methods: {tip_drained: janbu, shaft_drained: beta-burland, shaft_undrained: lambda}\ndesign: {basis: lrfd, tip: {janbu: 0.4}, shaft: {lambda: 0.4, \"*\": 0.3}, uplift: {beta-burland: 0.3}}\npile:", 1)
+	if err := sch.Validate(instance(t, []byte(src))); err != nil {
+		t.Errorf("pile methods and factor keys: %v", err)
+	}
 }
 
 // TestSchemaRefuses: files with a wrong dimension, a value out of range, an
@@ -147,6 +168,28 @@ func TestSchemaRefuses(t *testing.T) {
 		{"profiles fractional", "pile:", "design: {basis: en1997, approach: DA1, profiles: 2.5}\npile:"},
 		{"unknown approach", "pile:", "design: {basis: en1997, approach: DA4}\npile:"},
 		{"unknown self weight", "pile:", "methods: {self_weight: heavy}\npile:"},
+		// The catalogues of methods: identifiers, and the keys each reads.
+		{"unknown tip method", "pile:", "methods: {tip_drained: guesswork}\npile:"},
+		{"unknown shaft method", "pile:", "methods: {shaft_undrained: magic}\npile:"},
+		{"none for every layer", "pile:", "methods: {shaft_undrained: none}\npile:"},
+		{"lambda for drained layers", "pile:", "methods: {shaft_drained: lambda}\npile:"},
+		{"given method for every layer", "pile:", "methods: {tip_drained: given-nq}\npile:"},
+		{"unknown layer tip method", "friction_angle: 34 deg", "friction_angle: 34 deg\n      tip: {method: guesswork}"},
+		{"layer tip without method", "friction_angle: 34 deg", "friction_angle: 34 deg\n      tip: {nq: 40}"},
+		{"nq on meyerhof", "friction_angle: 34 deg", "friction_angle: 34 deg\n      tip: {method: meyerhof, nq: 40}"},
+		{"eta on given-nq", "friction_angle: 34 deg", "friction_angle: 34 deg\n      tip: {method: given-nq, nq: 40, eta: 90}"},
+		{"given-nq without nq", "friction_angle: 34 deg", "friction_angle: 34 deg\n      tip: {method: given-nq, nc: 10}"},
+		{"given-nc nc over 100", "friction_angle: 34 deg", "friction_angle: 34 deg\n      tip: {method: given-nc, nc: 150}"},
+		{"janbu eta 30", "friction_angle: 34 deg", "friction_angle: 34 deg\n      tip: {method: janbu, eta: 30}"},
+		{"k on beta-given", "friction_angle: 34 deg", "friction_angle: 34 deg\n      shaft: {method: beta-given, beta: 0.3, k: 1}"},
+		{"limit on lambda", "friction_angle: 34 deg", "friction_angle: 34 deg\n      shaft: {method: lambda, limit: 50 kPa}"},
+		{"two K keys", "friction_angle: 34 deg", "friction_angle: 34 deg\n      shaft: {method: beta, k: 1, k0: jaky}"},
+		{"two δ keys", "friction_angle: 34 deg", "friction_angle: 34 deg\n      shaft: {method: beta, delta: 25, delta_over_phi: 0.8}"},
+		{"unknown k0 rule", "friction_angle: 34 deg", "friction_angle: 34 deg\n      shaft: {method: beta, k0: rankine}"},
+		{"beta-api without class", "friction_angle: 34 deg", "friction_angle: 34 deg\n      shaft: {method: beta-api}"},
+		{"k_over_k0 zero", "friction_angle: 34 deg", "friction_angle: 34 deg\n      shaft: {method: beta, k_over_k0: 0}"},
+		{"misspelt factor key", "pile:", "design: {basis: lrfd, shaft: {betta: 0.4}}\npile:"},
+		{"factor key none", "pile:", "design: {basis: lrfd, uplift: {none: 0.4}}\npile:"},
 	}
 	for _, c := range cases {
 		src := strings.Replace(base, c.from, c.to, 1)

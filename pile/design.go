@@ -490,27 +490,13 @@ func (l LRFD) ID() string {
 func (l LRFD) Refs() []cite.Ref { return l.Sources }
 
 // knownTips and knownShafts are the method identifiers a factor map may
-// name (a shaft method capped by a limit, "beta-api+limit-api", is found
-// under its method, the part before "+").
+// name: those of the catalogues of packages bearing and shaft (a shaft
+// method capped by a limit, "beta-api+limit-given", is found under its
+// method, the part before "+"). "none" gives no resistance and takes no
+// factor.
 var (
-	knownTips = func() []string {
-		var ids []string
-		for _, t := range []bearing.Tip{bearing.Meyerhof{}, bearing.Berezantzev{}, bearing.Janbu{}, bearing.Vesic{},
-			bearing.VesicUndrained{}, bearing.APISand{Class: 1}, bearing.APISand{Class: 2}, bearing.APISand{Class: 3},
-			bearing.APISand{Class: 4}, bearing.ShaftSand{}, bearing.Skempton{}, bearing.GivenNq{}, bearing.GivenNc{}} {
-			ids = append(ids, t.ID())
-		}
-		return ids
-	}()
-	knownShafts = func() []string {
-		ids := []string{lambdaID}
-		for _, s := range []shaft.Unit{shaft.Beta{}, shaft.BetaGiven{}, shaft.Burland{}, shaft.DrilledSand{},
-			shaft.DrilledSandK0{}, shaft.APIBeta{}, shaft.AlphaAPI{}, shaft.AlphaChart{}, shaft.AlphaDrilled{},
-			shaft.AlphaGiven{}} {
-			ids = append(ids, s.ID())
-		}
-		return ids
-	}()
+	knownTips   = bearing.IDs()
+	knownShafts = shaft.ResistanceIDs()
 )
 
 // checkFactorMap checks a map of resistance factors: every key a known

@@ -39,6 +39,35 @@
 //	tension-poisson    TensionPoisson Qt/Qc = [1 − 0.2·log10(100/(L/D))]·(1 − 8η + 25η²) (De Nicola & Randolph 1993)
 //	tension-given      TensionGiven   Qt/Qc given
 //
+// # The catalogue
+//
+// Methods returns the methods a calc file can name as data, one
+// Descriptor per identifier: beta, beta-given, beta-burland,
+// beta-drilled-sand, beta-drilled-k0, beta-api, alpha-api, alpha-chart,
+// alpha-drilled, alpha-given, lambda and none (None: no shaft resistance
+// in the layer). Each gives its drainage class, its Kind (a point method,
+// the whole-pile λ method, or no resistance), its scope, the keys it reads
+// beside method: (Param: key, dimension, range, group, default, meaning,
+// required or not), its Equation, Valid and Refs, and New, which builds it
+// from the values given and the pile's installation and surface (Values)
+// into a Choice. Lookup finds an entry, IDs lists them, ResistanceIDs
+// those that give resistance (the keys of a table of resistance factors).
+// Package calc and its JSON Schema read this table, so a method is added
+// by one entry. The keys:
+//
+//	beta          K by at most one of k (0 to 10), k_over_k0 (above 0 to 3),
+//	              k_over_kp (above 0 to 1), k0 (jaky or ocr); default K/K0 by
+//	              installation. δ by at most one of delta (0 to 50 deg),
+//	              delta_over_phi (above 0 to 1); default δ/φ′ by surface.
+//	beta-given    beta (0 to 3, required)
+//	beta-api      sand_class (an API class, required)
+//	alpha-given   alpha (0 to 1.5, required)
+//	lambda        lambda (above 0 to 1; default: the λ–L table)
+//	none          no key
+//
+// Every point method (all but lambda and none) also reads limit (above 0
+// to 5 MPa), which caps it (Capped with LimitGiven).
+//
 // LambdaMeans forms the λ method's σ̄′v and s̄u from layer pieces as Das
 // does (areas of the σ′v diagram and su-weighted thicknesses over their
 // total thickness), and Lambda.Layered gives fav and the friction per unit

@@ -134,6 +134,10 @@ var badCases = []badCase{
 	{file: "102-load-as-stress", want: []string{"loads.compression.permanent (line 25)", "a stress"}},
 	{file: "103-variable-load-negative", want: []string{"loads.compression.variable (line 25)", "outside 0 to"}},
 	{file: "104-missing-factor-names-key", want: []string{"design.shaft.beta (line 22)", "give one as design.shaft.beta"}},
+	{file: "105-nq-on-meyerhof-tip", want: []string{"ground.layers[1].tip.nq (line 17)", "meyerhof does not read nq; it reads: (none)"}},
+	{file: "106-k-on-drilled-sand-shaft", want: []string{"ground.layers[1].shaft.k_over_k0 (line 17)", "beta-drilled-sand does not read k_over_k0; it reads: limit"}},
+	{file: "107-unknown-layer-tip-method", want: []string{"ground.layers[1].tip.method (line 17)", `"meyerhoff" is not a tip method`, "meyerhof, vesic"}},
+	{file: "108-limit-on-lambda", want: []string{"ground.layers[1].shaft.limit (line 17)", "lambda does not read limit; it reads: lambda"}},
 }
 
 const badTimeout = 5 * time.Second

@@ -471,6 +471,7 @@ func writeFactors(b *bytes.Buffer, format string, rows []bearing.Row, sys units.
 			Irr       *json.Number `json:"irr,omitempty"`
 			Unlimited *json.Number `json:"qp_unlimited,omitempty"`
 			Limit     *json.Number `json:"limit,omitempty"`
+			Reduction *json.Number `json:"reduction,omitempty"`
 			Qp        *json.Number `json:"qp,omitempty"`
 			Flags     string       `json:"flags,omitempty"`
 			Error     string       `json:"error,omitempty"`
@@ -501,6 +502,9 @@ func writeFactors(b *bytes.Buffer, format string, rows []bearing.Row, sys units.
 				if res.Limit != 0 {
 					j.Limit = p(stress(res.Limit))
 				}
+				if res.Reduction != 0 {
+					j.Reduction = p(res.Reduction)
+				}
 				j.Flags = res.Flags.String()
 			}
 			out.Methods = append(out.Methods, j)
@@ -522,7 +526,16 @@ func writeFactors(b *bytes.Buffer, format string, rows []bearing.Row, sys units.
 			continue
 		}
 		res := r.Result
-		t.add(r.ID, opt(res.Nq), opt(res.Nc), opt(res.Irr), sig(stress(res.Unlimited), 4), opt(stress(res.Limit)), sig(stress(res.Qp), 4), res.Flags.String())
+		note := res.Flags.String()
+		if res.Reduction != 0 {
+			// The bored-pile and large-base rules scale qp after the limit.
+			red := "qp × " + sig(res.Reduction, 4) + " (bored-pile or large-base rule)"
+			if note != "" {
+				red += "; " + note
+			}
+			note = red
+		}
+		t.add(r.ID, opt(res.Nq), opt(res.Nc), opt(res.Irr), sig(stress(res.Unlimited), 4), opt(stress(res.Limit)), sig(stress(res.Qp), 4), note)
 	}
 	if format == "text" && len(rows) == 0 {
 		b.WriteString("no method applies to the values given\n")
