@@ -10,8 +10,10 @@ package calc
 // the source's reading or rounding tolerance stated there.
 
 import (
-	"math"
 	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
 )
 
 func TestPublishedWithDefaults(t *testing.T) {
@@ -106,14 +108,9 @@ pile:
 	cases[1].file = cases[0].file
 	for _, c := range cases {
 		r, err := Parse([]byte(c.file))
-		if err != nil {
-			t.Fatalf("%s: %v", c.name, err)
-		}
+		require.NoError(t, err, c.name)
 		got := c.get(r)
-		if d := math.Abs(got-c.want) / c.want; d > c.tol {
-			t.Errorf("%s: %.4g, want %.4g within %.1f %% (%s); off by %.2f %%", c.name, got, c.want, 100*c.tol, c.why, 100*d)
-		} else {
-			t.Logf("%s: %.4g against %.4g (%s): %+.2f %%", c.name, got, c.want, c.why, 100*(got-c.want)/c.want)
-		}
+		assert.InEpsilon(t, c.want, got, c.tol, "%s: %s (Das, Principles of Foundation Engineering)", c.name, c.why)
+		t.Logf("%s: %.4g against %.4g (%s): %+.2f %%", c.name, got, c.want, c.why, 100*(got-c.want)/c.want)
 	}
 }
