@@ -293,3 +293,31 @@ func TestProblemsAcrossStages(t *testing.T) {
 		t.Errorf("problems %v, want loads.compression and pile.length together", paths)
 	}
 }
+
+// TestUnusualInputWarns: values accepted but unusual (common practice, no
+// published limit) are warnings, not errors: a driven 3 m solid pile, a
+// 0.1 m pile, φ′ of 48°.
+func TestUnusualInputWarns(t *testing.T) {
+	for _, c := range []struct{ from, to, want string }{
+		{"diameter: 0.6 m", "diameter: 3 m", "driven circle 3 m wide"},
+		{"diameter: 0.6 m", "diameter: 0.1 m", "under 0.15 m"},
+		{"friction_angle: 34 deg", "friction_angle: 48 deg", "over 45°"},
+	} {
+		src := strings.Replace(base, c.from, c.to, 1)
+		if src == base {
+			t.Fatalf("%q not in the base file", c.from)
+		}
+		src += "methods: {clamp_charts: true}\n" // Meyerhof's chart stops at 45°
+		r, err := Parse([]byte(src))
+		if err != nil {
+			t.Fatalf("%s: %v", c.to, err)
+		}
+		found := false
+		for _, w := range r.Warnings {
+			found = found || strings.Contains(w, c.want)
+		}
+		if !found {
+			t.Errorf("%s: no warning containing %q in %q", c.to, c.want, r.Warnings)
+		}
+	}
+}

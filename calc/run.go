@@ -165,6 +165,7 @@ func warnings(r *Result) []string {
 		}
 	}
 	w = append(w, r.Breakdown.Warnings...)
+	w = append(w, unusual(r)...)
 	if r.Design != nil && !r.Design.Pass {
 		w = append(w, "the design check fails: utilisation above 1")
 	}
@@ -181,6 +182,36 @@ func layerMethods(prof *profile.Profile, b pile.Breakdown) []LayerMethods {
 	}
 	out[b.Tip.Layer].Tip = b.Tip.Method
 	return out
+}
+
+// unusual returns warnings for values that are accepted but unusual enough
+// that a slip of units is the likelier story (common practice, not a
+// published limit): the engineer confirms or corrects them.
+func unusual(r *Result) []string {
+	var w []string
+	p := r.Pile
+	size := p.Section.Size()
+	switch {
+	case p.Installation.Driven() && p.Section.Shape != pile.OpenPipe && size > 2*units.Metre:
+		w = append(w, fmt.Sprintf("unusual input: a driven %s %v wide (driven piles other than open pipes are rarely over 2 m); check the section's units", p.Section.Shape, size))
+	case size > 0 && size < 0.15*units.Metre:
+		w = append(w, fmt.Sprintf("unusual input: a pile %v wide (under 0.15 m); check the section's units", size))
+	}
+	if p.Length > 150*units.Metre {
+		w = append(w, fmt.Sprintf("unusual input: a pile %v long (over 150 m); check the length's units", p.Length))
+	}
+	if size > 0 && float64(p.Length/size) > 200 {
+		w = append(w, fmt.Sprintf("unusual input: a slenderness L/D of %.0f (over 200); check the length and the section", float64(p.Length/size)))
+	}
+	for _, l := range r.Layers {
+		if l.Drainage == profile.Drained && l.Phi > 45*units.Degree {
+			w = append(w, fmt.Sprintf("unusual input: layer %q has φ′ = %.4g° (over 45°; most charts stop at 45°)", l.Name, l.Phi.Degrees()))
+		}
+		if l.HasSu && max(l.SuTop, l.SuBottom) > 1000*units.Kilopascal {
+			w = append(w, fmt.Sprintf("unusual input: layer %q has su up to %v (over 1 MPa: an intermediate geomaterial rather than a clay)", l.Name, max(l.SuTop, l.SuBottom)))
+		}
+	}
+	return w
 }
 
 // alsoLibrary adds to the problems of resolution those the library finds
