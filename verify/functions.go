@@ -55,7 +55,10 @@ func init() {
 		"bearing.Skempton.Tip":       runTip(func(*args) bearing.Tip { return bearing.Skempton{} }),
 		"bearing.ShaftSand.Tip":      runTip(func(*args) bearing.Tip { return bearing.ShaftSand{} }),
 		"bearing.BoredSand.Tip":      runTip(func(*args) bearing.Tip { return bearing.BoredSand{} }),
-		"bearing.APISand.Tip":        runTip(func(a *args) bearing.Tip { return bearing.APISand{Class: int(a.num("class"))} }),
+		"bearing.GivenNq.Tip": runTip(func(a *args) bearing.Tip {
+			return bearing.GivenNq{Nq: a.num("nq"), Nc: a.optNum("nc", 0), Limit: units.Stress(a.optQty("limit", units.DimStress))}
+		}),
+		"bearing.APISand.Tip": runTip(func(a *args) bearing.Tip { return bearing.APISand{Class: int(a.num("class"))} }),
 
 		"shaft.AlphaAPI.Unit":      runUnit(func(*args) shaft.Unit { return shaft.AlphaAPI{} }),
 		"shaft.AlphaChart.Unit":    runUnit(func(*args) shaft.Unit { return shaft.AlphaChart{} }),
@@ -64,27 +67,40 @@ func init() {
 		"shaft.DrilledSand.Unit":   runUnit(func(*args) shaft.Unit { return shaft.DrilledSand{} }),
 		"shaft.DrilledSandK0.Unit": runUnit(func(*args) shaft.Unit { return shaft.DrilledSandK0{} }),
 		"shaft.Beta.Unit":          runUnit(betaOf),
-		"shaft.KJaky.KOf":          runK(func(*args) shaft.KRule { return shaft.KJaky{} }),
-		"shaft.KMayneKulhawy.KOf":  runK(func(*args) shaft.KRule { return shaft.KMayneKulhawy{} }),
-		"shaft.Surface.Potyondy":   runPotyondy,
-		"shaft.SandClass.API":      runSandClass,
-		"shaft.Lambda.Average":     runLambda,
-		"shaft.LambdaMeans":        runLambdaMeans,
+		"shaft.AlphaGiven.Unit":    runUnit(func(a *args) shaft.Unit { return shaft.AlphaGiven{Alpha: a.num("alpha")} }),
+		"shaft.APIBeta.Unit": runUnit(func(a *args) shaft.Unit {
+			c, err := shaft.ParseSandClass(a.str("class"))
+			if err != nil {
+				a.fail("class", "%v", err)
+			}
+			return shaft.APIBeta{Class: c}
+		}),
+		"shaft.KJaky.KOf":         runK(func(*args) shaft.KRule { return shaft.KJaky{} }),
+		"shaft.KMayneKulhawy.KOf": runK(func(*args) shaft.KRule { return shaft.KMayneKulhawy{} }),
+		"shaft.Surface.Potyondy":  runPotyondy,
+		"shaft.SandClass.API":     runSandClass,
+		"shaft.Lambda.Average":    runLambda,
+		"shaft.LambdaMeans":       runLambdaMeans,
 
-		"pile.Section.GrossArea":      runSection("area"),
-		"pile.Section.OuterPerimeter": runSection("perimeter"),
-		"pile.Analysis.Capacity":      runPile("capacity"),
-		"pile.Analysis.CapacityAt":    runPile("capacity-at"),
-		"pile.Analysis.Breakdown":     runPile("breakdown"),
-		"pile.Analysis.WithDepth":     runPile("with-depth"),
-		"pile.Check":                  runPile("check"),
-		"pile.Xi":                     runXi,
-		"pile.Characteristic":         runCharacteristic(false),
-		"pile.CharacteristicXi":       runCharacteristic(true),
-		"pile.Eurocode7.Cases":        runEN7Cases,
-		"pile.Verify":                 runVerify,
-		"pile.EN1997Recommended":      runEN7Table(func(*args) pile.EN7Factors { return pile.EN1997Recommended() }),
-		"pile.UKAnnex":                runEN7Table(func(a *args) pile.EN7Factors { return pile.UKAnnex(a.optBool("sls_verified")) }),
+		"pile.Section.GrossArea":         runSection("area"),
+		"pile.Section.OuterPerimeter":    runSection("perimeter"),
+		"pile.Analysis.Capacity":         runPile("capacity"),
+		"pile.Analysis.CapacityAt":       runPile("capacity-at"),
+		"pile.Analysis.Breakdown":        runPile("breakdown"),
+		"pile.Analysis.WithDepth":        runPile("with-depth"),
+		"pile.Check":                     runPile("check"),
+		"pile.Xi":                        runXi,
+		"pile.Characteristic":            runCharacteristic(false),
+		"pile.CharacteristicXi":          runCharacteristic(true),
+		"pile.Eurocode7.Cases":           runEN7Cases,
+		"pile.Eurocode7.VerifyProfiles":  runVerifyProfiles,
+		"pile.EN7Factors.Xi":             runAnnexXi,
+		"pile.EN7Factors.Characteristic": runAnnexCharacteristic,
+		"pile.AASHTODrivenPiles":         runAASHTO(pile.AASHTODrivenPiles, pile.DrivenHigh),
+		"pile.AASHTODrilledShafts":       runAASHTO(pile.AASHTODrilledShafts, pile.Bored),
+		"pile.Verify":                    runVerify,
+		"pile.EN1997Recommended":         runEN7Table(func(*args) pile.EN7Factors { return pile.EN1997Recommended() }),
+		"pile.UKAnnex":                   runEN7Table(func(a *args) pile.EN7Factors { return pile.UKAnnex(a.optBool("sls_verified")) }),
 
 		"settle.Iws":                 runIws,
 		"settle.Vesic.Settlement":    runVesicSettlement,
@@ -745,4 +761,98 @@ func runRandolphWroth(a *args) (values, error) {
 	return values{"xi": num(r.Xi), "rho": num(r.Rho), "lambda": num(r.Lambda), "zeta": num(r.Zeta),
 		"mu_l": num(r.MuL), "head_settlement": length(wt), "base_settlement": length(wt * units.Length(r.BaseRatio)),
 		"tip_share": num(r.TipShare)}, nil
+}
+
+// annexOf reads the annex: recommended (EN 1997-1 Annex A, the default)
+// or uk.
+func annexOf(a *args) pile.EN7Factors {
+	switch s := a.optStr("annex", "recommended"); s {
+	case "recommended":
+		return pile.EN1997Recommended()
+	case "uk":
+		return pile.UKAnnex(a.optBool("sls_verified"))
+	default:
+		a.fail("annex", "%q: want recommended or uk", s)
+	}
+	return pile.EN1997Recommended()
+}
+
+func runAnnexXi(a *args) (values, error) {
+	f := annexOf(a)
+	n := a.num("profiles")
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	x3, x4, err := f.Xi(int(n))
+	return values{"xi3": num(x3), "xi4": num(x4)}, err
+}
+
+func runAnnexCharacteristic(a *args) (values, error) {
+	f := annexOf(a)
+	cal := forces(a, "resistances")
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	r, err := f.Characteristic(cal)
+	return values{"value": force(r)}, err
+}
+
+// runVerifyProfiles runs the resistances of several ground profiles
+// (taken as shaft resistance) through a Eurocode 7 basis and gives the
+// characteristic resistance and the design resistance of the named case.
+func runVerifyProfiles(a *args) (values, error) {
+	ap, err1 := pile.ParseApproach(a.str("approach"))
+	inst, err2 := pile.ParseInstallation(a.str("installation"))
+	e := pile.Eurocode7{Approach: ap, Total: a.optBool("total")}
+	var cal []pile.ProfileResistance
+	for _, r := range forces(a, "resistances") {
+		cal = append(cal, pile.ProfileResistance{Shaft: r})
+	}
+	name := a.str("case")
+	if err := joinErr(a.done(), joinErr(err1, err2)); err != nil {
+		return nil, err
+	}
+	d, err := e.VerifyProfiles(inst, cal, 0, pile.Loads{})
+	if err != nil {
+		return nil, err
+	}
+	v := values{"characteristic": force(d.Characteristic.Compression)}
+	for _, c := range d.Cases {
+		if c.Case == name {
+			v["rd"] = force(c.CompressionRd)
+		}
+	}
+	return v, nil
+}
+
+// runAASHTO reads one resistance factor of an AASHTO preset: kind (tip,
+// shaft or tension), method, with (for a tip calibrated with a shaft
+// method) and drainage.
+func runAASHTO(preset func() pile.LRFD, inst pile.Installation) runner {
+	return func(a *args) (values, error) {
+		kind, method, with := a.str("kind"), a.str("method"), a.optStr("with", "")
+		var cls profile.Drainage
+		switch d := a.str("drainage"); d {
+		case "drained":
+			cls = profile.Drained
+		case "undrained":
+			cls = profile.Undrained
+		default:
+			a.fail("drainage", "%q: want drained or undrained", d)
+		}
+		if err := a.done(); err != nil {
+			return nil, err
+		}
+		cs, err := preset().Cases(inst)
+		if err != nil {
+			return nil, err
+		}
+		for _, r := range cs[0].Rows {
+			if r.Kind.String() == kind && r.Method == method && (r.With == "" || r.With == with) &&
+				(r.Class == profile.DrainageUnset || r.Class == cls) {
+				return values{"factor": num(r.Value)}, nil
+			}
+		}
+		return nil, fmt.Errorf("no %s factor for %s (with %q) in %s layers", kind, method, with, cls)
+	}
 }
