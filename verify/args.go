@@ -110,7 +110,7 @@ func (a *args) toQty(key string, v any, d units.Dimension) float64 {
 		return 0
 	}
 	if q.Dim != d {
-		a.fail(key, "%q is a %v, want a %v", s, q.Dim, d)
+		a.fail(key, "%q has the dimension %v, want %v", s, q.Dim, d)
 		return 0
 	}
 	return q.Value

@@ -629,11 +629,11 @@ func en7Case(a *args) (pile.Case, error) {
 	inst, err2 := pile.ParseInstallation(a.str("installation"))
 	e := pile.Eurocode7{Approach: ap, Total: a.optBool("total"), Profiles: int(a.optNum("profiles", 0))}
 	name := a.str("case")
-	if err := joinErr(joinErr(err1, err2), nil); err != nil {
+	if err := joinErr(err1, err2); err != nil {
 		return pile.Case{}, err
 	}
 	if len(a.errs) > 0 {
-		return pile.Case{}, nil
+		return pile.Case{}, nil // reported by the caller's a.done()
 	}
 	cs, err := e.Cases(inst)
 	if err != nil {

@@ -193,3 +193,28 @@ func TestDeviation(t *testing.T) {
 		t.Errorf("relative: deviation %g pass %v, want -0.047619 and a pass", o.Deviation, o.Pass)
 	}
 }
+
+// TestInputErrors: a bad input names its key and fails the case, never a
+// panic or a silent default.
+func TestInputErrors(t *testing.T) {
+	for _, c := range []struct {
+		fn   string
+		in   map[string]any
+		want string
+	}{
+		{"bearing.PrandtlNq", map[string]any{"phi": 30}, "inputs.phi"},
+		{"bearing.PrandtlNq", map[string]any{}, "inputs.phi: missing"},
+		{"bearing.PrandtlNq", map[string]any{"phi": "30 kPa"}, "dimension stress, want angle"},
+		{"bearing.VesicNsigma", map[string]any{"phi": "30 deg", "irr": "many"}, "inputs.irr"},
+		{"profile.Profile.StressesAt", map[string]any{"z": "1 m", "ground": map[string]any{"water_depth": "1 m",
+			"layers": []any{map[string]any{"thickness": "2 m", "drainage": "wet"}}}}, "inputs.ground.layers[0].drainage"},
+		{"pile.Analysis.Capacity", map[string]any{"calc": "title: x\n"}, "pile"},
+		{"pile.Eurocode7.Cases", map[string]any{"approach": "DA9", "installation": "bored", "case": "DA1-1"}, "DA9"},
+		{"pile.Eurocode7.Cases", map[string]any{"approach": "DA1", "installation": "bored", "case": "DA7"}, "DA7"},
+	} {
+		o := runCase(Case{Function: c.fn, Inputs: c.in, Quantity: "value", Expected: 1, Unit: "-", Tolerance: Tolerance{Relative: 0.1}})
+		if o.Pass || o.Err == nil || !strings.Contains(o.Err.Error(), c.want) {
+			t.Errorf("%s %v: pass %v, err %v; want an error naming %q", c.fn, c.in, o.Pass, o.Err, c.want)
+		}
+	}
+}
