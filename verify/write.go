@@ -50,7 +50,8 @@ func (r Record) Write(w io.Writer, format string) error {
 	return err
 }
 
-// fmtNum prints x to six significant digits.
+// fmtNum prints a computed value to six significant digits, so that the
+// printed record is the same on every machine.
 func fmtNum(x float64) string {
 	if math.IsNaN(x) || math.IsInf(x, 0) {
 		return "—"
@@ -58,20 +59,29 @@ func fmtNum(x float64) string {
 	return strconv.FormatFloat(x, 'g', 6, 64)
 }
 
+// fmtExpected prints an expected value as the catalogue writes it.
+func fmtExpected(x float64) string { return strconv.FormatFloat(x, 'g', -1, 64) }
+
 // deviation prints the outcome's deviation: a percentage for a relative
 // tolerance, a value in the case's unit for an absolute one.
 func (o Outcome) deviation() string {
 	if math.IsNaN(o.Deviation) {
 		return "—"
 	}
+	d := o.Deviation
+	// Deviations at the level of floating-point rounding print as 0, so
+	// that the record reads the same on every machine.
+	if math.Abs(d) < 1e-9*max(1, math.Abs(o.Expected)) {
+		d = 0
+	}
 	if o.Tolerance.Relative > 0 {
-		return strconv.FormatFloat(100*o.Deviation, 'f', 3, 64) + " %"
+		return strconv.FormatFloat(100*d, 'g', 3, 64) + " %"
 	}
 	u := ""
 	if o.Unit != "-" {
 		u = " " + o.Unit
 	}
-	return fmtNum(o.Deviation) + u
+	return strconv.FormatFloat(d, 'g', 3, 64) + u
 }
 
 func (o Outcome) result() string {
@@ -95,7 +105,7 @@ func (r Record) text(b *bytes.Buffer) {
 	header := []string{"case", "quantity", "expected", "computed", "unit", "deviation", "tolerance", "result"}
 	rows := [][]string{}
 	for _, o := range r.Outcomes {
-		rows = append(rows, []string{o.ID, o.Quantity, fmtNum(o.Expected), fmtNum(o.Computed), o.Unit,
+		rows = append(rows, []string{o.ID, o.Quantity, fmtExpected(o.Expected), fmtNum(o.Computed), o.Unit,
 			o.deviation(), o.Tolerance.String(o.Unit), o.result()})
 	}
 	w := make([]int, len(header))
@@ -163,7 +173,7 @@ func (r Record) markdown(b *bytes.Buffer) {
 			src += "; error: " + o.Err.Error()
 		}
 		fmt.Fprintf(b, "| %s | %s | %s | %s | %s | %s | %s | %s | %s | %s |\n", mdCell(o.ID), mdCell(o.Function),
-			mdCell(o.Quantity), fmtNum(o.Expected), fmtNum(o.Computed), mdCell(o.Unit), o.deviation(),
+			mdCell(o.Quantity), fmtExpected(o.Expected), fmtNum(o.Computed), mdCell(o.Unit), o.deviation(),
 			mdCell(o.Tolerance.String(o.Unit)), o.result(), mdCell(src))
 	}
 	b.WriteString("\n## Cautions\n\n")
@@ -270,7 +280,7 @@ func (r Record) html(b *bytes.Buffer) error {
 		if len(ts) == 0 || ts[len(ts)-1].Name != o.Topic {
 			ts = append(ts, topic{Name: o.Topic})
 		}
-		rw := row{ID: o.ID, Function: o.Function, Quantity: o.Quantity, Expected: fmtNum(o.Expected),
+		rw := row{ID: o.ID, Function: o.Function, Quantity: o.Quantity, Expected: fmtExpected(o.Expected),
 			Computed: fmtNum(o.Computed), Unit: o.Unit, Deviation: o.deviation(), Tolerance: o.Tolerance.String(o.Unit),
 			Result: o.result(), Source: o.sourceLine(), Pass: o.Pass}
 		if o.Err != nil {
