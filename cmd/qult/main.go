@@ -12,6 +12,7 @@
 //	qult phase    [flags]        three-phase relations of one soil element
 //	qult factors  [flags]        tip bearing factors by every applicable method
 //	qult batch    [flags] [FILE] JSON Lines in (one calc file per line), JSON Lines out
+//	qult verify   [flags]        run the shipped reference cases against their published values (exit 1 when any fails)
 //	qult version                 the version of qult and of its file formats
 //	qult help [VERB]             help, with an example, for each verb
 //
@@ -74,6 +75,7 @@ func init() {
 		{"phase", "three-phase relations of one soil element (Gs, e, n, w, S, unit weights)", runPhase},
 		{"factors", "tip bearing factors by every applicable method, side by side", runFactors},
 		{"batch", "JSON Lines in (one calc file per line), JSON Lines out, in parallel, order kept", runBatch},
+		{"verify", "run the shipped reference cases against their published values; exit 1 when any fails", runVerify},
 		{"version", "the version of qult and of its file formats", runVersion},
 	}
 }
