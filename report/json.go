@@ -67,6 +67,7 @@ func optNumJ(x float64) *jnum {
 type jResult struct {
 	Schema    string       `json:"schema"`
 	Version   string       `json:"qult_version"`
+	Verify    string       `json:"verification,omitempty"`
 	Title     string       `json:"title"`
 	Project   string       `json:"project,omitempty"`
 	Revision  string       `json:"revision,omitempty"`
@@ -335,7 +336,7 @@ func toJSON(r *calc.Result, o Options) *jResult {
 	if schema == "" {
 		schema = calc.ResultSchema
 	}
-	j := &jResult{Schema: schema, Version: r.Version, Title: r.Title, Project: r.Project, Revision: r.Revision,
+	j := &jResult{Schema: schema, Version: r.Version, Verify: o.Verification, Title: r.Title, Project: r.Project, Revision: r.Revision,
 		Engineer: r.Engineer, Date: date(r, o), Units: o.Units.String(), Source: string(r.Source),
 		Warnings: nonNil(allWarnings(r, c.conv)), Defaults: defaultRows(r, c.conv), Cautions: nonNil(r.Cautions), Sources: []jSource{}, WithDepth: []jDepthRow{}, Segments: []jSegment{}}
 	p := r.Pile

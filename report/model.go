@@ -144,7 +144,7 @@ func date(r *calc.Result, o Options) string {
 func secTitle(r *calc.Result, o Options) section {
 	var it []item
 	for _, kv := range [][2]string{{"Project", r.Project}, {"Revision", r.Revision}, {"Engineer", r.Engineer},
-		{"Date", date(r, o)}, {"qult version", r.Version}, {"Display units", o.Units.String()}} {
+		{"Date", date(r, o)}, {"qult version", r.Version}, {"Verification", o.Verification}, {"Display units", o.Units.String()}} {
 		if kv[1] != "" {
 			it = append(it, item{label: kv[0], val: txt(kv[1])})
 		}

@@ -106,6 +106,11 @@ type Options struct {
 	// Date is written in the title block; empty means the calc file's own
 	// date, and if that is empty too the date is left out.
 	Date string
+	// Verification is a one-line summary of the verification record run
+	// by the program that writes the report (such as "verification: 259
+	// reference cases, all pass"), shown in the title block; empty leaves
+	// it out.
+	Verification string
 }
 
 // Write renders result r in format f to w.

@@ -4,10 +4,13 @@ import (
 	"bytes"
 	"encoding/json"
 	"io"
+	"strings"
+	"sync"
 
 	"github.com/qultgeo/qult/calc"
 	"github.com/qultgeo/qult/report"
 	"github.com/qultgeo/qult/units"
+	"github.com/qultgeo/qult/verify"
 )
 
 // The views of a result, one per verb.
@@ -26,13 +29,24 @@ func render(w io.Writer, res *calc.Result, format string, view report.View, sys 
 	if err != nil {
 		return err
 	}
-	return report.Write(w, res, f, report.Options{Units: sys, View: view})
+	o := report.Options{Units: sys, View: view}
+	if view == report.ViewReport || f == report.JSON { // the package's title block, and the whole result in JSON
+		o.Verification = verificationLine()
+	}
+	return report.Write(w, res, f, o)
 }
+
+// verificationLine runs the verification record once per process (about
+// 50 ms) and returns its one-line summary for the calculation package's
+// title block.
+var verificationLine = sync.OnceValue(func() string {
+	return strings.TrimPrefix(verify.SummaryText(), "verification: ")
+})
 
 // renderJSONLine writes res as one line of the report's JSON form.
 func renderJSONLine(w io.Writer, res *calc.Result, sys units.System) error {
 	var buf, line bytes.Buffer
-	if err := report.Write(&buf, res, report.JSON, report.Options{Units: sys, View: report.ViewReport}); err != nil {
+	if err := report.Write(&buf, res, report.JSON, report.Options{Units: sys, View: report.ViewReport, Verification: verificationLine()}); err != nil {
 		return err
 	}
 	if err := json.Compact(&line, buf.Bytes()); err != nil {
