@@ -8,6 +8,7 @@ import (
 	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/calc"
 	"github.com/qultgeo/qult/pile"
+	"github.com/qultgeo/qult/shaft"
 	"github.com/qultgeo/qult/units"
 )
 
@@ -303,6 +304,18 @@ func secShaft(r *calc.Result, c conv) section {
 	if eq := shaftEquations(r, c); len(eq) > 0 {
 		blocks = append(blocks, block{para: "Worked equations (the bottom of the first segment of each method):"}, block{eqs: eq})
 	}
+	// The scope of each method used, from the catalogue of methods.
+	var scopes []string
+	seen := map[string]bool{}
+	for _, row := range b.Rows {
+		if d, ok := shaft.Lookup(row.Method); ok && d.Scope != "" && !seen[row.Method] {
+			seen[row.Method] = true
+			scopes = append(scopes, row.Method+": "+d.Scope)
+		}
+	}
+	if len(scopes) > 0 {
+		blocks = append(blocks, block{para: "Scope of the shaft methods used:"}, block{list: scopes})
+	}
 	return section{heading: "Shaft resistance", blocks: blocks}
 }
 
@@ -385,6 +398,9 @@ func secTip(r *calc.Result, c conv) section {
 		{"Tip depth", num(c.L(t.Depth)), c.uL()},
 		{"Layer", txt(t.LayerName), ""},
 		{"Method", txt(t.Method), ""},
+	}
+	if d, ok := bearing.Lookup(t.Method); ok && d.Scope != "" {
+		it = append(it, item{"Method's scope", txt(d.Scope), ""}) // from the catalogue of methods
 	}
 	if res.Rule != "" {
 		it = append(it, item{"Rule used by the method", txt(res.Rule), ""})

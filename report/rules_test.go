@@ -11,6 +11,7 @@ import (
 	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/calc"
 	"github.com/qultgeo/qult/pile"
+	"github.com/qultgeo/qult/shaft"
 	"github.com/qultgeo/qult/units"
 )
 
@@ -627,5 +628,20 @@ func TestTipRulesWithDepth(t *testing.T) {
 	}
 	if !regexp.MustCompile(`\n +6 .*ramp, weak below\n`).MatchString(render(t, r, Text, Options{View: ViewLength})) {
 		t.Error("text: the 6 m row does not name the ramp and the weak-layer rule")
+	}
+}
+
+// TestScopeFromCatalogue: the tip block and the shaft section show each
+// method's scope as the catalogue of methods states it.
+func TestScopeFromCatalogue(t *testing.T) {
+	r := load(t, example, nil)
+	out := flat(render(t, r, Text, Options{View: ViewCapacity}))
+	d, ok := bearing.Lookup(r.Breakdown.Tip.Method)
+	if !ok || !strings.Contains(out, flat(d.Scope)) {
+		t.Errorf("tip method %q: scope %q not shown", r.Breakdown.Tip.Method, d.Scope)
+	}
+	s, ok := shaft.Lookup("alpha-drilled")
+	if !ok || !strings.Contains(out, flat(s.Scope)) {
+		t.Errorf("shaft scope %q not shown", s.Scope)
 	}
 }
