@@ -633,6 +633,8 @@ func stiffness(f *File, prof *profile.Profile, top, tip units.Length, need, meth
 		path := fmt.Sprintf("ground.layers[%d]", i)
 		miss := ""
 		switch {
+		case need == "e" && m.e == 0 && m.g > 0, need == "g" && m.g == 0 && m.e > 0:
+			miss = "poissons_ratio" // the other modulus is given: ν converts it
 		case need == "e" && m.e == 0:
 			miss = "youngs_modulus"
 		case need == "g" && m.g == 0:
