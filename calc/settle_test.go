@@ -337,3 +337,36 @@ func TestSettleBadInput(t *testing.T) {
 		}
 	}
 }
+
+// TestSchemaAcceptsSettlement: the settlement keys the decoder accepts,
+// the schema (checked by an independent validator) accepts too.
+func TestSchemaAcceptsSettlement(t *testing.T) {
+	sch := compileSchema(t)
+	for _, repl := range [][]string{
+		{"method: load-transfer", "method: vesic\n  vesic: {form: empirical, xi: 0.5, cp: 0.03}"},
+		{"method: load-transfer", "method: vesic\n  vesic: {form: elastic, iwp: 0.9}"},
+		{"method: load-transfer", "method: randolph-wroth"},
+		{"      youngs_modulus: 60 MPa\n", "      youngs_modulus: 60 MPa\n      t_z: {points: [[0, 0], [0.005, 0.6], [0.02, 1]], per_diameter: true}\n",
+			"  allowable: 15 mm\n", "  allowable: 15 mm\n  load: 900 kN\n  residual: 0.9\n  q_z: {points: [[0 mm, 0], [10 mm, 0.5], [40 mm, 1]]}\n  elements: 60\n  tolerance: 1e-8\n"},
+		{"  fit_from: 3", "  fit_from: 3\n  criteria: [davisson, chin-kondner]"},
+	} {
+		s := settleExample(t)
+		for i := 0; i+1 < len(repl); i += 2 {
+			s = strings.Replace(s, repl[i], repl[i+1], 1)
+		}
+		if err := sch.Validate(instance(t, []byte(s))); err != nil {
+			t.Errorf("%v: schema: %v", repl, err)
+		}
+		if _, err := Parse([]byte(s)); err != nil {
+			t.Errorf("%v: decoder: %v", repl, err)
+		}
+	}
+	// And refuses what the decoder refuses by form: a point that is not a pair.
+	bad := strings.Replace(settleExample(t), "[300 kN, 1.1 mm]", "[300 kN, 1.1 mm, 4]", 1)
+	if err := sch.Validate(instance(t, []byte(bad))); err == nil {
+		t.Error("schema accepts a load-test point of three values")
+	}
+	if _, err := Parse([]byte(bad)); err == nil {
+		t.Error("decoder accepts a load-test point of three values")
+	}
+}
