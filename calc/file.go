@@ -350,5 +350,5 @@ type VesicOptions struct {
 type LoadTest struct {
 	Points   [][]Value `yaml:"points" json:"points" doc:"[load, settlement] pairs of head load and head settlement in the order applied: loads never falling, settlements rising."`
 	FitFrom  Value     `yaml:"fit_from,omitempty" json:"fit_from,omitempty" q:"integer,0,100000" doc:"Index (from 0) of the first point of the hyperbolic fits (chin-kondner, brinch-hansen-80); default 0."`
-	Criteria []string  `yaml:"criteria,omitempty" json:"criteria,omitempty" doc:"Criteria to read the test by: davisson, ten-percent, chin-kondner, brinch-hansen-80 (default all four)."`
+	Criteria []string  `yaml:"criteria,omitempty" json:"criteria,omitempty" doc:"Criteria to read the test by: davisson (reads pile.youngs_modulus), ten-percent, chin-kondner, brinch-hansen-80 (default all four)."`
 }

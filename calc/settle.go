@@ -343,7 +343,7 @@ func (r *resolver) loadTest(t *LoadTest) *LoadTestInputs {
 		switch {
 		case x != math.Trunc(x):
 			r.add("load_test.fit_from", t.FitFrom.Line, "%q: want the whole-number index of a point", t.FitFrom.Raw)
-		case len(t.Points) > 0 && int(x) > len(t.Points)-3:
+		case len(t.Points) >= 3 && int(x) > len(t.Points)-3:
 			r.add("load_test.fit_from", t.FitFrom.Line, "%q is outside 0 to %d (the hyperbolic fits need 3 points from it)", t.FitFrom.Raw, max(0, len(t.Points)-3))
 		}
 		lt.FitFrom = int(x)
