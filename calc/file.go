@@ -26,6 +26,10 @@ type File struct {
 	Design  *Design  `yaml:"design,omitempty" json:"design,omitempty"`
 	Loads   *Loads   `yaml:"loads,omitempty" json:"loads,omitempty"`
 	Search  *Search  `yaml:"search,omitempty" json:"search,omitempty"`
+	// Settlement asks for the settlement of the pile at the
+	// serviceability load; LoadTest gives a static load test to read.
+	Settlement *Settlement `yaml:"settlement,omitempty" json:"settlement,omitempty" doc:"Settlement at the serviceability load: method, allowable settlement, load-transfer curves and the options of the elastic methods."`
+	LoadTest   *LoadTest   `yaml:"load_test,omitempty" json:"load_test,omitempty" doc:"A static compression load test on the pile, as points of head load and head settlement, read by the chosen criteria."`
 
 	// lines maps each field path read from the file to its line.
 	lines map[string]int
@@ -101,6 +105,10 @@ type Layer struct {
 	// Shaft and Tip override the methods for this layer.
 	Shaft *ShaftChoice `yaml:"shaft,omitempty" json:"shaft,omitempty"`
 	Tip   *TipChoice   `yaml:"tip,omitempty" json:"tip,omitempty"`
+
+	// TZ is the t-z curve of this layer for the load-transfer settlement,
+	// in place of the API curve of its drainage class.
+	TZ *CurvePoints `yaml:"t_z,omitempty" json:"t_z,omitempty" doc:"t-z curve of this layer for the load-transfer settlement (settlement.method load-transfer), replacing the API curve of its drainage class."`
 }
 
 // ShaftChoice picks a shaft method for a layer and gives the values it
@@ -299,4 +307,48 @@ type Loads struct {
 type Search struct {
 	Step   Value `yaml:"step,omitempty" json:"step,omitempty" q:"length,0," doc:"Step of the depth grid for capacity with depth and the required length."`
 	MaxTip Value `yaml:"max_tip,omitempty" json:"max_tip,omitempty" q:"length,0," doc:"Deepest tip considered, below ground level."`
+}
+
+// CurvePoints is a load-transfer curve given as points: [displacement,
+// ratio] pairs from [0, 0] to a ratio of 1, the ratio being the mobilised
+// share of the ultimate resistance (t/tmax on the shaft, Q/Qp at the tip).
+// Displacements are lengths ("2.5 mm"), or multiples of the pile's
+// diameter or width when PerDiameter is set (plain numbers then).
+type CurvePoints struct {
+	Points      [][]Value `yaml:"points" json:"points" doc:"[displacement, ratio] pairs: displacements rising from 0 (a length, or a multiple of the diameter with per_diameter), ratios from 0 never falling, the last 1."`
+	PerDiameter bool      `yaml:"per_diameter,omitempty" json:"per_diameter,omitempty" doc:"Displacements are multiples of the pile's diameter or width (plain numbers)."`
+}
+
+// Settlement asks for the settlement of the pile at the serviceability
+// load. Method is load-transfer (the default: t-z springs along the shaft
+// and a q-z spring at the tip, on the API curves of each layer's drainage
+// class unless the layer gives t_z), vesic (Vesic's three components) or
+// randolph-wroth (the closed-form head stiffness in soil with G linear in
+// depth). Every method reads pile.youngs_modulus.
+type Settlement struct {
+	Method    string `yaml:"method,omitempty" json:"method,omitempty" doc:"Settlement method: load-transfer (default), vesic or randolph-wroth."`
+	Allowable Value  `yaml:"allowable,omitempty" json:"allowable,omitempty" q:"length,0," doc:"Allowable settlement of the pile head at the serviceability load; absent: no serviceability check (a load the pile cannot carry still fails)."`
+	Load      Value  `yaml:"load,omitempty" json:"load,omitempty" q:"force,0," doc:"Serviceability load on the pile head; absent: the characteristic compression load of loads (permanent + variable)."`
+	// load-transfer
+	Residual  Value        `yaml:"residual,omitempty" json:"residual,omitempty" q:"number,0.7,1" doc:"Post-peak ratio tres/tmax of the API clay t-z curve (load-transfer; default 0.7, the low end of API RP 2GEO's 0.7 to 0.9)."`
+	QZ        *CurvePoints `yaml:"q_z,omitempty" json:"q_z,omitempty" doc:"q-z curve of the tip as points (load-transfer); absent: the API Q-z curve."`
+	Elements  Value        `yaml:"elements,omitempty" json:"elements,omitempty" q:"integer,1,100000" doc:"Number of pile elements of the load-transfer solution (default 100)."`
+	Tolerance Value        `yaml:"tolerance,omitempty" json:"tolerance,omitempty" q:"number,1e-14,0.001" doc:"Relative force tolerance of the load-transfer solution (default 1e-9)."`
+	// vesic
+	Vesic *VesicOptions `yaml:"vesic,omitempty" json:"vesic,omitempty" doc:"Options of Vesic's method (method vesic)."`
+}
+
+// VesicOptions are the choices of Vesic's three-component method.
+type VesicOptions struct {
+	Form string `yaml:"form,omitempty" json:"form,omitempty" doc:"How the tip and shaft components are found: elastic (Es and ν of the layers, Iwp and Iws; default) or empirical (Cp and Cs with qp of the pile analysis)."`
+	Xi   Value  `yaml:"xi,omitempty" json:"xi,omitempty" q:"number,0,1" doc:"Distribution factor ξ of the shaft load in the elastic shortening (default 0.67, the triangular distribution; 0.5 uniform)."`
+	Iwp  Value  `yaml:"iwp,omitempty" json:"iwp,omitempty" q:"number,0,2" doc:"Influence factor Iwp of the tip (elastic form; default 0.85)."`
+	Cp   Value  `yaml:"cp,omitempty" json:"cp,omitempty" q:"number,0,0.5" doc:"Empirical coefficient Cp (empirical form; default the loose or soft end of Vesic's range for the soil at the tip and the installation)."`
+}
+
+// LoadTest is a static compression load test on the pile.
+type LoadTest struct {
+	Points   [][]Value `yaml:"points" json:"points" doc:"[load, settlement] pairs of head load and head settlement in the order applied: loads never falling, settlements rising."`
+	FitFrom  Value     `yaml:"fit_from,omitempty" json:"fit_from,omitempty" q:"integer,0,100000" doc:"Index (from 0) of the first point of the hyperbolic fits (chin-kondner, brinch-hansen-80); default 0."`
+	Criteria []string  `yaml:"criteria,omitempty" json:"criteria,omitempty" doc:"Criteria to read the test by: davisson (reads pile.youngs_modulus), ten-percent, chin-kondner, brinch-hansen-80 (default all four)."`
 }

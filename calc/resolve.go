@@ -29,6 +29,10 @@ type Inputs struct {
 	HasLoad bool
 	Step    units.Length
 	MaxTip  units.Length
+	// Settle and LoadTest are the settlement and load-test sections; nil
+	// when the file has none.
+	Settle   *SettleInputs
+	LoadTest *LoadTestInputs
 }
 
 // resolver turns Values into quantities, recording problems.
@@ -166,6 +170,7 @@ func Resolve(f *File) (*Inputs, error) {
 	r.design(f, in)
 	r.loads(f, in)
 	r.search(f, in)
+	r.settlement(f, in)
 	if len(r.probs) > 0 {
 		return in, r.probs
 	}

@@ -54,6 +54,14 @@ type Result struct {
 	// loads are given.
 	Length *pile.Length
 
+	// Settlement is the settlement at the serviceability load (nil without
+	// a settlement section); LoadTest the load test read by its criteria
+	// (nil without a load_test section). A settlement above the allowable,
+	// or a pile that cannot carry the serviceability load, fails the
+	// serviceability check (ServiceabilityPass).
+	Settlement *SettlementResult
+	LoadTest   *LoadTestResult
+
 	Warnings []string
 	Sources  []cite.Source
 	Cautions []string

@@ -132,9 +132,15 @@ func Run(f *File) (*Result, error) {
 			}
 		}
 	}
+	srefs, err := runSettlement(f, in, prof, res)
+	if err != nil {
+		return nil, err
+	}
 	res.Warnings = append(res.Warnings, warnings(res)...)
+	res.Warnings = append(res.Warnings, settleWarnings(res)...)
 	var refs []cite.Source
 	refs = append(refs, res.Breakdown.Sources...)
+	refs = append(refs, cite.Collect(srefs...)...)
 	if in.Basis != nil {
 		refs = append(refs, cite.Collect(in.Basis.Refs()...)...)
 	}

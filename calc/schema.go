@@ -18,6 +18,7 @@ import (
 var (
 	tipChoiceT   = reflect.TypeOf(TipChoice{})
 	shaftChoiceT = reflect.TypeOf(ShaftChoice{})
+	pairsT       = reflect.TypeOf([][]Value{})
 )
 
 // SchemaID is the identifier of the calc file's JSON Schema.
@@ -37,6 +38,10 @@ var enums = map[string][]string{
 	"annex":        {"recommended", "uk"},
 	"self_weight":  {"ignored", "net", "gross"},
 	"k0":           {"jaky", "ocr"},
+	// settlement and load_test
+	"method":   settleMethods,
+	"form":     {"elastic", "empirical"},
+	"criteria": LoadTestCriteria,
 	// The methods chosen for the whole pile: those that need no key (a
 	// given value belongs to a layer); shaft_drained takes a method that
 	// gives fs at each depth, shaft_undrained also the λ method.
@@ -195,14 +200,16 @@ func choiceSchema(what string, es []entry) map[string]any {
 
 // required lists the keys each struct needs.
 var required = map[reflect.Type][]string{
-	reflect.TypeOf(File{}):      {"ground", "pile"},
-	reflect.TypeOf(Ground{}):    {"water_depth", "layers"},
-	reflect.TypeOf(Layer{}):     {"drainage"},
-	reflect.TypeOf(Pile{}):      {"section", "length", "installation"},
-	reflect.TypeOf(Section{}):   {"shape"},
-	reflect.TypeOf(Design{}):    {"basis"},
-	reflect.TypeOf(Zone{}):      {"top", "bottom"},
-	reflect.TypeOf(PorePoint{}): {"depth", "pressure"},
+	reflect.TypeOf(File{}):        {"ground", "pile"},
+	reflect.TypeOf(Ground{}):      {"water_depth", "layers"},
+	reflect.TypeOf(Layer{}):       {"drainage"},
+	reflect.TypeOf(Pile{}):        {"section", "length", "installation"},
+	reflect.TypeOf(Section{}):     {"shape"},
+	reflect.TypeOf(Design{}):      {"basis"},
+	reflect.TypeOf(Zone{}):        {"top", "bottom"},
+	reflect.TypeOf(PorePoint{}):   {"depth", "pressure"},
+	reflect.TypeOf(CurvePoints{}): {"points"},
+	reflect.TypeOf(LoadTest{}):    {"points"},
 }
 
 var quantity = map[string]any{
@@ -407,6 +414,10 @@ func object(t reflect.Type) map[string]any {
 			continue
 		}
 		props[name] = schemaOf(f.Type, name)
+		if f.Type == pairsT { // [x, y] pairs
+			pair := props[name].(map[string]any)["items"].(map[string]any)
+			pair["minItems"], pair["maxItems"] = 2, 2
+		}
 		if d := f.Tag.Get("doc"); d != "" {
 			props[name].(map[string]any)["description"] = d
 		}

@@ -13,6 +13,7 @@ import (
 //	check:           one row per design case (or one row of characteristic totals without a design basis)
 //	capacity, report: the shaft segments, then one tip row
 //	length:          capacity with depth
+//	settle:          the predicted load-settlement curve, with the load test's points
 func csvTable(r *calc.Result, o Options) *table {
 	c := conv{o.Units}
 	switch o.View {
@@ -25,6 +26,8 @@ func csvTable(r *calc.Result, o Options) *table {
 			rows: [][]cell{{num(c.L(k.TipDepth)), num(c.F(k.Tip)), num(c.F(k.Shaft)), num(c.F(k.Weight)), num(c.F(k.Compression)), num(c.F(k.Tension))}}}
 	case ViewLength:
 		return withDepthTable(r, c)
+	case ViewSettle:
+		return settleCSV(r, c)
 	}
 	return breakdownTable(r, c)
 }

@@ -17,19 +17,26 @@
 //	              excavation or scour, the original and design ground lines and the thickness removed from
 //	              each layer), vertical stresses, loads, shaft and tip with worked equations, totals, design
 //	              check, required length, capacity with depth, the defaults and rules in force, warnings,
-//	              sources cited and cautions
+//	              sources cited and cautions; with a settlement or load_test section, the settlement
+//	              and the load test (as in ViewSettle); ViewCheck then adds a serviceability summary
+//	ViewSettle    loads, capacity totals, the settlement at the serviceability load against the allowable
+//	              (method, inputs, worked equations or the curves used), the predicted load-settlement
+//	              curve, axial load and displacement with depth, the load test's points and criteria
 //
 // Each format renders the view as follows.
 //
 //	Text      aligned tables with units in the headers
 //	Markdown  the same content as Text, as headings and pipe tables
 //	CSV       one table per view: check, one row per design case (characteristic totals without a design
-//	          basis); capacity and report, one row per shaft segment then a tip row; length, capacity with depth
+//	          basis); capacity and report, one row per shaft segment then a tip row; length, capacity with depth;
+//	          settle, the predicted load-settlement curve then the load test's points
 //	JSON      the whole result for every view (schema calc.ResultSchema, described in JSON.md)
 //	HTML      the view's sections in one self-contained page (inline CSS and SVG, no scripts, no external
 //	          fetches). ViewReport is the calculation package: it adds the inputs as entered, a drawing of
 //	          the ground profile to scale, a plot of vertical stress with depth and a plot of capacity with
-//	          depth; ViewLength adds the capacity plot; ViewCheck and ViewCapacity are tables only.
+//	          depth; ViewLength adds the capacity plot; the settlement section adds the load-settlement
+//	          curve (predicted and measured) and the axial load with depth; ViewCheck and ViewCapacity
+//	          are tables only.
 //
 // # Numbers
 //

@@ -81,6 +81,9 @@ func addFigures(d *doc, r *calc.Result, o Options) error {
 				s.blocks = append(s.blocks, block{svg: g, fig: "Characteristic compression and tension resistance and design compression resistance against tip depth."})
 			}
 		}
+		if err := settleFigures(s, r, c); err != nil {
+			return err
+		}
 	}
 	if o.View == ViewReport && len(r.Source) > 0 {
 		in := section{heading: "Inputs as entered", blocks: []block{{pre: string(r.Source)}}}

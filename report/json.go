@@ -85,6 +85,8 @@ type jResult struct {
 	Design    *jDesign     `json:"design"`
 	Length    *jLength     `json:"required_length"`
 	WithDepth []jDepthRow  `json:"capacity_with_depth"`
+	Settle    *jSettle     `json:"settlement,omitempty"`
+	LoadTest  *jLoadTest   `json:"load_test,omitempty"`
 	Warnings  []string     `json:"warnings"`
 	Defaults  []defaultRow `json:"defaults"`
 	Sources   []jSource    `json:"sources"`
@@ -475,6 +477,7 @@ func toJSON(r *calc.Result, o Options) *jResult {
 	for _, s := range sources(r) {
 		j.Sources = append(j.Sources, jSource{s.Key, s.Authors, s.Year, s.Title, s.Publication, s.String()})
 	}
+	j.Settle, j.LoadTest = settleJSON(r, c), loadTestJSON(r, c)
 	return j
 }
 

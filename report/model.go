@@ -97,6 +97,7 @@ func build(r *calc.Result, o Options) *doc {
 		add(secLoads(r, c))
 		add(secTotals(r, c))
 		add(secDesign(r, c))
+		add(secServiceability(r, c))
 	case ViewCapacity:
 		add(secShaft(r, c))
 		add(secTip(r, c))
@@ -116,7 +117,17 @@ func build(r *calc.Result, o Options) *doc {
 		add(secDesign(r, c))
 		add(secLength(r, c))
 		add(secWithDepth(r, c))
+		add(secSettlement(r, c))
+		add(secLoadTest(r, c))
 		add(secDefaults(r, c))
+	case ViewSettle:
+		add(secLoads(r, c))
+		add(secTotals(r, c))
+		add(secSettlement(r, c))
+		add(secLoadTest(r, c))
+		if r.Settlement == nil && r.LoadTest == nil {
+			add(section{heading: "Settlement", blocks: []block{{para: "The calc file has no settlement or load_test section."}}})
+		}
 	}
 	add(secList("Warnings", allWarnings(r, c)))
 	if o.View == ViewReport {

@@ -73,11 +73,15 @@ const (
 	ViewLength
 	// ViewReport is the whole calculation package.
 	ViewReport
+	// ViewSettle is the settlement at the serviceability load, the
+	// predicted load-settlement curve, the axial load with depth and the
+	// load test read by its criteria.
+	ViewSettle
 )
 
-var viewNames = [...]string{ViewCheck: "check", ViewCapacity: "capacity", ViewLength: "length", ViewReport: "report"}
+var viewNames = [...]string{ViewCheck: "check", ViewCapacity: "capacity", ViewLength: "length", ViewReport: "report", ViewSettle: "settle"}
 
-// String returns "check", "capacity", "length" or "report".
+// String returns "check", "capacity", "length", "report" or "settle".
 func (v View) String() string {
 	if v >= 0 && int(v) < len(viewNames) {
 		return viewNames[v]
@@ -92,7 +96,7 @@ func ParseView(s string) (View, error) {
 			return View(i), nil
 		}
 	}
-	return 0, fmt.Errorf("report: view %q: want check, capacity, length or report", s)
+	return 0, fmt.Errorf("report: view %q: want check, capacity, length, report or settle", s)
 }
 
 // Options set how a result is rendered. The zero value renders the check
@@ -124,8 +128,8 @@ func Write(w io.Writer, r *calc.Result, f Format, o Options) error {
 	if o.Units != units.SI && o.Units != units.US {
 		return fmt.Errorf("report: unit system %v: want SI or US", o.Units)
 	}
-	if o.View < ViewCheck || o.View > ViewReport {
-		return fmt.Errorf("report: view %v: want check, capacity, length or report", o.View)
+	if o.View < ViewCheck || o.View > ViewSettle {
+		return fmt.Errorf("report: view %v: want check, capacity, length, report or settle", o.View)
 	}
 	bw := bufio.NewWriterSize(w, 32<<10)
 	var err error

@@ -138,6 +138,18 @@ var badCases = []badCase{
 	{file: "106-k-on-drilled-sand-shaft", want: []string{"ground.layers[1].shaft.k_over_k0 (line 17)", "beta-drilled-sand does not read k_over_k0; it reads: limit"}},
 	{file: "107-unknown-layer-tip-method", want: []string{"ground.layers[1].tip.method (line 17)", `"meyerhoff" is not a tip method`, "meyerhof, vesic"}},
 	{file: "108-limit-on-lambda", want: []string{"ground.layers[1].shaft.limit (line 17)", "lambda does not read limit; it reads: lambda"}},
+	// settlement and load_test
+	{file: "200-tz-negative-stiffness", want: []string{"ground.layers[1].t_z.points[2][1] (line 20)", "negative stiffness"}},
+	{file: "201-load-test-load-falls", want: []string{"load_test.points[3][0] (line 36)", "must not fall"}},
+	{file: "202-load-test-settlement-falls", want: []string{"load_test.points[3][1] (line 36)", "must rise"}},
+	{file: "203-vesic-missing-youngs-modulus", want: []string{"ground.layers[1].youngs_modulus (line 14)", "not given", "vesic"}},
+	{file: "204-randolph-wroth-missing-shear-modulus", want: []string{"ground.layers[0].shear_modulus (line 6)", "not given", "randolph-wroth"}},
+	{file: "205-settlement-missing-pile-modulus", want: []string{"pile.youngs_modulus (line 22)", "not given"}},
+	{file: "206-unknown-settlement-method", want: []string{"settlement.method (line 31)", "load-transfer, vesic, randolph-wroth"}},
+	{file: "207-tz-without-load-transfer", want: []string{"ground.layers[1].t_z (line 20)", "only settlement.method load-transfer"}},
+	{file: "208-load-test-unknown-criterion", want: []string{"load_test.criteria[1] (line 38)", "by-eye"}},
+	{file: "209-allowable-as-force", want: []string{"settlement.allowable (line 31)", "want a length"}},
+	{file: "210-tz-ratio-above-one", want: []string{"ground.layers[1].t_z.points[1][1] (line 20)", "outside 0 to 1"}},
 }
 
 const badTimeout = 5 * time.Second

@@ -41,7 +41,7 @@ func runCapacity(c *cmd, args []string) int { return c.calcVerb(args, viewCapaci
 func runLength(c *cmd, args []string) int   { return c.calcVerb(args, viewLength) }
 func runReport(c *cmd, args []string) int   { return c.calcVerb(args, viewReport) }
 
-// calcVerb is check, capacity, length and report: read, run, render.
+// calcVerb is check, capacity, length, report and settle: read, run, render.
 func (c *cmd) calcVerb(args []string, view report.View) int {
 	var o calcOpts
 	fs := calcFlags(c.verb, calcFormats, &o)
@@ -102,11 +102,16 @@ func (c *cmd) calcVerb(args []string, view report.View) int {
 			c.errorf("%s: loads: not given; %s needs the characteristic loads (compression, tension)", displayName(name), c.verb)
 			return exitUsage
 		}
-		if view == viewCheck && !res.Design.Pass {
+		if view == viewCheck && (!res.Design.Pass || !res.ServiceabilityPass()) {
 			code = exitFail
 		}
 		if view == viewLength && (res.Length == nil || !res.Length.Found) {
 			code = exitFail
+		}
+	case viewSettle:
+		var ok bool
+		if code, ok = c.settleCode(name, res); !ok {
+			return code
 		}
 	}
 	var buf bytes.Buffer

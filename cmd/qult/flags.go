@@ -67,6 +67,7 @@ else text.`,
   qult report --format md examples/abutment-hpile-us.yaml > abutment.md`,
 			flags: calcFlagsOnly("report", calcFormats),
 		},
+		"settle": settleHelp(),
 		"phase": {
 			usage: "phase [flags]",
 			about: `Solves the three-phase state of one soil element from any sufficient set

@@ -9,6 +9,7 @@
 //	qult capacity [flags] FILE   capacity with its full breakdown
 //	qult length   [flags] FILE   required length and capacity with depth (exit 1 when none passes)
 //	qult report   [flags] FILE   the calculation package (HTML when -o ends in .html)
+//	qult settle   [flags] FILE   settlement at the serviceability load and the load test (exit 1 when it exceeds the allowable)
 //	qult phase    [flags]        three-phase relations of one soil element
 //	qult factors  [flags]        tip bearing factors by every applicable method
 //	qult batch    [flags] [FILE] JSON Lines in (one calc file per line), JSON Lines out
@@ -17,7 +18,7 @@
 //	qult help [VERB]             help, with an example, for each verb
 //
 // FILE may be "-" for standard input. Exit codes: 0 done, 1 the design
-// check fails, 2 bad input or usage.
+// check (or the serviceability check) fails, 2 bad input or usage.
 //
 // Choices: flags may come before or after the file name; -o writes the
 // output only when the verb succeeds, under a temporary name renamed over
@@ -72,6 +73,7 @@ func init() {
 		{"capacity", "axial capacity with its full breakdown (shaft segments and tip)", runCapacity},
 		{"length", "required pile length and capacity with depth; exit 1 when no length passes", runLength},
 		{"report", "the calculation package (text, or HTML when -o ends in .html)", runReport},
+		{"settle", "settlement at the serviceability load and the load test; exit 1 when it exceeds the allowable", runSettle},
 		{"phase", "three-phase relations of one soil element (Gs, e, n, w, S, unit weights)", runPhase},
 		{"factors", "tip bearing factors by every applicable method, side by side", runFactors},
 		{"batch", "JSON Lines in (one calc file per line), JSON Lines out, in parallel, order kept", runBatch},
