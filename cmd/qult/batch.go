@@ -252,7 +252,7 @@ func batchOne(num int, data []byte, long bool, sys units.System, hasSys bool) (l
 	if len(l.out) == 0 || l.out[len(l.out)-1] != '\n' {
 		l.out = append(l.out, '\n')
 	}
-	l.fail = res.Design != nil && !res.Design.Pass
+	l.fail = (res.Design != nil && !res.Design.Pass) || !res.ServiceabilityPass()
 	return l
 }
 
