@@ -321,3 +321,46 @@ func TestUnusualInputWarns(t *testing.T) {
 		}
 	}
 }
+
+// TestOtherProfiles: design.other_profiles gives EN 1997-1's characteristic
+// resistance from n = 3 ground profiles, Rc,k = min(mean/ξ3, min/ξ4) with
+// ξ3 = 1.33, ξ4 = 1.23 (EN 1997-1:2004 Table A.10, n = 3); DA1-2 with R4
+// for a driven pile divides by γb = γs = 1.3 (Table A.6). The three
+// calculated resistances are the same file's capacity in each ground.
+func TestOtherProfiles(t *testing.T) {
+	grounds := []string{
+		"  water_depth: 1 m\n  layers:\n    - {name: clay, thickness: 6 m, drainage: undrained, saturated_unit_weight: 18 kN/m3, undrained_strength: 40 kPa}\n    - {name: sand, thickness: 20 m, drainage: drained, saturated_unit_weight: 20 kN/m3, friction_angle: 34 deg}\n",
+		"  water_depth: 1 m\n  layers:\n    - {name: clay, thickness: 7 m, drainage: undrained, saturated_unit_weight: 18 kN/m3, undrained_strength: 35 kPa}\n    - {name: sand, thickness: 20 m, drainage: drained, saturated_unit_weight: 20 kN/m3, friction_angle: 33 deg}\n",
+		"  water_depth: 1.5 m\n  layers:\n    - {name: clay, thickness: 5 m, drainage: undrained, saturated_unit_weight: 18 kN/m3, undrained_strength: 45 kPa}\n    - {name: sand, thickness: 20 m, drainage: drained, saturated_unit_weight: 20 kN/m3, friction_angle: 35 deg}\n",
+	}
+	pileDesign := "pile:\n  section: {shape: square, width: 400 mm}\n  length: 15 m\n  installation: driven-high\n" +
+		"loads: {compression: {permanent: 500 kN, variable: 150 kN}}\n"
+	var rc []float64
+	for _, g := range grounds {
+		r, err := Parse([]byte("title: one\nground:\n" + g + pileDesign))
+		if err != nil {
+			t.Fatal(err)
+		}
+		rc = append(rc, r.Breakdown.Compression.KN())
+	}
+	indent := func(g string) string {
+		return strings.ReplaceAll(strings.Replace(g, "  water_depth", "    - water_depth", 1), "\n  ", "\n      ")
+	}
+	src := "title: three\nground:\n" + grounds[0] + pileDesign +
+		"design:\n  basis: en1997\n  approach: DA1\n  other_profiles:\n" + indent(grounds[1]) + indent(grounds[2])
+	r, err := Parse([]byte(src))
+	if err != nil {
+		t.Fatalf("%v\n%s", err, src)
+	}
+	mean := (rc[0] + rc[1] + rc[2]) / 3
+	rk := math.Min(mean/1.33, math.Min(rc[0], math.Min(rc[1], rc[2]))/1.23)
+	var got float64
+	for _, v := range r.Design.Cases {
+		if v.Case == "DA1-2" {
+			got = v.CompressionRd.KN()
+		}
+	}
+	if want := rk / 1.3; math.Abs(got-want) > 1e-6*want {
+		t.Errorf("DA1-2 Rd = %v kN, want %v kN (Rc,cal %v)", got, want, rc)
+	}
+}

@@ -259,12 +259,18 @@ type Design struct {
 	// EN 1997-1 Annex A; uk: the UK National Annex), sls_verified for
 	// the UK annex's lower R4 factors, given ξ3 and ξ4, and factor tables
 	// that replace the annex's for this pile's installation.
-	Annex       string              `yaml:"annex,omitempty" json:"annex,omitempty"`
-	SLSVerified bool                `yaml:"sls_verified,omitempty" json:"sls_verified,omitempty"`
-	Xi3         Value               `yaml:"xi3,omitempty" json:"xi3,omitempty" q:"number,1,3" doc:"Correlation factor ξ3, given (en1997)."`
-	Xi4         Value               `yaml:"xi4,omitempty" json:"xi4,omitempty" q:"number,1,3" doc:"Correlation factor ξ4, given (en1997)."`
-	Resistance  map[string]RFactors `yaml:"resistance_factors,omitempty" json:"resistance_factors,omitempty" doc:"Partial resistance factors by set (R1 to R4) for this pile's installation, replacing the annex's (en1997)."`
-	Actions     map[string]AFactors `yaml:"action_factors,omitempty" json:"action_factors,omitempty" doc:"Partial factors on actions by set (A1, A2), replacing the annex's (en1997)."`
+	// OtherProfiles are further ground test profiles at the site (each a
+	// ground section), for EN 1997-1's characteristic resistance from n
+	// profiles, Rc,k = min(mean/ξ3, min/ξ4) (eq. 7.8): the pile is analysed
+	// in the file's ground and in each of these, with the pile-wide
+	// methods.
+	OtherProfiles []Ground            `yaml:"other_profiles,omitempty" json:"other_profiles,omitempty" doc:"Further ground test profiles for EN 1997-1's characteristic resistance from n profiles (en1997)."`
+	Annex         string              `yaml:"annex,omitempty" json:"annex,omitempty"`
+	SLSVerified   bool                `yaml:"sls_verified,omitempty" json:"sls_verified,omitempty"`
+	Xi3           Value               `yaml:"xi3,omitempty" json:"xi3,omitempty" q:"number,1,3" doc:"Correlation factor ξ3, given (en1997)."`
+	Xi4           Value               `yaml:"xi4,omitempty" json:"xi4,omitempty" q:"number,1,3" doc:"Correlation factor ξ4, given (en1997)."`
+	Resistance    map[string]RFactors `yaml:"resistance_factors,omitempty" json:"resistance_factors,omitempty" doc:"Partial resistance factors by set (R1 to R4) for this pile's installation, replacing the annex's (en1997)."`
+	Actions       map[string]AFactors `yaml:"action_factors,omitempty" json:"action_factors,omitempty" doc:"Partial factors on actions by set (A1, A2), replacing the annex's (en1997)."`
 	// lrfd: the factor on the pile's weight W′ in uplift; safety-factor:
 	// weight_unfactored counts W′ in full instead of W′/F.
 	Weight           Value `yaml:"weight,omitempty" json:"weight,omitempty" q:"number,0,1" doc:"Factor on the pile's effective weight in uplift (lrfd; preset default 0.9)."`

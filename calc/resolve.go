@@ -20,15 +20,18 @@ import (
 
 // Inputs are a calc file resolved into the library's types, all in SI.
 type Inputs struct {
-	System  units.System
-	Ground  profile.Spec
-	Pile    pile.Pile
-	Methods pile.Methods
-	Basis   pile.Basis // nil without a design section
-	Loads   pile.Loads
-	HasLoad bool
-	Step    units.Length
-	MaxTip  units.Length
+	// OtherProfiles are the further ground test profiles of an EN 1997-1
+	// design (design.other_profiles).
+	OtherProfiles []profile.Spec
+	System        units.System
+	Ground        profile.Spec
+	Pile          pile.Pile
+	Methods       pile.Methods
+	Basis         pile.Basis // nil without a design section
+	Loads         pile.Loads
+	HasLoad       bool
+	Step          units.Length
+	MaxTip        units.Length
 	// Settle and LoadTest are the settlement and load-test sections; nil
 	// when the file has none.
 	Settle   *SettleInputs
@@ -178,27 +181,33 @@ func Resolve(f *File) (*Inputs, error) {
 }
 
 func (r *resolver) ground(f *File, in *Inputs) {
-	g := f.Ground
-	s := &in.Ground
+	in.Ground = r.groundSpec(&f.Ground, "ground", in.System)
+}
+
+// groundSpec resolves one ground profile; pre is its key path ("ground",
+// or "design.other_profiles[2]").
+func (r *resolver) groundSpec(g *Ground, pre string, sys units.System) profile.Spec {
+	var spec profile.Spec
+	s := &spec
 	switch strings.TrimSpace(strings.ToLower(g.WaterDepth.Raw)) {
 	case "":
-		r.add("ground.water_depth", 0, "not given; give the depth of the water table below ground level (negative for water above the ground), or \"none\" for a dry site")
+		r.add(pre+".water_depth", 0, "not given; give the depth of the water table below ground level (negative for water above the ground), or \"none\" for a dry site")
 	case "none":
 		s.NoWater = true
 	default:
-		s.WaterDepth = r.length(g.WaterDepth, "ground.water_depth")
+		s.WaterDepth = r.length(g.WaterDepth, pre+".water_depth")
 	}
-	s.WaterUnitWeight = r.weight(g.WaterUnitWeight, "ground.water_unit_weight")
-	if s.WaterUnitWeight == 0 && in.System == units.US {
+	s.WaterUnitWeight = r.weight(g.WaterUnitWeight, pre+".water_unit_weight")
+	if s.WaterUnitWeight == 0 && sys == units.US {
 		s.WaterUnitWeight = 62.4 * units.PCF
 	}
-	s.Surcharge = r.stress(g.Surcharge, "ground.surcharge")
-	s.ExcavationDepth = r.length(g.ExcavationDepth, "ground.excavation_depth")
+	s.Surcharge = r.stress(g.Surcharge, pre+".surcharge")
+	s.ExcavationDepth = r.length(g.ExcavationDepth, pre+".excavation_depth")
 	if g.Scour != nil {
-		s.Scour = profile.Scour{General: r.length(g.Scour.General, "ground.scour.general"), Local: r.length(g.Scour.Local, "ground.scour.local")}
+		s.Scour = profile.Scour{General: r.length(g.Scour.General, pre+".scour.general"), Local: r.length(g.Scour.Local, pre+".scour.local")}
 	}
 	for i, p := range g.PorePressures {
-		path := fmt.Sprintf("ground.pore_pressures[%d]", i)
+		path := fmt.Sprintf(pre+".pore_pressures[%d]", i)
 		if !p.Depth.IsSet() || !p.Pressure.IsSet() {
 			r.add(path, p.Depth.Line, "give both depth and pressure")
 		}
@@ -206,10 +215,10 @@ func (r *resolver) ground(f *File, in *Inputs) {
 			Depth: r.length(p.Depth, path+".depth"), U: r.stress(p.Pressure, path+".pressure")})
 	}
 	if len(g.Layers) == 0 {
-		r.add("ground.layers", 0, "none given; give at least one layer")
+		r.add(pre+".layers", 0, "none given; give at least one layer")
 	}
 	for i, l := range g.Layers {
-		path := fmt.Sprintf("ground.layers[%d]", i)
+		path := fmt.Sprintf(pre+".layers[%d]", i)
 		ls := profile.LayerSpec{Name: l.Name}
 		ls.Thickness = r.length(l.Thickness, path+".thickness")
 		ls.Top = r.length(l.Top, path+".top")
@@ -297,6 +306,7 @@ func (r *resolver) ground(f *File, in *Inputs) {
 		}
 		s.Layers = append(s.Layers, ls)
 	}
+	return spec
 }
 
 func (r *resolver) pile(f *File, in *Inputs) {
@@ -810,6 +820,14 @@ func (r *resolver) design(f *File, in *Inputs) {
 		}
 		r.en7Tables(d, &fs, in.Pile.Installation)
 		e.Factors = &fs
+		for i := range d.OtherProfiles {
+			in.OtherProfiles = append(in.OtherProfiles, r.groundSpec(&d.OtherProfiles[i], fmt.Sprintf("design.other_profiles[%d]", i), in.System))
+		}
+		if n := 1 + len(d.OtherProfiles); len(d.OtherProfiles) > 0 && d.Profiles.IsSet() && int(prof) != n {
+			r.add("design.profiles", d.Profiles.Line, "%g, but the file gives %d ground profiles (ground and other_profiles); leave profiles out or make it %d", prof, n, n)
+		} else if len(d.OtherProfiles) > 0 {
+			e.Profiles = n
+		}
 		in.Basis = e
 	case "":
 		r.add("design.basis", 0, "not given; want safety-factor, lrfd or en1997")
@@ -823,7 +841,7 @@ var designKeysOf = map[string][]string{
 	"safety-factor": {"factor", "tip_factor", "shaft_factor", "tension_factor", "weight_unfactored"},
 	"lrfd":          {"preset", "tip", "shaft", "uplift", "permanent", "variable", "weight"},
 	"en1997": {"approach", "profiles", "model_factor", "total", "annex", "sls_verified", "xi3", "xi4",
-		"resistance_factors", "action_factors"},
+		"resistance_factors", "action_factors", "other_profiles"},
 }
 
 // en7Tables replaces the annex's factors with the file's: resistance sets
@@ -897,10 +915,11 @@ func (r *resolver) designKeys(d *Design) {
 		"model_factor": d.ModelFactor.IsSet(), "total": d.Total, "weight_unfactored": d.WeightUnfactored,
 		"weight": d.Weight.IsSet(), "annex": d.Annex != "", "sls_verified": d.SLSVerified, "xi3": d.Xi3.IsSet(),
 		"xi4": d.Xi4.IsSet(), "resistance_factors": d.Resistance != nil, "action_factors": d.Actions != nil,
+		"other_profiles": d.OtherProfiles != nil,
 	}
 	for _, k := range []string{"factor", "tip_factor", "shaft_factor", "tension_factor", "weight_unfactored", "preset",
 		"tip", "shaft", "uplift", "permanent", "variable", "weight", "approach", "profiles", "model_factor", "total",
-		"annex", "sls_verified", "xi3", "xi4", "resistance_factors", "action_factors"} {
+		"annex", "sls_verified", "xi3", "xi4", "resistance_factors", "action_factors", "other_profiles"} {
 		if set[k] && !slices.Contains(reads, k) {
 			r.add("design."+k, 0, "basis %s does not use %s; it reads %s", strings.TrimSpace(d.Basis), k, strings.Join(reads, ", "))
 		}

@@ -112,6 +112,11 @@ func Run(f *File) (*Result, error) {
 			return nil, translate(f, err)
 		}
 		res.Design = &d
+		if len(in.OtherProfiles) > 0 {
+			if err := res.severalProfiles(f, in, prof); err != nil {
+				return nil, err
+			}
+		}
 		cases, _ := in.Basis.Cases(in.Pile.Installation)
 		if len(res.WithDepth) > 0 && d.Governing < len(cases) {
 			cs := cases[d.Governing]
@@ -188,6 +193,64 @@ func layerMethods(prof *profile.Profile, b pile.Breakdown) []LayerMethods {
 	}
 	out[b.Tip.Layer].Tip = b.Tip.Method
 	return out
+}
+
+// severalProfiles replaces the design check by EN 1997-1's verification
+// from n ground test profiles (eq. 7.8): the characteristic resistances
+// of the pile in the file's ground and in each of design.other_profiles
+// (with the pile-wide methods) give Rc,k = min(mean/ξ3, min/ξ4).
+func (res *Result) severalProfiles(f *File, in *Inputs, prof *profile.Profile) error {
+	e, ok := in.Basis.(pile.Eurocode7)
+	if !ok {
+		return Problems{{Path: "design.other_profiles", Line: lineOf(f, "design.other_profiles"), Msg: "other ground profiles apply to the en1997 basis only"}}
+	}
+	one := func(p *profile.Profile, ms pile.Methods) (pile.ProfileResistance, error) {
+		a, err := pile.NewAnalysis(p, in.Pile, ms, nil)
+		if err != nil {
+			return pile.ProfileResistance{}, err
+		}
+		c, err := a.Capacity()
+		return pile.ProfileResistance{Base: c.Tip, Shaft: c.Shaft, Tension: c.TensionShaft}, err
+	}
+	first, err := one(prof, in.Methods)
+	if err != nil {
+		return translate(f, err)
+	}
+	cal := []pile.ProfileResistance{first}
+	wide := in.Methods
+	wide.Layers = nil // layer-by-layer choices belong to the file's own ground
+	for i, spec := range in.OtherProfiles {
+		pre := fmt.Sprintf("design.other_profiles[%d]", i)
+		p, err := profile.New(spec)
+		if err == nil {
+			var r pile.ProfileResistance
+			if r, err = one(p, wide); err == nil {
+				cal = append(cal, r)
+				continue
+			}
+		}
+		return prefixed(f, pre, err)
+	}
+	d, err := e.VerifyProfiles(in.Pile.Installation, cal, res.Breakdown.Weight, in.Loads)
+	if err != nil {
+		return translate(f, err)
+	}
+	res.Design = &d
+	res.Warnings = append(res.Warnings, fmt.Sprintf("the design check uses %d ground profiles (EN 1997-1 eq. 7.8); capacity with depth and the required length use the file's ground only", len(cal)))
+	return nil
+}
+
+// prefixed reports err of a further ground profile under its own key.
+func prefixed(f *File, pre string, err error) error {
+	var ps Problems
+	if errors.As(translate(f, err), &ps) {
+		for i := range ps {
+			ps[i].Path = pre + "." + strings.TrimPrefix(ps[i].Path, "ground.")
+			ps[i].Line = lineOf(f, ps[i].Path)
+		}
+		return ps
+	}
+	return err
 }
 
 // unusual returns warnings for values that are accepted but unusual enough

@@ -150,6 +150,8 @@ var badCases = []badCase{
 	{file: "208-load-test-unknown-criterion", want: []string{"load_test.criteria[1] (line 38)", "by-eye"}},
 	{file: "209-allowable-as-force", want: []string{"settlement.allowable (line 31)", "want a length"}},
 	{file: "210-tz-ratio-above-one", want: []string{"ground.layers[1].t_z.points[1][1] (line 20)", "outside 0 to 1"}},
+	{file: "211-other-profile-bad-thickness", want: []string{"design.other_profiles[0].layers[0].thickness (line 27)", "outside"}},
+	{file: "212-other-profiles-under-safety-factor", want: []string{"design.other_profiles (line 24)", "does not use other_profiles"}},
 }
 
 const badTimeout = 5 * time.Second
