@@ -19,8 +19,8 @@ import (
 //     al. 2010, also from memory).
 //   - Meyerhof (1976): unit point resistance of bored piles about one third
 //     of that of driven piles in the same sand (from memory).
-//   - Das (2019), Meyerhof's Nq* at 35 and 40 deg: 143 and 346 (read, as
-//     listed in REFERENCES.md).
+//   - Das (2019), Meyerhof's Nq* at 35 and 40 deg: 143 and 346 (read in a
+//     reproduction of Das's table).
 //   - NIST SP 811 (2008): 1 psf = 47.880259 Pa, so 1 tsf = 95.760518 kPa.
 
 const tsfKPa = 2000 * 47.880259 / 1000

@@ -18,8 +18,8 @@ import (
 //     reproduction of the page, three significant figures; the edition
 //     holding that table number is not confirmed).
 //   - Das, B.M. (2019). Principles of Foundation Engineering, interpolated
-//     values of Meyerhof's Nq* (values at 20, 25, …, 45 deg read, as listed
-//     in REFERENCES.md; 1-degree values from memory). The recalled
+//     values of Meyerhof's Nq* (values at 20, 25, …, 45 deg read in a
+//     reproduction of Das's table; 1-degree values from memory). The recalled
 //     1-degree values agree, value for value, with an independent
 //     transcription of Das's table ("Tabla 11.5", 7th ed. numbering) found
 //     in a public repository: a secondary check, not the book itself.
@@ -243,8 +243,8 @@ func TestVesicDrainedTip(t *testing.T) {
 }
 
 // dasMeyerhof holds Das (2019), interpolated Nq* from Meyerhof's theory.
-// read marks the values listed as read in REFERENCES.md; the rest are
-// from memory.
+// read marks the values read in a reproduction of Das's table; the rest
+// are from memory.
 var dasMeyerhof = []struct {
 	phi, nq float64
 	read    bool

@@ -62,7 +62,7 @@ func TestK(t *testing.T) {
 }
 
 // TestKulhawyRanges checks the K/K0 and δ/φ′ ranges against Kulhawy (1984),
-// from memory (see /work/shared/REFERENCES.md), and the defaults (middles).
+// from memory, and the defaults (middles).
 func TestKulhawyRanges(t *testing.T) {
 	kr := []struct {
 		i      Installation
@@ -238,7 +238,7 @@ func beta(r Result) float64  { return r.Beta }
 func alpha(r Result) float64 { return r.Alpha }
 
 // TestAPIClasses checks the API RP 2GEO (2011) β and fL by class, from
-// memory (see /work/shared/REFERENCES.md).
+// memory.
 func TestAPIClasses(t *testing.T) {
 	cases := []struct {
 		c    SandClass
@@ -263,7 +263,7 @@ func TestAPIClasses(t *testing.T) {
 }
 
 // TestLambda checks λ against the tabulation in Das after Vijayvergiya &
-// Focht (1972), from memory (values also in /work/shared/REFERENCES.md),
+// Focht (1972), from memory,
 // within the stated reading tolerance.
 func TestLambda(t *testing.T) {
 	cases := []struct {

@@ -196,7 +196,7 @@ func checkBad(t *testing.T, c badCase, r outcome, name string) {
 		ok = ok && strings.Contains(r.stderr, w)
 	}
 	if !ok && c.calcBug != "" {
-		t.Skipf("KNOWN FAULT IN CALC (reported to the lead): %s; got exit %d, stderr %q", c.calcBug, r.code, r.stderr)
+		t.Skipf("KNOWN FAULT IN CALC: %s; got exit %d, stderr %q", c.calcBug, r.code, r.stderr)
 	}
 	if r.code != 2 {
 		t.Errorf("%s: exit code %d, want 2; stderr:\n%s", name, r.code, r.stderr)
