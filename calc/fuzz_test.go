@@ -1,5 +1,7 @@
 package calc
 
+// Sources: none; fuzz seeds are invented scenarios.
+
 import (
 	"errors"
 	"math"

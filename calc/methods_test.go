@@ -1,5 +1,9 @@
 package calc
 
+// Sources: none needed; these tests check how calc files choose methods and
+// refuse keys; the numbers are invented inputs, compared in closed form with
+// the methods built directly.
+
 // The methods of a calc file come from the catalogues of packages bearing
 // and shaft. The files here are our own, small variations of base; the
 // defaults checked (K/K0 1.5 for driven high-displacement piles, δ/φ′ 0.6
