@@ -191,21 +191,10 @@ func checkFrom(t LoadTest, from int) error {
 // is reached only at infinite settlement. Fit the straight part of the
 // plot (the later points).
 func ChinKondner(t LoadTest, from int) (Limit, error) {
-	if err := t.check(3); err != nil {
+	c1, c2, r2, err := t.fitFrom(from, "Chin-Kondner", func(q, s float64) float64 { return s / q })
+	if err != nil {
 		return Limit{}, err
 	}
-	if err := checkFrom(t, from); err != nil {
-		return Limit{}, err
-	}
-	q, s := t.hyperPoints(from)
-	if len(q) < 3 {
-		return Limit{}, fmt.Errorf("load_test.points: %d points with load and settlement above zero from point %d; Chin-Kondner needs 3", len(q), from)
-	}
-	y := make([]float64, len(q))
-	for i := range q {
-		y[i] = s[i] / q[i]
-	}
-	c1, c2, r2 := fit(s, y)
 	if !(c1 > 0) {
 		return Limit{}, fmt.Errorf("load_test.points: s/Q against s has slope %.4g ≤ 0; the points show no asymptote (load them further)", c1)
 	}
@@ -219,6 +208,29 @@ func ChinKondner(t LoadTest, from int) (Limit, error) {
 		Refs: []cite.Ref{{Source: cite.Chin1970, Where: "s/Q against s"}, {Source: cite.Kondner1963, Where: "hyperbola"}}}, nil
 }
 
+// fitFrom fits y(Q, s) = C1·s + C2 by least squares over the points from
+// index from whose load and settlement are above zero (at least 3), the
+// straight line of the hyperbolic criteria; name says which criterion in
+// the messages.
+func (t LoadTest) fitFrom(from int, name string, y func(q, s float64) float64) (c1, c2, r2 float64, err error) {
+	if err := t.check(3); err != nil {
+		return 0, 0, 0, err
+	}
+	if err := checkFrom(t, from); err != nil {
+		return 0, 0, 0, err
+	}
+	q, s := t.hyperPoints(from)
+	if len(q) < 3 {
+		return 0, 0, 0, fmt.Errorf("load_test.points: %d points with load and settlement above zero from point %d; %s needs 3", len(q), from, name)
+	}
+	ys := make([]float64, len(q))
+	for i := range q {
+		ys[i] = y(q[i], s[i])
+	}
+	c1, c2, r2 = fit(s, ys)
+	return c1, c2, r2, nil
+}
+
 // BrinchHansen80 returns Brinch Hansen's (1963) 80 % criterion: the
 // ultimate load Qu is the load at which the settlement is four times the
 // settlement at 0.8·Qu. With the curve taken as √s/Q = C1·s + C2 (fitted
@@ -228,21 +240,10 @@ func ChinKondner(t LoadTest, from int) (Limit, error) {
 //
 // (the fitting procedure as described by Fellenius, from memory).
 func BrinchHansen80(t LoadTest, from int) (Limit, error) {
-	if err := t.check(3); err != nil {
+	c1, c2, r2, err := t.fitFrom(from, "Brinch Hansen's criterion", func(q, s float64) float64 { return math.Sqrt(s) / q })
+	if err != nil {
 		return Limit{}, err
 	}
-	if err := checkFrom(t, from); err != nil {
-		return Limit{}, err
-	}
-	q, s := t.hyperPoints(from)
-	if len(q) < 3 {
-		return Limit{}, fmt.Errorf("load_test.points: %d points with load and settlement above zero from point %d; Brinch Hansen's criterion needs 3", len(q), from)
-	}
-	y := make([]float64, len(q))
-	for i := range q {
-		y[i] = math.Sqrt(s[i]) / q[i]
-	}
-	c1, c2, r2 := fit(s, y)
 	if !(c1 > 0 && c2 > 0) {
 		return Limit{}, fmt.Errorf("load_test.points: √s/Q against s gives C1 = %.4g, C2 = %.4g; both must be above zero (the points do not show the criterion)", c1, c2)
 	}
