@@ -607,7 +607,7 @@ func (r *resolver) shaftMethod(id string, given map[string]Value, path, methodPa
 	if surf == 0 {
 		surf = pile.DefaultSurface(p.Section, p.Installation)
 	}
-	c, err := d.New(shaft.Values{Num: num, Word: word, Installation: shaftInst(p.Installation), Surface: surf})
+	c, err := d.New(shaft.Values{Num: num, Word: word, Installation: p.Installation, Surface: surf})
 	if err != nil {
 		r.add(methodPath, 0, "%v", err)
 		return d.Kind, false
@@ -621,18 +621,6 @@ func (r *resolver) shaftMethod(id string, given map[string]Value, path, methodPa
 		lm.Shaft = c.Unit
 	}
 	return d.Kind, true
-}
-
-func shaftInst(i pile.Installation) shaft.Installation {
-	switch i {
-	case pile.DrivenHigh:
-		return shaft.DrivenHighDisplacement
-	case pile.DrivenLow:
-		return shaft.DrivenLowDisplacement
-	case pile.Jetted:
-		return shaft.Jetted
-	}
-	return shaft.Bored
 }
 
 func (r *resolver) methods(f *File, in *Inputs) {

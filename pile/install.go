@@ -1,47 +1,40 @@
 package pile
 
-import "fmt"
+import (
+	"fmt"
 
-// Installation is how the pile is put in the ground. It selects the
-// documented defaults of the methods (K/K0 and δ/φ′ in the β method, the
-// EN 1997-1 resistance table), never hidden constants.
-type Installation int
+	"github.com/qultgeo/qult/shaft"
+)
 
-// The installation methods.
+// Installation is how the pile is put in the ground: the module's one
+// installation type, defined in package shaft (its K/K0 ranges live there)
+// and used here under the same name. It selects the documented defaults of
+// the methods (K/K0 and δ/φ′ in the β method, the EN 1997-1 resistance
+// table), never hidden constants.
+type Installation = shaft.Installation
+
+// The installation methods (the constants of package shaft, under the
+// same names).
 const (
 	// DrivenHigh is a driven high-displacement pile (closed pipe, precast
 	// concrete, timber).
-	DrivenHigh Installation = iota + 1
+	DrivenHigh = shaft.DrivenHigh
 	// DrivenLow is a driven low-displacement pile (H-section, open pipe).
-	DrivenLow
+	DrivenLow = shaft.DrivenLow
 	// Bored is a bored pile or drilled shaft.
-	Bored
+	Bored = shaft.Bored
 	// Augered is a continuous flight auger (CFA) pile.
-	Augered
+	Augered = shaft.Augered
 	// Jetted is a pile installed with jetting.
-	Jetted
+	Jetted = shaft.Jetted
 )
 
-var installIDs = [...]string{DrivenHigh: "driven-high", DrivenLow: "driven-low", Bored: "bored",
-	Augered: "augered", Jetted: "jetted"}
-
-// String returns the identifier used in calc files.
-func (i Installation) String() string {
-	if i > 0 && int(i) < len(installIDs) {
-		return installIDs[i]
-	}
-	return fmt.Sprintf("Installation(%d)", int(i))
-}
-
-// ParseInstallation reads an installation identifier.
+// ParseInstallation reads an installation identifier ("driven-high",
+// "driven-low", "bored", "augered", "jetted").
 func ParseInstallation(s string) (Installation, error) {
-	for i := DrivenHigh; i <= Jetted; i++ {
-		if installIDs[i] == s {
-			return i, nil
-		}
+	i, err := shaft.ParseInstallation(s)
+	if err != nil {
+		return 0, fmt.Errorf("installation %q: want one of driven-high, driven-low, bored, augered, jetted", s)
 	}
-	return 0, fmt.Errorf("installation %q: want one of driven-high, driven-low, bored, augered, jetted", s)
+	return i, nil
 }
-
-// Driven reports whether the pile is driven (high or low displacement).
-func (i Installation) Driven() bool { return i == DrivenHigh || i == DrivenLow }

@@ -55,21 +55,6 @@ func DefaultSurface(sec Section, inst Installation) shaft.Surface {
 	}
 }
 
-// shaftInstallation maps an installation to Kulhawy's (1984) K/K0
-// categories: augered (CFA) piles are taken as bored.
-func shaftInstallation(i Installation) shaft.Installation {
-	switch i {
-	case DrivenHigh:
-		return shaft.DrivenHighDisplacement
-	case DrivenLow:
-		return shaft.DrivenLowDisplacement
-	case Jetted:
-		return shaft.Jetted
-	default:
-		return shaft.Bored
-	}
-}
-
 // SelfWeight says how the pile's own weight enters compression capacity.
 type SelfWeight int
 
@@ -597,7 +582,7 @@ func (a *Analysis) plan(i int) (layerPlan, error) {
 	case drained && m.ShaftDrained != nil:
 		lp.shaft = m.ShaftDrained
 	case drained:
-		k, err := shaft.KOverK0For(shaftInstallation(a.pile.Installation))
+		k, err := shaft.KOverK0For(a.pile.Installation)
 		if err != nil {
 			return lp, pathErrorf(path+".shaft", "layer %q: %w", l.Name, err)
 		}

@@ -23,7 +23,7 @@ var (
 )
 
 func benchMethods() []Unit {
-	kb, _ := KOverK0For(DrivenHighDisplacement)
+	kb, _ := KOverK0For(DrivenHigh)
 	dr, _ := DeltaOverPhiFor(RoughSteel)
 	return []Unit{
 		Beta{K: KGiven{K: 1}, Delta: DeltaGiven{Delta: d(25)}},

@@ -85,7 +85,7 @@ func TestCatalogueBuilds(t *testing.T) {
 		}
 		var inputs []Values
 		if !required {
-			inputs = append(inputs, Values{Installation: DrivenHighDisplacement, Surface: SmoothSteel})
+			inputs = append(inputs, Values{Installation: DrivenHigh, Surface: SmoothSteel})
 		}
 		inputs = append(inputs, sample(d))
 		for _, v := range inputs {
@@ -177,7 +177,7 @@ func TestCatalogueBeta(t *testing.T) {
 	// Defaults: the middle of Kulhawy's ranges, as KOverK0For and
 	// DeltaOverPhiFor give them (1.5 driven high displacement, 0.6 smooth
 	// steel; package doc).
-	b := build(Values{Installation: DrivenHighDisplacement, Surface: SmoothSteel})
+	b := build(Values{Installation: DrivenHigh, Surface: SmoothSteel})
 	if b.K != (KOverK0{Ratio: 1.5}) || b.Delta != (DeltaOverPhi{Ratio: 0.6}) {
 		t.Errorf("defaults built K %+v, δ %+v", b.K, b.Delta)
 	}

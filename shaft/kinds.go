@@ -14,21 +14,34 @@ type Range struct{ Lo, Hi float64 }
 // within a published range.
 func (r Range) Mid() float64 { return (r.Lo + r.Hi) / 2 }
 
-// Installation is how a pile is put in the ground, as Kulhawy (1984) groups
-// installations for K/K0.
+// Installation is how a pile is put in the ground. It is the one
+// installation type of the module: package pile uses it under the same
+// name (pile.Installation is this type), so a value passes between the
+// packages without conversion. It selects documented defaults (K/K0 and
+// δ/φ′ in the β method, the EN 1997-1 resistance table), never hidden
+// constants.
 type Installation uint8
 
+// The installation methods, numbered from 1 so that the zero value means
+// "not given".
 const (
-	Jetted                 Installation = iota + 1 // jetted pile
-	Bored                                          // bored pile or drilled shaft
-	DrivenLowDisplacement                          // driven, low displacement (H pile, open pipe)
-	DrivenHighDisplacement                         // driven, high displacement (closed pipe, precast)
+	// DrivenHigh is a driven high-displacement pile (closed pipe, precast
+	// concrete, timber).
+	DrivenHigh Installation = iota + 1
+	// DrivenLow is a driven low-displacement pile (H-section, open pipe).
+	DrivenLow
+	// Bored is a bored pile or drilled shaft.
+	Bored
+	// Augered is a continuous flight auger (CFA) pile.
+	Augered
+	// Jetted is a pile installed with jetting.
+	Jetted
 )
 
-var installationIDs = [...]string{"", "jetted", "bored", "driven-low", "driven-high"}
+var installationIDs = [...]string{"", "driven-high", "driven-low", "bored", "augered", "jetted"}
 
-// String returns our identifier: "jetted", "bored", "driven-low" or
-// "driven-high" (the same identifiers as the pile package uses).
+// String returns the identifier used in calc files: "driven-high",
+// "driven-low", "bored", "augered" or "jetted".
 func (i Installation) String() string {
 	if int(i) < len(installationIDs) && i != 0 {
 		return installationIDs[i]
@@ -46,6 +59,9 @@ func ParseInstallation(s string) (Installation, error) {
 	return 0, &ChoiceError{Field: "installation", Value: s, Accepted: installationIDs[1:]}
 }
 
+// Driven reports whether the pile is driven (high or low displacement).
+func (i Installation) Driven() bool { return i == DrivenHigh || i == DrivenLow }
+
 // KOverK0 returns Kulhawy's (1984) range of K/K0 for the installation:
 //
 //	jetted                    1/2 to 2/3
@@ -53,16 +69,20 @@ func ParseInstallation(s string) (Installation, error) {
 //	driven, low displacement  3/4 to 5/4
 //	driven, high displacement 1   to 2
 //
-// These ranges were recalled, not read in the source (see the package doc).
+// A CFA (augered) pile takes the bored range: Kulhawy groups
+// installations by the disturbance and the stress change they cause, and a
+// CFA pile, cast against an augered hole, is nearer a bored pile than a
+// driven one (our choice; common practice). These ranges were recalled, not
+// read in the source (see the package doc).
 func (i Installation) KOverK0() (Range, error) {
 	switch i {
 	case Jetted:
 		return Range{1.0 / 2, 2.0 / 3}, nil
-	case Bored:
+	case Bored, Augered:
 		return Range{2.0 / 3, 1}, nil
-	case DrivenLowDisplacement:
+	case DrivenLow:
 		return Range{3.0 / 4, 5.0 / 4}, nil
-	case DrivenHighDisplacement:
+	case DrivenHigh:
 		return Range{1, 2}, nil
 	}
 	return Range{}, &ChoiceError{Field: "installation", Value: i.String(), Accepted: installationIDs[1:]}

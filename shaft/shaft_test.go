@@ -68,10 +68,10 @@ func TestKulhawyRanges(t *testing.T) {
 		i      Installation
 		lo, hi float64
 	}{
-		{Jetted, 1.0 / 2, 2.0 / 3},                // Kulhawy (1984), from memory
-		{Bored, 2.0 / 3, 1},                       // Kulhawy (1984), from memory
-		{DrivenLowDisplacement, 3.0 / 4, 5.0 / 4}, // Kulhawy (1984), from memory
-		{DrivenHighDisplacement, 1, 2},            // Kulhawy (1984), from memory
+		{Jetted, 1.0 / 2, 2.0 / 3},    // Kulhawy (1984), from memory
+		{Bored, 2.0 / 3, 1},           // Kulhawy (1984), from memory
+		{DrivenLow, 3.0 / 4, 5.0 / 4}, // Kulhawy (1984), from memory
+		{DrivenHigh, 1, 2},            // Kulhawy (1984), from memory
 	}
 	for _, c := range kr {
 		r, err := c.i.KOverK0()
