@@ -52,7 +52,7 @@ type Result struct {
 	DesignWithDepth []units.Force
 	// Length is the shortest pile that passes, when a design basis and
 	// loads are given.
-	Length *pile.Length
+	Length *pile.LengthResult
 
 	// Settlement is the settlement at the serviceability load (nil without
 	// a settlement section); LoadTest the load test read by its criteria

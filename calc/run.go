@@ -100,7 +100,7 @@ func Run(f *File) (*Result, error) {
 	deep.Length = maxTip - in.Pile.HeadDepth
 	ad, err := pile.NewAnalysis(prof, deep, in.Methods, nil)
 	if err == nil {
-		res.WithDepth, err = ad.WithDepth(in.Pile.HeadDepth+step, maxTip, step, nil)
+		res.WithDepth, err = ad.WithDepth(pile.DepthGrid{From: in.Pile.HeadDepth + step, To: maxTip, Step: step}, nil)
 	}
 	if err != nil {
 		res.Warnings = append(res.Warnings, "capacity with depth stops short: "+err.Error())
@@ -121,7 +121,7 @@ func Run(f *File) (*Result, error) {
 		if len(res.WithDepth) > 0 && d.Governing < len(cases) {
 			cs := cases[d.Governing]
 			if a2, err := pile.NewAnalysis(prof, deep, in.Methods, &pile.Options{Case: &cs}); err == nil {
-				if rows, err := a2.WithDepth(in.Pile.HeadDepth+step, maxTip, step, nil); err == nil {
+				if rows, err := a2.WithDepth(pile.DepthGrid{From: in.Pile.HeadDepth + step, To: maxTip, Step: step}, nil); err == nil {
 					for _, c := range rows {
 						res.DesignWithDepth = append(res.DesignWithDepth, c.DesignCompression)
 					}
@@ -129,7 +129,7 @@ func Run(f *File) (*Result, error) {
 			}
 		}
 		if in.HasLoad {
-			l, err := pile.RequiredLength(prof, in.Pile, in.Methods, in.Basis, in.Loads, step, maxTip)
+			l, err := pile.RequiredLength(prof, in.Pile, in.Methods, in.Basis, in.Loads, pile.Search{Step: step, MaxTip: maxTip})
 			if err != nil {
 				res.Warnings = append(res.Warnings, "required length not found: "+err.Error())
 			} else {

@@ -76,7 +76,7 @@ func BenchmarkCapacityWithDepth(b *testing.B) {
 			b.ReportAllocs()
 			for b.Loop() {
 				var err error
-				rows, err = a.WithDepth(0.1*m, 60*m, 0.1*m, rows[:0])
+				rows, err = a.WithDepth(DepthGrid{From: 0.1 * m, To: 60 * m, Step: 0.1 * m}, rows[:0])
 				if err != nil {
 					b.Fatal(err)
 				}

@@ -114,8 +114,11 @@ func Check(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads) (Design, 
 	return d, nil
 }
 
-// Length is the result of a search for the shortest pile.
-type Length struct {
+// LengthResult is the result of a search for the shortest pile
+// (RequiredLength). When Found is false, TipDepth and Length are zero and
+// NotFound, BestTipDepth, BestUse and BestGoverns say how near the search
+// came and where it stopped.
+type LengthResult struct {
 	Found bool
 	// TipDepth is the shallowest candidate tip depth from which every
 	// longer candidate, down to the search limit, passes every case;
@@ -151,7 +154,7 @@ type DepthRange struct{ From, To units.Length }
 // NotFound returns the sentence that explains a search that found no
 // length: the search limit, the step and the best utilisation reached; ""
 // when a length was found.
-func (l Length) NotFound() string {
+func (l LengthResult) NotFound() string {
 	if l.Found {
 		return ""
 	}
@@ -159,37 +162,65 @@ func (l Length) NotFound() string {
 		l.MaxTip.Metres(), l.Step.Metres(), l.BestUse, l.BestGoverns, l.BestTipDepth.Metres())
 }
 
-// RequiredLength finds the shallowest tip depth, on a grid from the pile
-// head + step down to maxTip in steps of step, from which every candidate
-// down to maxTip passes every case of basis b: a length passes only if
-// every longer one up to the search limit passes too, since a pile driven
-// a little deeper than designed must not fail (a dense lens over a soft
-// layer can pass a short pile and fail longer ones). Where the passing
-// candidates form more than one range, the ranges are returned in Passing
-// with a warning. Each case is one pass down the pile with running sums,
-// not one analysis per depth. p.Length is ignored.
-func RequiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, step, maxTip units.Length) (Length, error) {
+// Search is the grid of candidate tip depths that RequiredLength tries:
+// from the pile head + Step down to MaxTip in steps of Step. The zero value
+// searches in steps of 0.5 m down to the bottom of the profile.
+type Search struct {
+	// Step is the distance between candidate tip depths, > 0 m; zero means
+	// 0.5 m.
+	Step units.Length
+	// MaxTip is the deepest candidate tip depth: below the head and
+	// within the profile. Zero means the bottom of the profile.
+	MaxTip units.Length
+}
+
+// DefaultSearchStep is the step of a Search whose Step is zero.
+const DefaultSearchStep = 0.5 * units.Metre
+
+// RequiredLength finds the shallowest tip depth, on the grid of s, from
+// which every candidate down to s.MaxTip passes every case of basis b: a
+// length passes only if every longer one up to the search limit passes
+// too, since a pile driven a little deeper than designed must not fail (a
+// dense lens over a soft layer can pass a short pile and fail longer ones).
+// Where the passing candidates form more than one range, the ranges are
+// returned in Passing with a warning. Each case is one pass down the pile
+// with running sums, not one analysis per depth. p.Length is ignored.
+//
+// A search that finds nothing is not an error: the result has Found false
+// and says, in NotFound and the Best fields, how near it came. An error
+// means the inputs are wrong (a *PathError names the field).
+func RequiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, s Search) (LengthResult, error) {
+	if prof == nil {
+		return LengthResult{}, errors.New("design: no ground profile given")
+	}
+	step, maxTip := s.Step, s.MaxTip
+	if step == 0 {
+		step = DefaultSearchStep
+	}
+	if maxTip == 0 {
+		maxTip = prof.Depth()
+	}
 	if b == nil {
-		return Length{}, errors.New("design: no design basis given")
+		return LengthResult{}, errors.New("design: no design basis given")
 	}
 	if err := l.Validate("loads"); err != nil {
-		return Length{}, err
+		return LengthResult{}, err
 	}
 	if !(step > 0) || math.IsInf(float64(step), 0) {
-		return Length{}, pathErrorf("search.step", "%v is outside (0, ∞) m", step)
+		return LengthResult{}, pathErrorf("search.step", "%v is outside (0, ∞) m", step)
 	}
 	if maxTip > prof.Depth() || maxTip <= p.HeadDepth {
-		return Length{}, pathErrorf("search.max_tip", "%v: want below the head (%v) and within the profile (to %v)", maxTip, p.HeadDepth, prof.Depth())
+		return LengthResult{}, pathErrorf("search.max_tip", "%v: want below the head (%v) and within the profile (to %v)", maxTip, p.HeadDepth, prof.Depth())
 	}
 	if n := float64((maxTip - p.HeadDepth) / step); n > 1e6 {
-		return Length{}, pathErrorf("search.step", "%v gives %.3g candidate depths; at most 1e6", step, n)
+		return LengthResult{}, pathErrorf("search.step", "%v gives %.3g candidate depths; at most 1e6", step, n)
 	}
 	if p.HeadDepth+step > maxTip {
-		return Length{}, pathErrorf("search.step", "%v is longer than the search range from the head (%v) to max_tip (%v)", step, p.HeadDepth, maxTip)
+		return LengthResult{}, pathErrorf("search.step", "%v is longer than the search range from the head (%v) to max_tip (%v)", step, p.HeadDepth, maxTip)
 	}
 	cases, err := b.Cases(p.Installation)
 	if err != nil {
-		return Length{}, err
+		return LengthResult{}, err
 	}
 	q := p
 	q.Length = maxTip - p.HeadDepth
@@ -198,15 +229,15 @@ func RequiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, 
 		cs := cases[i]
 		a, err := NewAnalysis(prof, q, m, &Options{Case: &cs})
 		if err != nil {
-			return Length{}, fmt.Errorf("design case %s: %w", cs.Name, err)
+			return LengthResult{}, fmt.Errorf("design case %s: %w", cs.Name, err)
 		}
-		r, err := a.WithDepth(p.HeadDepth+step, maxTip, step, nil)
+		r, err := a.withDepth(p.HeadDepth+step, maxTip, step, nil)
 		if err != nil {
-			return Length{}, fmt.Errorf("design case %s: %w", cs.Name, err)
+			return LengthResult{}, fmt.Errorf("design case %s: %w", cs.Name, err)
 		}
 		rows = append(rows, r)
 	}
-	out := Length{Step: step, MaxTip: maxTip, BestUse: math.MaxFloat64}
+	out := LengthResult{Step: step, MaxTip: maxTip, BestUse: math.MaxFloat64}
 	n := len(rows[0])
 	pass := make([]bool, n)
 	use := make([]float64, n)
@@ -266,10 +297,40 @@ func RequiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, 
 	return out, nil
 }
 
-// WithDepth returns the capacity for tip depths from `from` to `to` in steps
-// of step (the last depth is `to` if the steps do not land on it), in one
-// pass with running sums along the shaft. Rows are appended to dst.
-func (a *Analysis) WithDepth(from, to, step units.Length, dst []Capacity) ([]Capacity, error) {
+// DepthGrid is the set of tip depths of Analysis.WithDepth: From, From +
+// Step, … up to To (To itself is the last depth if the steps do not land
+// on it). The zero value gives every 0.5 m from one step below the pile
+// head to the bottom of the profile.
+type DepthGrid struct {
+	// From is the shallowest tip depth, below the head; zero means the
+	// head + Step.
+	From units.Length
+	// To is the deepest tip depth, within the profile; zero means the
+	// bottom of the profile.
+	To units.Length
+	// Step is the distance between depths, > 0 m; zero means 0.5 m.
+	Step units.Length
+}
+
+// WithDepth returns the capacity for the tip depths of g, in one pass with
+// running sums along the shaft. Rows are appended to dst (pass dst[:0] to
+// reuse its storage: the call then allocates nothing).
+func (a *Analysis) WithDepth(g DepthGrid, dst []Capacity) ([]Capacity, error) {
+	step := g.Step
+	if step == 0 {
+		step = DefaultSearchStep
+	}
+	from, to := g.From, g.To
+	if from == 0 {
+		from = a.pile.HeadDepth + step
+	}
+	if to == 0 {
+		to = a.prof.Depth()
+	}
+	return a.withDepth(from, to, step, dst)
+}
+
+func (a *Analysis) withDepth(from, to, step units.Length, dst []Capacity) ([]Capacity, error) {
 	head := a.pile.HeadDepth
 	if !(from > head) || to > a.prof.Depth() || !(to >= from) {
 		return dst, fmt.Errorf("pile: depth range %v to %v: want below the head (%v) and within the profile (to %v)", from, to, head, a.prof.Depth())

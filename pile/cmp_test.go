@@ -40,7 +40,7 @@ func TestWithDepthEqualsSingleRunsCmp(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	rows, err := a.WithDepth(0.25*m, p.Length, 0.25*m, nil)
+	rows, err := a.WithDepth(DepthGrid{From: 0.25 * m, To: p.Length, Step: 0.25 * m}, nil)
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -60,7 +60,7 @@ func TestDesignGroundLine(t *testing.T) {
 	// Qs = α·su·P·(L − zd) = 0.7·60·2·8.
 	near(t, "α shaft below the excavation", cb.Shaft.KN(), 0.7*60*2*8, 1e-9)
 	// With depth: a tip above the design ground line holds nothing.
-	rows, err := b.WithDepth(1*m, 12*m, 1*m, nil)
+	rows, err := b.WithDepth(DepthGrid{From: 1 * m, To: 12 * m, Step: 1 * m}, nil)
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -55,7 +55,7 @@ func TestRequiredLengthClosedForm(t *testing.T) {
 	ms := Methods{ShaftUndrained: shaft.AlphaGiven{Alpha: 0.6}}
 	area := math.Pi / 4 * 0.25
 	lmin := (2500 - 9*50*area) / (0.6 * 50 * math.Pi * 0.5)
-	l, err := RequiredLength(prof, p, ms, SafetyFactor{Global: 2.5}, Loads{Compression: Action{Permanent: 1000 * kN}}, 0.5*m, 59*m)
+	l, err := RequiredLength(prof, p, ms, SafetyFactor{Global: 2.5}, Loads{Compression: Action{Permanent: 1000 * kN}}, Search{Step: 0.5 * m, MaxTip: 59 * m})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -67,9 +67,56 @@ func TestRequiredLengthClosedForm(t *testing.T) {
 		t.Errorf("governs %q, want compression", l.Governs)
 	}
 	// Too short a search range finds nothing.
-	l, err = RequiredLength(prof, p, ms, SafetyFactor{Global: 2.5}, Loads{Compression: Action{Permanent: 1000 * kN}}, 0.5*m, 30*m)
+	l, err = RequiredLength(prof, p, ms, SafetyFactor{Global: 2.5}, Loads{Compression: Action{Permanent: 1000 * kN}}, Search{Step: 0.5 * m, MaxTip: 30 * m})
 	if err != nil || l.Found {
 		t.Errorf("search to 30 m: %+v, %v; want not found", l, err)
+	}
+}
+
+// TestSearchZeroValues: the zero Search searches every 0.5 m down to the
+// bottom of the profile, and the zero DepthGrid gives every 0.5 m from one
+// step below the head to the bottom: the same answers as the values spelled
+// out (the closed form above gives 51.5 m in the 60 m clay). A search that
+// finds nothing is not an error and says how near it came.
+func TestSearchZeroValues(t *testing.T) {
+	prof := uniformClay(t)
+	p := Pile{Section: Section{Shape: Circle, Diameter: 0.5 * m}, Installation: Bored}
+	ms := Methods{ShaftUndrained: shaft.AlphaGiven{Alpha: 0.6}}
+	loads := Loads{Compression: Action{Permanent: 1000 * kN}}
+	zero, err := RequiredLength(prof, p, ms, SafetyFactor{Global: 2.5}, loads, Search{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	spelled, err := RequiredLength(prof, p, ms, SafetyFactor{Global: 2.5}, loads, Search{Step: 0.5 * m, MaxTip: 60 * m})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !zero.Found || zero.Length != spelled.Length || zero.Step != 0.5*m || zero.MaxTip != 60*m {
+		t.Errorf("zero Search: %+v; spelled out: %+v", zero, spelled)
+	}
+	if math.Abs(zero.Length.Metres()-51.5) > 1e-9 {
+		t.Errorf("zero Search: length %v, want 51.5 m", zero.Length)
+	}
+	none, err := RequiredLength(prof, p, ms, SafetyFactor{Global: 2.5}, Loads{Compression: Action{Permanent: 1e5 * kN}}, Search{})
+	if err != nil {
+		t.Fatalf("a search that finds nothing: error %v, want none", err)
+	}
+	if none.Found || none.BestTipDepth != 60*m || !strings.Contains(none.NotFound(), "60 m") || !(none.BestUse > 1) {
+		t.Errorf("not found: %+v, %q", none, none.NotFound())
+	}
+	if _, err := RequiredLength(prof, p, ms, SafetyFactor{Global: 2.5}, loads, Search{Step: -1 * m}); err == nil {
+		t.Error("a negative step: no error")
+	}
+	a, err := NewAnalysis(prof, Pile{Section: p.Section, Installation: Bored, Length: 60 * m}, ms, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	rows, err := a.WithDepth(DepthGrid{}, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(rows) != 120 || rows[0].TipDepth != 0.5*m || rows[119].TipDepth != 60*m {
+		t.Errorf("zero DepthGrid: %d rows from %v to %v, want 120 from 0.5 m to 60 m", len(rows), rows[0].TipDepth, rows[len(rows)-1].TipDepth)
 	}
 }
 

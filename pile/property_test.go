@@ -166,7 +166,7 @@ func TestWithDepthMatchesSingleRuns(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		rows, err := a.WithDepth(0.5*m, 30*m, 0.25*m, nil)
+		rows, err := a.WithDepth(DepthGrid{From: 0.5 * m, To: 30 * m, Step: 0.25 * m}, nil)
 		if err != nil {
 			t.Fatal(err)
 		}

@@ -119,7 +119,7 @@ func TestPropWithDepthMatchesSingleRunsRules(t *testing.T) {
 			r.Fatal(err)
 		}
 		step := rapid.Float64Range(0.1, 1).Draw(r, "step")
-		rows, err := a.WithDepth(units.Length(step), 30*m, units.Length(step), nil)
+		rows, err := a.WithDepth(DepthGrid{From: units.Length(step), To: 30 * m, Step: units.Length(step)}, nil)
 		if err != nil {
 			r.Fatal(err)
 		}

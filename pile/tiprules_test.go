@@ -223,7 +223,7 @@ func TestDrilledZones(t *testing.T) {
 	near(t, "rows sum to Qs", sum, float64(c.Shaft), 1e-9)
 	near(t, "length without friction in the rows", none, 2.1, 1e-9)
 	// WithDepth agrees with single runs (the bottom zone moves with the tip).
-	rows, err := a.WithDepth(1*m, 20*m, 0.5*m, nil)
+	rows, err := a.WithDepth(DepthGrid{From: 1 * m, To: 20 * m, Step: 0.5 * m}, nil)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -304,7 +304,7 @@ func TestRequiredLengthLens(t *testing.T) {
 		Layers: []LayerMethods{{}, {Tip: bearing.GivenNc{Nc: 60}}}}
 	p := Pile{Section: Section{Shape: Circle, Diameter: 0.5 * m}, Installation: DrivenHigh}
 	loads := Loads{Compression: Action{Permanent: 500 * kN}}
-	l, err := RequiredLength(prof, p, ms, SafetyFactor{Global: 2}, loads, 0.5*m, 30*m)
+	l, err := RequiredLength(prof, p, ms, SafetyFactor{Global: 2}, loads, Search{Step: 0.5 * m, MaxTip: 30 * m})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -323,7 +323,7 @@ func TestRequiredLengthLens(t *testing.T) {
 	}
 	// Searching only to 20 m finds nothing and says how near it came: the
 	// best is the lens, Ed/Rd = 500/((60·50·A + 0.5·50·π·0.5·10.5)/2).
-	l, err = RequiredLength(prof, p, ms, SafetyFactor{Global: 2}, loads, 0.5*m, 20*m)
+	l, err = RequiredLength(prof, p, ms, SafetyFactor{Global: 2}, loads, Search{Step: 0.5 * m, MaxTip: 20 * m})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -400,7 +400,7 @@ func TestRulesAllocateNothing(t *testing.T) {
 		t.Errorf("CapacityAt allocates %v times per run", n)
 	}
 	rows := make([]Capacity, 0, 200)
-	if n := testing.AllocsPerRun(20, func() { rows, _ = a.WithDepth(0.5*m, 11.5*m, 0.1*m, rows[:0]) }); n != 0 {
+	if n := testing.AllocsPerRun(20, func() { rows, _ = a.WithDepth(DepthGrid{From: 0.5 * m, To: 11.5 * m, Step: 0.1 * m}, rows[:0]) }); n != 0 {
 		t.Errorf("WithDepth allocates %v times per run", n)
 	}
 }

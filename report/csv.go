@@ -15,7 +15,7 @@ import (
 //	length:          capacity with depth
 //	settle:          the predicted load-settlement curve, with the load test's points
 func csvTable(r *calc.Result, o Options) *table {
-	c := conv{o.Units}
+	c := conv{o.sys}
 	switch o.View {
 	case ViewCheck:
 		if r.Design != nil {

@@ -9,7 +9,6 @@ import (
 
 	"github.com/qultgeo/qult/calc"
 	"github.com/qultgeo/qult/report"
-	"github.com/qultgeo/qult/units"
 )
 
 // A result rendered as the JSON a notebook reads: the schema name, the
@@ -30,7 +29,7 @@ pile:
 		return
 	}
 	var buf bytes.Buffer
-	if err := report.Write(&buf, r, report.JSON, report.Options{Units: units.SI, View: report.ViewCapacity}); err != nil {
+	if err := report.Write(&buf, r, report.JSON, report.Options{Units: report.SIUnits, View: report.ViewCapacity}); err != nil {
 		fmt.Println(err)
 		return
 	}

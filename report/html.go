@@ -56,7 +56,7 @@ func clean(s string) string {
 
 // addFigures puts the figures of the HTML calculation package into d.
 func addFigures(d *doc, r *calc.Result, o Options) error {
-	c := conv{o.Units}
+	c := conv{o.sys}
 	for i := range d.sections {
 		s := &d.sections[i]
 		switch s.heading {

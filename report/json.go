@@ -333,13 +333,13 @@ func nonNil(s []string) []string {
 
 // toJSON builds the JSON document of r.
 func toJSON(r *calc.Result, o Options) *jResult {
-	c := jconv{conv{o.Units}}
+	c := jconv{conv{o.sys}}
 	schema := r.Schema
 	if schema == "" {
 		schema = calc.ResultSchema
 	}
 	j := &jResult{Schema: schema, Version: r.Version, Verify: o.Verification, Title: r.Title, Project: r.Project, Revision: r.Revision,
-		Engineer: r.Engineer, Date: date(r, o), Units: o.Units.String(), Source: string(r.Source),
+		Engineer: r.Engineer, Date: date(r, o), Units: o.sys.String(), Source: string(r.Source),
 		Warnings: nonNil(allWarnings(r, c.conv)), Defaults: defaultRows(r, c.conv), Cautions: nonNil(r.Cautions), Sources: []jSource{}, WithDepth: []jDepthRow{}, Segments: []jSegment{}}
 	p := r.Pile
 	s := p.Section

@@ -81,7 +81,7 @@ type doc struct {
 
 // build assembles the document of view o.View.
 func build(r *calc.Result, o Options) *doc {
-	c := conv{o.Units}
+	c := conv{o.sys}
 	d := &doc{title: r.Title}
 	if d.title == "" {
 		d.title = "qult calculation"
@@ -156,7 +156,7 @@ func date(r *calc.Result, o Options) string {
 func secTitle(r *calc.Result, o Options) section {
 	var it []item
 	for _, kv := range [][2]string{{"Project", r.Project}, {"Revision", r.Revision}, {"Engineer", r.Engineer},
-		{"Date", date(r, o)}, {"qult version", r.Version}, {"Verification", o.Verification}, {"Display units", o.Units.String()}} {
+		{"Date", date(r, o)}, {"qult version", r.Version}, {"Verification", o.Verification}, {"Display units", o.sys.String()}} {
 		if kv[1] != "" {
 			it = append(it, item{label: kv[0], val: txt(kv[1])})
 		}

@@ -63,16 +63,16 @@ type View int
 
 // The views.
 const (
+	// ViewReport, the zero value, is the whole calculation package.
+	ViewReport View = iota
 	// ViewCheck is the design verification summary: loads, capacity
 	// totals, each design case with Ed, Rd and utilisation, and warnings.
-	ViewCheck View = iota
+	ViewCheck
 	// ViewCapacity is the full capacity breakdown: the per-segment shaft
 	// table, the tip block, the worked equations and the totals.
 	ViewCapacity
 	// ViewLength is the required length and the capacity with depth.
 	ViewLength
-	// ViewReport is the whole calculation package.
-	ViewReport
 	// ViewSettle is the settlement at the serviceability load, the
 	// predicted load-settlement curve, the axial load with depth and the
 	// load test read by its criteria.
@@ -99,12 +99,48 @@ func ParseView(s string) (View, error) {
 	return 0, fmt.Errorf("report: view %q: want check, capacity, length, report or settle", s)
 }
 
-// Options set how a result is rendered. The zero value renders the check
-// view in SI units without a date.
+// Units chooses the display system of a report.
+type Units int
+
+// The display systems of a report.
+const (
+	// FileUnits, the zero value, shows the system the calc file declared
+	// (calc.Result.Display).
+	FileUnits Units = iota
+	// SIUnits shows m, kPa, kN, kN/m³.
+	SIUnits
+	// USUnits shows ft, ksf, kip, pcf.
+	USUnits
+)
+
+// UnitsOf returns the report's Units for a display system of package units.
+func UnitsOf(s units.System) Units {
+	if s == units.US {
+		return USUnits
+	}
+	return SIUnits
+}
+
+// String returns "file", "SI" or "US".
+func (u Units) String() string {
+	switch u {
+	case FileUnits:
+		return "file"
+	case SIUnits:
+		return "SI"
+	case USUnits:
+		return "US"
+	}
+	return "Units(" + strconv.Itoa(int(u)) + ")"
+}
+
+// Options set how a result is rendered. The zero value renders the whole
+// calculation package (ViewReport) in the units the calc file declared,
+// with the calc file's own date.
 type Options struct {
-	// Units is the display system. Pass r.Display to show the system the
-	// calc file declared.
-	Units units.System
+	// Units is the display system; the zero value (FileUnits) shows the
+	// system the calc file declared.
+	Units Units
 	// View is what to render.
 	View View
 	// Date is written in the title block; empty means the calc file's own
@@ -115,6 +151,8 @@ type Options struct {
 	// reference cases, all pass"), shown in the title block; empty leaves
 	// it out.
 	Verification string
+
+	sys units.System // the display system, resolved by Write
 }
 
 // Write renders result r in format f to w.
@@ -125,10 +163,17 @@ func Write(w io.Writer, r *calc.Result, f Format, o Options) error {
 	if r == nil {
 		return fmt.Errorf("report: nil result")
 	}
-	if o.Units != units.SI && o.Units != units.US {
-		return fmt.Errorf("report: unit system %v: want SI or US", o.Units)
+	switch o.Units {
+	case FileUnits:
+		o.sys = r.Display
+	case SIUnits:
+		o.sys = units.SI
+	case USUnits:
+		o.sys = units.US
+	default:
+		return fmt.Errorf("report: unit system %v: want file, SI or US", o.Units)
 	}
-	if o.View < ViewCheck || o.View > ViewSettle {
+	if o.View < 0 || int(o.View) >= len(viewNames) {
 		return fmt.Errorf("report: view %v: want check, capacity, length, report or settle", o.View)
 	}
 	bw := bufio.NewWriterSize(w, 32<<10)

@@ -112,7 +112,7 @@ func TestWriteErrors(t *testing.T) {
 		{"nil result", nil, Text, Options{}},
 		{"format", r, Format(9), Options{}},
 		{"view", r, Text, Options{View: View(7)}},
-		{"units", r, Text, Options{Units: units.System(5)}},
+		{"units", r, Text, Options{Units: Units(5)}},
 	} {
 		if err := Write(io.Discard, c.r, c.f, c.o); err == nil {
 			t.Errorf("%s: no error", c.name)
@@ -169,7 +169,7 @@ func TestEveryFormatAndView(t *testing.T) {
 		for _, sys := range allSystems {
 			for _, v := range allViews {
 				for _, f := range allFormats {
-					o := Options{Units: sys, View: v}
+					o := Options{Units: UnitsOf(sys), View: v}
 					out := render(t, r, f, o)
 					name := filepath.Base(path) + "/" + sys.String() + "/" + v.String() + "/" + f.String()
 					if len(out) == 0 {
@@ -424,6 +424,25 @@ func TestFmtNum(t *testing.T) {
 	}
 }
 
+// TestZeroOptions: the zero Options render the whole calculation package in
+// the units the calc file declared, the same bytes as the view and units
+// spelled out; an SI file renders in SI, and the same result marked as a US
+// file renders in US units.
+func TestZeroOptions(t *testing.T) {
+	r := load(t, example, nil)
+	if got, want := render(t, r, Text, Options{}), render(t, r, Text, Options{Units: UnitsOf(r.Display), View: ViewReport}); got != want {
+		t.Error("zero Options differ from the whole package in the file's units")
+	}
+	us := *r
+	us.Display = units.US
+	if got, want := render(t, &us, Text, Options{}), render(t, &us, Text, Options{Units: USUnits, View: ViewReport}); got != want {
+		t.Error("zero Options on a US file differ from the whole package in US units")
+	}
+	if err := Write(io.Discard, r, Text, Options{Units: Units(9)}); err == nil {
+		t.Error("unknown Units: no error")
+	}
+}
+
 // TestUSDisplay checks the conversions of a 24 m pile with a 2200 kN load
 // shown in US units against the closed forms of NIST SP 811 (2008):
 // 24 m / 0.3048 = 78.74 ft; 2200 kN / 4.4482216152605 = 494.6 kip;
@@ -433,7 +452,7 @@ func TestUSDisplay(t *testing.T) {
 		s = regexp.MustCompile(`(?m)^  length: .*$`).ReplaceAllString(s, "  length: 24 m")
 		return regexp.MustCompile(`diameter: [0-9]+ mm`).ReplaceAllString(s, "diameter: 600 mm")
 	})
-	out := render(t, r, Text, Options{Units: units.US, View: ViewReport})
+	out := render(t, r, Text, Options{Units: USUnits, View: ViewReport})
 	for _, want := range []string{
 		`Length +78\.74 ft`,
 		`Size \(diameter or width\) +1\.969 ft`,
@@ -443,7 +462,7 @@ func TestUSDisplay(t *testing.T) {
 			t.Errorf("US report lacks %q", want)
 		}
 	}
-	chk := render(t, r, Text, Options{Units: units.US, View: ViewCheck})
+	chk := render(t, r, Text, Options{Units: USUnits, View: ViewCheck})
 	// 1500 kN permanent + 700 kN variable with the example's factor of 1 on
 	// loads: 2200 kN = 494.6 kip (closed form above).
 	if !regexp.MustCompile(`FS +494\.6 `).MatchString(chk) {
@@ -454,7 +473,7 @@ func TestUSDisplay(t *testing.T) {
 			Length qty `json:"length"`
 		} `json:"pile"`
 	}
-	if err := json.Unmarshal([]byte(render(t, r, JSON, Options{Units: units.US})), &j); err != nil {
+	if err := json.Unmarshal([]byte(render(t, r, JSON, Options{Units: USUnits})), &j); err != nil {
 		t.Fatal(err)
 	}
 	want := 24 / 0.3048 // closed form, NIST SP 811
@@ -619,7 +638,7 @@ func TestVariants(t *testing.T) {
 			}
 			for _, v := range allViews {
 				for _, f := range allFormats {
-					out := render(t, r, f, Options{View: v, Units: units.US})
+					out := render(t, r, f, Options{View: v, Units: USUnits})
 					name := c.name + "/" + v.String() + "/" + f.String()
 					if m := nonFinite.FindString(out); m != "" && f != JSON {
 						t.Errorf("%s: output holds %q", name, m)

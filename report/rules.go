@@ -185,8 +185,8 @@ func allWarnings(r *calc.Result, c conv) []string {
 	return out
 }
 
-// notFound is pile.Length.NotFound in display units.
-func notFound(l pile.Length, c conv) string {
+// notFound is pile.LengthResult.NotFound in display units.
+func notFound(l pile.LengthResult, c conv) string {
 	gov := ""
 	if l.BestGoverns != "" {
 		gov = " (" + l.BestGoverns + ")"

@@ -302,7 +302,7 @@ func TestWarningsEveryFormat(t *testing.T) {
 	}
 	// The not-found sentence is in display units in a US report: 18 m =
 	// 59.06 ft, 0.5 m = 1.640 ft (NIST SP 811).
-	us := flat(render(t, r, Text, Options{View: ViewLength, Units: units.US}))
+	us := flat(render(t, r, Text, Options{View: ViewLength, Units: USUnits}))
 	if !strings.Contains(us, "tip depth of 59.06 ft in steps of 1.64 ft") {
 		t.Errorf("US not-found sentence not in feet:\n%s", us)
 	}

@@ -21,7 +21,7 @@ func TestSettleViewEveryFormat(t *testing.T) {
 	r := load(t, settleExample, nil)
 	for _, sys := range allSystems {
 		for _, f := range allFormats {
-			out := render(t, r, f, Options{Units: sys, View: ViewSettle})
+			out := render(t, r, f, Options{Units: UnitsOf(sys), View: ViewSettle})
 			if strings.Contains(out, "NaN") || strings.Contains(out, "Inf") || strings.Contains(out, "n/a") {
 				t.Errorf("%v %v: a non-finite number in the output", f, sys)
 			}
@@ -80,7 +80,7 @@ func TestSettleJSON(t *testing.T) {
 				}
 			} `json:"load_test"`
 		}
-		if err := json.Unmarshal([]byte(render(t, r, JSON, Options{Units: sys, View: ViewSettle})), &d); err != nil {
+		if err := json.Unmarshal([]byte(render(t, r, JSON, Options{Units: UnitsOf(sys), View: ViewSettle})), &d); err != nil {
 			t.Fatal(err)
 		}
 		s := d.Settlement

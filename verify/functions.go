@@ -551,7 +551,7 @@ func runPile(what string) runner {
 			// The capacity with depth on a grid whose last depth is the
 			// one asked for.
 			step := depth / 10
-			rows, err := an.WithDepth(step, depth, step, nil)
+			rows, err := an.WithDepth(pile.DepthGrid{From: step, To: depth, Step: step}, nil)
 			if err != nil {
 				return nil, err
 			}

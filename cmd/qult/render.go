@@ -29,7 +29,7 @@ func render(w io.Writer, res *calc.Result, format string, view report.View, sys 
 	if err != nil {
 		return err
 	}
-	o := report.Options{Units: sys, View: view}
+	o := report.Options{Units: report.UnitsOf(sys), View: view}
 	if view == report.ViewReport || f == report.JSON { // the package's title block, and the whole result in JSON
 		o.Verification = verificationLine()
 	}
@@ -46,7 +46,7 @@ var verificationLine = sync.OnceValue(func() string {
 // renderJSONLine writes res as one line of the report's JSON form.
 func renderJSONLine(w io.Writer, res *calc.Result, sys units.System) error {
 	var buf, line bytes.Buffer
-	if err := report.Write(&buf, res, report.JSON, report.Options{Units: sys, View: report.ViewReport, Verification: verificationLine()}); err != nil {
+	if err := report.Write(&buf, res, report.JSON, report.Options{Units: report.UnitsOf(sys), View: report.ViewReport, Verification: verificationLine()}); err != nil {
 		return err
 	}
 	if err := json.Compact(&line, buf.Bytes()); err != nil {

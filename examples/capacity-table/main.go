@@ -52,7 +52,7 @@ func run() error {
 		return err
 	}
 	// One pass down the pile, every metre from 2 m to 20 m.
-	rows, err := a.WithDepth(2*m, 20*m, 1*m, nil)
+	rows, err := a.WithDepth(pile.DepthGrid{From: 2 * m, To: 20 * m, Step: 1 * m}, nil)
 	if err != nil {
 		return err
 	}

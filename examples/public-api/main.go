@@ -49,7 +49,7 @@ func run(w io.Writer) error {
 	if err != nil {
 		return err
 	}
-	rows, err := a.WithDepth(4*m, 30*m, 2*m, nil)
+	rows, err := a.WithDepth(pile.DepthGrid{From: 4 * m, To: 30 * m, Step: 2 * m}, nil)
 	if err != nil {
 		return err
 	}
@@ -66,7 +66,7 @@ func run(w io.Writer) error {
 		return err
 	}
 	loads := pile.Loads{Compression: pile.Action{Permanent: 1800 * units.Kilonewton, Variable: 600 * units.Kilonewton}}
-	l, err := pile.RequiredLength(ground, p, methods, basis, loads, 0.5*m, 34*m)
+	l, err := pile.RequiredLength(ground, p, methods, basis, loads, pile.Search{Step: 0.5 * m, MaxTip: 34 * m})
 	if err != nil {
 		return err
 	}
@@ -92,5 +92,5 @@ pile:
 	if err != nil {
 		return err
 	}
-	return report.Write(w, res, report.Text, report.Options{Units: units.SI, View: report.ViewCheck})
+	return report.Write(w, res, report.Text, report.Options{Units: report.SIUnits, View: report.ViewCheck})
 }
