@@ -709,15 +709,15 @@ func vesic(f *File, in *Inputs, sp *SettleInputs, prof *profile.Profile, res *Re
 			if prof.Layer(b.Tip.Layer).Drainage == profile.Undrained {
 				soil = settle.Clay
 			}
-			inst := settle.Driven
-			if !p.Installation.Driven() {
-				inst = settle.Bored
-			}
-			_, hi, err := settle.CpRange(soil, inst)
+			_, hi, err := settle.CpRange(soil, p.Installation)
 			if err != nil {
 				return nil, Problems{settleProblem(f, "settlement.vesic.cp", "%v", err)}
 			}
 			v.Cp = hi
+			inst := "bored"
+			if p.Installation.Driven() {
+				inst = "driven"
+			}
 			out.Notes = append(out.Notes, fmt.Sprintf("Cp = %.3g, the loose or soft end of Vesic's range for %s, %s (give settlement.vesic.cp for a dense or stiff soil, or a silt)", hi, soil, inst))
 		}
 	}

@@ -6,6 +6,7 @@ import (
 	"strings"
 	"testing"
 
+	"github.com/qultgeo/qult/pile"
 	"github.com/qultgeo/qult/units"
 )
 
@@ -121,20 +122,23 @@ func TestVesicBadInput(t *testing.T) {
 func TestCpTable(t *testing.T) {
 	for _, c := range []struct {
 		s      Soil
-		i      Install
+		i      pile.Installation
 		lo, hi float64
 	}{
-		{Sand, Driven, 0.02, 0.04}, {Sand, Bored, 0.09, 0.18}, // from memory
-		{Clay, Driven, 0.02, 0.03}, {Clay, Bored, 0.03, 0.06}, // from memory
-		{Silt, Driven, 0.03, 0.05}, {Silt, Bored, 0.09, 0.12}, // from memory
+		{Sand, pile.DrivenHigh, 0.02, 0.04}, {Sand, pile.Bored, 0.09, 0.18}, // from memory
+		{Clay, pile.DrivenLow, 0.02, 0.03}, {Clay, pile.Augered, 0.03, 0.06}, // from memory
+		{Silt, pile.DrivenHigh, 0.03, 0.05}, {Silt, pile.Jetted, 0.09, 0.12}, // from memory
 	} {
 		lo, hi, err := CpRange(c.s, c.i)
 		if err != nil || lo != c.lo || hi != c.hi {
 			t.Errorf("Cp %v %v = %v-%v (%v), want %v-%v", c.s, c.i, lo, hi, err, c.lo, c.hi)
 		}
 	}
-	if _, _, err := CpRange(Soil(7), Driven); err == nil {
+	if _, _, err := CpRange(Soil(7), pile.DrivenHigh); err == nil {
 		t.Error("an unknown soil gave no error")
+	}
+	if _, _, err := CpRange(Sand, 0); err == nil {
+		t.Error("no installation gave no error")
 	}
 }
 

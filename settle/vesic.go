@@ -5,6 +5,7 @@ import (
 	"math"
 
 	"github.com/qultgeo/qult/cite"
+	"github.com/qultgeo/qult/pile"
 	"github.com/qultgeo/qult/units"
 )
 
@@ -217,25 +218,6 @@ func (s Soil) String() string {
 	return fmt.Sprintf("Soil(%d)", int(s))
 }
 
-// Install is how the pile was made, for the table of Cp.
-type Install int
-
-const (
-	Driven Install = iota
-	Bored
-)
-
-// String returns "driven" or "bored".
-func (i Install) String() string {
-	if i == Driven {
-		return "driven"
-	}
-	if i == Bored {
-		return "bored"
-	}
-	return fmt.Sprintf("Install(%d)", int(i))
-}
-
 // CpRange returns Vesic's (1977) typical Cp, from the dense (stiff) end to
 // the loose (soft) end, as tabulated by Das (2019) (values from memory: not
 // read in the source here):
@@ -246,20 +228,26 @@ func (i Install) String() string {
 //	silt  0.03-0.05   0.09-0.12
 //
 // The high end gives the larger settlement; a reviewer expects it unless
-// the soil is known to be dense or stiff.
-func CpRange(s Soil, i Install) (lo, hi float64, err error) {
-	type key struct {
-		s Soil
-		i Install
+// the soil is known to be dense or stiff. Driven piles (high or low
+// displacement) take the driven column; bored, augered (CFA) and jetted
+// piles the bored one, the larger values (our choice: the table has only
+// the two columns).
+func CpRange(s Soil, i pile.Installation) (lo, hi float64, err error) {
+	if i < pile.DrivenHigh || i > pile.Jetted {
+		return 0, 0, fmt.Errorf("cp: installation %v: want driven-high, driven-low, bored, augered or jetted", i)
 	}
-	tab := map[key][2]float64{
-		{Sand, Driven}: {0.02, 0.04}, {Sand, Bored}: {0.09, 0.18},
-		{Clay, Driven}: {0.02, 0.03}, {Clay, Bored}: {0.03, 0.06},
-		{Silt, Driven}: {0.03, 0.05}, {Silt, Bored}: {0.09, 0.12},
+	col := 1
+	if i.Driven() {
+		col = 0
 	}
-	v, ok := tab[key{s, i}]
+	tab := map[Soil][2][2]float64{
+		Sand: {{0.02, 0.04}, {0.09, 0.18}},
+		Clay: {{0.02, 0.03}, {0.03, 0.06}},
+		Silt: {{0.03, 0.05}, {0.09, 0.12}},
+	}
+	v, ok := tab[s]
 	if !ok {
-		return 0, 0, fmt.Errorf("cp: no value for soil %v and installation %v (sand, clay or silt; driven or bored)", s, i)
+		return 0, 0, fmt.Errorf("cp: soil %v: want sand, clay or silt", s)
 	}
-	return v[0], v[1], nil
+	return v[col][0], v[col][1], nil
 }
