@@ -313,12 +313,16 @@ type Basis interface {
 // conservative habit Bond & Harris (2008, §13.4, tension piles) note, and
 // dividing by the factor is our default between the two. WeightUnfactored
 // counts W′ at its full value (a choice the output should show).
+//
+// In a calc file these are the keys of design (basis: safety-factor):
+// Global is factor, Tip is tip_factor, Shaft is shaft_factor, Tension is
+// tension_factor and WeightUnfactored is weight_unfactored.
 type SafetyFactor struct {
-	Global           float64
-	Tip              float64
-	Shaft            float64
-	Tension          float64
-	WeightUnfactored bool
+	Global           float64 // the global factor of safety (calc file: factor)
+	Tip              float64 // the factor on the tip (tip_factor)
+	Shaft            float64 // the factor on the shaft (shaft_factor)
+	Tension          float64 // the factor in tension (tension_factor)
+	WeightUnfactored bool    // count W′ unfactored in uplift (weight_unfactored)
 }
 
 // ID returns "safety-factor".
