@@ -78,11 +78,16 @@ func (ps Problems) Error() string {
 }
 
 // Decode reads a calc file in YAML or JSON (JSON is read as YAML, of which
-// it is a subset). It is strict: unknown keys, duplicate keys, anchors and
+// it is a subset; a file that is one JSON object is read by a faster JSON
+// reader into the same node tree, with the same problems). It is strict: unknown keys, duplicate keys, anchors and
 // aliases, more than one document, files over MaxFileSize and nesting
 // deeper than a calc file needs are errors. Every problem found is
 // reported, each with its field path and line, as Problems.
-func Decode(data []byte) (*File, error) {
+func Decode(data []byte) (*File, error) { return decode(data, true) }
+
+// decode is Decode; with fast false it never takes the JSON reader (tests
+// compare the two paths).
+func decode(data []byte, fast bool) (*File, error) {
 	if len(data) > MaxFileSize {
 		return nil, Problems{{Msg: fmt.Sprintf("%d bytes is over the limit of %d bytes (1 MiB)", len(data), MaxFileSize)}}
 	}
@@ -92,6 +97,33 @@ func Decode(data []byte) (*File, error) {
 	if err := scanDepth(data); err != nil {
 		return nil, err
 	}
+	var root *yaml.Node
+	ok := false
+	if fast {
+		root, ok = jsonTree(data)
+	}
+	if !ok {
+		var err error
+		if root, err = yamlTree(data); err != nil {
+			return nil, err
+		}
+	}
+	if root.Kind != yaml.MappingNode {
+		return nil, Problems{{Line: root.Line, Msg: "the top level must be a mapping of keys (title, ground, pile, …)"}}
+	}
+	d := decoder{lines: map[string]int{}}
+	var f File
+	d.value(root, reflect.ValueOf(&f).Elem(), "", 0)
+	if len(d.probs) > 0 {
+		return nil, d.probs
+	}
+	f.lines = d.lines
+	return &f, nil
+}
+
+// yamlTree parses data with the YAML parser and returns the root node of
+// its one document.
+func yamlTree(data []byte) (*yaml.Node, error) {
 	dec := yaml.NewDecoder(bytes.NewReader(data))
 	var doc yaml.Node
 	if err := dec.Decode(&doc); err != nil {
@@ -117,17 +149,7 @@ func Decode(data []byte) (*File, error) {
 	if root.Kind == yaml.DocumentNode && len(root.Content) == 1 {
 		root = root.Content[0]
 	}
-	if root.Kind != yaml.MappingNode {
-		return nil, Problems{{Line: root.Line, Msg: "the top level must be a mapping of keys (title, ground, pile, …)"}}
-	}
-	d := decoder{lines: map[string]int{}}
-	var f File
-	d.value(root, reflect.ValueOf(&f).Elem(), "", 0)
-	if len(d.probs) > 0 {
-		return nil, d.probs
-	}
-	f.lines = d.lines
-	return &f, nil
+	return root, nil
 }
 
 // scanDepth refuses flow nesting ([ and {) deeper than maxDepth before

@@ -57,7 +57,7 @@ func Run(f *File) (*Result, error) {
 	if err != nil {
 		return nil, translate(f, err)
 	}
-	res := &Result{Schema: ResultSchema, Version: version, Title: f.Title, Project: f.Project, Revision: f.Revision,
+	res := &Result{Schema: ResultSchema, Version: version, ID: f.ID, Title: f.Title, Project: f.Project, Revision: f.Revision,
 		Engineer: f.Engineer, Date: f.Date, Display: in.System, Input: f, Ground: prof, Layers: prof.Layers(),
 		Pile: in.Pile, Loads: in.Loads, Cautions: CautionText()}
 	for _, b := range prof.Breaks() {
