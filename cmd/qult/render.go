@@ -1,8 +1,6 @@
 package main
 
 import (
-	"bytes"
-	"encoding/json"
 	"io"
 	"strings"
 	"sync"
@@ -42,17 +40,3 @@ func render(w io.Writer, res *calc.Result, format string, view report.View, sys 
 var verificationLine = sync.OnceValue(func() string {
 	return strings.TrimPrefix(verify.SummaryText(), "verification: ")
 })
-
-// renderJSONLine writes res as one line of the report's JSON form.
-func renderJSONLine(w io.Writer, res *calc.Result, sys units.System) error {
-	var buf, line bytes.Buffer
-	if err := report.Write(&buf, res, report.JSON, report.Options{Units: sys, View: report.ViewReport, Verification: verificationLine()}); err != nil {
-		return err
-	}
-	if err := json.Compact(&line, buf.Bytes()); err != nil {
-		return err
-	}
-	line.WriteByte('\n')
-	_, err := w.Write(line.Bytes())
-	return err
-}
