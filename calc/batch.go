@@ -23,6 +23,10 @@ type BatchOptions struct {
 	// Memory is bounded by the window, not by the length of the input.
 	// Negative is an error.
 	Window int
+	// NoWithDepth leaves capacity with depth uncomputed (Result.WithDepth
+	// and DesignWithDepth empty), for callers that do not show it: the
+	// table is the largest part of most results and of their cost.
+	NoWithDepth bool
 	// Finish, when set, is called once for every item, in the worker that
 	// ran it and before the item is delivered, so that work on the result
 	// (such as rendering it) runs in parallel too. It may set the item's
@@ -96,7 +100,7 @@ func RunBatch(ctx context.Context, in io.Reader, o BatchOptions, emit func(Batch
 		go func() {
 			defer wg.Done()
 			for j := range jobs {
-				it := batchOne(j.line, j.data, j.long)
+				it := batchOne(j.line, j.data, j.long, runOptions{noWithDepth: o.NoWithDepth})
 				if o.Finish != nil {
 					finish(o.Finish, &it)
 				}
@@ -209,7 +213,7 @@ func readLine(br *bufio.Reader, limit int) ([]byte, bool, error) {
 }
 
 // batchOne runs one line; a panic becomes the item's error.
-func batchOne(line int, data []byte, long bool) (it BatchItem) {
+func batchOne(line int, data []byte, long bool, ro runOptions) (it BatchItem) {
 	it.Line = line
 	defer func() {
 		if p := recover(); p != nil {
@@ -236,7 +240,7 @@ func batchOne(line int, data []byte, long bool) (it BatchItem) {
 	if it.ID == "" {
 		it.ID = f.Title
 	}
-	r, err := Run(f)
+	r, err := run(f, ro)
 	if err != nil {
 		it.Err = err
 		return it

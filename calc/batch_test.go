@@ -225,3 +225,24 @@ func TestRunBatchStops(t *testing.T) {
 		t.Errorf("cancelled before the start: err %v, %d lines read", err, src.lines.Load())
 	}
 }
+
+// TestRunBatchNoWithDepth: NoWithDepth leaves capacity with depth out and
+// changes nothing else of the result.
+func TestRunBatchNoWithDepth(t *testing.T) {
+	in, _ := batchInput()
+	full := collect(t, in, calc.BatchOptions{Workers: 2})
+	lean := collect(t, in, calc.BatchOptions{Workers: 2, NoWithDepth: true})
+	for i := range full {
+		f, l := full[i].Result, lean[i].Result
+		if f == nil {
+			continue
+		}
+		if len(f.WithDepth) == 0 || len(l.WithDepth) != 0 || len(l.DesignWithDepth) != 0 {
+			t.Errorf("line %d: %d rows with depth in full, %d and %d in lean", full[i].Line, len(f.WithDepth), len(l.WithDepth), len(l.DesignWithDepth))
+		}
+		if f.Breakdown.Capacity != l.Breakdown.Capacity || !reflect.DeepEqual(f.Design, l.Design) || !reflect.DeepEqual(f.Length, l.Length) ||
+			!reflect.DeepEqual(f.Warnings, l.Warnings) {
+			t.Errorf("line %d: the lean result differs beyond capacity with depth", full[i].Line)
+		}
+	}
+}

@@ -9,6 +9,7 @@ import (
 	"sort"
 	"strconv"
 	"strings"
+	"sync"
 
 	"go.yaml.in/yaml/v3"
 )
@@ -387,25 +388,9 @@ func (d *decoder) mapping(n *yaml.Node, v reflect.Value, path string, depth int)
 		d.add(path, n.Line, "want a mapping of keys, got %s", kindName(n))
 		return
 	}
-	t := v.Type()
-	fields := map[string]int{}
-	var names []string
-	inline := -1 // a map field that takes every other key (the keys of a method)
-	for i := 0; i < t.NumField(); i++ {
-		parts := strings.Split(t.Field(i).Tag.Get("yaml"), ",")
-		tag := parts[0]
-		if tag == "" && len(parts) > 1 && parts[1] == "inline" && t.Field(i).Type.Kind() == reflect.Map {
-			inline = i
-			continue
-		}
-		if tag == "" || tag == "-" {
-			continue
-		}
-		fields[tag] = i
-		names = append(names, tag)
-	}
-	sort.Strings(names)
-	seen := map[string]bool{}
+	si := infoOf(v.Type())
+	fields, inline := si.fields, si.inline
+	seen := make(map[string]bool, len(n.Content)/2)
 	for i := 0; i+1 < len(n.Content); i += 2 {
 		k, c := n.Content[i], n.Content[i+1]
 		if k.Kind != yaml.ScalarNode {
@@ -434,7 +419,7 @@ func (d *decoder) mapping(n *yaml.Node, v reflect.Value, path string, depth int)
 			continue
 		}
 		if !ok {
-			d.add(p, k.Line, "unknown key %q; accepted here: %s", k.Value, strings.Join(names, ", "))
+			d.add(p, k.Line, "unknown key %q; accepted here: %s", k.Value, si.names)
 			continue
 		}
 		if seen[k.Value] {
@@ -444,4 +429,41 @@ func (d *decoder) mapping(n *yaml.Node, v reflect.Value, path string, depth int)
 		seen[k.Value] = true
 		d.value(c, v.Field(fi), p, depth+1)
 	}
+}
+
+// structInfo is what mapping needs of a struct type: its keys by their
+// yaml tags, and the map field that takes every other key.
+type structInfo struct {
+	fields map[string]int
+	names  string // the accepted keys, sorted, for messages
+	inline int    // a map field that takes every other key (the keys of a method); -1 for none
+}
+
+// structInfos caches structInfo by type: a pure function of the type,
+// computed once per type rather than once per mapping read.
+var structInfos sync.Map // reflect.Type → *structInfo
+
+func infoOf(t reflect.Type) *structInfo {
+	if v, ok := structInfos.Load(t); ok {
+		return v.(*structInfo)
+	}
+	si := &structInfo{fields: map[string]int{}, inline: -1}
+	var names []string
+	for i := 0; i < t.NumField(); i++ {
+		parts := strings.Split(t.Field(i).Tag.Get("yaml"), ",")
+		tag := parts[0]
+		if tag == "" && len(parts) > 1 && parts[1] == "inline" && t.Field(i).Type.Kind() == reflect.Map {
+			si.inline = i
+			continue
+		}
+		if tag == "" || tag == "-" {
+			continue
+		}
+		si.fields[tag] = i
+		names = append(names, tag)
+	}
+	sort.Strings(names)
+	si.names = strings.Join(names, ", ")
+	v, _ := structInfos.LoadOrStore(t, si)
+	return v.(*structInfo)
 }

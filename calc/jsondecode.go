@@ -1,6 +1,7 @@
 package calc
 
 import (
+	"bytes"
 	"strconv"
 	"unicode/utf8"
 
@@ -22,6 +23,9 @@ import (
 // JSON, refused by YAML), a surrogate escape, characters YAML refuses.
 func jsonTree(data []byte) (root *yaml.Node, ok bool) {
 	p := jsonParser{data: data, line: 1}
+	// One slab for the nodes of the mappings: a key and a value per
+	// colon; the elements of lists take further small slabs as needed.
+	p.nodes = make([]yaml.Node, 1+2*bytes.Count(data, []byte{':'}))
 	p.space()
 	if p.i >= len(p.data) || p.data[p.i] != '{' {
 		return nil, false
@@ -45,11 +49,20 @@ type jsonParser struct {
 	// nodes is a slab the nodes are cut from: one allocation for many.
 	nodes []yaml.Node
 	buf   []byte
+	// stack holds the children of the open collections; each collection
+	// takes an exact copy of its own when it closes.
+	stack []*yaml.Node
+}
+
+// close gives n the children pushed since mark.
+func (p *jsonParser) close(n *yaml.Node, mark int) {
+	n.Content = append(make([]*yaml.Node, 0, len(p.stack)-mark), p.stack[mark:]...)
+	p.stack = p.stack[:mark]
 }
 
 func (p *jsonParser) node(kind yaml.Kind, tag string, line int) *yaml.Node {
 	if len(p.nodes) == 0 {
-		p.nodes = make([]yaml.Node, 64)
+		p.nodes = make([]yaml.Node, 16)
 	}
 	n := &p.nodes[0]
 	p.nodes = p.nodes[1:]
@@ -92,6 +105,7 @@ func (p *jsonParser) value(depth int) *yaml.Node {
 			p.i++
 			return n
 		}
+		mark := len(p.stack)
 		for !p.bad {
 			p.space()
 			if p.i >= len(p.data) || p.data[p.i] != '"' {
@@ -113,7 +127,7 @@ func (p *jsonParser) value(depth int) *yaml.Node {
 			p.i++
 			p.space()
 			v := p.value(depth + 1)
-			n.Content = append(n.Content, k, v)
+			p.stack = append(p.stack, k, v)
 			p.space()
 			if p.i >= len(p.data) {
 				p.bad = true
@@ -124,6 +138,7 @@ func (p *jsonParser) value(depth int) *yaml.Node {
 				p.i++
 			case '}':
 				p.i++
+				p.close(n, mark)
 				return n
 			default:
 				p.bad = true
@@ -140,9 +155,10 @@ func (p *jsonParser) value(depth int) *yaml.Node {
 			p.i++
 			return n
 		}
+		mark := len(p.stack)
 		for !p.bad {
 			p.space()
-			n.Content = append(n.Content, p.value(depth+1))
+			p.stack = append(p.stack, p.value(depth+1))
 			p.space()
 			if p.i >= len(p.data) {
 				p.bad = true
@@ -153,6 +169,7 @@ func (p *jsonParser) value(depth int) *yaml.Node {
 				p.i++
 			case ']':
 				p.i++
+				p.close(n, mark)
 				return n
 			default:
 				p.bad = true

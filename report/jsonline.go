@@ -1,9 +1,11 @@
 package report
 
 import (
-	"encoding/json"
 	"fmt"
 	"io"
+	"reflect"
+	"strconv"
+	"sync"
 
 	"github.com/qultgeo/qult/calc"
 	"github.com/qultgeo/qult/units"
@@ -27,24 +29,6 @@ type LineOptions struct {
 	OmitWithDepth bool
 }
 
-// jLine is the JSON document with the batch members in front.
-type jLine struct {
-	Line int    `json:"line,omitempty"`
-	ID   string `json:"id,omitempty"`
-	*jResult
-}
-
-// jLeanLine is jLine without capacity with depth: the nil field shadows
-// the embedded one (encoding/json takes the shallower field) and is
-// omitted.
-type jLeanLine struct {
-	Line int    `json:"line,omitempty"`
-	ID   string `json:"id,omitempty"`
-	*jResult
-	WithDepth []jDepthRow `json:"capacity_with_depth,omitempty"`
-	Omitted   []string    `json:"omitted"`
-}
-
 // WriteLine writes result r as one line of compact JSON ending in a line
 // break: the document Write gives in JSON (schema calc.ResultSchema, the
 // same members with the same numbers), encoded directly without
@@ -60,9 +44,39 @@ func WriteLine(w io.Writer, r *calc.Result, o LineOptions) error {
 		return fmt.Errorf("report: unit system %v: want SI or US", o.Units)
 	}
 	j := toJSON(r, Options{Units: o.Units, View: ViewReport, Date: o.Date, Verification: o.Verification})
-	var v any = jLine{o.Line, o.ID, j}
-	if o.OmitWithDepth {
-		v = jLeanLine{Line: o.Line, ID: o.ID, jResult: j, Omitted: []string{"capacity_with_depth"}}
+	bp := linePool.Get().(*[]byte)
+	defer linePool.Put(bp)
+	b := append((*bp)[:0], '{')
+	if o.Line != 0 {
+		b = append(b, `"line":`...)
+		b = strconv.AppendInt(b, int64(o.Line), 10)
+		b = append(b, ',')
 	}
-	return json.NewEncoder(w).Encode(v)
+	if o.ID != "" {
+		b = append(b, `"id":`...)
+		b = appendString(b, o.ID)
+		b = append(b, ',')
+	}
+	enc, tail := fullLine(), "}\n"
+	if o.OmitWithDepth {
+		enc, tail = leanLine(), `,"omitted":["capacity_with_depth"]}`+"\n"
+	}
+	// The document is {…}: its members follow the line and id, so its
+	// braces are dropped.
+	at := len(b)
+	b = enc(b, reflect.ValueOf(j).Elem())
+	copy(b[at:], b[at+1:len(b)-1])
+	b = append(b[:len(b)-2], tail...)
+	*bp = b
+	_, err := w.Write(b)
+	return err
 }
+
+// linePool recycles the line buffers (tens of kB each).
+var linePool = sync.Pool{New: func() any { b := make([]byte, 0, 64<<10); return &b }}
+
+// The plans of the result document, whole and without capacity with depth.
+var (
+	fullLine = sync.OnceValue(func() encFunc { return encoderOf(reflect.TypeOf(jResult{})) })
+	leanLine = sync.OnceValue(func() encFunc { return structEncoder(reflect.TypeOf(jResult{}), "capacity_with_depth") })
+)
