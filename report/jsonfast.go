@@ -30,9 +30,6 @@ var (
 	textType      = reflect.TypeOf((*interface{ MarshalText() ([]byte, error) })(nil)).Elem()
 )
 
-// appendJSON appends the JSON of v (not addressable values only read).
-func appendJSON(b []byte, v reflect.Value) []byte { return encoderOf(v.Type())(b, v) }
-
 func encoderOf(t reflect.Type) encFunc {
 	if f, ok := encoders.Load(t); ok {
 		return f.(encFunc)
@@ -145,7 +142,7 @@ func structEncoder(t reflect.Type, skip string) encFunc {
 		if name == skip {
 			continue
 		}
-		if !validKey(name) {
+		if !jsonPlainKey(name) {
 			return viaStdlib
 		}
 		key := appendString(nil, name)
@@ -157,7 +154,7 @@ func structEncoder(t reflect.Type, skip string) encFunc {
 		first := true
 		for _, f := range fields {
 			fv := v.Field(f.index)
-			if f.omitEmpty && isEmpty(fv) {
+			if f.omitEmpty && jsonEmpty(fv) {
 				continue
 			}
 			if !first {
@@ -171,8 +168,8 @@ func structEncoder(t reflect.Type, skip string) encFunc {
 	}
 }
 
-// validKey: a plain key that encoding/json writes as it is.
-func validKey(s string) bool {
+// jsonPlainKey: a plain key that encoding/json writes as it is.
+func jsonPlainKey(s string) bool {
 	for _, c := range s {
 		if c >= utf8.RuneSelf || c < 0x20 || c == '"' || c == '\\' || c == '<' || c == '>' || c == '&' {
 			return false
@@ -181,8 +178,8 @@ func validKey(s string) bool {
 	return s != ""
 }
 
-// isEmpty is encoding/json's omitempty test.
-func isEmpty(v reflect.Value) bool {
+// jsonEmpty is encoding/json's omitempty test.
+func jsonEmpty(v reflect.Value) bool {
 	switch v.Kind() {
 	case reflect.Array, reflect.Map, reflect.Slice, reflect.String:
 		return v.Len() == 0

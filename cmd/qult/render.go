@@ -23,6 +23,12 @@ var (
 // package report. The date is left to the calc file (none is made up), so
 // that the same file gives the same output.
 func render(w io.Writer, res *calc.Result, format string, view report.View, sys units.System) error {
+	switch format {
+	case "records":
+		return report.WriteRecords(w, res, report.Options{Units: sys, View: view})
+	case "records-csv":
+		return report.WriteRecordsCSV(w, res, report.Options{Units: sys, View: view})
+	}
 	f, err := report.ParseFormat(format)
 	if err != nil {
 		return err
