@@ -9,6 +9,7 @@ import (
 	"sort"
 	"strconv"
 	"strings"
+	"sync"
 
 	"go.yaml.in/yaml/v3"
 )
@@ -78,11 +79,16 @@ func (ps Problems) Error() string {
 }
 
 // Decode reads a calc file in YAML or JSON (JSON is read as YAML, of which
-// it is a subset). It is strict: unknown keys, duplicate keys, anchors and
+// it is a subset; a file that is one JSON object is read by a faster JSON
+// reader into the same node tree, with the same problems). It is strict: unknown keys, duplicate keys, anchors and
 // aliases, more than one document, files over MaxFileSize and nesting
 // deeper than a calc file needs are errors. Every problem found is
 // reported, each with its field path and line, as Problems.
-func Decode(data []byte) (*File, error) {
+func Decode(data []byte) (*File, error) { return decode(data, true) }
+
+// decode is Decode; with fast false it never takes the JSON reader (tests
+// compare the two paths).
+func decode(data []byte, fast bool) (*File, error) {
 	if len(data) > MaxFileSize {
 		return nil, Problems{{Msg: fmt.Sprintf("%d bytes is over the limit of %d bytes (1 MiB)", len(data), MaxFileSize)}}
 	}
@@ -92,6 +98,33 @@ func Decode(data []byte) (*File, error) {
 	if err := scanDepth(data); err != nil {
 		return nil, err
 	}
+	var root *yaml.Node
+	ok := false
+	if fast {
+		root, ok = jsonTree(data)
+	}
+	if !ok {
+		var err error
+		if root, err = yamlTree(data); err != nil {
+			return nil, err
+		}
+	}
+	if root.Kind != yaml.MappingNode {
+		return nil, Problems{{Line: root.Line, Msg: "the top level must be a mapping of keys (title, ground, pile, …)"}}
+	}
+	d := decoder{lines: map[string]int{}}
+	var f File
+	d.value(root, reflect.ValueOf(&f).Elem(), "", 0)
+	if len(d.probs) > 0 {
+		return nil, d.probs
+	}
+	f.lines = d.lines
+	return &f, nil
+}
+
+// yamlTree parses data with the YAML parser and returns the root node of
+// its one document.
+func yamlTree(data []byte) (*yaml.Node, error) {
 	dec := yaml.NewDecoder(bytes.NewReader(data))
 	var doc yaml.Node
 	if err := dec.Decode(&doc); err != nil {
@@ -117,17 +150,7 @@ func Decode(data []byte) (*File, error) {
 	if root.Kind == yaml.DocumentNode && len(root.Content) == 1 {
 		root = root.Content[0]
 	}
-	if root.Kind != yaml.MappingNode {
-		return nil, Problems{{Line: root.Line, Msg: "the top level must be a mapping of keys (title, ground, pile, …)"}}
-	}
-	d := decoder{lines: map[string]int{}}
-	var f File
-	d.value(root, reflect.ValueOf(&f).Elem(), "", 0)
-	if len(d.probs) > 0 {
-		return nil, d.probs
-	}
-	f.lines = d.lines
-	return &f, nil
+	return root, nil
 }
 
 // scanDepth refuses flow nesting ([ and {) deeper than maxDepth before
@@ -365,25 +388,9 @@ func (d *decoder) mapping(n *yaml.Node, v reflect.Value, path string, depth int)
 		d.add(path, n.Line, "want a mapping of keys, got %s", kindName(n))
 		return
 	}
-	t := v.Type()
-	fields := map[string]int{}
-	var names []string
-	inline := -1 // a map field that takes every other key (the keys of a method)
-	for i := 0; i < t.NumField(); i++ {
-		parts := strings.Split(t.Field(i).Tag.Get("yaml"), ",")
-		tag := parts[0]
-		if tag == "" && len(parts) > 1 && parts[1] == "inline" && t.Field(i).Type.Kind() == reflect.Map {
-			inline = i
-			continue
-		}
-		if tag == "" || tag == "-" {
-			continue
-		}
-		fields[tag] = i
-		names = append(names, tag)
-	}
-	sort.Strings(names)
-	seen := map[string]bool{}
+	si := infoOf(v.Type())
+	fields, inline := si.fields, si.inline
+	seen := make(map[string]bool, len(n.Content)/2)
 	for i := 0; i+1 < len(n.Content); i += 2 {
 		k, c := n.Content[i], n.Content[i+1]
 		if k.Kind != yaml.ScalarNode {
@@ -412,7 +419,7 @@ func (d *decoder) mapping(n *yaml.Node, v reflect.Value, path string, depth int)
 			continue
 		}
 		if !ok {
-			d.add(p, k.Line, "unknown key %q; accepted here: %s", k.Value, strings.Join(names, ", "))
+			d.add(p, k.Line, "unknown key %q; accepted here: %s", k.Value, si.names)
 			continue
 		}
 		if seen[k.Value] {
@@ -422,4 +429,41 @@ func (d *decoder) mapping(n *yaml.Node, v reflect.Value, path string, depth int)
 		seen[k.Value] = true
 		d.value(c, v.Field(fi), p, depth+1)
 	}
+}
+
+// structInfo is what mapping needs of a struct type: its keys by their
+// yaml tags, and the map field that takes every other key.
+type structInfo struct {
+	fields map[string]int
+	names  string // the accepted keys, sorted, for messages
+	inline int    // a map field that takes every other key (the keys of a method); -1 for none
+}
+
+// structInfos caches structInfo by type: a pure function of the type,
+// computed once per type rather than once per mapping read.
+var structInfos sync.Map // reflect.Type → *structInfo
+
+func infoOf(t reflect.Type) *structInfo {
+	if v, ok := structInfos.Load(t); ok {
+		return v.(*structInfo)
+	}
+	si := &structInfo{fields: map[string]int{}, inline: -1}
+	var names []string
+	for i := 0; i < t.NumField(); i++ {
+		parts := strings.Split(t.Field(i).Tag.Get("yaml"), ",")
+		tag := parts[0]
+		if tag == "" && len(parts) > 1 && parts[1] == "inline" && t.Field(i).Type.Kind() == reflect.Map {
+			si.inline = i
+			continue
+		}
+		if tag == "" || tag == "-" {
+			continue
+		}
+		si.fields[tag] = i
+		names = append(names, tag)
+	}
+	sort.Strings(names)
+	si.names = strings.Join(names, ", ")
+	v, _ := structInfos.LoadOrStore(t, si)
+	return v.(*structInfo)
 }

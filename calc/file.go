@@ -11,7 +11,11 @@ const FormatVersion = 1
 // declares (Units). Field names are the YAML/JSON keys.
 type File struct {
 	// Qult is the format version; 0 or absent means FormatVersion.
-	Qult     int    `yaml:"qult,omitempty" json:"qult,omitempty"`
+	Qult int `yaml:"qult,omitempty" json:"qult,omitempty"`
+	// ID is an identifier of the caller's own (a pile mark, a row key),
+	// carried unchanged into the result and into each batch answer, so
+	// that answers can be joined to their inputs.
+	ID       string `yaml:"id,omitempty" json:"id,omitempty" doc:"An identifier of your own (a pile mark, a row key), carried unchanged into the result and each batch answer."`
 	Title    string `yaml:"title" json:"title"`
 	Project  string `yaml:"project,omitempty" json:"project,omitempty"`
 	Revision string `yaml:"revision,omitempty" json:"revision,omitempty"`

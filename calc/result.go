@@ -16,6 +16,7 @@ const ResultSchema = "qult.result/1"
 type Result struct {
 	Schema   string
 	Version  string // qult version that ran it
+	ID       string // the calc file's id, as given
 	Title    string
 	Project  string
 	Revision string

@@ -48,7 +48,16 @@ func Parse(data []byte) (*Result, error) {
 // characteristic capacity with its breakdown, capacity with depth, and,
 // with a design basis, the design check and the required length. Bad
 // input gives Problems naming each field and its line.
-func Run(f *File) (*Result, error) {
+func Run(f *File) (*Result, error) { return run(f, runOptions{}) }
+
+// runOptions trim a run to what its caller shows.
+type runOptions struct {
+	// noWithDepth leaves capacity with depth (characteristic and design)
+	// uncomputed: Result.WithDepth and DesignWithDepth stay empty.
+	noWithDepth bool
+}
+
+func run(f *File, o runOptions) (*Result, error) {
 	in, err := Resolve(f)
 	if err != nil {
 		return nil, alsoLibrary(f, in, err)
@@ -57,7 +66,7 @@ func Run(f *File) (*Result, error) {
 	if err != nil {
 		return nil, translate(f, err)
 	}
-	res := &Result{Schema: ResultSchema, Version: version, Title: f.Title, Project: f.Project, Revision: f.Revision,
+	res := &Result{Schema: ResultSchema, Version: version, ID: f.ID, Title: f.Title, Project: f.Project, Revision: f.Revision,
 		Engineer: f.Engineer, Date: f.Date, Display: in.System, Input: f, Ground: prof, Layers: prof.Layers(),
 		Pile: in.Pile, Loads: in.Loads, Cautions: CautionText()}
 	for _, b := range prof.Breaks() {
@@ -99,7 +108,7 @@ func Run(f *File) (*Result, error) {
 	deep := in.Pile
 	deep.Length = maxTip - in.Pile.HeadDepth
 	ad, err := pile.NewAnalysis(prof, deep, in.Methods, nil)
-	if err == nil {
+	if err == nil && !o.noWithDepth {
 		res.WithDepth, err = ad.WithDepth(pile.DepthGrid{From: in.Pile.HeadDepth + step, To: maxTip, Step: step}, nil)
 	}
 	if err != nil {

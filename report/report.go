@@ -121,6 +121,19 @@ func UnitsOf(s units.System) Units {
 	return SIUnits
 }
 
+// resolve returns the display system u stands for in result r.
+func (u Units) resolve(r *calc.Result) (units.System, error) {
+	switch u {
+	case FileUnits:
+		return r.Display, nil
+	case SIUnits:
+		return units.SI, nil
+	case USUnits:
+		return units.US, nil
+	}
+	return 0, fmt.Errorf("report: unit system %v: want file, SI or US", u)
+}
+
 // String returns "file", "SI" or "US".
 func (u Units) String() string {
 	switch u {
@@ -163,21 +176,14 @@ func Write(w io.Writer, r *calc.Result, f Format, o Options) error {
 	if r == nil {
 		return fmt.Errorf("report: nil result")
 	}
-	switch o.Units {
-	case FileUnits:
-		o.sys = r.Display
-	case SIUnits:
-		o.sys = units.SI
-	case USUnits:
-		o.sys = units.US
-	default:
-		return fmt.Errorf("report: unit system %v: want file, SI or US", o.Units)
+	var err error
+	if o.sys, err = o.Units.resolve(r); err != nil {
+		return err
 	}
 	if o.View < 0 || int(o.View) >= len(viewNames) {
 		return fmt.Errorf("report: view %v: want check, capacity, length, report or settle", o.View)
 	}
 	bw := bufio.NewWriterSize(w, 32<<10)
-	var err error
 	switch f {
 	case Text, Markdown, CSV:
 		// Rendered whole, then cleaned of control and bidirectional

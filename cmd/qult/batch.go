@@ -3,37 +3,36 @@ package main
 import (
 	"bufio"
 	"bytes"
+	"context"
 	"encoding/json"
 	"errors"
 	"flag"
 	"fmt"
 	"io"
 	"os"
-	"runtime"
+	"runtime/debug"
 	"strings"
 	"sync"
 
 	"github.com/qultgeo/qult/calc"
+	"github.com/qultgeo/qult/report"
 	"github.com/qultgeo/qult/units"
 )
 
 type batchOpts struct {
-	units string
-	out   string
+	units   string
+	out     string
+	workers int
+	lean    bool
 }
 
 func batchFlags(o *batchOpts) *flag.FlagSet {
 	fs := newFlagSet("batch")
 	fs.StringVar(&o.units, "units", "", "display `system` SI or US for every result (default: each file's units)")
 	fs.StringVar(&o.out, "o", "", "write the output to `FILE` instead of standard output")
+	fs.IntVar(&o.workers, "workers", 0, "run `N` calc files at once; 0 means one per CPU")
+	fs.BoolVar(&o.lean, "lean", false, "leave the capacity-with-depth table out of each line (listed under \"omitted\")")
 	return fs
-}
-
-// batchLine is one line's answer.
-type batchLine struct {
-	out  []byte
-	bad  bool // bad input
-	fail bool // the design check fails
 }
 
 // batchProblem is a problem of a bad line in the batch output.
@@ -42,10 +41,6 @@ type batchProblem struct {
 	Line    int    `json:"line,omitempty"`
 	Message string `json:"message"`
 }
-
-// workers is the size of batch's worker pool; a variable so that tests
-// can run with one worker and with many.
-var workers = runtime.NumCPU()
 
 func runBatch(c *cmd, args []string) int {
 	var o batchOpts
@@ -56,6 +51,9 @@ func runBatch(c *cmd, args []string) int {
 	}
 	if len(pos) > 1 {
 		return c.usageErr("batch: one input at a time, got %d (%s)", len(pos), strings.Join(pos, " "))
+	}
+	if o.workers < 0 {
+		return c.usageErr("batch: --workers %d: want 0 (one per CPU) or a positive number of workers", o.workers)
 	}
 	sys, hasSys := units.SI, false
 	if o.units != "" {
@@ -94,7 +92,7 @@ func runBatch(c *cmd, args []string) int {
 		out = f
 	}
 	bw := bufio.NewWriter(out)
-	bad, fail, err := batch(in, bw, sys, hasSys, max(1, workers))
+	bad, fail, err := batch(in, bw, batchSettings{sys: sys, hasSys: hasSys, workers: o.workers, lean: o.lean})
 	if ferr := bw.Flush(); err == nil {
 		err = ferr
 	}
@@ -120,143 +118,93 @@ func runBatch(c *cmd, args []string) int {
 	return exitOK
 }
 
-// batch reads JSON Lines from in and writes one line per non-blank input
-// line to out, in input order, running n workers. It returns the counts of
-// bad lines and of failing design checks.
-func batch(in io.Reader, out io.Writer, sys units.System, hasSys bool, n int) (bad, fail int, err error) {
-	type job struct {
-		num  int
-		data []byte
-		long bool
-		res  chan batchLine
-	}
-	jobs := make(chan job)
-	order := make(chan chan batchLine, 4*n)
-	var wg sync.WaitGroup
-	for range n {
-		wg.Add(1)
-		go func() {
-			defer wg.Done()
-			for j := range jobs {
-				j.res <- batchOne(j.num, j.data, j.long, sys, hasSys)
-			}
-		}()
-	}
-	// The writer takes answers in input order.
-	var werr error
-	done := make(chan struct{})
-	go func() {
-		defer close(done)
-		for ch := range order {
-			l := <-ch
-			if l.bad {
-				bad++
-			}
-			if l.fail {
-				fail++
-			}
-			if werr == nil {
-				_, werr = out.Write(l.out)
-			}
-		}
-	}()
-	br := bufio.NewReaderSize(in, 64<<10)
-	var rerr error
-	for num := 1; ; num++ {
-		data, long, err := readLine(br, calc.MaxFileSize)
-		if num == 1 {
-			// A byte-order mark at the start of the input, as some
-			// editors write, is not part of the first line (single calc
-			// files accept it too).
-			data = bytes.TrimPrefix(data, []byte("\xef\xbb\xbf"))
-		}
-		if len(bytes.TrimSpace(data)) > 0 || long {
-			ch := make(chan batchLine, 1)
-			order <- ch
-			jobs <- job{num: num, data: data, long: long, res: ch}
-		}
-		if err == io.EOF {
-			break
-		}
-		if err != nil {
-			rerr = err
-			break
-		}
-	}
-	close(jobs)
-	wg.Wait()
-	close(order)
-	<-done
-	if rerr != nil {
-		return bad, fail, rerr
-	}
-	return bad, fail, werr
+// batchGOGC is the collector's target percentage while batch runs,
+// unless GOGC is set.
+const batchGOGC = 400
+
+// batchSettings are what batch needs of the flags.
+type batchSettings struct {
+	sys     units.System
+	hasSys  bool // sys overrides each file's units
+	workers int  // 0: one per CPU
+	lean    bool // leave capacity with depth out (and uncomputed)
 }
 
-// readLine reads one line of at most limit bytes; a longer line is
-// consumed and reported as long, with its data dropped.
-func readLine(br *bufio.Reader, limit int) ([]byte, bool, error) {
-	var line []byte
-	long := false
-	for {
-		chunk, err := br.ReadSlice('\n')
-		if !long {
-			if len(line)+len(chunk) > limit+1 {
-				long, line = true, nil
-			} else {
-				line = append(line, chunk...)
-			}
+// batch runs the JSON Lines of in through calc.RunBatch and writes one
+// line per non-blank input line to out, in input order: the result as
+// compact JSON with its line number and id first, or the line's error.
+// Each answer is rendered in the worker that ran it. It returns the counts
+// of bad lines and of failing design checks.
+func batch(in io.Reader, out io.Writer, s batchSettings) (bad, fail int, err error) {
+	verify := verificationLine()
+	finish := func(it *calc.BatchItem) {
+		if it.Err != nil {
+			it.Out = errLine(it.Line, it.ID, it.Err)
+			return
 		}
-		if err == bufio.ErrBufferFull {
-			continue
+		r := it.Result
+		if s.hasSys {
+			r.Display = s.sys
 		}
-		return bytes.TrimRight(line, "\r\n"), long, err
+		buf := bytes.NewBuffer(outPool.get())
+		if err := report.WriteLine(buf, r, report.LineOptions{Units: report.FileUnits, Verification: verify,
+			Line: it.Line, ID: it.ID, OmitWithDepth: s.lean}); err != nil {
+			it.Result, it.Err = nil, err
+			it.Out = errLine(it.Line, it.ID, err)
+			return
+		}
+		it.Out = buf.Bytes()
+	}
+	// Each calculation allocates a few hundred kB and keeps almost none
+	// of it, so with the default GOGC the collector runs every few
+	// calculations and, stopping every worker each time, eats the gain of
+	// a second core. The window bounds the live heap to a few MB, so a
+	// looser target costs little memory; a GOGC set by the user wins.
+	if os.Getenv("GOGC") == "" {
+		defer debug.SetGCPercent(debug.SetGCPercent(batchGOGC))
+	}
+	o := calc.BatchOptions{Workers: s.workers, NoWithDepth: s.lean, Finish: finish}
+	err = calc.RunBatch(context.Background(), in, o, func(it calc.BatchItem) error {
+		switch r := it.Result; {
+		case it.Err != nil:
+			bad++
+		case (r.Design != nil && !r.Design.Pass) || !r.ServiceabilityPass():
+			fail++
+		}
+		_, err := out.Write(it.Out)
+		outPool.put(it.Out)
+		return err
+	})
+	return bad, fail, err
+}
+
+// outPool recycles the buffers of batch answers once they are written.
+var outPool = bufPool{p: sync.Pool{New: func() any { return new([]byte) }}}
+
+type bufPool struct{ p sync.Pool }
+
+func (b *bufPool) get() []byte {
+	return (*b.p.Get().(*[]byte))[:0]
+}
+
+func (b *bufPool) put(s []byte) {
+	if cap(s) > 0 && cap(s) <= 1<<20 {
+		b.p.Put(&s)
 	}
 }
 
-// batchOne runs one line.
-func batchOne(num int, data []byte, long bool, sys units.System, hasSys bool) (l batchLine) {
-	defer func() {
-		if p := recover(); p != nil {
-			l = errLine(num, []batchProblem{{Message: fmt.Sprintf("internal error: %v", p)}})
+// errLine is the answer for a bad line: its line number, its id or title
+// when one could be read, the problems in one message and as a list.
+func errLine(num int, id string, err error) []byte {
+	var ps []batchProblem
+	var cps calc.Problems
+	if errors.As(err, &cps) {
+		for _, p := range cps {
+			ps = append(ps, batchProblem{Path: p.Path, Line: p.Line, Message: p.Msg})
 		}
-	}()
-	if long {
-		return errLine(num, []batchProblem{{Message: fmt.Sprintf("line is over the limit of %d bytes (1 MiB)", calc.MaxFileSize)}})
+	} else {
+		ps = append(ps, batchProblem{Message: err.Error()})
 	}
-	t := bytes.TrimSpace(data)
-	if len(t) == 0 || t[0] != '{' {
-		return errLine(num, []batchProblem{{Message: "want one calc file as a JSON object ({...}) on each line"}})
-	}
-	res, err := calc.Parse(data)
-	if err != nil {
-		var ps calc.Problems
-		var out []batchProblem
-		if errors.As(err, &ps) {
-			for _, p := range ps {
-				out = append(out, batchProblem{Path: p.Path, Line: p.Line, Message: p.Msg})
-			}
-		} else {
-			out = append(out, batchProblem{Message: err.Error()})
-		}
-		return errLine(num, out)
-	}
-	if hasSys {
-		res.Display = sys
-	}
-	var buf bytes.Buffer
-	if err := renderJSONLine(&buf, res, res.Display); err != nil {
-		return errLine(num, []batchProblem{{Message: err.Error()}})
-	}
-	l.out = buf.Bytes()
-	if len(l.out) == 0 || l.out[len(l.out)-1] != '\n' {
-		l.out = append(l.out, '\n')
-	}
-	l.fail = (res.Design != nil && !res.Design.Pass) || !res.ServiceabilityPass()
-	return l
-}
-
-func errLine(num int, ps []batchProblem) batchLine {
 	msgs := make([]string, len(ps))
 	for i, p := range ps {
 		msgs[i] = p.Message
@@ -266,14 +214,15 @@ func errLine(num int, ps []batchProblem) batchLine {
 	}
 	v := struct {
 		Line     int            `json:"line"`
+		ID       string         `json:"id,omitempty"`
 		Error    string         `json:"error"`
 		Problems []batchProblem `json:"problems"`
-	}{num, strings.Join(msgs, "; "), ps}
-	b, err := json.Marshal(v)
-	if err != nil {
-		b = []byte(fmt.Sprintf(`{"line":%d,"error":"unprintable error"}`, num))
+	}{num, id, strings.Join(msgs, "; "), ps}
+	b, merr := json.Marshal(v)
+	if merr != nil {
+		b = fmt.Appendf(nil, `{"line":%d,"error":"unprintable error"}`, num)
 	}
-	return batchLine{out: append(b, '\n'), bad: true}
+	return append(b, '\n')
 }
 
 // runVersion prints the versions.

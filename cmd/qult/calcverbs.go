@@ -13,7 +13,7 @@ import (
 )
 
 // calcFormats are the output formats of the verbs that read a calc file.
-const calcFormats = "text, json, csv, md, html"
+const calcFormats = "text, json, csv, md, html, records (JSON records of every table), records-csv"
 
 // calcOpts are the flags of check, capacity, length and report.
 type calcOpts struct {
@@ -63,7 +63,7 @@ func (c *cmd) calcVerb(args []string, view report.View) int {
 			format = "html"
 		}
 	}
-	if err := oneOf("format", format, "text", "json", "csv", "md", "html"); err != nil {
+	if err := oneOf("format", format, "text", "json", "csv", "md", "html", "records", "records-csv"); err != nil {
 		return c.usageErr("%s: %v", c.verb, err)
 	}
 	sys, hasSys := units.SI, false

@@ -10,9 +10,11 @@ package main
 import (
 	"bytes"
 	"encoding/json"
+	"fmt"
 	"math"
 	"os"
 	"path/filepath"
+	"strconv"
 	"strings"
 	"testing"
 
@@ -54,6 +56,8 @@ func TestUsageErrors(t *testing.T) {
 		{[]string{"factors", "--units", "SU", "--su", "50"}, `--units "SU"`},
 		{[]string{"batch", "a.jsonl", "b.jsonl"}, "one input at a time"},
 		{[]string{"batch", "--units", "x"}, `--units "x"`},
+		{[]string{"batch", "--workers", "-1"}, "--workers -1: want 0 (one per CPU) or a positive number"},
+		{[]string{"batch", "--workers", "two"}, `invalid value "two" for flag -workers`},
 		{[]string{"version", "now"}, "takes no arguments"},
 	} {
 		r := runQ(t, slow, "", c.args...)
@@ -273,12 +277,9 @@ func batchInput(t *testing.T) (string, int) {
 // number and an error; the exit code is 2 when any line is bad.
 func TestBatch(t *testing.T) {
 	in, n := batchInput(t)
-	saved := workers
-	defer func() { workers = saved }()
 	var outs []string
 	for _, w := range []int{1, 8} {
-		workers = w
-		r := runQ(t, slow, in, "batch")
+		r := runQ(t, slow, in, "batch", "--workers", strconv.Itoa(w))
 		if r.code != 2 || !strings.Contains(r.stderr, "4 line(s) with bad input") {
 			t.Errorf("workers=%d: exit %d, stderr %q", w, r.code, r.stderr)
 		}
@@ -331,6 +332,38 @@ func TestBatch(t *testing.T) {
 
 func lines0(s string, i int) string { return strings.Split(s, "\n")[i] }
 
+// TestBatchLean: --lean leaves capacity with depth out of each result and
+// names it under "omitted"; every other member is as without it.
+func TestBatchLean(t *testing.T) {
+	in, _ := batchInput(t)
+	line := lines0(in, 0) + "\n"
+	var docs [2]map[string]any
+	for i, args := range [][]string{{"batch"}, {"batch", "--lean"}} {
+		r := runQ(t, slow, line, args...)
+		if r.code != 0 {
+			t.Fatalf("%v: exit %d %s", args, r.code, r.stderr)
+		}
+		if err := json.Unmarshal([]byte(r.stdout), &docs[i]); err != nil {
+			t.Fatal(err)
+		}
+	}
+	full, lean := docs[0], docs[1]
+	if rows, _ := full["capacity_with_depth"].([]any); len(rows) == 0 {
+		t.Fatalf("the full line has no capacity with depth")
+	}
+	if _, ok := lean["capacity_with_depth"]; ok {
+		t.Errorf("--lean kept capacity_with_depth")
+	}
+	if fmt.Sprint(lean["omitted"]) != "[capacity_with_depth]" {
+		t.Errorf("omitted %v, want [capacity_with_depth]", lean["omitted"])
+	}
+	delete(full, "capacity_with_depth")
+	delete(lean, "omitted")
+	if fmt.Sprint(full) != fmt.Sprint(lean) {
+		t.Errorf("--lean changed other members")
+	}
+}
+
 // TestBatchFailingDesign: a line whose design fails makes exit code 1.
 func TestBatchFailingDesign(t *testing.T) {
 	data, err := os.ReadFile(filepath.Join("testdata", "overloaded.yaml"))
@@ -359,7 +392,7 @@ func TestBatchLongLine(t *testing.T) {
 	if r.code != 2 || len(lines) != 3 || !strings.Contains(lines[1], `"line":2`) || !strings.Contains(lines[1], "over the limit") {
 		t.Errorf("exit %d, %d lines; line 2: %.200s", r.code, len(lines), lines[min(1, len(lines)-1)])
 	}
-	if lines[0] != lines[len(lines)-1] {
+	if strings.TrimPrefix(lines[0], `{"line":1,`) != strings.TrimPrefix(lines[len(lines)-1], `{"line":3,`) {
 		t.Errorf("the lines around the long one differ")
 	}
 }
@@ -410,7 +443,8 @@ func TestUnitsOverride(t *testing.T) {
 }
 
 // TestBatchMatchesSingle: each batch answer is the compacted JSON that
-// capacity --format json gives for the same input line.
+// capacity --format json gives for the same input line, after its line
+// number and id.
 func TestBatchMatchesSingle(t *testing.T) {
 	in, _ := batchInput(t)
 	r := runQ(t, slow, in, "batch")
@@ -425,7 +459,15 @@ func TestBatchMatchesSingle(t *testing.T) {
 		if err := json.Compact(&compact, []byte(single.stdout)); err != nil {
 			t.Fatal(err)
 		}
-		if compact.String() != out[c.out] {
+		// The batch line opens with its line number and id (the title
+		// here), then holds the same document byte for byte.
+		var doc struct{ Title string }
+		if err := json.Unmarshal(compact.Bytes(), &doc); err != nil {
+			t.Fatal(err)
+		}
+		id, _ := json.Marshal(doc.Title)
+		want := fmt.Sprintf(`{"line":%d,"id":%s,`, c.in+1, id) + strings.TrimPrefix(compact.String(), "{")
+		if want != out[c.out] {
 			t.Errorf("batch answer %d differs from capacity --format json of the same line", c.out+1)
 		}
 	}

@@ -92,13 +92,16 @@ keeps its row with the reason.`,
 			flags: func() *flag.FlagSet { return factorFlags(&factorOpts{}) },
 		},
 		"batch": {
-			usage: "batch [--units SI|US] [-o FILE] [FILE]",
+			usage: "batch [--workers N] [--lean] [--units SI|US] [-o FILE] [FILE]",
 			about: `Reads JSON Lines: one calc file per line as a JSON object. Runs them in
-parallel and writes one line per input line, in input order: the result
-in the report's JSON form, or {"line": N, "error": "...", "problems":
-[...]} for a bad line. Blank lines are skipped. Reads standard input when
-FILE is "-" or absent. Exit code 2 when any line is bad input, else 1
-when any design check fails, else 0.`,
+parallel (--workers N at once, 0 for one per CPU) and writes one line per
+input line, in input order: the result in the report's JSON form, opened
+by "line" (the input line number) and "id" (the file's id key, or its
+title), or {"line": N, "id": "...", "error": "...", "problems": [...]} for
+a bad line. --lean leaves the capacity-with-depth table out of each
+result. Blank lines are skipped. Reads standard input when FILE is "-" or
+absent. Exit code 2 when any line is bad input, else 1 when any design
+check fails, else 0.`,
 			example: `qult batch piles.jsonl > results.jsonl
   cat piles.jsonl | qult batch -`,
 			flags: func() *flag.FlagSet { return batchFlags(&batchOpts{}) },

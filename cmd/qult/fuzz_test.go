@@ -20,7 +20,7 @@ func FuzzBatch(f *testing.F) {
 	f.Fuzz(func(t *testing.T, in []byte) {
 		var out bytes.Buffer
 		bw := bufio.NewWriter(&out)
-		if _, _, err := batch(bytes.NewReader(in), bw, units.SI, false, 2); err != nil {
+		if _, _, err := batch(bytes.NewReader(in), bw, batchSettings{sys: units.SI, workers: 2}); err != nil {
 			return // a read error of the input is reported, not a panic
 		}
 		bw.Flush()

@@ -1,8 +1,6 @@
 package main
 
 import (
-	"bytes"
-	"encoding/json"
 	"io"
 	"strings"
 	"sync"
@@ -25,6 +23,12 @@ var (
 // package report. The date is left to the calc file (none is made up), so
 // that the same file gives the same output.
 func render(w io.Writer, res *calc.Result, format string, view report.View, sys units.System) error {
+	switch format {
+	case "records":
+		return report.WriteRecords(w, res, report.Options{Units: report.UnitsOf(sys), View: view})
+	case "records-csv":
+		return report.WriteRecordsCSV(w, res, report.Options{Units: report.UnitsOf(sys), View: view})
+	}
 	f, err := report.ParseFormat(format)
 	if err != nil {
 		return err
@@ -42,17 +46,3 @@ func render(w io.Writer, res *calc.Result, format string, view report.View, sys 
 var verificationLine = sync.OnceValue(func() string {
 	return strings.TrimPrefix(verify.SummaryText(), "verification: ")
 })
-
-// renderJSONLine writes res as one line of the report's JSON form.
-func renderJSONLine(w io.Writer, res *calc.Result, sys units.System) error {
-	var buf, line bytes.Buffer
-	if err := report.Write(&buf, res, report.JSON, report.Options{Units: report.UnitsOf(sys), View: report.ViewReport, Verification: verificationLine()}); err != nil {
-		return err
-	}
-	if err := json.Compact(&line, buf.Bytes()); err != nil {
-		return err
-	}
-	line.WriteByte('\n')
-	_, err := w.Write(line.Bytes())
-	return err
-}
