@@ -30,19 +30,7 @@ type Table struct {
 	Rows    [][]any
 }
 
-// The tables, in order:
-//
-//	pile                 one row: section, areas, perimeter, length, tip depth, installation
-//	layers               one row per layer: depths, strength, unit weights, methods
-//	stresses             σv, u and σ′v at each break of the profile
-//	shaft_segments       one row per shaft segment: depths, σ′v, su, fs, K, δ, β, α, ∫fs dz, perimeter, Qs
-//	tip                  one row: σ′v, factors, unit tip resistance and its limits, area, Qp
-//	capacity             one row: Qp, Qs, W′, Rc, tension shaft and Rt
-//	design_cases         one row per case of the design basis (none without one)
-//	required_length      one row when the file has a design basis and loads
-//	capacity_with_depth  one row per tip depth of the search grid
-//	warnings             one row per warning
-//	sources              one row per source cited
+// recTableNames are the names of the tables, in order (see Tables).
 var recTableNames = []string{"pile", "layers", "stresses", "shaft_segments", "tip", "capacity", "design_cases",
 	"required_length", "capacity_with_depth", "warnings", "sources"}
 
@@ -118,8 +106,22 @@ func recTable(name string, sys units.System, n int, cols []recCol) (Table, error
 	return t, nil
 }
 
-// Tables returns the tables of result r in display system sys, in the
-// order listed above; a table with nothing to show has no rows.
+// Tables returns the tables of result r in display system sys, in this
+// order (a table with nothing to show has no rows):
+//
+//	pile                 one row: section, areas, perimeter, length, tip depth, installation
+//	layers               one row per layer: depths, strength, unit weights, methods
+//	stresses             σv, u and σ′v at each break of the profile
+//	shaft_segments       one row per shaft segment: depths, σ′v, su, fs, K, δ, β, α, ∫fs dz, perimeter, Qs
+//	tip                  one row: σ′v, factors, unit tip resistance and its limits, area, Qp
+//	capacity             one row: Qp, Qs, W′, Rc, tension shaft and Rt
+//	design_cases         one row per case of the design basis (none without one)
+//	required_length      one row when the file has a design basis and loads
+//	capacity_with_depth  one row per tip depth of the search grid
+//	warnings             one row per warning
+//	sources              one row per source cited
+//
+// Errors: a nil result and an unknown unit system.
 func Tables(r *calc.Result, sys units.System) ([]Table, error) {
 	if r == nil {
 		return nil, fmt.Errorf("report: nil result")
