@@ -447,7 +447,7 @@ func recValue(b []byte, v any) []byte {
 // WriteRecordsCSV writes result r's tables as CSV, one section per table:
 // a comment line "# table: NAME", the header of column names, the rows,
 // and a blank line; a value that does not apply is an empty cell. A first
-// comment line names the result and the units; the last line is the
+// comment line names the result (its title and id) and the units; the last line is the
 // cautions as a comment ("# For qualified engineers only: …"). Text cells
 // are quoted when they hold a comma, a quote, a line break or a #, and
 // guarded against spreadsheet formulas as the CSV format is; control and
@@ -461,6 +461,9 @@ func WriteRecordsCSV(w io.Writer, r *calc.Result, o Options) error {
 	}
 	var b bytes.Buffer
 	title := strings.Join(strings.Fields(r.Title), " ")
+	if id := strings.Join(strings.Fields(r.ID), " "); id != "" {
+		title += "; id " + id
+	}
 	fmt.Fprintf(&b, "# %s: %s; units %s\n", RecordsSchema, title, o.Units)
 	for _, t := range ts {
 		fmt.Fprintf(&b, "# table: %s\n", t.Name)

@@ -294,6 +294,9 @@ func TestRecordsCSV(t *testing.T) {
 			t.Fatal(err)
 		}
 		text := b.String()
+		if head := "# " + RecordsSchema + ": " + rr.Title + "; id PS-B; units " + sys.String() + "\n"; !strings.HasPrefix(text, head) {
+			t.Errorf("first line %.80q, want %q", text, head)
+		}
 		if !strings.HasSuffix(text, "# "+calc.CautionLine+"\n") {
 			t.Errorf("the last line is not the cautions")
 		}
