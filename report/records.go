@@ -447,8 +447,9 @@ func recValue(b []byte, v any) []byte {
 // WriteRecordsCSV writes result r's tables as CSV, one section per table:
 // a comment line "# table: NAME", the header of column names, the rows,
 // and a blank line; a value that does not apply is an empty cell. A first
-// comment line names the result (its title and id) and the units; the last line is the
-// cautions as a comment ("# For qualified engineers only: …"). Text cells
+// comment line names the result (its title and id) and the units; the
+// last line is the cautions as a comment ("# For qualified engineers
+// only: …"). Text cells
 // are quoted when they hold a comma, a quote, a line break or a #, and
 // guarded against spreadsheet formulas as the CSV format is; control and
 // bidirectional characters become U+FFFD.
