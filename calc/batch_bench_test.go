@@ -63,6 +63,7 @@ func BenchmarkBatch(b *testing.B) {
 				defer debug.SetGCPercent(debug.SetGCPercent(c.gogc))
 			}
 			b.ReportAllocs()
+			cpu0 := cpuTime()
 			for b.Loop() {
 				got := 0
 				err := calc.RunBatch(context.Background(), bytes.NewReader(in), c.o, func(it calc.BatchItem) error {
@@ -77,6 +78,9 @@ func BenchmarkBatch(b *testing.B) {
 				}
 			}
 			b.ReportMetric(float64(n*b.N)/b.Elapsed().Seconds(), "calcs/s")
+			if cpu := cpuTime() - cpu0; cpu > 0 {
+				b.ReportMetric(cpu.Seconds()*1e6/float64(n*b.N), "cpu-µs/calc")
+			}
 		})
 	}
 }

@@ -30,21 +30,14 @@ type Table struct {
 	Rows    [][]any
 }
 
-// The tables, in order:
-//
-//	pile                 one row: section, areas, perimeter, length, tip depth, installation
-//	layers               one row per layer: depths, strength, unit weights, methods
-//	stresses             σv, u and σ′v at each break of the profile
-//	shaft_segments       one row per shaft segment: depths, σ′v, su, fs, K, δ, β, α, ∫fs dz, perimeter, Qs
-//	tip                  one row: σ′v, factors, unit tip resistance and its limits, area, Qp
-//	capacity             one row: Qp, Qs, W′, Rc, tension shaft and Rt
-//	design_cases         one row per case of the design basis (none without one)
-//	required_length      one row when the file has a design basis and loads
-//	capacity_with_depth  one row per tip depth of the search grid
-//	warnings             one row per warning
-//	sources              one row per source cited
+// recTableNames are the names of the tables, in order (see Tables).
 var recTableNames = []string{"pile", "layers", "stresses", "shaft_segments", "tip", "capacity", "design_cases",
-	"required_length", "capacity_with_depth", "warnings", "sources"}
+	"required_length", "capacity_with_depth", "settlement", "load_settlement", "axial_load", "load_test_points",
+	"load_test_criteria", "warnings", "sources"}
+
+// dimSettlement marks a column of settlements, counted in mm (SI) or in
+// (US) rather than in the display length unit.
+const dimSettlement units.Dimension = -1
 
 // recCol is one column: its base name, its dimension (0 for none: counts,
 // words, flags) and the value of row i.
@@ -75,8 +68,14 @@ func recTable(name string, sys units.System, n int, cols []recCol) (Table, error
 	unitOf := make([]string, len(cols))
 	for j, c := range cols {
 		t.Columns[j] = c.name
-		if c.dim != 0 {
+		switch c.dim {
+		case 0:
+		case dimSettlement:
+			unitOf[j] = conv{sys}.uSm()
+		default:
 			unitOf[j] = sys.Unit(c.dim)
+		}
+		if unitOf[j] != "" {
 			t.Columns[j] += "_" + recUnitSuffix(unitOf[j])
 		}
 	}
@@ -118,8 +117,27 @@ func recTable(name string, sys units.System, n int, cols []recCol) (Table, error
 	return t, nil
 }
 
-// Tables returns the tables of result r in display system sys, in the
-// order listed above; a table with nothing to show has no rows.
+// Tables returns the tables of result r in display system sys, in this
+// order (a table with nothing to show has no rows):
+//
+//	pile                 one row: section, areas, perimeter, length, tip depth, installation
+//	layers               one row per layer: depths, strength, unit weights, methods
+//	stresses             σv, u and σ′v at each break of the profile
+//	shaft_segments       one row per shaft segment: depths, σ′v, su, fs, K, δ, β, α, ∫fs dz, perimeter, Qs
+//	tip                  one row: σ′v, factors, unit tip resistance and its limits, area, Qp
+//	capacity             one row: Qp, Qs, W′, Rc, tension shaft and Rt
+//	design_cases         one row per case of the design basis (none without one)
+//	required_length      one row when the file has a design basis and loads
+//	capacity_with_depth  one row per tip depth of the search grid
+//	settlement           one row with a settlement section: load, settlement (mm or in), allowable, shares
+//	load_settlement      the predicted load-settlement curve
+//	axial_load           axial load and displacement with depth at the serviceability load
+//	load_test_points     the load test's points, with a load_test section
+//	load_test_criteria   one row per criterion read from the load test
+//	warnings             one row per warning
+//	sources              one row per source cited
+//
+// Errors: a nil result and an unknown unit system.
 func Tables(r *calc.Result, sys units.System) ([]Table, error) {
 	if r == nil {
 		return nil, fmt.Errorf("report: nil result")
@@ -150,6 +168,14 @@ func tablesOf(j *jResult, sys units.System) ([]Table, error) {
 	if ln == nil {
 		ln = &jLength{}
 	}
+	se, lt := j.Settle, j.LoadTest
+	if se == nil {
+		se = &jSettle{}
+	}
+	if lt == nil {
+		lt = &jLoadTest{}
+	}
+	sm := dimSettlement
 	specs := []struct {
 		n    int
 		cols []recCol
@@ -276,6 +302,47 @@ func tablesOf(j *jResult, sys units.System) ([]Table, error) {
 			{"Rc_design", F, func(i int) any { return wd[i].DesignCompression }},
 			{"tip_rules", 0, func(i int) any { return wd[i].TipRules }},
 		}},
+		{one(j.Settle != nil), []recCol{
+			{"method", 0, func(int) any { return se.Method }},
+			{"load", F, func(int) any { return se.Load }},
+			{"load_from", 0, func(int) any { return se.LoadFrom }},
+			{"allowable", sm, func(int) any { return se.Allowable }},
+			{"settlement", sm, func(int) any { return se.Settlement }},
+			{"plunged", 0, func(int) any { return se.Plunged }},
+			{"plunge_load", F, func(int) any { return se.PlungeLoad }},
+			{"pass", 0, func(int) any { return se.Pass }},
+			{"shaft_load", F, func(int) any { return se.ShaftLoad }},
+			{"tip_load", F, func(int) any { return se.TipLoad }},
+			{"shaft_share", 0, func(int) any { return se.ShaftShare }},
+			{"tip_share", 0, func(int) any { return se.TipShare }},
+			{"tip_displacement", sm, func(int) any { return se.TipMove }},
+			{"EA", F, func(int) any { return se.EA }},
+			{"shaft_capacity", F, func(int) any { return se.ShaftCapacity }},
+			{"tip_capacity", F, func(int) any { return se.TipCapacity }},
+		}},
+		{len(se.Curve), []recCol{
+			{"load", F, func(i int) any { return se.Curve[i].Load }},
+			{"settlement", sm, func(i int) any { return se.Curve[i].Settlement }},
+		}},
+		{len(se.WithDepth), []recCol{
+			{"depth", L, func(i int) any { return se.WithDepth[i].Depth }},
+			{"axial_load", F, func(i int) any { return se.WithDepth[i].AxialLoad }},
+			{"displacement", sm, func(i int) any { return se.WithDepth[i].Displacement }},
+		}},
+		{len(lt.Points), []recCol{
+			{"load", F, func(i int) any { return lt.Points[i].Load }},
+			{"settlement", sm, func(i int) any { return lt.Points[i].Settlement }},
+		}},
+		{len(lt.Criteria), []recCol{
+			{"criterion", 0, func(i int) any { return lt.Criteria[i].Criterion }},
+			{"reached", 0, func(i int) any { return lt.Criteria[i].Reached }},
+			{"load", F, func(i int) any { return lt.Criteria[i].Load }},
+			{"settlement", sm, func(i int) any { return lt.Criteria[i].Settlement }},
+			{"c1", 0, func(i int) any { return lt.Criteria[i].C1 }},
+			{"c2", 0, func(i int) any { return lt.Criteria[i].C2 }},
+			{"r2", 0, func(i int) any { return lt.Criteria[i].R2 }},
+			{"note", 0, func(i int) any { return lt.Criteria[i].Note }},
+		}},
 		{len(j.Warnings), []recCol{
 			{"warning", 0, func(i int) any { return j.Warnings[i] }},
 		}},
@@ -387,8 +454,9 @@ func recValue(b []byte, v any) []byte {
 // WriteRecordsCSV writes result r's tables as CSV, one section per table:
 // a comment line "# table: NAME", the header of column names, the rows,
 // and a blank line; a value that does not apply is an empty cell. A first
-// comment line names the result and the units; the last line is the
-// cautions as a comment ("# For qualified engineers only: …"). Text cells
+// comment line names the result (its title and id) and the units; the
+// last line is the cautions as a comment ("# For qualified engineers
+// only: …"). Text cells
 // are quoted when they hold a comma, a quote, a line break or a #, and
 // guarded against spreadsheet formulas as the CSV format is; control and
 // bidirectional characters become U+FFFD.
@@ -408,6 +476,9 @@ func WriteRecordsCSV(w io.Writer, r *calc.Result, o Options) error {
 	}
 	var b bytes.Buffer
 	title := strings.Join(strings.Fields(r.Title), " ")
+	if id := strings.Join(strings.Fields(r.ID), " "); id != "" {
+		title += "; id " + id
+	}
 	fmt.Fprintf(&b, "# %s: %s; units %s\n", RecordsSchema, title, o.Units)
 	for _, t := range ts {
 		fmt.Fprintf(&b, "# table: %s\n", t.Name)

@@ -59,14 +59,22 @@ var recordPlaces = map[string]struct {
 		"best_utilisation": "best_utilisation", "not_found": "not_found"}},
 	"capacity_with_depth": {[]string{"capacity_with_depth"}, map[string]string{"tip_depth": "tip_depth", "qp": "qp", "Qp": "tip",
 		"Qs": "shaft", "W": "weight", "Rc": "compression", "Rt": "tension", "Rc_design": "design_compression", "tip_rules": "tip_rules"}},
-	"warnings": {[]string{"warnings"}, map[string]string{"warning": "."}},
-	"sources":  {[]string{"sources"}, map[string]string{"key": "key", "citation": "citation"}},
+	"settlement": {[]string{"settlement"}, map[string]string{"method": "method", "load": "load", "load_from": "load_from",
+		"allowable": "allowable", "settlement": "settlement", "plunged": "plunged", "plunge_load": "plunge_load", "pass": "pass",
+		"shaft_load": "shaft_load", "tip_load": "tip_load", "shaft_share": "shaft_share", "tip_share": "tip_share",
+		"tip_displacement": "tip_displacement", "EA": "ea", "shaft_capacity": "shaft_capacity", "tip_capacity": "tip_capacity"}},
+	"load_settlement":    {[]string{"settlement", "curve"}, map[string]string{"load": "load", "settlement": "settlement"}},
+	"axial_load":         {[]string{"settlement", "with_depth"}, map[string]string{"depth": "depth", "axial_load": "axial_load", "displacement": "displacement"}},
+	"load_test_points":   {[]string{"load_test", "points"}, map[string]string{"load": "load", "settlement": "settlement"}},
+	"load_test_criteria": {[]string{"load_test", "criteria"}, map[string]string{"criterion": "criterion", "reached": "reached", "load": "load", "settlement": "settlement", "c1": "c1", "c2": "c2", "r2": "r2", "note": "note"}},
+	"warnings":           {[]string{"warnings"}, map[string]string{"warning": "."}},
+	"sources":            {[]string{"sources"}, map[string]string{"key": "key", "citation": "citation"}},
 }
 
 // The display units of each system, as column suffixes.
 var recordUnits = map[units.System]map[string]bool{
-	units.SI: {"m": true, "m2": true, "kPa": true, "kN": true, "kN_per_m": true, "kN_per_m3": true, "deg": true},
-	units.US: {"ft": true, "ft2": true, "ksf": true, "kip": true, "kip_per_ft": true, "pcf": true, "deg": true},
+	units.SI: {"m": true, "m2": true, "kPa": true, "kN": true, "kN_per_m": true, "kN_per_m3": true, "deg": true, "mm": true},
+	units.US: {"ft": true, "ft2": true, "ksf": true, "kip": true, "kip_per_ft": true, "pcf": true, "deg": true, "in": true},
 }
 
 var asciiName = regexp.MustCompile(`^[A-Za-z][A-Za-z0-9_]*$`)
@@ -286,6 +294,9 @@ func TestRecordsCSV(t *testing.T) {
 			t.Fatal(err)
 		}
 		text := b.String()
+		if head := "# " + RecordsSchema + ": " + rr.Title + "; id PS-B; units " + sys.String() + "\n"; !strings.HasPrefix(text, head) {
+			t.Errorf("first line %.80q, want %q", text, head)
+		}
 		if !strings.HasSuffix(text, "# "+calc.CautionLine+"\n") {
 			t.Errorf("the last line is not the cautions")
 		}

@@ -165,6 +165,12 @@ func batch(in io.Reader, out io.Writer, s batchSettings) (bad, fail int, err err
 	}
 	o := calc.BatchOptions{Workers: s.workers, NoWithDepth: s.lean, Finish: finish}
 	err = calc.RunBatch(context.Background(), in, o, func(it calc.BatchItem) error {
+		if it.Out == nil { // finish did not run to the end (a recovered panic)
+			if it.Err == nil {
+				it.Err = errors.New("internal error: no answer")
+			}
+			it.Result, it.Out = nil, errLine(it.Line, it.ID, it.Err)
+		}
 		switch r := it.Result; {
 		case it.Err != nil:
 			bad++

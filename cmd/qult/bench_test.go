@@ -69,6 +69,7 @@ func BenchmarkBatchJSON(b *testing.B) {
 	}{{"full", []string{"batch"}}, {"lean", []string{"batch", "--lean"}}} {
 		b.Run(c.name, func(b *testing.B) {
 			b.ReportAllocs()
+			cpu0 := cpuTime()
 			for b.Loop() {
 				stdin = bytes.NewReader(in.Bytes())
 				if code := run(io.Discard, io.Discard, c.args); code != 0 {
@@ -76,6 +77,9 @@ func BenchmarkBatchJSON(b *testing.B) {
 				}
 			}
 			b.ReportMetric(float64(n*b.N)/b.Elapsed().Seconds(), "calcs/s")
+			if cpu := cpuTime() - cpu0; cpu > 0 {
+				b.ReportMetric(cpu.Seconds()*1e6/float64(n*b.N), "cpu-µs/calc")
+			}
 		})
 	}
 }
