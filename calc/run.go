@@ -76,6 +76,7 @@ func Run(f *File) (*Result, error) {
 		return nil, translate(f, err)
 	}
 	res.Methods = layerMethods(prof, res.Breakdown)
+	res.Compared = compare(prof, in.Pile, in.Methods, res.Breakdown)
 	// Capacity with depth: from one step below the head to the search
 	// depth (default: the bottom of the profile).
 	step, maxTip := in.Step, in.MaxTip

@@ -85,10 +85,6 @@ func addFigures(d *doc, r *calc.Result, o Options) error {
 			return err
 		}
 	}
-	if o.View == ViewReport && len(r.Source) > 0 {
-		in := section{heading: "Inputs as entered", blocks: []block{{pre: string(r.Source)}}}
-		d.sections = append(d.sections[:1], append([]section{in}, d.sections[1:]...)...)
-	}
 	return nil
 }
 

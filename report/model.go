@@ -1,6 +1,8 @@
 package report
 
 import (
+	"crypto/sha256"
+	"encoding/hex"
 	"fmt"
 	"math"
 	"strings"
@@ -92,6 +94,7 @@ func build(r *calc.Result, o Options) *doc {
 		}
 	}
 	add(secTitle(r, o))
+	warnings := secList("Warnings", allWarnings(r, c))
 	switch o.View {
 	case ViewCheck:
 		add(secLoads(r, c))
@@ -102,18 +105,24 @@ func build(r *calc.Result, o Options) *doc {
 		add(secShaft(r, c))
 		add(secTip(r, c))
 		add(secTotals(r, c))
+		add(secCompared(r, c))
 		add(secDefaults(r, c))
 	case ViewLength:
 		add(secLength(r, c))
 		add(secWithDepth(r, c))
 	case ViewReport:
+		// The summary a reviewer reads first, then the warnings, then the
+		// inputs and the derivation in the order it runs.
+		add(secSummary(r, c))
+		add(warnings)
 		add(secPile(r, c))
+		add(secLoads(r, c))
 		add(secLayers(r, c))
 		add(secStresses(r, c))
-		add(secLoads(r, c))
 		add(secShaft(r, c))
 		add(secTip(r, c))
 		add(secTotals(r, c))
+		add(secCompared(r, c))
 		add(secDesign(r, c))
 		add(secLength(r, c))
 		add(secWithDepth(r, c))
@@ -129,7 +138,9 @@ func build(r *calc.Result, o Options) *doc {
 			add(section{heading: "Settlement", blocks: []block{{para: "The calc file has no settlement or load_test section."}}})
 		}
 	}
-	add(secList("Warnings", allWarnings(r, c)))
+	if o.View != ViewReport {
+		add(warnings)
+	}
 	if o.View == ViewReport {
 		var src []string
 		for _, s := range sources(r) {
@@ -143,7 +154,74 @@ func build(r *calc.Result, o Options) *doc {
 		cautions = calc.CautionText()
 	}
 	add(secList("Cautions", cautions))
+	if o.View == ViewReport && len(r.Source) > 0 {
+		add(section{heading: headAppendix, blocks: []block{
+			{para: "The calc file exactly as read (SHA-256 " + SourceHash(r) + "), line by line; a line too long for the page continues on the next, marked ↪."},
+			{pre: string(r.Source)}}})
+	}
 	return d
+}
+
+// headAppendix is the heading of the appendix with the calc file.
+const headAppendix = "Appendix: the calc file as entered"
+
+// SourceHash returns the SHA-256 of the calc file as entered (r.Source),
+// in hexadecimal, or "" when the result has no source text. Printed pages
+// carry it (or its first 12 digits) so that they can be tied to the file
+// that produced them.
+func SourceHash(r *calc.Result) string {
+	if r == nil || len(r.Source) == 0 {
+		return ""
+	}
+	h := sha256.Sum256(r.Source)
+	return hex.EncodeToString(h[:])
+}
+
+// secSummary is what a reviewer reads first: the verdict, the governing
+// case and its utilisation, the required length, the serviceability check
+// and how many warnings there are.
+func secSummary(r *calc.Result, c conv) section {
+	var it []item
+	k := r.Breakdown.Capacity
+	if d := r.Design; d != nil {
+		verdict := "PASS: every design case has Ed/Rd ≤ 1"
+		if !d.Pass {
+			verdict = "FAIL: at least one design case has Ed/Rd > 1"
+		}
+		it = append(it, item{"Verdict", txt(verdict), ""}, item{"Design basis", txt(d.Basis), ""})
+		if d.Governing >= 0 && d.Governing < len(d.Cases) {
+			it = append(it, item{"Governing case", txt(d.Cases[d.Governing].Case), ""})
+		}
+		it = append(it, item{"Highest utilisation Ed/Rd", useCell(d.MaxUse()), ""})
+	} else {
+		it = append(it, item{"Verdict", txt("none: no design basis given (characteristic values only)"), ""})
+	}
+	it = append(it, item{"Pile", txt(fmt.Sprintf("%s %s, %s, length %s, tip at %s", r.Pile.Section.Shape, c.ls(r.Pile.Section.Size()),
+		r.Pile.Installation, c.ls(r.Pile.Length), c.ls(r.Pile.Tip()))), ""},
+		item{"Compression Rc (characteristic)", num(c.F(k.Compression)), c.uF()},
+		item{"Tension Rt (characteristic)", num(c.F(k.Tension)), c.uF()})
+	switch l := r.Length; {
+	case l != nil && l.Found:
+		it = append(it, item{"Required length", txt(fmt.Sprintf("%s (tip at %s; governed by %s)", c.ls(l.Length), c.ls(l.TipDepth), l.Governs)), ""})
+	case l != nil:
+		it = append(it, item{"Required length", txt("none found within the search (see Required length)"), ""})
+	case r.Design != nil:
+		it = append(it, item{"Required length", txt("not found (see the warnings)"), ""})
+	}
+	if s := r.Settlement; s != nil {
+		v := "pass"
+		if !r.ServiceabilityPass() {
+			v = "FAIL"
+		}
+		it = append(it, item{"Serviceability", txt(v + " (see Settlement)"), ""})
+	}
+	n := len(allWarnings(r, c))
+	w := "none"
+	if n > 0 {
+		w = fmt.Sprintf("%d, listed under Warnings below", n)
+	}
+	it = append(it, item{"Warnings", txt(w), ""})
+	return section{heading: "Summary", blocks: []block{{items: it}}}
 }
 
 func date(r *calc.Result, o Options) string {
@@ -156,7 +234,8 @@ func date(r *calc.Result, o Options) string {
 func secTitle(r *calc.Result, o Options) section {
 	var it []item
 	for _, kv := range [][2]string{{"Project", r.Project}, {"Revision", r.Revision}, {"Engineer", r.Engineer},
-		{"Date", date(r, o)}, {"qult version", r.Version}, {"Verification", o.Verification}, {"Display units", o.Units.String()}} {
+		{"Date", date(r, o)}, {"qult version", r.Version}, {"Verification", o.Verification},
+		{"Calc file SHA-256", SourceHash(r)}, {"Display units", o.Units.String()}} {
 		if kv[1] != "" {
 			it = append(it, item{label: kv[0], val: txt(kv[1])})
 		}

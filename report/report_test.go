@@ -370,6 +370,16 @@ func TestEscaping(t *testing.T) {
 			t.Errorf("HTML %v: %v", v, err)
 		}
 		md := render(t, r, Markdown, Options{View: v})
+		// The appendix holds the calc file verbatim inside a code fence,
+		// which Markdown never reads as markup; the rest is escaped.
+		if i := strings.Index(md, "## "+mdEsc(headAppendix)); i >= 0 {
+			app := md[i:]
+			md = md[:i]
+			fenced := strings.Contains(app, "\n```yaml\n") && strings.HasSuffix(strings.TrimSpace(app), "```")
+			if !fenced && !strings.Contains(app, "angle brackets") {
+				t.Errorf("Markdown %v: the calc file in the appendix is not fenced", v)
+			}
+		}
 		if strings.Contains(md, "<script") || strings.Contains(md, "<b>") || strings.Contains(md, " & ") {
 			t.Errorf("Markdown %v: unescaped markup from the calc file", v)
 		}
@@ -514,7 +524,7 @@ func TestHTMLPackage(t *testing.T) {
 	r := load(t, example, nil)
 	h := render(t, r, HTML, Options{View: ViewReport, Date: "2026-12-02"})
 	for _, want := range []string{
-		"2026-12-02", r.Version, "Inputs as entered", "Ground profile", "γsat", "Vertical stress",
+		"2026-12-02", r.Version, headAppendix, "Summary", "Methods compared", "Ground profile", "γsat", "Vertical stress",
 		"Shaft resistance", "Tip resistance", "Characteristic capacity", "Design check", "Required length",
 		"Capacity with depth", "Warnings", "Sources cited", "Cautions",
 		"Capacity with tip depth", // the title of the gonum plot

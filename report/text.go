@@ -6,6 +6,36 @@ import (
 	"unicode/utf8"
 )
 
+// textWidth is the most columns (runes) a line of text output takes,
+// unless Options.Wide asks for tables at their natural width.
+const textWidth = 100
+
+// preLines splits preformatted text into lines of at most n runes: a
+// longer line is cut, and its continuation starts with "↪ ". Tabs become
+// two spaces.
+func preLines(s string, n int) []string {
+	var out []string
+	for _, l := range strings.Split(strings.TrimRight(s, "\n"), "\n") {
+		r := []rune(strings.ReplaceAll(strings.TrimRight(l, "\r"), "\t", "  "))
+		first := true
+		for first || len(r) > 0 {
+			m := n
+			if !first {
+				m = n - 2
+			}
+			k := min(m, len(r))
+			if first {
+				out = append(out, string(r[:k]))
+			} else {
+				out = append(out, "↪ "+string(r[:k]))
+			}
+			r = r[k:]
+			first = false
+		}
+	}
+	return out
+}
+
 func width(s string) int { return utf8.RuneCountInString(s) }
 
 func pad(b *bufio.Writer, s string, w int, right bool) {
@@ -64,6 +94,12 @@ func writeText(b *bufio.Writer, d *doc) error {
 
 func textBlock(b *bufio.Writer, bl block) {
 	switch {
+	case bl.pre != "":
+		for _, l := range preLines(bl.pre, textWidth-2) {
+			b.WriteString("  ")
+			b.WriteString(l)
+			b.WriteString("\n")
+		}
 	case bl.para != "":
 		for _, l := range wrap(bl.para, 78) {
 			b.WriteString(l)
@@ -105,7 +141,7 @@ func textBlock(b *bufio.Writer, bl block) {
 		}
 	case len(bl.list) > 0:
 		for _, l := range bl.list {
-			for i, w := range wrap(l, 74) {
+			for i, w := range wrap(l, textWidth-4) {
 				if i == 0 {
 					b.WriteString("  - ")
 				} else {
