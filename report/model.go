@@ -50,6 +50,9 @@ type table struct {
 	// listInText renders the table in Text as one wrapped list entry per
 	// row (for tables of sentences, too wide for columns).
 	listInText bool
+	// key is how many leading columns name a row; Text repeats them in
+	// every part of a table split to fit the width (0 means 1).
+	key int
 }
 
 type item struct {
@@ -368,7 +371,7 @@ func secLoads(r *calc.Result, c conv) section {
 func shaftTable(r *calc.Result, c conv) *table {
 	t := &table{cols: []column{{"Top", c.uL()}, {"Bottom", c.uL()}, {"Layer", ""}, {"Method", ""},
 		{"σ′v top", c.uS()}, {"σ′v bottom", c.uS()}, {"su top", c.uS()}, {"su bottom", c.uS()},
-		{"fs top", c.uS()}, {"fs bottom", c.uS()}, {"∫fs dz", c.uQ()}, {"Perimeter", c.uL()}, {"Qs", c.uF()}}}
+		{"fs top", c.uS()}, {"fs bottom", c.uS()}, {"∫fs dz", c.uQ()}, {"Perimeter", c.uL()}, {"Qs", c.uF()}}, key: 2}
 	for _, w := range r.Breakdown.Rows {
 		hasSu := w.SuTop > 0 || w.SuBottom > 0
 		fsOK := w.Method != "none" && w.Method != "lambda"

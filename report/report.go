@@ -115,6 +115,11 @@ type Options struct {
 	// reference cases, all pass"), shown in the title block; empty leaves
 	// it out.
 	Verification string
+	// Wide lays text out as wide as its tables are (one line per row, an
+	// item or equation on one line); the default fits every line in 100
+	// columns, splitting a wide table into parts that repeat its first
+	// column and wrapping long text.
+	Wide bool
 }
 
 // Write renders result r in format f to w.
@@ -141,7 +146,7 @@ func Write(w io.Writer, r *calc.Result, f Format, o Options) error {
 		tw := bufio.NewWriter(&buf)
 		switch f {
 		case Text:
-			err = writeText(tw, build(r, o))
+			err = writeText(tw, build(r, o), o.Wide)
 		case Markdown:
 			err = writeMarkdown(tw, build(r, o))
 		default:

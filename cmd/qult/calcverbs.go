@@ -20,6 +20,7 @@ type calcOpts struct {
 	format string
 	units  string
 	out    string
+	wide   bool
 }
 
 func calcFlags(name, formats string, o *calcOpts) *flag.FlagSet {
@@ -31,6 +32,7 @@ func calcFlags(name, formats string, o *calcOpts) *flag.FlagSet {
 	fs.StringVar(&o.format, "format", "", "output `format`: "+formats+" (default "+def+")")
 	fs.StringVar(&o.units, "units", "", "display `system` SI or US (default: the file's units)")
 	fs.StringVar(&o.out, "o", "", "write the output to `FILE` instead of standard output")
+	fs.BoolVar(&o.wide, "wide", false, "text: tables at their natural width, one line per row, instead of fitting 100 columns")
 	return fs
 }
 
@@ -115,7 +117,7 @@ func (c *cmd) calcVerb(args []string, view report.View) int {
 		}
 	}
 	var buf bytes.Buffer
-	if err := render(&buf, res, format, view, res.Display); err != nil {
+	if err := render(&buf, res, format, view, res.Display, o.wide); err != nil {
 		c.errorf("%s: %v", c.verb, err)
 		return exitUsage
 	}

@@ -103,6 +103,14 @@ when any design check fails, else 0.`,
   cat piles.jsonl | qult batch -`,
 			flags: func() *flag.FlagSet { return batchFlags(&batchOpts{}) },
 		},
+		"help": {
+			usage: "help [VERB]",
+			about: `Prints the list of verbs, or with a verb its usage, what it does, its
+flags and an example. "qult VERB --help" does the same.`,
+			example: `qult help report
+  qult help`,
+			flags: func() *flag.FlagSet { return newFlagSet("help") },
+		},
 		"version": {
 			usage:   "version",
 			about:   `Prints the version of qult, of the calc file format it reads and of the result schema it writes.`,

@@ -24,12 +24,12 @@ var (
 // render writes res in format for view, in display system sys, through
 // package report. The date is left to the calc file (none is made up), so
 // that the same file gives the same output.
-func render(w io.Writer, res *calc.Result, format string, view report.View, sys units.System) error {
+func render(w io.Writer, res *calc.Result, format string, view report.View, sys units.System, wide bool) error {
 	f, err := report.ParseFormat(format)
 	if err != nil {
 		return err
 	}
-	o := report.Options{Units: sys, View: view}
+	o := report.Options{Units: sys, View: view, Wide: wide}
 	if view == report.ViewReport || f == report.JSON { // the package's title block, and the whole result in JSON
 		o.Verification = verificationLine()
 	}
