@@ -70,7 +70,7 @@ func addFigures(d *doc, r *calc.Result, o Options) error {
 				if err != nil {
 					return err
 				}
-				s.blocks = append(s.blocks, block{svg: g, fig: "Total stress, pore pressure and effective vertical stress with depth."})
+				s.blocks = append(s.blocks, figBlock(g, "Total stress, pore pressure and effective vertical stress with depth."))
 			}
 		case headWithDepth:
 			if len(r.WithDepth) >= 2 {
@@ -78,7 +78,7 @@ func addFigures(d *doc, r *calc.Result, o Options) error {
 				if err != nil {
 					return err
 				}
-				s.blocks = append(s.blocks, block{svg: g, fig: "Characteristic compression and tension resistance and design compression resistance against tip depth."})
+				s.blocks = append(s.blocks, figBlock(g, "Characteristic compression and tension resistance and design compression resistance against tip depth."))
 			}
 		}
 		if err := settleFigures(s, r, c); err != nil {

@@ -71,8 +71,12 @@ type block struct {
 	list  []string
 	svg   string
 	pre   string
-	fig   string // figure caption
+	fig   string  // figure caption
+	draw  *figure // the figure as a drawing (for PDF); nil for SVG-only figures
 }
+
+// figBlock is a block holding figure f with caption cap.
+func figBlock(f figure, cap string) block { return block{svg: f.svg, draw: &f, fig: cap} }
 
 type section struct {
 	heading string

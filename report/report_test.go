@@ -74,7 +74,7 @@ func TestParseFormat(t *testing.T) {
 	for _, c := range []struct {
 		in   string
 		want Format
-	}{{"text", Text}, {"json", JSON}, {"csv", CSV}, {"md", Markdown}, {"markdown", Markdown}, {"HTML", HTML}} {
+	}{{"text", Text}, {"json", JSON}, {"csv", CSV}, {"md", Markdown}, {"markdown", Markdown}, {"HTML", HTML}, {"pdf", PDF}} {
 		got, err := ParseFormat(c.in)
 		if err != nil || got != c.want {
 			t.Errorf("ParseFormat(%q) = %v, %v; want %v", c.in, got, err, c.want)
@@ -83,11 +83,11 @@ func TestParseFormat(t *testing.T) {
 			t.Errorf("ParseFormat(%v.String()) = %v, %v", got, back, err)
 		}
 	}
-	for _, bad := range []string{"", "pdf", "xml", "text "} {
+	for _, bad := range []string{"", "docx", "xml", "text "} {
 		if bad == "text " {
 			continue // surrounding space is accepted
 		}
-		if _, err := ParseFormat(bad); err == nil || !strings.Contains(err.Error(), "text, json, csv, md or html") {
+		if _, err := ParseFormat(bad); err == nil || !strings.Contains(err.Error(), "text, json, csv, md, html or pdf") {
 			t.Errorf("ParseFormat(%q): error %v, want one naming the accepted formats", bad, err)
 		}
 	}

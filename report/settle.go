@@ -221,7 +221,7 @@ func secLoadTest(r *calc.Result, c conv) section {
 
 // settleSVG plots the predicted load-settlement curve, the measured one
 // and the serviceability load, settlement downwards.
-func settleSVG(r *calc.Result, c conv) (string, error) {
+func settleSVG(r *calc.Result, c conv) (figure, error) {
 	s := r.Settlement
 	var pred, meas plotter.XYs
 	if s != nil {
@@ -249,7 +249,7 @@ func settleSVG(r *calc.Result, c conv) (string, error) {
 }
 
 // axialSVG plots the axial load with depth at the serviceability load.
-func axialSVG(r *calc.Result, c conv) (string, error) {
+func axialSVG(r *calc.Result, c conv) (figure, error) {
 	s := r.Settlement
 	var xy plotter.XYs
 	for i, z := range s.Depth {
@@ -274,13 +274,13 @@ func settleFigures(s *section, r *calc.Result, c conv) error {
 		if r.LoadTest != nil {
 			fig += " with the measured one of the load test"
 		}
-		s.blocks = append(s.blocks, block{svg: g, fig: fig + ", the serviceability load and the allowable settlement."})
+		s.blocks = append(s.blocks, figBlock(g, fig+", the serviceability load and the allowable settlement."))
 		if len(r.Settlement.Depth) >= 2 {
 			g, err := axialSVG(r, c)
 			if err != nil {
 				return err
 			}
-			s.blocks = append(s.blocks, block{svg: g, fig: "Axial load in the pile with depth at the serviceability load."})
+			s.blocks = append(s.blocks, figBlock(g, "Axial load in the pile with depth at the serviceability load."))
 		}
 	case headLoadTest:
 		if r.Settlement == nil && r.LoadTest != nil {
@@ -288,7 +288,7 @@ func settleFigures(s *section, r *calc.Result, c conv) error {
 			if err != nil {
 				return err
 			}
-			s.blocks = append(s.blocks, block{svg: g, fig: "Measured load-settlement curve of the load test."})
+			s.blocks = append(s.blocks, figBlock(g, "Measured load-settlement curve of the load test."))
 		}
 	}
 	return nil

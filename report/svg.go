@@ -11,6 +11,7 @@ import (
 	"gonum.org/v1/plot/plotter"
 	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
+	"gonum.org/v1/plot/vg/vgimg"
 	"gonum.org/v1/plot/vg/vgsvg"
 
 	"github.com/qultgeo/qult/calc"
@@ -180,9 +181,50 @@ type series struct {
 	dashes []vg.Length
 }
 
-// svgPlot draws series against depth (downwards) and returns the inline
-// SVG markup (without the XML prolog).
-func svgPlot(title, xlabel, ylabel string, ss []series) (string, error) {
+// figure is a drawing that can be written as inline SVG (HTML) or as a
+// PNG image (PDF): its size and a function that paints it on a canvas of
+// that size.
+type figure struct {
+	w, h  vg.Length
+	paint func(dc draw.Canvas)
+	svg   string // the inline SVG markup, without the XML prolog
+}
+
+// svgOf paints f on an SVG canvas and returns the markup without the XML
+// prolog.
+func svgOf(w, h vg.Length, paint func(draw.Canvas)) (string, error) {
+	cv := vgsvg.New(w, h)
+	paint(draw.New(cv))
+	var buf bytes.Buffer
+	if _, err := cv.WriteTo(&buf); err != nil {
+		return "", err
+	}
+	s := buf.String()
+	if i := strings.Index(s, "<svg"); i >= 0 {
+		s = s[i:]
+	}
+	return strings.TrimSpace(s), nil
+}
+
+// newFigure makes a figure and its SVG markup.
+func newFigure(w, h vg.Length, paint func(draw.Canvas)) (figure, error) {
+	s, err := svgOf(w, h, paint)
+	return figure{w: w, h: h, paint: paint, svg: s}, err
+}
+
+// pngOf paints f at dpi dots per inch and returns the PNG bytes.
+func (f figure) png(dpi int) ([]byte, error) {
+	cv := vgimg.NewWith(vgimg.UseWH(f.w, f.h), vgimg.UseDPI(dpi), vgimg.UseBackgroundColor(color.White))
+	f.paint(draw.New(cv))
+	var buf bytes.Buffer
+	if _, err := (vgimg.PngCanvas{Canvas: cv}).WriteTo(&buf); err != nil {
+		return nil, err
+	}
+	return buf.Bytes(), nil
+}
+
+// svgPlot draws series against depth (downwards) as a figure.
+func svgPlot(title, xlabel, ylabel string, ss []series) (figure, error) {
 	p := plot.New()
 	p.Title.Text = title
 	p.X.Label.Text = xlabel
@@ -198,7 +240,7 @@ func svgPlot(title, xlabel, ylabel string, ss []series) (string, error) {
 		}
 		l, err := plotter.NewLine(s.xy)
 		if err != nil {
-			return "", err
+			return figure{}, err
 		}
 		l.LineStyle.Color = s.colour
 		l.LineStyle.Width = vg.Points(1.5)
@@ -207,17 +249,7 @@ func svgPlot(title, xlabel, ylabel string, ss []series) (string, error) {
 		p.Legend.Add(s.name, l)
 	}
 	p.Y.Max = 0 // the ground surface at the top
-	cv := vgsvg.New(plotW, plotH)
-	p.Draw(draw.New(cv))
-	var buf bytes.Buffer
-	if _, err := cv.WriteTo(&buf); err != nil {
-		return "", err
-	}
-	s := buf.String()
-	if i := strings.Index(s, "<svg"); i >= 0 {
-		s = s[i:]
-	}
-	return strings.TrimSpace(s), nil
+	return newFigure(plotW, plotH, p.Draw)
 }
 
 var (
@@ -228,7 +260,7 @@ var (
 )
 
 // stressSVG plots σv, u and σ′v with depth.
-func stressSVG(r *calc.Result, c conv) (string, error) {
+func stressSVG(r *calc.Result, c conv) (figure, error) {
 	var tot, pore, eff plotter.XYs
 	for _, s := range r.Stresses {
 		z := -c.L(s.Depth)
@@ -246,7 +278,7 @@ func stressSVG(r *calc.Result, c conv) (string, error) {
 // capacitySVG plots the characteristic compression and tension resistance
 // and the design compression resistance against tip depth, with the
 // design compression action where there is one.
-func capacitySVG(r *calc.Result, c conv) (string, error) {
+func capacitySVG(r *calc.Result, c conv) (figure, error) {
 	var rc, rt, rd plotter.XYs
 	for i, k := range r.WithDepth {
 		z := -c.L(k.TipDepth)
