@@ -2,10 +2,12 @@ package report
 
 import (
 	"bufio"
+	"fmt"
 	"html"
 	"strings"
 
 	"github.com/qultgeo/qult/calc"
+	"github.com/qultgeo/qult/units"
 )
 
 // The section headings the HTML writer adds figures to.
@@ -30,13 +32,62 @@ table.kv th{background:#f6f6f6;font-weight:normal}
 pre{background:#f7f7f7;border:1px solid #ccc;padding:.6rem;overflow-x:auto;font-size:.8rem}
 figure{margin:.6rem 0}
 figcaption{font-size:.85rem;color:#333}
-figure svg{max-width:100%;height:auto}
+figure svg{max-width:100%;height:auto;display:block}
+figure svg text{font-family:"Liberation Sans",Arial,Helvetica,sans-serif !important}
 .warn li{margin:.2rem 0}
 .caution{border:1px solid #555;padding:.3rem .9rem;background:#fafafa}
 .fail{color:#a00;font-weight:bold}
 .wide{overflow-x:auto}
 @media print{body{max-width:none;margin:0}h2{break-after:avoid}table,figure{break-inside:avoid}.wide{overflow:visible}}
 `
+
+// printCSS is the page box of a printed HTML package: A4 or Letter as the
+// PDF, with the same header (title, project, revision) and footer (qult
+// version, the calc file's SHA-256 prefix, page x of y, the cautions in one
+// line) in the page margins.
+func printCSS(r *calc.Result, o Options, title string) string {
+	size := "A4"
+	if o.Paper == PaperLetter || (o.Paper == PaperAuto && o.Units == units.US) {
+		size = "letter"
+	}
+	var right []string
+	if r.Project != "" {
+		right = append(right, "Project: "+r.Project)
+	}
+	if r.Revision != "" {
+		right = append(right, "Revision: "+r.Revision)
+	}
+	left := "qult " + r.Version
+	if h := SourceHash(r); h != "" {
+		left += "   calc file SHA-256 " + h[:12]
+	}
+	if dt := date(r, o); dt != "" {
+		left += "   " + dt
+	}
+	return "\n@page{size:" + size + " portrait;margin:18mm 14mm 20mm 14mm;" +
+		"@top-left{content:" + cssString(title) + ";font:8pt Helvetica,Arial,sans-serif;color:#444}" +
+		"@top-right{content:" + cssString(strings.Join(right, "   ")) + ";font:8pt Helvetica,Arial,sans-serif;color:#444}" +
+		"@bottom-left{content:" + cssString(left) + ";font:8pt Helvetica,Arial,sans-serif;color:#444}" +
+		"@bottom-right{content:\"page \" counter(page) \" of \" counter(pages);font:8pt Helvetica,Arial,sans-serif;color:#444}" +
+		"@bottom-center{content:" + cssString(calc.CautionLine) + ";font:6pt Helvetica,Arial,sans-serif;color:#444;vertical-align:bottom;white-space:normal}}\n"
+}
+
+// cssString quotes s as a CSS string: quotes and backslashes escaped, and
+// every character outside printable ASCII (and <, >, &) written as a hex
+// escape, so that nothing in it can end the string or the style element.
+func cssString(s string) string {
+	var b strings.Builder
+	b.WriteByte('"')
+	for _, r := range clean(s) {
+		if r < 0x20 || r > 0x7e || r == '"' || r == '\\' || r == '<' || r == '>' || r == '&' {
+			fmt.Fprintf(&b, "\\%x ", r)
+			continue
+		}
+		b.WriteRune(r)
+	}
+	b.WriteByte('"')
+	return b.String()
+}
 
 // esc escapes text for HTML element content and attribute values. Invalid
 // UTF-8 and control characters other than tab, newline and carriage
@@ -61,8 +112,20 @@ func addFigures(d *doc, r *calc.Result, o Options) error {
 		s := &d.sections[i]
 		switch s.heading {
 		case headGround:
-			if g := groundSVG(r, c); g != "" {
-				s.blocks = append(s.blocks, block{svg: g, fig: "Ground profile drawn to scale (depths and pile width at the same scale; the width of the ground column is arbitrary)."})
+			g, err := groundFigure(r, c)
+			if err != nil {
+				return err
+			}
+			if g.svg != "" {
+				s.blocks = append(s.blocks, figBlock(g, "Ground profile drawn to scale (depths and pile width at the same scale; the width of the ground column is arbitrary; the fill shows drainage, not soil type)."))
+			}
+		case headCompared:
+			g, err := compareFigure(r, c)
+			if err != nil {
+				return err
+			}
+			if g.svg != "" {
+				s.blocks = append(s.blocks, figBlock(g, "Shaft and tip resistance of the same pile by each applicable method; the file's choice dark and marked *."))
 			}
 		case headStress:
 			if len(r.Stresses) >= 2 {
@@ -97,6 +160,7 @@ func writeHTML(b *bufio.Writer, r *calc.Result, o Options) error {
 	b.WriteString(esc(d.title))
 	b.WriteString("</title>\n<style>")
 	b.WriteString(css)
+	b.WriteString(printCSS(r, o, d.title))
 	b.WriteString("</style>\n</head>\n<body>\n")
 	for i, s := range d.sections {
 		if i == 0 && s.heading == "" {

@@ -541,8 +541,8 @@ func TestHTMLPackage(t *testing.T) {
 	if strings.Contains(h, "<?xml") {
 		t.Error("HTML report holds an XML prolog")
 	}
-	if n := strings.Count(h, "<svg"); n != 3 {
-		t.Errorf("%d SVG figures, want 3 (ground, stress, capacity)", n)
+	if n := strings.Count(h, "<svg"); n != 4 {
+		t.Errorf("%d SVG figures, want 4 (ground, stress, methods compared, capacity)", n)
 	}
 	for _, s := range r.Sources {
 		if !strings.Contains(h, esc(s.String())) {

@@ -234,16 +234,16 @@ func settleSVG(r *calc.Result, c conv) (figure, error) {
 			meas = append(meas, plotter.XY{X: c.F(p.Load), Y: -c.sm(p.Settlement)})
 		}
 	}
-	ss := []series{{"predicted", pred, black, nil}, {"measured (load test)", meas, red, []vg.Length{vg.Points(5), vg.Points(3)}}}
+	ss := []series{{"predicted", pred, black, nil, false}, {"measured (load test)", meas, red, []vg.Length{vg.Points(5), vg.Points(3)}, false}}
 	if s != nil && !s.Plunged && s.Load > 0 {
-		ss = append(ss, series{"serviceability load", plotter.XYs{{X: c.F(s.Load), Y: 0}, {X: c.F(s.Load), Y: -c.sm(s.Settlement)}}, green, []vg.Length{vg.Points(8), vg.Points(3)}})
+		ss = append(ss, series{"serviceability load", plotter.XYs{{X: c.F(s.Load), Y: 0}, {X: c.F(s.Load), Y: -c.sm(s.Settlement)}}, green, []vg.Length{vg.Points(8), vg.Points(3)}, false})
 	}
 	if s != nil && s.HasAllowable && len(pred) > 0 {
 		xmax := pred[len(pred)-1].X
 		for _, p := range meas {
 			xmax = max(xmax, p.X)
 		}
-		ss = append(ss, series{"allowable settlement", plotter.XYs{{X: 0, Y: -c.sm(s.Allowable)}, {X: xmax, Y: -c.sm(s.Allowable)}}, blue, []vg.Length{vg.Points(2), vg.Points(2)}})
+		ss = append(ss, series{"allowable settlement", plotter.XYs{{X: 0, Y: -c.sm(s.Allowable)}, {X: xmax, Y: -c.sm(s.Allowable)}}, blue, []vg.Length{vg.Points(2), vg.Points(2)}, false})
 	}
 	return svgPlot("Load-settlement", "head load ("+c.uF()+")", "settlement ("+c.uSm()+")", ss)
 }
@@ -255,7 +255,7 @@ func axialSVG(r *calc.Result, c conv) (figure, error) {
 	for i, z := range s.Depth {
 		xy = append(xy, plotter.XY{X: c.F(s.AxialLoad[i]), Y: -c.L(z)})
 	}
-	return svgPlot("Axial load at the serviceability load", "axial load ("+c.uF()+")", "depth ("+c.uL()+")", []series{{"axial load", xy, black, nil}})
+	return svgPlot("Axial load at the serviceability load", "axial load ("+c.uF()+")", "depth ("+c.uL()+")", []series{{"axial load", xy, black, nil, false}})
 }
 
 // settleFigures adds the figures of the settlement and load-test
