@@ -37,8 +37,10 @@ figure svg text{font-family:"Liberation Sans",Arial,Helvetica,sans-serif !import
 .warn li{margin:.2rem 0}
 .caution{border:1px solid #555;padding:.3rem .9rem;background:#fafafa}
 .fail{color:#a00;font-weight:bold}
-.wide{overflow-x:auto}
-@media print{body{max-width:none;margin:0}h2{break-after:avoid}table,figure{break-inside:avoid}.wide{overflow:visible}}
+.cont{font-size:.8rem;color:#444;margin:.2rem 0 0}
+pre{white-space:pre-wrap;overflow-wrap:anywhere}
+td{overflow-wrap:anywhere}
+@media print{body{max-width:none;margin:0;padding:0;font-size:9pt;line-height:1.3}h1{font-size:14pt}h2{font-size:11pt;margin:.9rem 0 .35rem;break-after:avoid}table{font-size:7.5pt;margin:.3rem 0}.eq{font-size:7.5pt}pre{font-size:7pt}figure{break-inside:avoid;margin:.3rem 0}figure svg{max-height:125mm;width:auto}tr{break-inside:avoid}}
 `
 
 // printCSS is the page box of a printed HTML package: A4 or Letter as the
@@ -230,21 +232,26 @@ func htmlBlock(b *bufio.Writer, bl block, heading string) {
 		}
 		b.WriteString("</table>\n")
 	case bl.tbl != nil:
-		b.WriteString("<div class=\"wide\"><table>\n<thead><tr>")
-		for _, c := range bl.tbl.cols {
-			b.WriteString("<th>")
-			b.WriteString(esc(c.header()))
-			b.WriteString("</th>")
-		}
-		b.WriteString("</tr></thead>\n<tbody>\n")
-		for _, row := range bl.tbl.rows {
-			b.WriteString("<tr>")
-			for _, c := range row {
-				htmlCell(b, c)
+		for pi, cols := range htmlParts(bl.tbl) {
+			if pi > 0 {
+				b.WriteString("<p class=\"cont\">(continued)</p>\n")
 			}
-			b.WriteString("</tr>\n")
+			b.WriteString("<table>\n<thead><tr>")
+			for _, j := range cols {
+				b.WriteString("<th>")
+				b.WriteString(esc(bl.tbl.cols[j].header()))
+				b.WriteString("</th>")
+			}
+			b.WriteString("</tr></thead>\n<tbody>\n")
+			for _, row := range bl.tbl.rows {
+				b.WriteString("<tr>")
+				for _, j := range cols {
+					htmlCell(b, row[j])
+				}
+				b.WriteString("</tr>\n")
+			}
+			b.WriteString("</tbody>\n</table>\n")
 		}
-		b.WriteString("</tbody>\n</table></div>\n")
 	case len(bl.eqs) > 0:
 		for _, e := range bl.eqs {
 			b.WriteString("<p class=\"eq\">")
@@ -279,6 +286,63 @@ func htmlBlock(b *bufio.Writer, bl block, heading string) {
 		b.WriteString(esc(strings.TrimRight(bl.pre, "\n")))
 		b.WriteString("</pre>\n")
 	}
+}
+
+// htmlBudget is the width, in characters of the table font, a table may
+// take before it is split: the text of an A4 page (182 mm) holds about 100
+// characters of it, and each cell's padding and border take about two.
+const htmlBudget = 96
+
+// htmlParts splits a table too wide for the page into parts of whole
+// columns that repeat its key columns, as Text does: a column takes its
+// longest number or header word (headers and text wrap), text cells at
+// most 24 characters before they wrap.
+func htmlParts(t *table) [][]int {
+	n := len(t.cols)
+	w := make([]int, n)
+	for j, c := range t.cols {
+		for _, word := range strings.Fields(c.header()) {
+			w[j] = max(w[j], width(word))
+		}
+	}
+	for _, row := range t.rows {
+		for j, c := range row {
+			v := width(c.str(sig))
+			if !c.num {
+				v = min(v, 24)
+			}
+			w[j] = max(w[j], v)
+		}
+	}
+	all := make([]int, n)
+	total := 0
+	for j := range all {
+		all[j] = j
+		total += w[j] + 2
+	}
+	if total <= htmlBudget || n < 2 {
+		return [][]int{all}
+	}
+	key := min(max(1, t.key), n-1)
+	keyW := 0
+	var keys []int
+	for j := range key {
+		keys = append(keys, j)
+		keyW += w[j] + 2
+	}
+	var parts [][]int
+	cur := append([]int(nil), keys...)
+	used := keyW
+	for j := key; j < n; j++ {
+		if len(cur) > key && used+w[j]+2 > htmlBudget {
+			parts = append(parts, cur)
+			cur = append([]int(nil), keys...)
+			used = keyW
+		}
+		cur = append(cur, j)
+		used += w[j] + 2
+	}
+	return append(parts, cur)
 }
 
 // hasUnits reports whether any item has a unit.

@@ -272,12 +272,15 @@ func (p *pdfWriter) block(bl block, heading string) {
 // figure places a drawing as a PNG image, scaled to the text width at
 // most, with its caption.
 func (p *pdfWriter) figure(g *figure, caption string) {
-	img, err := g.png(pdfDPI)
+	// fpdf writes images in order of their pixel width, in map order
+	// among equal widths; one more dot per inch for each figure gives
+	// every image its own width, so the same result gives the same bytes.
+	p.figN++
+	img, err := g.png(pdfDPI + p.figN)
 	if err != nil {
 		p.err = err
 		return
 	}
-	p.figN++
 	name := "fig" + strconv.Itoa(p.figN)
 	f := p.f
 	f.RegisterImageOptionsReader(name, fpdf.ImageOptions{ImageType: "PNG"}, bytes.NewReader(img))

@@ -2,7 +2,10 @@ package report
 
 import (
 	"bytes"
+	"image"
 	"image/color"
+	stddraw "image/draw"
+	"image/png"
 	"math"
 	"strings"
 
@@ -100,8 +103,17 @@ func newFigure(label string, w, h vg.Length, paint func(draw.Canvas)) (figure, e
 func (f figure) png(dpi int) ([]byte, error) {
 	cv := vgimg.NewWith(vgimg.UseWH(f.w, f.h), vgimg.UseDPI(dpi), vgimg.UseBackgroundColor(color.White))
 	f.paint(draw.New(cv))
+	// Flattened on white into an opaque image, which image/png writes as
+	// RGB without alpha: the PDF then keeps the PNG data as it is (an
+	// alpha channel would be split off and compressed again, which fpdf
+	// does not do the same way on every run).
+	src := cv.Image()
+	b := src.Bounds()
+	flat := image.NewRGBA(b)
+	stddraw.Draw(flat, b, image.NewUniform(color.White), image.Point{}, stddraw.Src)
+	stddraw.Draw(flat, b, src, b.Min, stddraw.Over)
 	var buf bytes.Buffer
-	if _, err := (vgimg.PngCanvas{Canvas: cv}).WriteTo(&buf); err != nil {
+	if err := png.Encode(&buf, flat); err != nil {
 		return nil, err
 	}
 	return buf.Bytes(), nil
