@@ -44,15 +44,31 @@ const (
 	plotH = 5.2 * vg.Inch
 )
 
-// depthTicks labels a downward depth axis plotted as negative values.
-var depthTicks = plot.TickerFunc(func(lo, hi float64) []plot.Tick {
-	t := plot.DefaultTicks{}.Ticks(lo, hi)
-	for i := range t {
-		if t[i].Label != "" {
-			t[i].Label = fmtNum(-t[i].Value, sig)
+// niceTicks returns labelled ticks every niceStep(hi−lo, n) and unlabelled
+// ones halfway between, the labels from label.
+func niceTicks(lo, hi float64, n int, label func(float64) string) []plot.Tick {
+	step := niceStep(hi-lo, n)
+	var t []plot.Tick
+	for v := math.Ceil(lo/step*2) * step / 2; v <= hi+step*1e-9; v += step / 2 {
+		v := math.Round(v/step*2) * step / 2
+		if k := math.Round(v / step * 2); math.Mod(k, 2) == 0 {
+			t = append(t, plot.Tick{Value: v, Label: label(v)})
+		} else {
+			t = append(t, plot.Tick{Value: v})
 		}
 	}
 	return t
+}
+
+// depthTicks labels a downward depth axis plotted as negative values,
+// about eight labelled ticks over the depth.
+var depthTicks = plot.TickerFunc(func(lo, hi float64) []plot.Tick {
+	return niceTicks(lo, hi, 8, func(v float64) string { return fmtNum(-v, sig) })
+})
+
+// valueTicks labels a value axis, about five labelled ticks.
+var valueTicks = plot.TickerFunc(func(lo, hi float64) []plot.Tick {
+	return niceTicks(lo, hi, 5, func(v float64) string { return fmtNum(v, sig) })
 })
 
 type series struct {
@@ -127,6 +143,7 @@ func svgPlot(title, xlabel, ylabel string, ss []series) (figure, error) {
 	p.X.Label.Text = xlabel
 	p.Y.Label.Text = ylabel
 	p.Y.Tick.Marker = depthTicks
+	p.X.Tick.Marker = valueTicks
 	p.Legend.Top = true
 	p.Legend.Left = false
 	p.X.Min = 0
@@ -237,10 +254,14 @@ func capacitySVG(r *calc.Result, c conv) (figure, error) {
 }
 
 // sansPlot sets every text of p in the figures' typeface (Liberation
-// Sans), keeping gonum/plot's sizes.
+// Sans) at the sizes of the other figures: title 11 pt, axis labels 10,
+// ticks 9, legend 8.5.
 func sansPlot(p *plot.Plot) {
-	for _, f := range []*font.Font{&p.Title.TextStyle.Font, &p.X.Label.TextStyle.Font, &p.Y.Label.TextStyle.Font,
-		&p.X.Tick.Label.Font, &p.Y.Tick.Label.Font, &p.Legend.TextStyle.Font} {
-		f.Typeface, f.Variant = sansFont.Typeface, sansFont.Variant
+	for _, f := range []struct {
+		f    *font.Font
+		size vg.Length
+	}{{&p.Title.TextStyle.Font, 11}, {&p.X.Label.TextStyle.Font, 10}, {&p.Y.Label.TextStyle.Font, 10},
+		{&p.X.Tick.Label.Font, 9}, {&p.Y.Tick.Label.Font, 9}, {&p.Legend.TextStyle.Font, 8.5}} {
+		f.f.Typeface, f.f.Variant, f.f.Size = sansFont.Typeface, sansFont.Variant, f.size
 	}
 }
