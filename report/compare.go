@@ -19,6 +19,9 @@ func secCompared(r *calc.Result, c conv) section {
 		return section{}
 	}
 	blocks := []block{{para: "The same pile in the same ground by every method of the catalogues that applies and needs no key of its own: each shaft method in every embedded layer of its drainage class (the other layers as chosen), each tip method in every layer of the bearing layer's class. Limits, critical depth, tip rules and zones without friction stay as chosen. The file's choice is marked *. Some methods are written for other piles or ground than these (each method's scope is in its source and in qult's catalogue): the table shows how far accepted methods differ, it does not make them apply."}}
+	if r.Pile.Section.CanPlug() {
+		blocks = append(blocks, block{para: "The section can plug: each row is the governing mode (plugged or unplugged) with that method, so a tip method can change Qs too, and Rc need not follow Qp."})
+	}
 	for _, g := range cm.Shaft {
 		blocks = append(blocks, compareBlocks(g, c, "Shaft", "Qs", "Qs, all layers")...)
 	}

@@ -473,8 +473,11 @@ func shaftEquations(r *calc.Result, c conv) []string {
 		case a.Alpha > 0:
 			su := w.SuBottom
 			e = fmt.Sprintf("fs = α·su = %s × %s = %s", fmtNum(a.Alpha, sig), c.ss(su), c.ss(a.Unlimited))
-			if a.Psi > 0 {
-				e += fmt.Sprintf(" (ψ = %s)", fmtNum(a.Psi, sig))
+			switch {
+			case a.Psi > 0:
+				e += fmt.Sprintf(" (ψ = su/σ′v = %s)", fmtNum(a.Psi, sig))
+			case a.SuPa > 0:
+				e += fmt.Sprintf(" (su/pa = %s)", fmtNum(a.SuPa, sig))
 			}
 		default:
 			e = fmt.Sprintf("%s gives fs = %s", w.Equation, c.ss(a.Fs))

@@ -206,3 +206,14 @@ func TestPDFEveryView(t *testing.T) {
 		}
 	}
 }
+
+// TestSuPaLabel: the drilled-shaft α prints its strength ratio as su/pa,
+// not as ψ (the API α's su/σ′v). The example's clay has su = 45 kPa at the
+// bottom of its first α segment and pa = 100 kPa, so su/pa = 0.45.
+func TestSuPaLabel(t *testing.T) {
+	r := load(t, example, nil)
+	txt := render(t, r, Text, Options{View: ViewCapacity, Wide: true})
+	if !strings.Contains(txt, "(su/pa = 0.45)") || strings.Contains(txt, "ψ = 0.45") {
+		t.Errorf("alpha-drilled's ratio not labelled su/pa:\n%s", txt[strings.Index(txt, "alpha-drilled ("):][:200])
+	}
+}

@@ -102,15 +102,21 @@ func (t *table) text(b *bytes.Buffer, wide bool) {
 		}
 	}
 	last := len(w) - 1
-	wrapLast := false
+	wrapLast, notesBelow := false, false
 	if !wide && last > 0 && !(last < len(t.right) && t.right[last]) {
 		used := 0
 		for i := range last {
 			used += w[i] + 2
 		}
-		if used+w[last] > textWidth {
-			w[last] = max(20, textWidth-used)
+		switch {
+		case used+w[last] <= textWidth:
+		case textWidth-used >= 20:
+			w[last] = textWidth - used
 			wrapLast = true
+		default:
+			// No room for the last column: its cells are listed below
+			// the table, each after its row's first cell.
+			notesBelow = true
 		}
 	}
 	line := func(r []string) {
@@ -143,6 +149,25 @@ func (t *table) text(b *bytes.Buffer, wide bool) {
 			b.WriteString(strings.TrimRight(s.String(), " "))
 			b.WriteByte('\n')
 		}
+	}
+	if notesBelow {
+		cut := func(r []string) []string { return r[:last] }
+		line(cut(t.header))
+		rule := make([]string, last)
+		for i := range rule {
+			rule[i] = strings.Repeat("-", w[i])
+		}
+		line(rule)
+		for _, r := range t.rows {
+			line(cut(r))
+		}
+		b.WriteString("\n")
+		for _, r := range t.rows {
+			if r[last] != "" {
+				hanging(b, r[0]+" ("+t.header[last]+"): "+r[last], "    ", false)
+			}
+		}
+		return
 	}
 	line(t.header)
 	rule := make([]string, len(w))
