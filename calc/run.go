@@ -24,7 +24,7 @@ func CautionText() []string {
 		"These results are for qualified geotechnical engineers. Check them against the codes of practice that govern the project, the site investigation and load tests.",
 		"Each method carries the limitations stated in its source; values read from charts carry the stated reading tolerance.",
 		"qult is not a substitute for the judgement of a licensed professional engineer, who remains responsible for any design that uses it.",
-		"Where the governing code, local practice or the engineer of record differs from qult, they prevail.",
+		"Where the governing code, licensed practice or the engineer of record differs from qult, they prevail.",
 	}
 }
 
