@@ -163,7 +163,7 @@ func build(r *calc.Result, o Options) *doc {
 	add(secList("Cautions", cautions))
 	if o.View == ViewReport && len(r.Source) > 0 {
 		add(section{heading: headAppendix, blocks: []block{
-			{para: "The calc file exactly as read (SHA-256 " + SourceHash(r) + "), line by line; a line too long for the page continues on the next, marked ↪."},
+			{para: "The calc file exactly as read (SHA-256 " + SourceHash(r) + "), line by line; a line too long for the page continues on the next (marked » in text and PDF)."},
 			{pre: string(r.Source)}}})
 	}
 	return d

@@ -100,11 +100,11 @@ func writePDF(b *bufio.Writer, r *calc.Result, o Options) error {
 	f.AddUTF8FontFromBytes("sans", "", liberationsansregular.TTF)
 	f.AddUTF8FontFromBytes("sans", "B", liberationsansbold.TTF)
 	f.AddUTF8FontFromBytes("mono", "", liberationmonoregular.TTF)
-	f.SetTitle(clean(d.title), true)
-	f.SetCreator("qult "+clean(r.Version), true)
+	f.SetTitle(pdfClean(d.title), true)
+	f.SetCreator("qult "+pdfClean(r.Version), true)
 	f.SetProducer("qult", true)
 	if r.Engineer != "" {
-		f.SetAuthor(clean(r.Engineer), true)
+		f.SetAuthor(pdfClean(r.Engineer), true)
 	}
 	pw, ph := f.GetPageSize()
 	f.SetMargins(pdfMargin, pdfTop, pdfMargin)
@@ -114,13 +114,13 @@ func writePDF(b *bufio.Writer, r *calc.Result, o Options) error {
 	if len(hash) > 12 {
 		hash = hash[:12]
 	}
-	head := clean(d.title)
+	head := pdfClean(d.title)
 	var right []string
 	if r.Project != "" {
-		right = append(right, "Project: "+clean(r.Project))
+		right = append(right, "Project: "+pdfClean(r.Project))
 	}
 	if r.Revision != "" {
-		right = append(right, "Revision: "+clean(r.Revision))
+		right = append(right, "Revision: "+pdfClean(r.Revision))
 	}
 	f.SetHeaderFunc(func() {
 		f.SetFont("sans", "", 8)
@@ -142,12 +142,12 @@ func writePDF(b *bufio.Writer, r *calc.Result, o Options) error {
 		f.Line(pdfMargin, y, pw-pdfMargin, y)
 		f.SetFont("sans", "", 8)
 		f.SetTextColor(60, 60, 60)
-		left := "qult " + clean(r.Version)
+		left := "qult " + pdfClean(r.Version)
 		if hash != "" {
 			left += "   calc file SHA-256 " + hash
 		}
 		if dt := date(r, o); dt != "" {
-			left += "   " + clean(dt)
+			left += "   " + pdfClean(dt)
 		}
 		f.Text(pdfMargin, y+4, left)
 		pg := fmt.Sprintf("page %d of {nb}", f.PageNo())
@@ -176,6 +176,18 @@ func writePDF(b *bufio.Writer, r *calc.Result, o Options) error {
 	return f.Output(b)
 }
 
+// pdfClean is clean for the PDF's fonts, which fpdf reads within the
+// Basic Multilingual Plane: characters beyond it (emoji, say) become
+// U+FFFD too.
+func pdfClean(s string) string {
+	return strings.Map(func(r rune) rune {
+		if r > 0xFFFF {
+			return '\uFFFD'
+		}
+		return r
+	}, clean(s))
+}
+
 // fitText shortens s with an ellipsis until it fits in w.
 func fitText(f *fpdf.Fpdf, s string, w float64) string {
 	if f.GetStringWidth(s) <= w {
@@ -197,7 +209,7 @@ func (p *pdfWriter) room(h float64) {
 
 func (p *pdfWriter) title(s string) {
 	p.f.SetFont("sans", "B", 15)
-	p.f.MultiCell(0, 7, clean(s), "", "L", false)
+	p.f.MultiCell(0, 7, pdfClean(s), "", "L", false)
 	p.f.Ln(2)
 }
 
@@ -205,13 +217,13 @@ func (p *pdfWriter) heading(s string) {
 	p.room(24) // a heading is not left alone at the foot of a page
 	p.f.Ln(3)
 	p.f.SetFont("sans", "B", 11.5)
-	p.f.MultiCell(0, 6, clean(s), "B", "L", false)
+	p.f.MultiCell(0, 6, pdfClean(s), "B", "L", false)
 	p.f.Ln(2)
 }
 
 func (p *pdfWriter) text(s string, size, lh float64, font string) {
 	p.f.SetFont(font, "", size)
-	p.f.MultiCell(0, lh, clean(s), "", "L", false)
+	p.f.MultiCell(0, lh, pdfClean(s), "", "L", false)
 }
 
 func (p *pdfWriter) block(bl block, heading string) {
@@ -219,8 +231,11 @@ func (p *pdfWriter) block(bl block, heading string) {
 	switch {
 	case bl.pre != "":
 		f.SetFont("mono", "", 7)
-		n := int(p.w / f.GetStringWidth("M"))
-		for _, l := range preLines(clean(bl.pre), n) {
+		n := 100
+		if m := f.GetStringWidth("M"); m > 0 {
+			n = max(20, int(p.w/m))
+		}
+		for _, l := range preLines(pdfClean(bl.pre), n) {
 			f.CellFormat(0, 3.1, l, "", 1, "L", false, 0, "")
 		}
 		f.Ln(1.5)
@@ -259,7 +274,7 @@ func (p *pdfWriter) block(bl block, heading string) {
 			f.Text(pdfMargin+1, y+3.1, mark)
 			f.SetLeftMargin(pdfMargin + 6)
 			f.SetX(pdfMargin + 6)
-			f.MultiCell(0, pdfLine, clean(l), "", "L", false)
+			f.MultiCell(0, pdfLine, pdfClean(l), "", "L", false)
 			f.SetLeftMargin(pdfMargin)
 			f.Ln(0.6)
 		}
@@ -296,7 +311,7 @@ func (p *pdfWriter) figure(g *figure, caption string) {
 	f.SetY(y + h + 1)
 	f.SetFont("sans", "", 8)
 	f.SetTextColor(60, 60, 60)
-	f.MultiCell(0, 3.6, clean(caption), "", "C", false)
+	f.MultiCell(0, 3.6, pdfClean(caption), "", "C", false)
 	f.SetTextColor(0, 0, 0)
 	f.Ln(2)
 }
@@ -316,7 +331,7 @@ func (p *pdfWriter) table(t *table, header bool) {
 	natural := make([]float64, n)
 	least := make([]float64, n) // the longest word
 	for j, c := range t.cols {
-		heads[j] = clean(c.header())
+		heads[j] = pdfClean(c.header())
 		right[j] = true
 		if header {
 			f.SetFont("sans", "B", pdfTableFont)
@@ -331,7 +346,7 @@ func (p *pdfWriter) table(t *table, header bool) {
 	for i, row := range t.rows {
 		cells[i] = make([]string, n)
 		for j, c := range row {
-			cells[i][j] = clean(c.str(sig))
+			cells[i][j] = pdfClean(c.str(sig))
 			natural[j] = max(natural[j], f.GetStringWidth(cells[i][j])+2*pdfPad+0.5)
 			if !c.num && c.s != "-" {
 				right[j] = false

@@ -11,9 +11,10 @@ import (
 const textWidth = 100
 
 // preLines splits preformatted text into lines of at most n runes: a
-// longer line is cut, and its continuation starts with "↪ ". Tabs become
+// longer line is cut, and its continuation starts with "» ". Tabs become
 // two spaces.
 func preLines(s string, n int) []string {
+	n = max(n, 8) // room for the continuation mark and some text
 	var out []string
 	for _, l := range strings.Split(strings.TrimRight(s, "\n"), "\n") {
 		r := []rune(strings.ReplaceAll(strings.TrimRight(l, "\r"), "\t", "  "))
@@ -27,7 +28,7 @@ func preLines(s string, n int) []string {
 			if first {
 				out = append(out, string(r[:k]))
 			} else {
-				out = append(out, "↪ "+string(r[:k]))
+				out = append(out, "» "+string(r[:k]))
 			}
 			r = r[k:]
 			first = false
