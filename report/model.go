@@ -205,8 +205,8 @@ func secSummary(r *calc.Result, c conv) section {
 	}
 	it = append(it, item{"Pile", txt(fmt.Sprintf("%s %s, %s, length %s, tip at %s", r.Pile.Section.Shape, c.ls(r.Pile.Section.Size()),
 		r.Pile.Installation, c.ls(r.Pile.Length), c.ls(r.Pile.Tip()))), ""},
-		item{"Compression Rc (characteristic)", num(c.F(k.Compression)), c.uF()},
-		item{"Tension Rt (characteristic)", num(c.F(k.Tension)), c.uF()})
+		item{"Compression Rc (characteristic)", txt(c.fs(k.Compression)), ""},
+		item{"Tension Rt (characteristic)", txt(c.fs(k.Tension)), ""})
 	switch l := r.Length; {
 	case l != nil && l.Found:
 		it = append(it, item{"Required length", txt(fmt.Sprintf("%s (tip at %s; governed by %s)", c.ls(l.Length), c.ls(l.TipDepth), l.Governs)), ""})
