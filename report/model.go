@@ -220,7 +220,15 @@ func secSummary(r *calc.Result, c conv) section {
 		if !r.ServiceabilityPass() {
 			v = "FAIL"
 		}
-		it = append(it, item{"Serviceability", txt(v + " (see Settlement)"), ""})
+		switch {
+		case s.Plunged:
+			v += fmt.Sprintf(": the pile cannot carry %s (%s)", c.fs(s.Load), s.Method)
+		case s.HasAllowable:
+			v += fmt.Sprintf(": %s at %s against %s allowed (%s)", c.sms(s.Settlement), c.fs(s.Load), c.sms(s.Allowable), s.Method)
+		default:
+			v += fmt.Sprintf(": %s at %s, no allowable given (%s)", c.sms(s.Settlement), c.fs(s.Load), s.Method)
+		}
+		it = append(it, item{"Serviceability", txt(v), ""})
 	}
 	n := len(allWarnings(r, c))
 	w := "none"
