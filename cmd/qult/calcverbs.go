@@ -26,7 +26,7 @@ type calcOpts struct {
 
 func calcFlags(name, formats string, o *calcOpts) *flag.FlagSet {
 	fs := newFlagSet(name)
-	def := "text, or html or pdf when -o ends in .html or .pdf"
+	def := "by -o's extension (.html, .pdf, .json, .csv, .md), else text"
 	fs.StringVar(&o.format, "format", "", "output `format`: "+formats+" (default "+def+")")
 	fs.StringVar(&o.units, "units", "", "display `system` SI or US (default: the file's units)")
 	fs.StringVar(&o.out, "o", "", "write the output to `FILE` instead of standard output")
