@@ -151,6 +151,17 @@ func TestOutputPDF(t *testing.T) {
 	if _, s := pdfStructure(t, data); !strings.Contains(s, "page size: 595.28 x 841.89 pt") {
 		t.Errorf("report -o x.pdf of an SI file: not A4:\n%.200s", s)
 	}
+	// Other extensions choose their formats too.
+	for ext, want := range map[string]string{".json": `"schema": "qult.result/1"`, ".csv": "# For qualified engineers", ".md": "# Pump station"} {
+		out := filepath.Join(dir, "pump"+ext)
+		if r := runQ(t, slow, "", "check", "-o", out, examplePath("pump-station-bored")); r.code != 0 {
+			t.Fatalf("check -o x%s: exit %d, %s", ext, r.code, r.stderr)
+		}
+		data, err := os.ReadFile(out)
+		if err != nil || !strings.Contains(string(data), want) {
+			t.Errorf("check -o x%s: output lacks %q", ext, want)
+		}
+	}
 	r = runQ(t, slow, "", "check", "--format", "pdf", "--paper", "letter", examplePath("pump-station-bored"))
 	if _, s := pdfStructure(t, []byte(r.stdout)); r.code != 0 || !strings.Contains(s, "page size: 612.00 x 792.00 pt") {
 		t.Errorf("--paper letter: exit %d, not Letter", r.code)
