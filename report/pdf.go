@@ -217,6 +217,7 @@ func (p *pdfWriter) heading(s string) {
 	p.room(24) // a heading is not left alone at the foot of a page
 	p.f.Ln(3)
 	p.f.SetFont("sans", "B", 11.5)
+	p.f.Bookmark(pdfClean(s), 0, -1) // the viewer's outline of the package
 	p.f.MultiCell(0, 6, pdfClean(s), "B", "L", false)
 	p.f.Ln(2)
 }
