@@ -351,12 +351,19 @@ func compareFigure(r *calc.Result, c conv) (figure, error) {
 		W      = vg.Length(520)
 		rowH   = vg.Length(15)
 		headH  = vg.Length(24)
-		labelW = vg.Length(120)
-		valueW = vg.Length(90)
+		valueW = vg.Length(60)
 		size   = vg.Length(9.5)
 	)
 	f := sans(size, false)
 	fb := sans(size, true)
+	// The method names, measured in bold (the widest face), set the
+	// width of the label column.
+	labelW := vg.Length(60)
+	for _, pn := range panels {
+		for _, row := range pn.g.Rows {
+			labelW = max(labelW, fb.Width(row.Method+" *")+8)
+		}
+	}
 	H := vg.Length(8)
 	for _, pn := range panels {
 		n := 0
