@@ -76,3 +76,30 @@ func abs(x float64) float64 {
 	}
 	return x
 }
+
+// TestCompareLabelsFit: every text of the methods-compared figure, measured
+// in its font, lies inside the figure.
+func TestCompareLabelsFit(t *testing.T) {
+	for _, path := range []string{example, "../examples/abutment-hpile-us.yaml"} {
+		r := load(t, path, nil)
+		g, err := compareFigure(r, conv{})
+		if err != nil || g.svg == "" {
+			t.Fatalf("%s: no figure (%v)", path, err)
+		}
+		n := 0
+		for _, m := range svgTextRe.FindAllStringSubmatch(g.svg, -1) {
+			x, _ := strconv.ParseFloat(m[1], 64)
+			y, _ := strconv.ParseFloat(m[2], 64)
+			size, _ := strconv.ParseFloat(regexp.MustCompile(`font-size:([0-9.]+)px`).FindStringSubmatch(m[3])[1], 64)
+			face := sans(vg.Length(size), strings.Contains(m[3], "bold"))
+			w := float64(face.Width(html.UnescapeString(m[4])))
+			if x < 0 || x+w > float64(g.w)+0.01 || -y < 0 || -y > float64(g.h) {
+				t.Errorf("%s: %q at (%.1f, %.1f), %.1f wide, outside the figure", path, m[4], x, -y, w)
+			}
+			n++
+		}
+		if n < 10 {
+			t.Errorf("%s: %d texts, want a name and a value per method", path, n)
+		}
+	}
+}
