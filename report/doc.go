@@ -4,7 +4,9 @@
 //
 // Write takes a Format and Options: the display unit system (SI: m, kPa,
 // kN, kN/m3, m2, kN/m; US: ft, ksf, kip, pcf, ft2, kip/ft; angles in
-// degrees; Young's modulus in MPa or ksi), the View and an optional date.
+// degrees; Young's modulus in MPa or ksi), the View, an optional date,
+// Wide (text tables at their natural width instead of 100 columns) and
+// Paper (the PDF's page size: A4 for SI, Letter for US unless given).
 //
 // # Views
 //
