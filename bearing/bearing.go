@@ -106,7 +106,7 @@ type Result struct {
 	// such rule applied (a factor of 1).
 	Reduction float64
 	// Rule is the identifier of the rule a composite method chose (such as
-	// "shaft-n60-sand" or "bored-phi" under BoredSand); "" otherwise.
+	// "drilled-n60-sand" or "bored-phi" under BoredSand); "" otherwise.
 	Rule string
 
 	Unlimited units.Stress // unit tip resistance before any limit

@@ -121,9 +121,9 @@ func TestBoredSand(t *testing.T) {
 		red  float64 // Reduction
 		off  bool
 	}{
-		{"N60, small base", BoredSand{}, Input{N60: 30, D: 0.9}, "shaft-n60-sand", 18 * tsfKPa, 0, false},
-		{"N60, 2.54 m base", BoredSand{}, Input{N60: 60, D: 2.54}, "shaft-n60-sand", 15 * tsfKPa, 0.5, false},
-		{"N60, 2.54 m base, reduction off", BoredSand{NoLargeBase: true}, Input{N60: 60, D: 2.54}, "shaft-n60-sand", 30 * tsfKPa, 0, true},
+		{"N60, small base", BoredSand{}, Input{N60: 30, D: 0.9}, "drilled-n60-sand", 18 * tsfKPa, 0, false},
+		{"N60, 2.54 m base", BoredSand{}, Input{N60: 60, D: 2.54}, "drilled-n60-sand", 15 * tsfKPa, 0.5, false},
+		{"N60, 2.54 m base, reduction off", BoredSand{NoLargeBase: true}, Input{N60: 60, D: 2.54}, "drilled-n60-sand", 30 * tsfKPa, 0, true},
 		{"φ′ only, 0.6 m", BoredSand{}, Input{Phi: deg(35), Q: 20 * kPa, D: 0.6}, "bored-phi", 20 * 143 / 3.0, BoredPhiFactor, false},
 		{"φ′ only, capped, 1.905 m", BoredSand{}, Input{Phi: deg(40), Q: 200 * kPa, D: 1.905}, "bored-phi", 30 * tsfKPa * 1.27 / 1.905, BoredPhiFactor * 1.27 / 1.905, false},
 	}
@@ -147,7 +147,7 @@ func TestBoredSand(t *testing.T) {
 	if err != nil || relErr(r.Qp.KPa(), 15*tsfKPa) > 1e-9 || r.Reduction != 0.5 {
 		t.Errorf("LargeBase: %+v, %v", r, err)
 	}
-	if id := (LargeBase{Of: ShaftSand{}}).ID(); id != "shaft-n60-sand+large-base" {
+	if id := (LargeBase{Of: ShaftSand{}}).ID(); id != "drilled-n60-sand+large-base" {
 		t.Errorf("LargeBase ID %q", id)
 	}
 }

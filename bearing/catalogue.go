@@ -104,20 +104,20 @@ var catalogue = []Descriptor{
 			Meaning: "Janbu's angle η′ of the plastic zone"}},
 		New:   func(v map[string]float64) (Tip, error) { return Janbu{Eta: units.Angle(v["eta"])}, nil },
 		Scope: "piles in sand and c′-φ′ soil, closed form in φ′ and η′"},
-	{ID: "api-sand-1", Drainage: DrainedLayers, Method: APISand{Class: 1}, New: fixed(APISand{Class: 1}),
+	{ID: "api-medium-dense-sand-silt", Drainage: DrainedLayers, Method: APISand{Class: 1}, New: fixed(APISand{Class: 1}),
 		Scope: "driven open steel piles in medium dense sand-silt (API class 1)"},
-	{ID: "api-sand-2", Drainage: DrainedLayers, Method: APISand{Class: 2}, New: fixed(APISand{Class: 2}),
+	{ID: "api-medium-dense-sand", Drainage: DrainedLayers, Method: APISand{Class: 2}, New: fixed(APISand{Class: 2}),
 		Scope: "driven open steel piles in medium dense sand or dense sand-silt (API class 2)"},
-	{ID: "api-sand-3", Drainage: DrainedLayers, Method: APISand{Class: 3}, New: fixed(APISand{Class: 3}),
+	{ID: "api-dense-sand", Drainage: DrainedLayers, Method: APISand{Class: 3}, New: fixed(APISand{Class: 3}),
 		Scope: "driven open steel piles in dense sand or very dense sand-silt (API class 3)"},
-	{ID: "api-sand-4", Drainage: DrainedLayers, Method: APISand{Class: 4}, New: fixed(APISand{Class: 4}),
+	{ID: "api-very-dense-sand", Drainage: DrainedLayers, Method: APISand{Class: 4}, New: fixed(APISand{Class: 4}),
 		Scope: "driven open steel piles in very dense sand (API class 4)"},
-	{ID: "shaft-n60-sand", Drainage: DrainedLayers, Method: ShaftSand{}, New: fixed(ShaftSand{}),
+	{ID: "drilled-n60-sand", Drainage: DrainedLayers, Method: ShaftSand{}, New: fixed(ShaftSand{}),
 		Scope: "drilled shafts in sand, from the layer's SPT N60; at a base settlement of 5 % of the diameter"},
 	{ID: "bored-phi", Drainage: DrainedLayers, Method: BoredPhi{}, New: fixed(BoredPhi{}),
 		Scope: "bored and augered piles in sand without SPT data: one third of Meyerhof's driven value, capped"},
 	{ID: "bored-sand", Drainage: DrainedLayers, Method: BoredSand{}, New: fixed(BoredSand{}),
-		Scope: "bored and augered piles in sand: shaft-n60-sand where N60 is given, else bored-phi; large-base reduction"},
+		Scope: "bored and augered piles in sand: drilled-n60-sand where N60 is given, else bored-phi; large-base reduction"},
 	{ID: "vesic-given", Drainage: DrainedLayers, Method: VesicGiven{},
 		Params: []Param{
 			{Key: "nsigma", Dim: "number", Min: 1, Max: 1e4, Required: true, Meaning: "Vesic's bearing factor Nσ*, given"},
@@ -170,6 +170,25 @@ func Lookup(id string) (Descriptor, bool) {
 		}
 	}
 	return Descriptor{}, false
+}
+
+// renamed maps identifiers of earlier versions to the ones that replaced
+// them: the API sand classes take the spelling of the shaft side's
+// sand_class, and the drilled-shaft SPT tip is named for what it is.
+var renamed = map[string]string{
+	"api-sand-1":     "api-medium-dense-sand-silt",
+	"api-sand-2":     "api-medium-dense-sand",
+	"api-sand-3":     "api-dense-sand",
+	"api-sand-4":     "api-very-dense-sand",
+	"shaft-n60-sand": "drilled-n60-sand",
+}
+
+// Renamed returns the identifier that replaced an earlier one, so that a
+// calc file naming the old one is told the new; ok is false for an
+// identifier that was never renamed.
+func Renamed(old string) (id string, ok bool) {
+	id, ok = renamed[old]
+	return id, ok
 }
 
 // IDs returns the identifiers of the catalogue, in its order.

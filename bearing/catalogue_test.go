@@ -139,8 +139,8 @@ func TestCatalogueValues(t *testing.T) {
 	if got := build("janbu", map[string]float64{"eta": 1.5}); got != (Janbu{Eta: 1.5}) {
 		t.Errorf("janbu built %+v", got)
 	}
-	if got := build("api-sand-3", nil); got != (APISand{Class: 3}) {
-		t.Errorf("api-sand-3 built %+v", got)
+	if got := build("api-dense-sand", nil); got != (APISand{Class: 3}) {
+		t.Errorf("api-dense-sand built %+v", got)
 	}
 	// A calc file's vesic takes Δ by the correlation unless the layer
 	// gives it (the lower tip; package doc).

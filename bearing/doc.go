@@ -17,11 +17,11 @@
 //	vesic-given       VesicGiven{Nsigma, Nc}  qp = c′Nc* + σ′o·Nσ*, factors given
 //	berezantzev       Berezantzev{}           qp = q′·Nq(φ′, L/D), from chart
 //	janbu             Janbu{Eta}              qp = c′Nc* + q′Nq*(φ′, η′)
-//	api-sand-1 … -4   APISand{Class}          qp = min(q′Nq, q_L) by sand class (api-sand-1, api-sand-2,
-//	                                          api-sand-3, api-sand-4)
-//	shaft-n60-sand    ShaftSand{}             qp = 0.6·N60 tsf ≤ 30 tsf (at 5 % base settlement)
+//	api-medium-dense-sand-silt … -4   APISand{Class}          qp = min(q′Nq, q_L) by sand class (api-medium-dense-sand-silt, api-medium-dense-sand,
+//	                                          api-dense-sand, api-very-dense-sand)
+//	drilled-n60-sand    ShaftSand{}             qp = 0.6·N60 tsf ≤ 30 tsf (at 5 % base settlement)
 //	bored-phi         BoredPhi{NoCap}         qp = min(1/3·qp,Meyerhof, 30 tsf)
-//	bored-sand        BoredSand{…}            shaft-n60-sand if N60 given, else bored-phi; × 1.27 m/B for B > 1.27 m
+//	bored-sand        BoredSand{…}            drilled-n60-sand if N60 given, else bored-phi; × 1.27 m/B for B > 1.27 m
 //	<id>+large-base   LargeBase{Of, Off}      qp(Of) × min(1, 1.27 m/B)
 //	given-nq          GivenNq{Nq, Nc, Limit}  qp = min(c′Nc + q′Nq, limit)
 //	nc9               Skempton{}              qp = 9·su

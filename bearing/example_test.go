@@ -61,23 +61,23 @@ func ExampleCompare() {
 	in := bearing.Input{Phi: 33 * units.Degree, Q: 120 * units.Kilopascal, Ir: 60, L: 16, D: 0.6, N60: 28}
 	for _, row := range bearing.Compare(in) {
 		if row.Err != nil {
-			fmt.Printf("%-15s %v\n", row.ID, row.Err)
+			fmt.Printf("%-26s %v\n", row.ID, row.Err)
 			continue
 		}
-		fmt.Printf("%-15s factor %7.2f  qp %6.0f kPa\n", row.ID, row.Factor, row.Result.Qp.KPa())
+		fmt.Printf("%-26s factor %7.2f  qp %6.0f kPa\n", row.ID, row.Factor, row.Result.Qp.KPa())
 	}
 	// Output:
-	// meyerhof        factor   96.00  qp   3117 kPa
-	// vesic           factor   49.44  qp   3779 kPa
-	// berezantzev     factor   58.69  qp   7043 kPa
-	// janbu           factor   26.09  qp   3131 kPa
-	// api-sand-1      factor   12.00  qp   1440 kPa
-	// api-sand-2      factor   20.00  qp   2400 kPa
-	// api-sand-3      factor   40.00  qp   4800 kPa
-	// api-sand-4      factor   50.00  qp   6000 kPa
-	// shaft-n60-sand  factor    0.00  qp   1609 kPa
-	// bored-phi       factor   96.00  qp   1039 kPa
-	// bored-sand      factor    0.00  qp   1609 kPa
+	// meyerhof                   factor   96.00  qp   3117 kPa
+	// vesic                      factor   49.44  qp   3779 kPa
+	// berezantzev                factor   58.69  qp   7043 kPa
+	// janbu                      factor   26.09  qp   3131 kPa
+	// api-medium-dense-sand-silt factor   12.00  qp   1440 kPa
+	// api-medium-dense-sand      factor   20.00  qp   2400 kPa
+	// api-dense-sand             factor   40.00  qp   4800 kPa
+	// api-very-dense-sand        factor   50.00  qp   6000 kPa
+	// drilled-n60-sand           factor    0.00  qp   1609 kPa
+	// bored-phi                  factor   96.00  qp   1039 kPa
+	// bored-sand                 factor    0.00  qp   1609 kPa
 }
 
 // Vesic's method with the volume change of the sand taken from the
@@ -113,6 +113,6 @@ func ExampleBoredSand_Tip() {
 	fmt.Println(bearing.SettlementBasis(bearing.ShaftSand{}))
 	// Output:
 	// bored-phi      qp = 2027 kPa, reduction 0.235 (limit governs; cap governs)
-	// shaft-n60-sand qp = 1419 kPa, reduction 0.706 ()
+	// drilled-n60-sand qp = 1419 kPa, reduction 0.706 ()
 	// unit base resistance at a base settlement of 5 % of the base diameter
 }

@@ -6,7 +6,9 @@ import (
 )
 
 // APISand is the tip of a driven pile in siliceous sand by the tabulated
-// factors of API RP 2GEO (2011), identifiers "api-sand-1" to "api-sand-4":
+// factors of API RP 2GEO (2011), identifiers by class as the shaft side's sand_class spells them
+// ("api-medium-dense-sand-silt" to "api-very-dense-sand"; formerly
+// api-sand-1 to api-sand-4):
 //
 //	qp = min(q′·Nq, q_L)
 //
@@ -29,13 +31,16 @@ var apiSand = [4]struct {
 	nq  float64
 	lim units.Stress
 }{
-	{"api-sand-1", 12, 3 * units.Megapascal},
-	{"api-sand-2", 20, 5 * units.Megapascal},
-	{"api-sand-3", 40, 10 * units.Megapascal},
-	{"api-sand-4", 50, 12 * units.Megapascal},
+	{"api-medium-dense-sand-silt", 12, 3 * units.Megapascal},
+	{"api-medium-dense-sand", 20, 5 * units.Megapascal},
+	{"api-dense-sand", 40, 10 * units.Megapascal},
+	{"api-very-dense-sand", 50, 12 * units.Megapascal},
 }
 
-// ID returns "api-sand-" and the class, or "api-sand" for a bad class.
+// ID returns the class's identifier, the spelling of the API sand
+// classes on the shaft side too (api-medium-dense-sand-silt,
+// api-medium-dense-sand, api-dense-sand, api-very-dense-sand), or "api-sand"
+// for a bad class.
 func (a APISand) ID() string {
 	if a.Class < 1 || a.Class > 4 {
 		return "api-sand"
@@ -68,7 +73,7 @@ func (a APISand) Tip(in Input) (Result, error) {
 
 // ShaftSand is the tip of a drilled shaft in sand from the SPT, after
 // O'Neill & Reese (1999) as carried into FHWA GEC 10 (Brown et al. 2010),
-// identifier "shaft-n60-sand":
+// identifier "drilled-n60-sand":
 //
 //	qp = 0.6·N60 tsf ≤ 30 tsf     (= 57.46·N60 kPa ≤ 2.873 MPa; 1.2·N60 ksf ≤ 60 ksf)
 //
@@ -86,8 +91,8 @@ func (a APISand) Tip(in Input) (Result, error) {
 // BoredSand does) to apply it.
 type ShaftSand struct{}
 
-// ID returns "shaft-n60-sand".
-func (ShaftSand) ID() string { return "shaft-n60-sand" }
+// ID returns "drilled-n60-sand".
+func (ShaftSand) ID() string { return "drilled-n60-sand" }
 
 // Equation returns the rule on one line.
 func (ShaftSand) Equation() string {

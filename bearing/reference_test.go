@@ -370,7 +370,7 @@ func TestAPISandFromMemory(t *testing.T) {
 		class      int
 		nq, limMPa float64
 		id         string
-	}{{1, 12, 3, "api-sand-1"}, {2, 20, 5, "api-sand-2"}, {3, 40, 10, "api-sand-3"}, {4, 50, 12, "api-sand-4"}}
+	}{{1, 12, 3, "api-medium-dense-sand-silt"}, {2, 20, 5, "api-medium-dense-sand"}, {3, 40, 10, "api-dense-sand"}, {4, 50, 12, "api-very-dense-sand"}}
 	for _, c := range cases {
 		m := APISand{Class: c.class}
 		r, err := m.Tip(Input{Q: 100 * units.Kilopascal})
@@ -554,7 +554,7 @@ func TestCompareRows(t *testing.T) {
 			t.Errorf("%s: %v", r.ID, r.Err)
 		}
 	}
-	want := []string{"meyerhof", "vesic", "berezantzev", "janbu", "api-sand-1", "api-sand-2", "api-sand-3", "api-sand-4", "bored-phi", "bored-sand", "nc9", "vesic-undrained"}
+	want := []string{"meyerhof", "vesic", "berezantzev", "janbu", "api-medium-dense-sand-silt", "api-medium-dense-sand", "api-dense-sand", "api-very-dense-sand", "bored-phi", "bored-sand", "nc9", "vesic-undrained"}
 	if len(ids) != len(want) {
 		t.Fatalf("ids %v, want %v", ids, want)
 	}
@@ -574,7 +574,7 @@ func TestCompareRows(t *testing.T) {
 	// An SPT-only input gives the drilled-shaft row alone; an error row
 	// keeps its reason.
 	rows = Compare(Input{N60: 20})
-	if len(rows) != 1 || rows[0].ID != "shaft-n60-sand" || rows[0].Err != nil {
+	if len(rows) != 1 || rows[0].ID != "drilled-n60-sand" || rows[0].Err != nil {
 		t.Errorf("N60 only: %+v", rows)
 	}
 	rows = Compare(Input{Phi: deg(50), Q: units.Kilopascal})

@@ -419,6 +419,10 @@ func (d *decoder) mapping(n *yaml.Node, v reflect.Value, path string, depth int)
 			continue
 		}
 		if !ok {
+			if nn, renamed := renamedKeys[p]; renamed {
+				d.add(p, k.Line, "renamed: write %s (%q is no longer read)", nn, k.Value)
+				continue
+			}
 			d.add(p, k.Line, "unknown key %q; accepted here: %s", k.Value, si.names)
 			continue
 		}
@@ -466,4 +470,13 @@ func infoOf(t reflect.Type) *structInfo {
 	si.names = strings.Join(names, ", ")
 	v, _ := structInfos.LoadOrStore(t, si)
 	return v.(*structInfo)
+}
+
+// renamedKeys maps keys of earlier calc files to the keys that replaced
+// them; the old spelling is refused with a message naming the new one.
+// tension_factor meant a ratio on shaft resistance under methods and a
+// factor of safety under design.
+var renamedKeys = map[string]string{
+	"methods.tension_factor": "methods.tension_shaft_ratio",
+	"design.tension_factor":  "design.tension_safety_factor",
 }

@@ -219,9 +219,12 @@ type Methods struct {
 	WeakBelow Value `yaml:"weak_below,omitempty" json:"weak_below,omitempty" q:"number,0,1000" doc:"How many diameters below the tip to look for a weaker layer."`
 	// SelfWeight: ignored (default), net or gross.
 	SelfWeight string `yaml:"self_weight,omitempty" json:"self_weight,omitempty"`
-	// TensionFactor multiplies shaft resistance in tension (default 1).
-	TensionFactor Value `yaml:"tension_factor,omitempty" json:"tension_factor,omitempty" q:"number,0,1000" doc:"Factor on shaft resistance in tension."`
-	ClampCharts   bool  `yaml:"clamp_charts,omitempty" json:"clamp_charts,omitempty"`
+	// TensionShaftRatio multiplies shaft resistance in tension (the
+	// default by drainage: 0.7 drained, 1 undrained). Formerly
+	// tension_factor, a spelling the design section used for a factor of
+	// safety too; the old key is refused with a message naming the new.
+	TensionShaftRatio Value `yaml:"tension_shaft_ratio,omitempty" json:"tension_shaft_ratio,omitempty" q:"number,0,1000" doc:"Ratio of shaft resistance in tension to that in compression."`
+	ClampCharts       bool  `yaml:"clamp_charts,omitempty" json:"clamp_charts,omitempty"`
 	// Pa is the atmospheric (reference) pressure of the methods that read
 	// one; default 100 kPa in SI files and 2000 psf in US files.
 	Pa Value `yaml:"pa,omitempty" json:"pa,omitempty" q:"stress,0," doc:"Atmospheric (reference) pressure pa; default 100 kPa (SI) or 2000 psf (US); 80 to 120 kPa."`
@@ -240,11 +243,11 @@ type Design struct {
 	// Basis: safety-factor, lrfd or en1997.
 	Basis string `yaml:"basis" json:"basis"`
 	// safety-factor: factor (global), or tip_factor and shaft_factor;
-	// tension_factor.
-	Factor        Value `yaml:"factor,omitempty" json:"factor,omitempty" q:"number,0,100" doc:"Global factor of safety (safety-factor)."`
-	TipFactor     Value `yaml:"tip_factor,omitempty" json:"tip_factor,omitempty" q:"number,0,100" doc:"Factor of safety on the tip (safety-factor)."`
-	ShaftFactor   Value `yaml:"shaft_factor,omitempty" json:"shaft_factor,omitempty" q:"number,0,100" doc:"Factor of safety on the shaft (safety-factor)."`
-	TensionFactor Value `yaml:"tension_factor,omitempty" json:"tension_factor,omitempty" q:"number,0,100" doc:"Factor of safety in tension (safety-factor)."`
+	// tension_safety_factor.
+	Factor              Value `yaml:"factor,omitempty" json:"factor,omitempty" q:"number,0,100" doc:"Global factor of safety (safety-factor)."`
+	TipFactor           Value `yaml:"tip_factor,omitempty" json:"tip_factor,omitempty" q:"number,0,100" doc:"Factor of safety on the tip (safety-factor)."`
+	ShaftFactor         Value `yaml:"shaft_factor,omitempty" json:"shaft_factor,omitempty" q:"number,0,100" doc:"Factor of safety on the shaft (safety-factor)."`
+	TensionSafetyFactor Value `yaml:"tension_safety_factor,omitempty" json:"tension_safety_factor,omitempty" q:"number,0,100" doc:"Factor of safety in tension (safety-factor); formerly tension_factor."`
 	// lrfd: preset (aashto-driven, aashto-drilled) and/or resistance
 	// factors by method identifier ("*" for any other), load factors.
 	Preset    string           `yaml:"preset,omitempty" json:"preset,omitempty"`

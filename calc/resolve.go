@@ -562,6 +562,10 @@ func (r *resolver) unknownMethod(id, path, what string, ids []string) {
 func (r *resolver) tip(id string, given map[string]Value, path, methodPath string) bearing.Tip {
 	id = strings.TrimSpace(id)
 	d, ok := bearing.Lookup(id)
+	if nn, renamed := bearing.Renamed(id); !ok && renamed {
+		r.add(methodPath, 0, "tip method %q was renamed: write %q", id, nn)
+		return nil
+	}
 	if !ok {
 		ids := bearing.IDs()
 		if path == "" {
@@ -665,8 +669,8 @@ func (r *resolver) methods(f *File, in *Inputs) {
 			}
 			ms.SelfWeight = w
 		}
-		if m.TensionFactor.IsSet() {
-			ms.Tension = pile.TensionFactor{Name: "given", Value: r.num(m.TensionFactor, "methods.tension_factor", 0, 1e3)}
+		if m.TensionShaftRatio.IsSet() {
+			ms.Tension = pile.TensionFactor{Name: "given", Value: r.num(m.TensionShaftRatio, "methods.tension_shaft_ratio", 0, 1e3)}
 		}
 		ms.Clamp = m.ClampCharts
 		if m.Pa.IsSet() {
@@ -737,7 +741,7 @@ func (r *resolver) design(f *File, in *Inputs) {
 	case "safety-factor":
 		in.Basis = pile.SafetyFactor{Global: r.num(d.Factor, "design.factor", 0, 100),
 			Tip: r.num(d.TipFactor, "design.tip_factor", 0, 100), Shaft: r.num(d.ShaftFactor, "design.shaft_factor", 0, 100),
-			Tension: r.num(d.TensionFactor, "design.tension_factor", 0, 100), WeightUnfactored: d.WeightUnfactored}
+			Tension: r.num(d.TensionSafetyFactor, "design.tension_safety_factor", 0, 100), WeightUnfactored: d.WeightUnfactored}
 	case "lrfd":
 		var l pile.LRFD
 		switch d.Preset {
@@ -826,7 +830,7 @@ func (r *resolver) design(f *File, in *Inputs) {
 
 // designKeysOf lists the design keys each basis reads.
 var designKeysOf = map[string][]string{
-	"safety-factor": {"factor", "tip_factor", "shaft_factor", "tension_factor", "weight_unfactored"},
+	"safety-factor": {"factor", "tip_factor", "shaft_factor", "tension_safety_factor", "weight_unfactored"},
 	"lrfd":          {"preset", "tip", "shaft", "uplift", "permanent", "variable", "weight"},
 	"en1997": {"approach", "profiles", "model_factor", "total", "annex", "sls_verified", "xi3", "xi4",
 		"resistance_factors", "action_factors", "other_profiles"},
@@ -897,7 +901,7 @@ func (r *resolver) designKeys(d *Design) {
 	}
 	set := map[string]bool{
 		"factor": d.Factor.IsSet(), "tip_factor": d.TipFactor.IsSet(), "shaft_factor": d.ShaftFactor.IsSet(),
-		"tension_factor": d.TensionFactor.IsSet(), "preset": d.Preset != "", "tip": d.Tip != nil,
+		"tension_safety_factor": d.TensionSafetyFactor.IsSet(), "preset": d.Preset != "", "tip": d.Tip != nil,
 		"shaft": d.Shaft != nil, "uplift": d.Uplift != nil, "permanent": d.Permanent.IsSet(),
 		"variable": d.Variable.IsSet(), "approach": d.Approach != "", "profiles": d.Profiles.IsSet(),
 		"model_factor": d.ModelFactor.IsSet(), "total": d.Total, "weight_unfactored": d.WeightUnfactored,
@@ -905,7 +909,7 @@ func (r *resolver) designKeys(d *Design) {
 		"xi4": d.Xi4.IsSet(), "resistance_factors": d.Resistance != nil, "action_factors": d.Actions != nil,
 		"other_profiles": d.OtherProfiles != nil,
 	}
-	for _, k := range []string{"factor", "tip_factor", "shaft_factor", "tension_factor", "weight_unfactored", "preset",
+	for _, k := range []string{"factor", "tip_factor", "shaft_factor", "tension_safety_factor", "weight_unfactored", "preset",
 		"tip", "shaft", "uplift", "permanent", "variable", "weight", "approach", "profiles", "model_factor", "total",
 		"annex", "sls_verified", "xi3", "xi4", "resistance_factors", "action_factors", "other_profiles"} {
 		if set[k] && !slices.Contains(reads, k) {

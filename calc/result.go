@@ -63,6 +63,10 @@ type Result struct {
 	Settlement *SettlementResult
 	LoadTest   *LoadTestResult
 
+	// Compared is the shaft and tip resistance of the same pile by every
+	// applicable method of the catalogues (nil when it could not be run).
+	Compared *Comparison
+
 	Warnings []string
 	Sources  []cite.Source
 	Cautions []string

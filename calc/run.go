@@ -24,7 +24,7 @@ func CautionText() []string {
 		"These results are for qualified geotechnical engineers. Check them against the codes of practice that govern the project, the site investigation and load tests.",
 		"Each method carries the limitations stated in its source; values read from charts carry the stated reading tolerance.",
 		"qult is not a substitute for the judgement of a licensed professional engineer, who remains responsible for any design that uses it.",
-		"Where the governing code, local practice or the engineer of record differs from qult, they prevail.",
+		"Where the governing code, licensed practice or the engineer of record differs from qult, they prevail.",
 	}
 }
 
@@ -85,6 +85,7 @@ func run(f *File, o runOptions) (*Result, error) {
 		return nil, translate(f, err)
 	}
 	res.Methods = layerMethods(prof, res.Breakdown)
+	res.Compared = compare(prof, in.Pile, in.Methods, res.Breakdown)
 	// Capacity with depth: from one step below the head to the search
 	// depth (default: the bottom of the profile).
 	step, maxTip := in.Step, in.MaxTip

@@ -346,7 +346,7 @@ func checkFactor(field string, v float64) error {
 // Cases returns the single verification "FS".
 func (s SafetyFactor) Cases(Installation) ([]Case, error) {
 	tip, sh, ten := s.Tip, s.Shaft, s.Tension
-	tipName, shaftName, tenName := "design.tip_factor", "design.shaft_factor", "design.tension_factor"
+	tipName, shaftName, tenName := "design.tip_factor", "design.shaft_factor", "design.tension_safety_factor"
 	if s.Global != 0 {
 		if tip != 0 || sh != 0 {
 			return nil, &FieldError{Field: "design.factor", Value: s.Global, Range: "0 when tip and shaft factors are given",
@@ -390,7 +390,7 @@ func presetTip(id string) (bearing.Tip, bool) {
 	switch id {
 	case "nc9":
 		return bearing.Skempton{}, true
-	case "shaft-n60-sand":
+	case "drilled-n60-sand":
 		return bearing.ShaftSand{}, true
 	}
 	return nil, false
@@ -656,7 +656,7 @@ func AASHTODrivenPiles() LRFD {
 //
 // Methods covered: alpha-drilled in undrained layers, beta-drilled-sand and
 // beta-drilled-k0 in drained layers, nc9 (Nc = 9, O'Neill & Reese's Nc for
-// a base deeper than 2.5 diameters) and shaft-n60-sand. A given α or β
+// a base deeper than 2.5 diameters) and drilled-n60-sand. A given α or β
 // (the 2018 α, or K0 computed by hand) is the engineer's to declare: give
 // its factor under design.shaft and design.uplift. Rock and IGM rows have
 // no method in qult. Strength I load factors 1.25 and 1.75; the shaft's
@@ -669,13 +669,13 @@ func AASHTODrilledShafts() LRFD {
 	r = rows(r, ShaftResistance, []string{"alpha-drilled"}, "", u, 0.45, where+"side resistance in clay, α-method")
 	r = rows(r, TipResistance, []string{"nc9"}, "", u, 0.40, where+"tip resistance in clay, total stress")
 	r = rows(r, ShaftResistance, sand, "", d, 0.55, where+"side resistance in sand, β-method")
-	r = rows(r, TipResistance, []string{"shaft-n60-sand"}, "", d, 0.50, where+"tip resistance in sand")
+	r = rows(r, TipResistance, []string{"drilled-n60-sand"}, "", d, 0.50, where+"tip resistance in sand")
 	r = rows(r, TensionResistance, []string{"alpha-drilled"}, "", u, 0.35, where+"uplift in clay, α-method")
 	r = rows(r, TensionResistance, sand, "", d, 0.45, where+"uplift in sand, β-method")
 	return LRFD{Name: "aashto-drilled", Tip: map[string]float64{}, Shaft: map[string]float64{}, Tension: map[string]float64{},
 		Rows: r, Permanent: 1.25, Variable: 1.75, Weight: aashtoDCMin,
 		Installations: []Installation{Bored},
-		Calibrated: PresetMethods{TipDrained: "shaft-n60-sand", TipUndrained: "nc9",
+		Calibrated: PresetMethods{TipDrained: "drilled-n60-sand", TipUndrained: "nc9",
 			ShaftDrained: "beta-drilled-sand", ShaftUndrained: "alpha-drilled"},
 		Sources: []cite.Ref{{Source: cite.AASHTO2020, Where: "Table 10.5.5.2.4-1; Tables 3.4.1-1, 3.4.1-2 (from memory)"},
 			{Source: cite.Brown2018, Where: "Appendix A, Pier 2, resistance factors applied (Table A-4)"}}}

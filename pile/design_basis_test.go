@@ -102,7 +102,7 @@ func TestAASHTODrilledTable(t *testing.T) {
 		{TipResistance, "nc9", u, 0.40},
 		{ShaftResistance, "beta-drilled-sand", d, 0.55},
 		{ShaftResistance, "beta-drilled-k0", d, 0.55},
-		{TipResistance, "shaft-n60-sand", d, 0.50},
+		{TipResistance, "drilled-n60-sand", d, 0.50},
 		{TensionResistance, "alpha-drilled", u, 0.35},
 		{TensionResistance, "beta-drilled-sand", d, 0.45},
 		{TensionResistance, "beta-drilled-k0", d, 0.45},

@@ -219,7 +219,7 @@ func TestGEC10DrilledShaftLRFD(t *testing.T) {
 	// manual does), so the engineer declares them the table's β-method
 	// and α-method: side in sand 0.55, side in clay 0.45 (uplift 0.45 and
 	// 0.35, not used by this compression check). The tip in sand is the
-	// preset's own method, shaft-n60-sand (0.50).
+	// preset's own method, drilled-n60-sand (0.50).
 	l.Shaft["beta"], l.Shaft["alpha-given"] = 0.55, 0.45
 	l.Tension["beta"], l.Tension["alpha-given"] = 0.45, 0.35
 	d, err := Check(prof, pile, ms, l, Loads{Compression: Action{Permanent: 3389.47 * kip}})

@@ -410,7 +410,7 @@ func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analy
 	if a.tension.Name == "" && a.tension.Value == 0 && a.tension.Drained == 0 && a.tension.Undrained == 0 {
 		a.tension = DefaultTension()
 	}
-	if err := a.tension.Validate("methods.tension_factor"); err != nil {
+	if err := a.tension.Validate("methods.tension_shaft_ratio"); err != nil {
 		return nil, err
 	}
 	a.weakBelow = m.WeakBelow

@@ -206,7 +206,7 @@ func TestBadInput(t *testing.T) {
 		{"too many layer overrides", func(p *Pile, ms *Methods) { ms.Layers = make([]LayerMethods, 3) }, "methods.layers"},
 		{"λ in a drained layer", func(p *Pile, ms *Methods) { ms.Layers = []LayerMethods{{Lambda: true}}; p.Section.Diameter = 0.5 }, ""},
 		{"bad zone", func(p *Pile, ms *Methods) { ms.NoShaft = []Zone{{Top: 3, Bottom: 1}} }, "methods.no_shaft[0]"},
-		{"bad tension factor", func(p *Pile, ms *Methods) { ms.Tension = TensionFactor{Name: "given", Value: 1.5} }, "methods.tension_factor"},
+		{"bad tension factor", func(p *Pile, ms *Methods) { ms.Tension = TensionFactor{Name: "given", Value: 1.5} }, "methods.tension_shaft_ratio"},
 	}
 	for _, c := range cases {
 		p, ms := good, Methods{}

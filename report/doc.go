@@ -1,10 +1,12 @@
 // Package report renders a calculation result (calc.Result) as aligned
-// text tables, CSV, JSON, Markdown or a self-contained HTML calculation
-// package.
+// text tables, CSV, JSON, Markdown, a self-contained HTML calculation
+// package or a PDF.
 //
 // Write takes a Format and Options: the display unit system (SI: m, kPa,
 // kN, kN/m3, m2, kN/m; US: ft, ksf, kip, pcf, ft2, kip/ft; angles in
-// degrees; Young's modulus in MPa or ksi), the View and an optional date.
+// degrees; Young's modulus in MPa or ksi), the View, an optional date,
+// Wide (text tables at their natural width instead of 100 columns) and
+// Paper (the PDF's page size: A4 for SI, Letter for US unless given).
 //
 // # Views
 //
@@ -13,19 +15,24 @@
 //	              tip rule applied and its worked equation, totals, the defaults and rules in force, warnings
 //	ViewLength    the required length (the search, its passing ranges, or why none was found) and the
 //	              capacity with depth, warnings
-//	ViewReport    all of it: title block, pile, ground profile with derived unit weights (and, below an
-//	              excavation or scour, the original and design ground lines and the thickness removed from
-//	              each layer), vertical stresses, loads, shaft and tip with worked equations, totals, design
-//	              check, required length, capacity with depth, the defaults and rules in force, warnings,
-//	              sources cited and cautions; with a settlement or load_test section, the settlement
-//	              and the load test (as in ViewSettle); ViewCheck then adds a serviceability summary
+//	ViewReport    all of it, in the order a reviewer reads it: title block (with the calc file's SHA-256),
+//	              summary (verdict, governing case, utilisation, required length, warnings), warnings,
+//	              pile, loads, ground profile with derived unit weights (and, below an excavation or
+//	              scour, the original and design ground lines and the thickness removed from each
+//	              layer), vertical stresses, shaft and tip with worked equations, totals, the methods
+//	              compared, design check, required length, capacity with depth, settlement and load
+//	              test (as in ViewSettle) when present, the defaults and rules in force, sources cited,
+//	              cautions, and the calc file as entered in an appendix; ViewCheck then adds a
+//	              serviceability summary
 //	ViewSettle    loads, capacity totals, the settlement at the serviceability load against the allowable
 //	              (method, inputs, worked equations or the curves used), the predicted load-settlement
 //	              curve, axial load and displacement with depth, the load test's points and criteria
 //
 // Each format renders the view as follows.
 //
-//	Text      aligned tables with units in the headers
+//	Text      aligned tables with units in the headers, every line within 100 columns: a wider table is
+//	          split into parts that repeat its key columns, long text wraps (Options.Wide: the
+//	          natural width)
 //	Markdown  the same content as Text, as headings and pipe tables
 //	CSV       one table per view: check, one row per design case (characteristic totals without a design
 //	          basis); capacity and report, one row per shaft segment then a tip row; length, capacity with depth;
@@ -36,7 +43,12 @@
 //	          the ground profile to scale, a plot of vertical stress with depth and a plot of capacity with
 //	          depth; ViewLength adds the capacity plot; the settlement section adds the load-settlement
 //	          curve (predicted and measured) and the axial load with depth; ViewCheck and ViewCapacity
-//	          are tables only.
+//	          are tables only. Print styles give A4 or Letter pages with the PDF's header and footer.
+//	PDF       the view's sections as HTML has them, on A4 (SI) or Letter (US) pages (Options.Paper), with
+//	          fpdf and the Liberation fonts embedded: a header (title, project, revision) and a footer
+//	          (version, the calc file's SHA-256 prefix, date, page x of y, the cautions) on every page;
+//	          tables split to the page width, figures as PNG images; the same result gives the same
+//	          bytes
 //
 // # Numbers
 //
@@ -86,7 +98,13 @@
 // bottom end of the first segment of each method (the top is often at zero
 // stress); the capacity plot adds the governing case's design compression
 // action Ed as a vertical line; the ground drawing shares one scale for
-// depth and pile width, with the ground column an arbitrary width.
-// Plots use gonum.org/v1/plot with fixed sizes and its default fonts, not
+// depth and pile width, with the ground column an arbitrary width, its
+// labels in a column beside it (measured in the font drawn, wrapped,
+// stacked, with leaders), and a neutral fill by drainage with a key. The
+// methods compared apply each catalogue method that needs no key to every
+// embedded layer of its drainage class (tip methods to every layer of the
+// bearing layer's class), keeping every other choice of the file. Figures
+// are painted once on a gonum/plot vg.Canvas for SVG and PDF, in
+// Liberation Sans at fixed sizes; in HTML the fonts are named, not
 // embedded, so the SVG is stable and small.
 package report

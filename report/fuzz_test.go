@@ -10,11 +10,12 @@ import (
 // FuzzText feeds arbitrary text into every place a calc file's text
 // reaches a report (title, project, layer names, the file as entered) and
 // checks that the HTML stays well-formed with the text escaped, that
-// Markdown carries no raw markup, and that no writer fails. The seed
+// Markdown carries no raw markup, and that no writer fails (the PDF
+// writer included: text outside the fonts' range). The seed
 // corpus is hostile markup, invalid UTF-8 and control characters (inputs
 // of our own; no numbers are checked here).
 func FuzzText(f *testing.F) {
-	for _, s := range []string{"", hostile, "a & b", "]]><!--", "\x00\x01\x7f", "\xff\xfe", "| # * _ ` [x](y)", "</pre></svg></section>", "&amp;&#0;"} {
+	for _, s := range []string{"", hostile, "a & b", "]]><!--", "\x00\x01\x7f", "\xff\xfe", "| # * _ ` [x](y)", "</pre></svg></section>", "&amp;&#0;", "pile 😀 \U0010FFFF \uFFFF ﬁ", "(\\) \\( )"} {
 		f.Add(s)
 	}
 	base := load(f, example, nil)
@@ -43,7 +44,7 @@ func FuzzText(f *testing.F) {
 		if !utf8.ValidString(h) {
 			t.Fatal("invalid UTF-8")
 		}
-		for _, f := range []Format{Text, Markdown, CSV, JSON} {
+		for _, f := range []Format{Text, Markdown, CSV, JSON, PDF} {
 			b.Reset()
 			if err := Write(&b, &r, f, Options{View: ViewReport}); err != nil {
 				t.Fatalf("%v: %v", f, err)

@@ -2,10 +2,12 @@ package report
 
 import (
 	"bufio"
+	"fmt"
 	"html"
 	"strings"
 
 	"github.com/qultgeo/qult/calc"
+	"github.com/qultgeo/qult/units"
 )
 
 // The section headings the HTML writer adds figures to.
@@ -30,13 +32,64 @@ table.kv th{background:#f6f6f6;font-weight:normal}
 pre{background:#f7f7f7;border:1px solid #ccc;padding:.6rem;overflow-x:auto;font-size:.8rem}
 figure{margin:.6rem 0}
 figcaption{font-size:.85rem;color:#333}
-figure svg{max-width:100%;height:auto}
+figure svg{max-width:100%;height:auto;display:block}
+figure svg text{font-family:"Liberation Sans",Arial,Helvetica,sans-serif !important}
 .warn li{margin:.2rem 0}
 .caution{border:1px solid #555;padding:.3rem .9rem;background:#fafafa}
 .fail{color:#a00;font-weight:bold}
-.wide{overflow-x:auto}
-@media print{body{max-width:none;margin:0}h2{break-after:avoid}table,figure{break-inside:avoid}.wide{overflow:visible}}
+.cont{font-size:.8rem;color:#444;margin:.2rem 0 0}
+pre{white-space:pre-wrap;overflow-wrap:anywhere}
+td{overflow-wrap:anywhere}
+@media print{body{max-width:none;margin:0;padding:0;font-size:9pt;line-height:1.3}h1{font-size:14pt}h2{font-size:11pt;margin:.9rem 0 .35rem;break-after:avoid}table{font-size:7.5pt;margin:.3rem 0}.eq{font-size:7.5pt}pre{font-size:7pt}figure{break-inside:avoid;margin:.3rem 0}figure svg{max-height:125mm;width:auto}tr{break-inside:avoid}}
 `
+
+// printCSS is the page box of a printed HTML package: A4 or Letter as the
+// PDF, with the same header (title, project, revision) and footer (qult
+// version, the calc file's SHA-256 prefix, page x of y, the cautions in one
+// line) in the page margins.
+func printCSS(r *calc.Result, o Options, title string) string {
+	size := "A4"
+	if o.Paper == PaperLetter || (o.Paper == PaperAuto && o.sys == units.US) {
+		size = "letter"
+	}
+	var right []string
+	if r.Project != "" {
+		right = append(right, "Project: "+r.Project)
+	}
+	if r.Revision != "" {
+		right = append(right, "Revision: "+r.Revision)
+	}
+	left := "qult " + r.Version
+	if h := SourceHash(r); h != "" {
+		left += "   calc file SHA-256 " + h[:12]
+	}
+	if dt := date(r, o); dt != "" {
+		left += "   " + dt
+	}
+	return "\n@page{size:" + size + " portrait;margin:18mm 14mm 20mm 14mm;" +
+		"@top-left{content:" + cssString(title) + ";font:8pt Helvetica,Arial,sans-serif;color:#444}" +
+		"@top-right{content:" + cssString(strings.Join(right, "   ")) + ";font:8pt Helvetica,Arial,sans-serif;color:#444}" +
+		"@bottom-left{content:" + cssString(left) + ";font:8pt Helvetica,Arial,sans-serif;color:#444}" +
+		"@bottom-right{content:\"page \" counter(page) \" of \" counter(pages);font:8pt Helvetica,Arial,sans-serif;color:#444}" +
+		"@bottom-center{content:" + cssString(calc.CautionLine) + ";font:6pt Helvetica,Arial,sans-serif;color:#444;vertical-align:bottom;white-space:normal}}\n"
+}
+
+// cssString quotes s as a CSS string: quotes and backslashes escaped, and
+// every character outside printable ASCII (and <, >, &) written as a hex
+// escape, so that nothing in it can end the string or the style element.
+func cssString(s string) string {
+	var b strings.Builder
+	b.WriteByte('"')
+	for _, r := range clean(s) {
+		if r < 0x20 || r > 0x7e || r == '"' || r == '\\' || r == '<' || r == '>' || r == '&' {
+			fmt.Fprintf(&b, "\\%x ", r)
+			continue
+		}
+		b.WriteRune(r)
+	}
+	b.WriteByte('"')
+	return b.String()
+}
 
 // esc escapes text for HTML element content and attribute values. Invalid
 // UTF-8 and control characters other than tab, newline and carriage
@@ -61,8 +114,20 @@ func addFigures(d *doc, r *calc.Result, o Options) error {
 		s := &d.sections[i]
 		switch s.heading {
 		case headGround:
-			if g := groundSVG(r, c); g != "" {
-				s.blocks = append(s.blocks, block{svg: g, fig: "Ground profile drawn to scale (depths and pile width at the same scale; the width of the ground column is arbitrary)."})
+			g, err := groundFigure(r, c)
+			if err != nil {
+				return err
+			}
+			if g.svg != "" {
+				s.blocks = append(s.blocks, figBlock(g, "Ground profile drawn to scale (depths and pile width at the same scale; the width of the ground column is arbitrary; the fill shows drainage, not soil type)."))
+			}
+		case headCompared:
+			g, err := compareFigure(r, c)
+			if err != nil {
+				return err
+			}
+			if g.svg != "" {
+				s.blocks = append(s.blocks, figBlock(g, "Shaft and tip resistance of the same pile by each applicable method; the file's choice dark and marked *."))
 			}
 		case headStress:
 			if len(r.Stresses) >= 2 {
@@ -70,7 +135,7 @@ func addFigures(d *doc, r *calc.Result, o Options) error {
 				if err != nil {
 					return err
 				}
-				s.blocks = append(s.blocks, block{svg: g, fig: "Total stress, pore pressure and effective vertical stress with depth."})
+				s.blocks = append(s.blocks, figBlock(g, "Total stress, pore pressure and effective vertical stress with depth."))
 			}
 		case headWithDepth:
 			if len(r.WithDepth) >= 2 {
@@ -78,16 +143,12 @@ func addFigures(d *doc, r *calc.Result, o Options) error {
 				if err != nil {
 					return err
 				}
-				s.blocks = append(s.blocks, block{svg: g, fig: "Characteristic compression and tension resistance and design compression resistance against tip depth."})
+				s.blocks = append(s.blocks, figBlock(g, "Characteristic compression and tension resistance and design compression resistance against tip depth."))
 			}
 		}
 		if err := settleFigures(s, r, c); err != nil {
 			return err
 		}
-	}
-	if o.View == ViewReport && len(r.Source) > 0 {
-		in := section{heading: "Inputs as entered", blocks: []block{{pre: string(r.Source)}}}
-		d.sections = append(d.sections[:1], append([]section{in}, d.sections[1:]...)...)
 	}
 	return nil
 }
@@ -101,6 +162,7 @@ func writeHTML(b *bufio.Writer, r *calc.Result, o Options) error {
 	b.WriteString(esc(d.title))
 	b.WriteString("</title>\n<style>")
 	b.WriteString(css)
+	b.WriteString(printCSS(r, o, d.title))
 	b.WriteString("</style>\n</head>\n<body>\n")
 	for i, s := range d.sections {
 		if i == 0 && s.heading == "" {
@@ -170,21 +232,26 @@ func htmlBlock(b *bufio.Writer, bl block, heading string) {
 		}
 		b.WriteString("</table>\n")
 	case bl.tbl != nil:
-		b.WriteString("<div class=\"wide\"><table>\n<thead><tr>")
-		for _, c := range bl.tbl.cols {
-			b.WriteString("<th>")
-			b.WriteString(esc(c.header()))
-			b.WriteString("</th>")
-		}
-		b.WriteString("</tr></thead>\n<tbody>\n")
-		for _, row := range bl.tbl.rows {
-			b.WriteString("<tr>")
-			for _, c := range row {
-				htmlCell(b, c)
+		for pi, cols := range htmlParts(bl.tbl) {
+			if pi > 0 {
+				b.WriteString("<p class=\"cont\">(continued)</p>\n")
 			}
-			b.WriteString("</tr>\n")
+			b.WriteString("<table>\n<thead><tr>")
+			for _, j := range cols {
+				b.WriteString("<th>")
+				b.WriteString(esc(bl.tbl.cols[j].header()))
+				b.WriteString("</th>")
+			}
+			b.WriteString("</tr></thead>\n<tbody>\n")
+			for _, row := range bl.tbl.rows {
+				b.WriteString("<tr>")
+				for _, j := range cols {
+					htmlCell(b, row[j])
+				}
+				b.WriteString("</tr>\n")
+			}
+			b.WriteString("</tbody>\n</table>\n")
 		}
-		b.WriteString("</tbody>\n</table></div>\n")
 	case len(bl.eqs) > 0:
 		for _, e := range bl.eqs {
 			b.WriteString("<p class=\"eq\">")
@@ -219,6 +286,63 @@ func htmlBlock(b *bufio.Writer, bl block, heading string) {
 		b.WriteString(esc(strings.TrimRight(bl.pre, "\n")))
 		b.WriteString("</pre>\n")
 	}
+}
+
+// htmlBudget is the width, in characters of the table font, a table may
+// take before it is split: the text of an A4 page (182 mm) holds about 100
+// characters of it, and each cell's padding and border take about two.
+const htmlBudget = 96
+
+// htmlParts splits a table too wide for the page into parts of whole
+// columns that repeat its key columns, as Text does: a column takes its
+// longest number or header word (headers and text wrap), text cells at
+// most 24 characters before they wrap.
+func htmlParts(t *table) [][]int {
+	n := len(t.cols)
+	w := make([]int, n)
+	for j, c := range t.cols {
+		for _, word := range strings.Fields(c.header()) {
+			w[j] = max(w[j], width(word))
+		}
+	}
+	for _, row := range t.rows {
+		for j, c := range row {
+			v := width(c.str(sig))
+			if !c.num {
+				v = min(v, 24)
+			}
+			w[j] = max(w[j], v)
+		}
+	}
+	all := make([]int, n)
+	total := 0
+	for j := range all {
+		all[j] = j
+		total += w[j] + 2
+	}
+	if total <= htmlBudget || n < 2 {
+		return [][]int{all}
+	}
+	key := min(max(1, t.key), n-1)
+	keyW := 0
+	var keys []int
+	for j := range key {
+		keys = append(keys, j)
+		keyW += w[j] + 2
+	}
+	var parts [][]int
+	cur := append([]int(nil), keys...)
+	used := keyW
+	for j := key; j < n; j++ {
+		if len(cur) > key && used+w[j]+2 > htmlBudget {
+			parts = append(parts, cur)
+			cur = append([]int(nil), keys...)
+			used = keyW
+		}
+		cur = append(cur, j)
+		used += w[j] + 2
+	}
+	return append(parts, cur)
 }
 
 // hasUnits reports whether any item has a unit.

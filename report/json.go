@@ -75,6 +75,7 @@ type jResult struct {
 	Date      string       `json:"date,omitempty"`
 	Units     string       `json:"units"`
 	Source    string       `json:"source,omitempty"`
+	SHA256    string       `json:"source_sha256,omitempty"`
 	Pile      jPile        `json:"pile"`
 	Ground    jGround      `json:"ground"`
 	Loads     jLoads       `json:"loads"`
@@ -82,6 +83,7 @@ type jResult struct {
 	Lambda    *jLambda     `json:"lambda,omitempty"`
 	Tip       jTip         `json:"tip"`
 	Capacity  jCapacity    `json:"capacity"`
+	Compared  *jCompared   `json:"methods_compared,omitempty"`
 	Design    *jDesign     `json:"design"`
 	Length    *jLength     `json:"required_length"`
 	WithDepth []jDepthRow  `json:"capacity_with_depth"`
@@ -339,8 +341,9 @@ func toJSON(r *calc.Result, o Options) *jResult {
 		schema = calc.ResultSchema
 	}
 	j := &jResult{Schema: schema, Version: r.Version, Verify: o.Verification, Title: r.Title, Project: r.Project, Revision: r.Revision,
-		Engineer: r.Engineer, Date: date(r, o), Units: o.sys.String(), Source: string(r.Source),
+		Engineer: r.Engineer, Date: date(r, o), Units: o.sys.String(), Source: string(r.Source), SHA256: SourceHash(r),
 		Warnings: nonNil(allWarnings(r, c.conv)), Defaults: defaultRows(r, c.conv), Cautions: nonNil(r.Cautions), Sources: []jSource{}, WithDepth: []jDepthRow{}, Segments: []jSegment{}}
+	j.Compared = compareJSON(r.Compared, c)
 	p := r.Pile
 	s := p.Section
 	j.Pile = jPile{Shape: s.Shape.String(), Size: c.L(s.Size()), Wall: opt(c.L(s.Wall), s.Wall > 0),
@@ -485,4 +488,49 @@ func writeJSON(b *bufio.Writer, r *calc.Result, o Options) error {
 	e := json.NewEncoder(b)
 	e.SetIndent("", "  ")
 	return e.Encode(toJSON(r, o))
+}
+
+type jCompared struct {
+	Shaft []jCompareGroup `json:"shaft"`
+	Tip   []jCompareGroup `json:"tip"`
+}
+
+type jCompareGroup struct {
+	Drainage string        `json:"drainage"`
+	Layers   []string      `json:"layers"`
+	Methods  []jCompareRow `json:"methods"`
+	Least    *qty          `json:"least,omitempty"`
+	Greatest *qty          `json:"greatest,omitempty"`
+}
+
+type jCompareRow struct {
+	Method     string `json:"method"`
+	Equation   string `json:"equation"`
+	Force      *qty   `json:"force,omitempty"`
+	Total      *qty   `json:"total,omitempty"`
+	Chosen     bool   `json:"chosen"`
+	NotApplied string `json:"not_applied,omitempty"`
+}
+
+func compareJSON(cm *calc.Comparison, c jconv) *jCompared {
+	if cm == nil {
+		return nil
+	}
+	groups := func(gs []calc.CompareGroup) []jCompareGroup {
+		out := []jCompareGroup{}
+		for _, g := range gs {
+			jg := jCompareGroup{Drainage: g.Drainage, Layers: nonNil(g.Layers), Methods: []jCompareRow{}}
+			if lo, hi, n := g.Spread(); n > 0 {
+				jg.Least, jg.Greatest = opt(c.F(lo), true), opt(c.F(hi), true)
+			}
+			for _, r := range g.Rows {
+				ok := r.NotApplied == ""
+				jg.Methods = append(jg.Methods, jCompareRow{Method: r.Method, Equation: r.Equation, Force: opt(c.F(r.Force), ok),
+					Total: opt(c.F(r.Total), ok), Chosen: r.Chosen, NotApplied: r.NotApplied})
+			}
+			out = append(out, jg)
+		}
+		return out
+	}
+	return &jCompared{Shaft: groups(cm.Shaft), Tip: groups(cm.Tip)}
 }

@@ -46,6 +46,20 @@ func mdRow(b *bufio.Writer, vals []string) {
 
 func mdBlock(b *bufio.Writer, bl block) {
 	switch {
+	case bl.pre != "" && strings.ContainsAny(bl.pre, "<>"):
+		// Markdown output never holds a raw < or > (some viewers read HTML
+		// even inside code), so such a file is not copied here.
+		b.WriteString("The calc file holds angle brackets, which some Markdown viewers read as markup; the text, HTML and PDF reports carry it verbatim.\n")
+	case bl.pre != "":
+		// A fenced block longer than any run of backticks in the text, so
+		// that nothing in it can close the fence.
+		fence := "```"
+		for strings.Contains(bl.pre, fence) {
+			fence += "`"
+		}
+		b.WriteString(fence + "yaml\n")
+		b.WriteString(strings.TrimRight(clean(bl.pre), "\n"))
+		b.WriteString("\n" + fence + "\n")
 	case bl.para != "":
 		b.WriteString(mdEsc(bl.para))
 		b.WriteString("\n")

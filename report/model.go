@@ -1,6 +1,8 @@
 package report
 
 import (
+	"crypto/sha256"
+	"encoding/hex"
 	"fmt"
 	"math"
 	"strings"
@@ -48,6 +50,9 @@ type table struct {
 	// listInText renders the table in Text as one wrapped list entry per
 	// row (for tables of sentences, too wide for columns).
 	listInText bool
+	// key is how many leading columns name a row; Text repeats them in
+	// every part of a table split to fit the width (0 means 1).
+	key int
 }
 
 type item struct {
@@ -66,8 +71,12 @@ type block struct {
 	list  []string
 	svg   string
 	pre   string
-	fig   string // figure caption
+	fig   string  // figure caption
+	draw  *figure // the figure as a drawing (for PDF); nil for SVG-only figures
 }
+
+// figBlock is a block holding figure f with caption cap.
+func figBlock(f figure, cap string) block { return block{svg: f.svg, draw: &f, fig: cap} }
 
 type section struct {
 	heading string
@@ -92,6 +101,7 @@ func build(r *calc.Result, o Options) *doc {
 		}
 	}
 	add(secTitle(r, o))
+	warnings := secList("Warnings", allWarnings(r, c))
 	switch o.View {
 	case ViewCheck:
 		add(secLoads(r, c))
@@ -102,18 +112,24 @@ func build(r *calc.Result, o Options) *doc {
 		add(secShaft(r, c))
 		add(secTip(r, c))
 		add(secTotals(r, c))
+		add(secCompared(r, c))
 		add(secDefaults(r, c))
 	case ViewLength:
 		add(secLength(r, c))
 		add(secWithDepth(r, c))
 	case ViewReport:
+		// The summary a reviewer reads first, then the warnings, then the
+		// inputs and the derivation in the order it runs.
+		add(secSummary(r, c))
+		add(warnings)
 		add(secPile(r, c))
+		add(secLoads(r, c))
 		add(secLayers(r, c))
 		add(secStresses(r, c))
-		add(secLoads(r, c))
 		add(secShaft(r, c))
 		add(secTip(r, c))
 		add(secTotals(r, c))
+		add(secCompared(r, c))
 		add(secDesign(r, c))
 		add(secLength(r, c))
 		add(secWithDepth(r, c))
@@ -129,7 +145,9 @@ func build(r *calc.Result, o Options) *doc {
 			add(section{heading: "Settlement", blocks: []block{{para: "The calc file has no settlement or load_test section."}}})
 		}
 	}
-	add(secList("Warnings", allWarnings(r, c)))
+	if o.View != ViewReport {
+		add(warnings)
+	}
 	if o.View == ViewReport {
 		var src []string
 		for _, s := range sources(r) {
@@ -143,7 +161,82 @@ func build(r *calc.Result, o Options) *doc {
 		cautions = calc.CautionText()
 	}
 	add(secList("Cautions", cautions))
+	if o.View == ViewReport && len(r.Source) > 0 {
+		add(section{heading: headAppendix, blocks: []block{
+			{para: "The calc file exactly as read (SHA-256 " + SourceHash(r) + "), line by line; a line too long for the page continues on the next (marked » in text and PDF)."},
+			{pre: string(r.Source)}}})
+	}
 	return d
+}
+
+// headAppendix is the heading of the appendix with the calc file.
+const headAppendix = "Appendix: the calc file as entered"
+
+// SourceHash returns the SHA-256 of the calc file as entered (r.Source),
+// in hexadecimal, or "" when the result has no source text. Printed pages
+// carry it (or its first 12 digits) so that they can be tied to the file
+// that produced them.
+func SourceHash(r *calc.Result) string {
+	if r == nil || len(r.Source) == 0 {
+		return ""
+	}
+	h := sha256.Sum256(r.Source)
+	return hex.EncodeToString(h[:])
+}
+
+// secSummary is what a reviewer reads first: the verdict, the governing
+// case and its utilisation, the required length, the serviceability check
+// and how many warnings there are.
+func secSummary(r *calc.Result, c conv) section {
+	var it []item
+	k := r.Breakdown.Capacity
+	if d := r.Design; d != nil {
+		verdict := "PASS: every design case has Ed/Rd ≤ 1"
+		if !d.Pass {
+			verdict = "FAIL: at least one design case has Ed/Rd > 1"
+		}
+		it = append(it, item{"Verdict", txt(verdict), ""}, item{"Design basis", txt(d.Basis), ""})
+		if d.Governing >= 0 && d.Governing < len(d.Cases) {
+			it = append(it, item{"Governing case", txt(d.Cases[d.Governing].Case), ""})
+		}
+		it = append(it, item{"Highest utilisation Ed/Rd", useCell(d.MaxUse()), ""})
+	} else {
+		it = append(it, item{"Verdict", txt("none: no design basis given (characteristic values only)"), ""})
+	}
+	it = append(it, item{"Pile", txt(fmt.Sprintf("%s %s, %s, length %s, tip at %s", r.Pile.Section.Shape, c.ls(r.Pile.Section.Size()),
+		r.Pile.Installation, c.ls(r.Pile.Length), c.ls(r.Pile.Tip()))), ""},
+		item{"Compression Rc (characteristic)", txt(c.fs(k.Compression)), ""},
+		item{"Tension Rt (characteristic)", txt(c.fs(k.Tension)), ""})
+	switch l := r.Length; {
+	case l != nil && l.Found:
+		it = append(it, item{"Required length", txt(fmt.Sprintf("%s (tip at %s; governed by %s)", c.ls(l.Length), c.ls(l.TipDepth), l.Governs)), ""})
+	case l != nil:
+		it = append(it, item{"Required length", txt("none found within the search (see Required length)"), ""})
+	case r.Design != nil:
+		it = append(it, item{"Required length", txt("not found (see the warnings)"), ""})
+	}
+	if s := r.Settlement; s != nil {
+		v := "pass"
+		if !r.ServiceabilityPass() {
+			v = "FAIL"
+		}
+		switch {
+		case s.Plunged:
+			v += fmt.Sprintf(": the pile cannot carry %s (%s)", c.fs(s.Load), s.Method)
+		case s.HasAllowable:
+			v += fmt.Sprintf(": %s at %s against %s allowed (%s)", c.sms(s.Settlement), c.fs(s.Load), c.sms(s.Allowable), s.Method)
+		default:
+			v += fmt.Sprintf(": %s at %s, no allowable given (%s)", c.sms(s.Settlement), c.fs(s.Load), s.Method)
+		}
+		it = append(it, item{"Serviceability", txt(v), ""})
+	}
+	n := len(allWarnings(r, c))
+	w := "none"
+	if n > 0 {
+		w = fmt.Sprintf("%d, listed under Warnings below", n)
+	}
+	it = append(it, item{"Warnings", txt(w), ""})
+	return section{heading: "Summary", blocks: []block{{items: it}}}
 }
 
 func date(r *calc.Result, o Options) string {
@@ -156,7 +249,8 @@ func date(r *calc.Result, o Options) string {
 func secTitle(r *calc.Result, o Options) section {
 	var it []item
 	for _, kv := range [][2]string{{"Project", r.Project}, {"Revision", r.Revision}, {"Engineer", r.Engineer},
-		{"Date", date(r, o)}, {"qult version", r.Version}, {"Verification", o.Verification}, {"Display units", o.sys.String()}} {
+		{"Date", date(r, o)}, {"qult version", r.Version}, {"Verification", o.Verification},
+		{"Calc file SHA-256", SourceHash(r)}, {"Display units", o.sys.String()}} {
 		if kv[1] != "" {
 			it = append(it, item{label: kv[0], val: txt(kv[1])})
 		}
@@ -289,7 +383,7 @@ func secLoads(r *calc.Result, c conv) section {
 func shaftTable(r *calc.Result, c conv) *table {
 	t := &table{cols: []column{{"Top", c.uL()}, {"Bottom", c.uL()}, {"Layer", ""}, {"Method", ""},
 		{"σ′v top", c.uS()}, {"σ′v bottom", c.uS()}, {"su top", c.uS()}, {"su bottom", c.uS()},
-		{"fs top", c.uS()}, {"fs bottom", c.uS()}, {"∫fs dz", c.uQ()}, {"Perimeter", c.uL()}, {"Qs", c.uF()}}}
+		{"fs top", c.uS()}, {"fs bottom", c.uS()}, {"∫fs dz", c.uQ()}, {"Perimeter", c.uL()}, {"Qs", c.uF()}}, key: 2}
 	for _, w := range r.Breakdown.Rows {
 		hasSu := w.SuTop > 0 || w.SuBottom > 0
 		fsOK := w.Method != "none" && w.Method != "lambda"
@@ -387,8 +481,11 @@ func shaftEquations(r *calc.Result, c conv) []string {
 		case a.Alpha > 0:
 			su := w.SuBottom
 			e = fmt.Sprintf("fs = α·su = %s × %s = %s", fmtNum(a.Alpha, sig), c.ss(su), c.ss(a.Unlimited))
-			if a.Psi > 0 {
-				e += fmt.Sprintf(" (ψ = %s)", fmtNum(a.Psi, sig))
+			switch {
+			case a.Psi > 0:
+				e += fmt.Sprintf(" (ψ = su/σ′v = %s)", fmtNum(a.Psi, sig))
+			case a.SuPa > 0:
+				e += fmt.Sprintf(" (su/pa = %s)", fmtNum(a.SuPa, sig))
 			}
 		default:
 			e = fmt.Sprintf("%s gives fs = %s", w.Equation, c.ss(a.Fs))

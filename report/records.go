@@ -397,7 +397,7 @@ func WriteRecords(w io.Writer, r *calc.Result, o Options) error {
 	b = append(b, `,"title":`...)
 	b = appendString(b, r.Title)
 	b = append(b, `,"units":`...)
-	b = appendString(b, o.Units.String())
+	b = appendString(b, sys.String())
 	b = append(b, `,"tables":{`...)
 	for k, t := range ts {
 		if k > 0 {
@@ -479,7 +479,7 @@ func WriteRecordsCSV(w io.Writer, r *calc.Result, o Options) error {
 	if id := strings.Join(strings.Fields(r.ID), " "); id != "" {
 		title += "; id " + id
 	}
-	fmt.Fprintf(&b, "# %s: %s; units %s\n", RecordsSchema, title, o.Units)
+	fmt.Fprintf(&b, "# %s: %s; units %s\n", RecordsSchema, title, sys)
 	for _, t := range ts {
 		fmt.Fprintf(&b, "# table: %s\n", t.Name)
 		b.WriteString(strings.Join(t.Columns, ","))

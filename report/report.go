@@ -28,9 +28,12 @@ const (
 	Markdown
 	// HTML is a self-contained calculation package (inline CSS and SVG).
 	HTML
+	// PDF is the calculation package on numbered pages (A4 or US Letter),
+	// with a header and footer on every page.
+	PDF
 )
 
-var formatNames = [...]string{Text: "text", CSV: "csv", JSON: "json", Markdown: "md", HTML: "html"}
+var formatNames = [...]string{Text: "text", CSV: "csv", JSON: "json", Markdown: "md", HTML: "html", PDF: "pdf"}
 
 // String returns the format's name as ParseFormat reads it.
 func (f Format) String() string {
@@ -40,8 +43,8 @@ func (f Format) String() string {
 	return "Format(" + strconv.Itoa(int(f)) + ")"
 }
 
-// ParseFormat reads a format name: text, json, csv, md (or markdown) or
-// html, in any case.
+// ParseFormat reads a format name: text, json, csv, md (or markdown), html
+// or pdf, in any case.
 func ParseFormat(s string) (Format, error) {
 	switch strings.ToLower(strings.TrimSpace(s)) {
 	case "text", "txt":
@@ -54,8 +57,10 @@ func ParseFormat(s string) (Format, error) {
 		return Markdown, nil
 	case "html":
 		return HTML, nil
+	case "pdf":
+		return PDF, nil
 	}
-	return 0, fmt.Errorf("report: format %q: want text, json, csv, md or html", s)
+	return 0, fmt.Errorf("report: format %q: want text, json, csv, md, html or pdf", s)
 }
 
 // View says how much of a result to render.
@@ -164,6 +169,14 @@ type Options struct {
 	// reference cases, all pass"), shown in the title block; empty leaves
 	// it out.
 	Verification string
+	// Wide lays text out as wide as its tables are (one line per row, an
+	// item or equation on one line); the default fits every line in 100
+	// columns, splitting a wide table into parts that repeat its first
+	// column and wrapping long text.
+	Wide bool
+	// Paper is the page size of PDF output; the zero value, PaperAuto,
+	// is A4 for SI display units and US Letter for US units.
+	Paper Paper
 
 	sys units.System // the display system, resolved by Write
 }
@@ -192,7 +205,7 @@ func Write(w io.Writer, r *calc.Result, f Format, o Options) error {
 		tw := bufio.NewWriter(&buf)
 		switch f {
 		case Text:
-			err = writeText(tw, build(r, o))
+			err = writeText(tw, build(r, o), o.Wide)
 		case Markdown:
 			err = writeMarkdown(tw, build(r, o))
 		default:
@@ -208,8 +221,13 @@ func Write(w io.Writer, r *calc.Result, f Format, o Options) error {
 		err = writeJSON(bw, r, o)
 	case HTML:
 		err = writeHTML(bw, r, o)
+	case PDF:
+		if o.Paper < PaperAuto || o.Paper > PaperLetter {
+			return fmt.Errorf("report: paper %v: want auto, a4 or letter", o.Paper)
+		}
+		err = writePDF(bw, r, o)
 	default:
-		return fmt.Errorf("report: format %v: want text, json, csv, md or html", f)
+		return fmt.Errorf("report: format %v: want text, json, csv, md, html or pdf", f)
 	}
 	if err != nil {
 		return err

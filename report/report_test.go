@@ -74,7 +74,7 @@ func TestParseFormat(t *testing.T) {
 	for _, c := range []struct {
 		in   string
 		want Format
-	}{{"text", Text}, {"json", JSON}, {"csv", CSV}, {"md", Markdown}, {"markdown", Markdown}, {"HTML", HTML}} {
+	}{{"text", Text}, {"json", JSON}, {"csv", CSV}, {"md", Markdown}, {"markdown", Markdown}, {"HTML", HTML}, {"pdf", PDF}} {
 		got, err := ParseFormat(c.in)
 		if err != nil || got != c.want {
 			t.Errorf("ParseFormat(%q) = %v, %v; want %v", c.in, got, err, c.want)
@@ -83,11 +83,11 @@ func TestParseFormat(t *testing.T) {
 			t.Errorf("ParseFormat(%v.String()) = %v, %v", got, back, err)
 		}
 	}
-	for _, bad := range []string{"", "pdf", "xml", "text "} {
+	for _, bad := range []string{"", "docx", "xml", "text "} {
 		if bad == "text " {
 			continue // surrounding space is accepted
 		}
-		if _, err := ParseFormat(bad); err == nil || !strings.Contains(err.Error(), "text, json, csv, md or html") {
+		if _, err := ParseFormat(bad); err == nil || !strings.Contains(err.Error(), "text, json, csv, md, html or pdf") {
 			t.Errorf("ParseFormat(%q): error %v, want one naming the accepted formats", bad, err)
 		}
 	}
@@ -370,6 +370,16 @@ func TestEscaping(t *testing.T) {
 			t.Errorf("HTML %v: %v", v, err)
 		}
 		md := render(t, r, Markdown, Options{View: v})
+		// The appendix holds the calc file verbatim inside a code fence,
+		// which Markdown never reads as markup; the rest is escaped.
+		if i := strings.Index(md, "## "+mdEsc(headAppendix)); i >= 0 {
+			app := md[i:]
+			md = md[:i]
+			fenced := strings.Contains(app, "\n```yaml\n") && strings.HasSuffix(strings.TrimSpace(app), "```")
+			if !fenced && !strings.Contains(app, "angle brackets") {
+				t.Errorf("Markdown %v: the calc file in the appendix is not fenced", v)
+			}
+		}
 		if strings.Contains(md, "<script") || strings.Contains(md, "<b>") || strings.Contains(md, " & ") {
 			t.Errorf("Markdown %v: unescaped markup from the calc file", v)
 		}
@@ -533,7 +543,7 @@ func TestHTMLPackage(t *testing.T) {
 	r := load(t, example, nil)
 	h := render(t, r, HTML, Options{View: ViewReport, Date: "2026-12-02"})
 	for _, want := range []string{
-		"2026-12-02", r.Version, "Inputs as entered", "Ground profile", "γsat", "Vertical stress",
+		"2026-12-02", r.Version, headAppendix, "Summary", "Methods compared", "Ground profile", "γsat", "Vertical stress",
 		"Shaft resistance", "Tip resistance", "Characteristic capacity", "Design check", "Required length",
 		"Capacity with depth", "Warnings", "Sources cited", "Cautions",
 		"Capacity with tip depth", // the title of the gonum plot
@@ -550,8 +560,8 @@ func TestHTMLPackage(t *testing.T) {
 	if strings.Contains(h, "<?xml") {
 		t.Error("HTML report holds an XML prolog")
 	}
-	if n := strings.Count(h, "<svg"); n != 3 {
-		t.Errorf("%d SVG figures, want 3 (ground, stress, capacity)", n)
+	if n := strings.Count(h, "<svg"); n != 4 {
+		t.Errorf("%d SVG figures, want 4 (ground, stress, methods compared, capacity)", n)
 	}
 	for _, s := range r.Sources {
 		if !strings.Contains(h, esc(s.String())) {

@@ -361,7 +361,7 @@ func TestDefaultsTable(t *testing.T) {
 		}
 	}
 	txt := render(t, r, Text, Options{View: ViewReport})
-	sec := txt[strings.Index(txt, "Defaults and rules in force"):strings.Index(txt, "\nWarnings\n")]
+	sec := txt[strings.Index(txt, "Defaults and rules in force"):strings.Index(txt, "\nSources cited\n")]
 	for _, l := range strings.Split(sec, "\n") {
 		if width(l) > 100 {
 			t.Errorf("defaults line of %d columns: %q", width(l), l)

@@ -221,7 +221,7 @@ func secLoadTest(r *calc.Result, c conv) section {
 
 // settleSVG plots the predicted load-settlement curve, the measured one
 // and the serviceability load, settlement downwards.
-func settleSVG(r *calc.Result, c conv) (string, error) {
+func settleSVG(r *calc.Result, c conv) (figure, error) {
 	s := r.Settlement
 	var pred, meas plotter.XYs
 	if s != nil {
@@ -234,28 +234,28 @@ func settleSVG(r *calc.Result, c conv) (string, error) {
 			meas = append(meas, plotter.XY{X: c.F(p.Load), Y: -c.sm(p.Settlement)})
 		}
 	}
-	ss := []series{{"predicted", pred, black, nil}, {"measured (load test)", meas, red, []vg.Length{vg.Points(5), vg.Points(3)}}}
+	ss := []series{{"predicted", pred, black, nil, false}, {"measured (load test)", meas, red, []vg.Length{vg.Points(5), vg.Points(3)}, false}}
 	if s != nil && !s.Plunged && s.Load > 0 {
-		ss = append(ss, series{"serviceability load", plotter.XYs{{X: c.F(s.Load), Y: 0}, {X: c.F(s.Load), Y: -c.sm(s.Settlement)}}, green, []vg.Length{vg.Points(8), vg.Points(3)}})
+		ss = append(ss, series{"serviceability load", plotter.XYs{{X: c.F(s.Load), Y: 0}, {X: c.F(s.Load), Y: -c.sm(s.Settlement)}}, green, []vg.Length{vg.Points(8), vg.Points(3)}, false})
 	}
 	if s != nil && s.HasAllowable && len(pred) > 0 {
 		xmax := pred[len(pred)-1].X
 		for _, p := range meas {
 			xmax = max(xmax, p.X)
 		}
-		ss = append(ss, series{"allowable settlement", plotter.XYs{{X: 0, Y: -c.sm(s.Allowable)}, {X: xmax, Y: -c.sm(s.Allowable)}}, blue, []vg.Length{vg.Points(2), vg.Points(2)}})
+		ss = append(ss, series{"allowable settlement", plotter.XYs{{X: 0, Y: -c.sm(s.Allowable)}, {X: xmax, Y: -c.sm(s.Allowable)}}, blue, []vg.Length{vg.Points(2), vg.Points(2)}, false})
 	}
 	return svgPlot("Load-settlement", "head load ("+c.uF()+")", "settlement ("+c.uSm()+")", ss)
 }
 
 // axialSVG plots the axial load with depth at the serviceability load.
-func axialSVG(r *calc.Result, c conv) (string, error) {
+func axialSVG(r *calc.Result, c conv) (figure, error) {
 	s := r.Settlement
 	var xy plotter.XYs
 	for i, z := range s.Depth {
 		xy = append(xy, plotter.XY{X: c.F(s.AxialLoad[i]), Y: -c.L(z)})
 	}
-	return svgPlot("Axial load at the serviceability load", "axial load ("+c.uF()+")", "depth ("+c.uL()+")", []series{{"axial load", xy, black, nil}})
+	return svgPlot("Axial load at the serviceability load", "axial load ("+c.uF()+")", "depth ("+c.uL()+")", []series{{"axial load", xy, black, nil, false}})
 }
 
 // settleFigures adds the figures of the settlement and load-test
@@ -274,13 +274,13 @@ func settleFigures(s *section, r *calc.Result, c conv) error {
 		if r.LoadTest != nil {
 			fig += " with the measured one of the load test"
 		}
-		s.blocks = append(s.blocks, block{svg: g, fig: fig + ", the serviceability load and the allowable settlement."})
+		s.blocks = append(s.blocks, figBlock(g, fig+", the serviceability load and the allowable settlement."))
 		if len(r.Settlement.Depth) >= 2 {
 			g, err := axialSVG(r, c)
 			if err != nil {
 				return err
 			}
-			s.blocks = append(s.blocks, block{svg: g, fig: "Axial load in the pile with depth at the serviceability load."})
+			s.blocks = append(s.blocks, figBlock(g, "Axial load in the pile with depth at the serviceability load."))
 		}
 	case headLoadTest:
 		if r.Settlement == nil && r.LoadTest != nil {
@@ -288,7 +288,7 @@ func settleFigures(s *section, r *calc.Result, c conv) error {
 			if err != nil {
 				return err
 			}
-			s.blocks = append(s.blocks, block{svg: g, fig: "Measured load-settlement curve of the load test."})
+			s.blocks = append(s.blocks, figBlock(g, "Measured load-settlement curve of the load test."))
 		}
 	}
 	return nil

@@ -135,7 +135,7 @@ func (m AlphaChart) Unit(p Point) (Result, error) {
 		return Result{}, &RangeError{Method: id, Field: "su/pa", Value: r, Min: 0, Max: last, Open: true}
 	}
 	fs := units.Stress(a) * p.Su
-	return Result{Fs: fs, Unlimited: fs, Alpha: a, Psi: r, Flags: fl}, nil
+	return Result{Fs: fs, Unlimited: fs, Alpha: a, SuPa: r, Flags: fl}, nil
 }
 
 // AlphaDrilled is the α of O'Neill & Reese (1999) for drilled shafts in
@@ -184,7 +184,7 @@ func (m AlphaDrilled) Unit(p Point) (Result, error) {
 		a = 0.55 - 0.1*(r-1.5)
 	}
 	fs := units.Stress(a) * p.Su
-	return Result{Fs: fs, Unlimited: fs, Alpha: a, Psi: r}, nil
+	return Result{Fs: fs, Unlimited: fs, Alpha: a, SuPa: r}, nil
 }
 
 // NoSideZones are the parts of a straight drilled shaft in cohesive soil

@@ -58,7 +58,7 @@ func FuzzUnitShaft(f *testing.F) {
 				continue
 			}
 			if !finite(float64(r.Fs), float64(r.Unlimited), float64(r.SigmaV), r.K, r.K0, r.Kp, r.KRatio,
-				float64(r.Delta), r.DeltaRatio, r.Beta, r.Alpha, r.Psi) || r.Fs < 0 || r.Fs > r.Unlimited {
+				float64(r.Delta), r.DeltaRatio, r.Beta, r.Alpha, r.Psi, r.SuPa) || r.Fs < 0 || r.Fs > r.Unlimited {
 				t.Fatalf("%s at %+v: %+v", m.ID(), p, r)
 			}
 		}

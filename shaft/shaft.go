@@ -78,7 +78,8 @@ type Result struct {
 	DeltaRatio float64      // δ/φ′, where δ is a ratio
 	Beta       float64      // β = fs/σ′v (before any limit)
 	Alpha      float64      // α = fs/su (before any limit)
-	Psi        float64      // ψ = su/σ′v (API α) or su/pa (drilled-shaft α, chart α)
+	Psi        float64      // ψ = su/σ′v (API α only)
+	SuPa       float64      // su/pa, the strength ratio of the drilled-shaft α and the chart α
 	Flags      Flags        // warnings raised on the way
 }
 

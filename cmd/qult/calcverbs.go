@@ -13,24 +13,25 @@ import (
 )
 
 // calcFormats are the output formats of the verbs that read a calc file.
-const calcFormats = "text, json, csv, md, html, records (JSON records of every table), records-csv"
+const calcFormats = "text, json, csv, md, html, pdf, records (JSON records of every table), records-csv"
 
 // calcOpts are the flags of check, capacity, length and report.
 type calcOpts struct {
 	format string
 	units  string
 	out    string
+	wide   bool
+	paper  string
 }
 
 func calcFlags(name, formats string, o *calcOpts) *flag.FlagSet {
 	fs := newFlagSet(name)
-	def := "text"
-	if name == "report" {
-		def = "text, or html when -o ends in .html"
-	}
+	def := "by -o's extension (.html, .pdf, .json, .csv, .md), else text"
 	fs.StringVar(&o.format, "format", "", "output `format`: "+formats+" (default "+def+")")
 	fs.StringVar(&o.units, "units", "", "display `system` SI or US (default: the file's units)")
 	fs.StringVar(&o.out, "o", "", "write the output to `FILE` instead of standard output")
+	fs.StringVar(&o.paper, "paper", "auto", "pdf: page `size` a4, letter, or auto (A4 for SI units, Letter for US)")
+	fs.BoolVar(&o.wide, "wide", false, "text: tables at their natural width, one line per row, instead of fitting 100 columns")
 	return fs
 }
 
@@ -58,13 +59,28 @@ func (c *cmd) calcVerb(args []string, view report.View) int {
 	}
 	format := strings.ToLower(o.format)
 	if format == "" {
+		// The output file's extension chooses the format: a .pdf file gets
+		// a PDF, never text under a .pdf name.
 		format = "text"
-		if ext := strings.ToLower(filepath.Ext(o.out)); view == viewReport && (ext == ".html" || ext == ".htm") {
+		switch strings.ToLower(filepath.Ext(o.out)) {
+		case ".html", ".htm":
 			format = "html"
+		case ".pdf":
+			format = "pdf"
+		case ".json":
+			format = "json"
+		case ".csv":
+			format = "csv"
+		case ".md":
+			format = "md"
 		}
 	}
-	if err := oneOf("format", format, "text", "json", "csv", "md", "html", "records", "records-csv"); err != nil {
+	if err := oneOf("format", format, "text", "json", "csv", "md", "html", "pdf", "records", "records-csv"); err != nil {
 		return c.usageErr("%s: %v", c.verb, err)
+	}
+	paper, err := report.ParsePaper(o.paper)
+	if err != nil {
+		return c.usageErr("%s: --paper %q: want a4, letter or auto", c.verb, o.paper)
 	}
 	sys, hasSys := units.SI, false
 	if o.units != "" {
@@ -115,7 +131,7 @@ func (c *cmd) calcVerb(args []string, view report.View) int {
 		}
 	}
 	var buf bytes.Buffer
-	if err := render(&buf, res, format, view, res.Display); err != nil {
+	if err := render(&buf, res, format, view, res.Display, o.wide, paper); err != nil {
 		c.errorf("%s: %v", c.verb, err)
 		return exitUsage
 	}

@@ -36,7 +36,7 @@ func TestUsageErrors(t *testing.T) {
 		{[]string{"help", "check", "length"}, "help takes one verb"},
 		{[]string{"capacity"}, "no calc file given"},
 		{[]string{"capacity", ex, ex}, "one calc file at a time"},
-		{[]string{"capacity", "--format", "pdf", ex}, `--format "pdf"`},
+		{[]string{"capacity", "--format", "docx", ex}, `--format "docx"`},
 		{[]string{"capacity", "--units", "metric", ex}, `--units "metric"`},
 		{[]string{"capacity", "--colour", ex}, "flag provided but not defined: -colour"},
 		{[]string{"capacity", "--format"}, "flag needs an argument"},

@@ -58,12 +58,18 @@ loads. Exit code 1 when no length on the grid passes.`,
 		},
 		"report": {
 			usage: "report [--format F] [--units SI|US] [-o FILE] FILE",
-			about: `Writes the calculation package: title block, inputs as entered and as
-normalised, ground profile, stresses, shaft table and tip block with the
-equations, totals, design check, capacity with depth, warnings, sources
-and cautions. The format defaults to html when -o ends in .html or .htm,
-else text.`,
+			about: `Writes the calculation package: title block (with the calc file's SHA-256),
+the summary (verdict, governing case, utilisation, required length,
+warnings), pile, loads, ground profile, stresses, shaft table and tip
+block with the equations, totals, the methods compared, design check,
+capacity with depth, settlement, defaults, sources, cautions and the calc
+file as entered. The format follows -o's extension (.html, .pdf, .json,
+.csv, .md), else text. A PDF is A4 for SI display units and US Letter for
+US units unless --paper says otherwise, with a header (title, project,
+revision) and a footer (qult version, the calc file's SHA-256, page x of
+y, the cautions) on every page.`,
 			example: `qult report -o pump-station.html examples/pump-station-bored.yaml
+  qult report -o pump-station.pdf examples/pump-station-bored.yaml
   qult report --format md examples/abutment-hpile-us.yaml > abutment.md`,
 			flags: calcFlagsOnly("report", calcFormats),
 		},
@@ -105,6 +111,14 @@ check fails, else 0.`,
 			example: `qult batch piles.jsonl > results.jsonl
   cat piles.jsonl | qult batch -`,
 			flags: func() *flag.FlagSet { return batchFlags(&batchOpts{}) },
+		},
+		"help": {
+			usage: "help [VERB]",
+			about: `Prints the list of verbs, or with a verb its usage, what it does, its
+flags and an example. "qult VERB --help" does the same.`,
+			example: `qult help report
+  qult help`,
+			flags: func() *flag.FlagSet { return newFlagSet("help") },
 		},
 		"version": {
 			usage:   "version",
@@ -229,6 +243,9 @@ func printFlags(w io.Writer, fs *flag.FlagSet) {
 		if f.DefValue != "" && f.DefValue != "false" {
 			usage += fmt.Sprintf(" (default %q)", f.DefValue)
 		}
-		fmt.Fprintf(w, "%s\n      %s\n", line, usage)
+		fmt.Fprintf(w, "%s\n", line)
+		for _, l := range wrapWords(usage, textWidth-6) {
+			fmt.Fprintf(w, "      %s\n", l)
+		}
 	})
 }

@@ -131,6 +131,10 @@ func run(stdout, stderr io.Writer, args []string) (code int) {
 		if len(rest) > 1 {
 			return c.usageErr("help takes one verb, got %q", strings.Join(rest, " "))
 		}
+		if rest[0] == "help" {
+			writeVerbHelp(stdout, "help")
+			return exitOK
+		}
 		v := findVerb(rest[0])
 		if v == nil {
 			return c.usageErr("unknown verb %q", rest[0])
@@ -164,7 +168,13 @@ func writeUsage(w io.Writer) {
 	fmt.Fprintf(w, "qult: axial capacity of piles and drilled shafts from a calc file\n\n")
 	fmt.Fprintf(w, "usage: qult VERB [flags] [FILE]\n\n")
 	for _, v := range verbs {
-		fmt.Fprintf(w, "  %-9s %s\n", v.name, v.summary)
+		for i, l := range wrapWords(v.summary, textWidth-12) {
+			name := ""
+			if i == 0 {
+				name = v.name
+			}
+			fmt.Fprintf(w, "  %-9s %s\n", name, l)
+		}
 	}
 	fmt.Fprintf(w, "  %-9s %s\n", "help", "help for a verb, with an example: qult help VERB")
 	fmt.Fprintf(w, "\nFILE is a calc file in YAML or JSON; \"-\" reads standard input.\n")

@@ -16,6 +16,7 @@ import (
 	"strings"
 	"testing"
 	"time"
+	"unicode/utf8"
 )
 
 var update = flag.Bool("update", false, "rewrite the golden files under testdata/golden")
@@ -214,6 +215,12 @@ func TestGoldenVersionAndHelp(t *testing.T) {
 		t.Fatalf("help: exit %d", r.code)
 	}
 	golden(t, "help/qult.txt", []byte(r.stdout))
+	// help knows itself.
+	r = runQ(t, slow, "", "help", "help")
+	if r.code != 0 || !strings.Contains(r.stdout, "usage: qult help [VERB]") {
+		t.Errorf("help help: exit %d, output:\n%s%s", r.code, r.stdout, r.stderr)
+	}
+	golden(t, "help/help.txt", []byte(r.stdout))
 	for _, v := range verbs {
 		for _, args := range [][]string{{"help", v.name}, {v.name, "--help"}, {v.name, "-h"}} {
 			r := runQ(t, slow, "", args...)
@@ -225,5 +232,43 @@ func TestGoldenVersionAndHelp(t *testing.T) {
 			}
 			golden(t, "help/"+v.name+".txt", []byte(r.stdout))
 		}
+	}
+}
+
+// TestTextFits100 checks that every line of every text golden (the text
+// output of every verb, help included) takes at most 100 columns, counted
+// in runes. verify.txt is left out: package verify lays out its own table.
+func TestTextFits100(t *testing.T) {
+	files, err := filepath.Glob(filepath.Join("testdata", "golden", "*", "*.txt"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	top, _ := filepath.Glob(filepath.Join("testdata", "golden", "*.txt"))
+	files = append(files, top...)
+	if len(files) < 30 {
+		t.Fatalf("found %d text goldens, want the whole set", len(files))
+	}
+	for _, f := range files {
+		if filepath.Base(f) == "verify.txt" {
+			continue
+		}
+		data, err := os.ReadFile(f)
+		if err != nil {
+			t.Fatal(err)
+		}
+		for i, l := range strings.Split(string(data), "\n") {
+			if n := utf8.RuneCountInString(l); n > 100 {
+				t.Errorf("%s:%d: %d columns: %q", f, i+1, n, l)
+			}
+		}
+	}
+	// --wide keeps the old layout: one line per table row.
+	r := runQ(t, slow, "", "capacity", "--wide", examplePath("abutment-hpile-us"))
+	widest := 0
+	for _, l := range strings.Split(r.stdout, "\n") {
+		widest = max(widest, utf8.RuneCountInString(l))
+	}
+	if r.code != 0 || widest <= 100 {
+		t.Errorf("capacity --wide: exit %d, widest line %d columns, want more than 100", r.code, widest)
 	}
 }

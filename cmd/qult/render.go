@@ -22,7 +22,7 @@ var (
 // render writes res in format for view, in display system sys, through
 // package report. The date is left to the calc file (none is made up), so
 // that the same file gives the same output.
-func render(w io.Writer, res *calc.Result, format string, view report.View, sys units.System) error {
+func render(w io.Writer, res *calc.Result, format string, view report.View, sys units.System, wide bool, paper report.Paper) error {
 	switch format {
 	case "records":
 		return report.WriteRecords(w, res, report.Options{Units: report.UnitsOf(sys), View: view})
@@ -33,8 +33,8 @@ func render(w io.Writer, res *calc.Result, format string, view report.View, sys 
 	if err != nil {
 		return err
 	}
-	o := report.Options{Units: report.UnitsOf(sys), View: view}
-	if view == report.ViewReport || f == report.JSON { // the package's title block, and the whole result in JSON
+	o := report.Options{Units: report.UnitsOf(sys), View: view, Wide: wide, Paper: paper}
+	if view == report.ViewReport || f == report.JSON || f == report.PDF { // the package's title block, and the whole result in JSON
 		o.Verification = verificationLine()
 	}
 	return report.Write(w, res, f, o)

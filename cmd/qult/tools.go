@@ -72,12 +72,14 @@ type toolOpts struct {
 	format string
 	units  string
 	out    string
+	wide   bool
 }
 
 func (o *toolOpts) register(fs *flag.FlagSet) {
 	fs.StringVar(&o.format, "format", "text", "output `format`: "+toolFormats)
 	fs.StringVar(&o.units, "units", "SI", "unit `system` for bare numbers and for display: SI or US")
 	fs.StringVar(&o.out, "o", "", "write the output to `FILE` instead of standard output")
+	fs.BoolVar(&o.wide, "wide", false, "text: lay tables and notes out at their natural width instead of fitting 100 columns")
 }
 
 func (c *cmd) toolSetup(o *toolOpts, pos []string) (units.System, bool) {
@@ -255,7 +257,7 @@ func runPhase(c *cmd, args []string) int {
 		return exitUsage
 	}
 	var buf bytes.Buffer
-	writePhase(&buf, o.format, st, isGiven, sys)
+	writePhase(&buf, o.format, st, isGiven, sys, o.wide)
 	return c.output(o.out, &buf)
 }
 
@@ -285,7 +287,7 @@ func phaseMsg(e error) string {
 	return msg
 }
 
-func writePhase(b *bytes.Buffer, format string, st phase.State, isGiven phase.Set, sys units.System) {
+func writePhase(b *bytes.Buffer, format string, st phase.State, isGiven phase.Set, sys units.System, wide bool) {
 	type row struct {
 		sym, name string
 		v         float64
@@ -339,10 +341,10 @@ func writePhase(b *bytes.Buffer, format string, st phase.State, isGiven phase.Se
 		}
 		t.add(r.sym, r.name, sig(r.v, 4), r.unit, src)
 	}
-	emit(b, format, &t)
+	emit(b, format, &t, wide)
 }
 
-func emit(b *bytes.Buffer, format string, t *table) {
+func emit(b *bytes.Buffer, format string, t *table, wide bool) {
 	switch format {
 	case "csv":
 		t.csv(b)
@@ -351,8 +353,9 @@ func emit(b *bytes.Buffer, format string, t *table) {
 		t.md(b)
 		b.WriteString("\n" + calc.CautionLine + "\n")
 	default:
-		t.text(b)
-		b.WriteString("\n" + calc.CautionLine + "\n")
+		t.text(b, wide)
+		b.WriteString("\n")
+		hanging(b, calc.CautionLine, "", wide)
 	}
 }
 
@@ -454,11 +457,11 @@ func runFactors(c *cmd, args []string) int {
 	}
 	rows := bearing.Compare(in)
 	var buf bytes.Buffer
-	writeFactors(&buf, o.format, rows, sys)
+	writeFactors(&buf, o.format, rows, sys, o.wide)
 	return c.output(o.out, &buf)
 }
 
-func writeFactors(b *bytes.Buffer, format string, rows []bearing.Row, sys units.System) {
+func writeFactors(b *bytes.Buffer, format string, rows []bearing.Row, sys units.System, wide bool) {
 	su := sys.Unit(units.DimStress)
 	stress := func(s units.Stress) float64 { v, _ := sys.In(float64(s), units.DimStress); return v }
 	if format == "json" {
@@ -478,11 +481,12 @@ func writeFactors(b *bytes.Buffer, format string, rows []bearing.Row, sys units.
 		}
 		p := func(x float64) *json.Number { n := jsonNum(x); return &n }
 		out := struct {
-			Schema      string `json:"schema"`
-			Units       string `json:"units"`
-			StressUnits string `json:"stress_unit"`
-			Methods     []jrow `json:"methods"`
-		}{Schema: "qult.factors/1", Units: sys.String(), StressUnits: su, Methods: []jrow{}}
+			Schema      string   `json:"schema"`
+			Units       string   `json:"units"`
+			StressUnits string   `json:"stress_unit"`
+			Methods     []jrow   `json:"methods"`
+			Cautions    []string `json:"cautions"`
+		}{Schema: "qult.factors/1", Units: sys.String(), StressUnits: su, Methods: []jrow{}, Cautions: calc.CautionText()}
 		for _, r := range rows {
 			j := jrow{Method: r.ID, Equation: r.Equation, Range: r.Range}
 			if r.Err != nil {
@@ -514,15 +518,21 @@ func writeFactors(b *bytes.Buffer, format string, rows []bearing.Row, sys units.
 	}
 	t := table{header: []string{"method", "Nq", "Nc", "Irr", "qp before limit (" + su + ")", "limit (" + su + ")", "qp (" + su + ")", "note"},
 		right: []bool{false, true, true, true, true, true, true}}
+	// A missing number is "–" in text and Markdown, an empty field in CSV
+	// (which a spreadsheet reads as blank, not as text).
+	missing := "–"
+	if format == "csv" {
+		missing = ""
+	}
 	opt := func(x float64) string {
 		if x == 0 {
-			return "–"
+			return missing
 		}
 		return sig(x, 4)
 	}
 	for _, r := range rows {
 		if r.Err != nil {
-			t.add(r.ID, "–", "–", "–", "–", "–", "–", "not applied: "+strings.TrimPrefix(r.Err.Error(), "bearing: "))
+			t.add(r.ID, missing, missing, missing, missing, missing, missing, "not applied: "+strings.TrimPrefix(r.Err.Error(), "bearing: "))
 			continue
 		}
 		res := r.Result
@@ -541,14 +551,14 @@ func writeFactors(b *bytes.Buffer, format string, rows []bearing.Row, sys units.
 		b.WriteString("no method applies to the values given\n")
 		return
 	}
-	emit(b, format, &t)
+	emit(b, format, &t, wide)
 	if format == "text" || format == "md" {
 		b.WriteString("\n")
 		for _, r := range rows {
 			if format == "md" {
 				fmt.Fprintf(b, "- `%s`: %s (accepts %s)\n", r.ID, r.Equation, r.Range)
 			} else {
-				fmt.Fprintf(b, "%s: %s (accepts %s)\n", r.ID, r.Equation, r.Range)
+				hanging(b, fmt.Sprintf("%s: %s (accepts %s)", r.ID, r.Equation, r.Range), "    ", wide)
 			}
 		}
 	}

@@ -1,0 +1,208 @@
+package calc
+
+import (
+	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/pile"
+	"github.com/qultgeo/qult/profile"
+	"github.com/qultgeo/qult/shaft"
+	"github.com/qultgeo/qult/units"
+)
+
+// Comparison is the shaft and tip resistance of the same pile in the same
+// ground by every applicable method of the catalogues that needs no key
+// of its own: each shaft method applied to every embedded layer of its
+// drainage class (the other layers keep the file's methods), each tip
+// method applied to every layer of the bearing layer's class. The rules
+// of the run (limits, critical depth, tip rules, zones without friction,
+// layers whose shaft is set to none) stay as the file chose them.
+type Comparison struct {
+	// Shaft holds one group per drainage class of the embedded layers
+	// (drained first); Tip one group for the bearing layer's class.
+	Shaft []CompareGroup
+	Tip   []CompareGroup
+}
+
+// CompareGroup is the methods of one drainage class.
+type CompareGroup struct {
+	Drainage string // "drained" or "undrained"
+	// Layers names the layers the methods were applied to.
+	Layers []string
+	Rows   []CompareRow
+}
+
+// CompareRow is one method's result.
+type CompareRow struct {
+	Method   string // catalogue identifier
+	Equation string
+	// Force is Qs of the group's layers (shaft) or Qp (tip); Total is the
+	// shaft Qs of every layer (shaft groups) or the compression Rc (tip
+	// groups), with the other choices as in the file.
+	Force, Total units.Force
+	// Chosen marks the method the file uses for every layer of the group.
+	Chosen bool
+	// NotApplied says why the method gave no value (its range, a missing
+	// input); Force and Total are then zero.
+	NotApplied string
+}
+
+// Spread returns the least and greatest Force of the rows that gave a
+// value, and how many did; n < 1 means none did.
+func (g CompareGroup) Spread() (lo, hi units.Force, n int) {
+	for _, r := range g.Rows {
+		if r.NotApplied != "" {
+			continue
+		}
+		if n == 0 || r.Force < lo {
+			lo = r.Force
+		}
+		if n == 0 || r.Force > hi {
+			hi = r.Force
+		}
+		n++
+	}
+	return lo, hi, n
+}
+
+// compare computes the Comparison of pile p in prof with the file's
+// methods m; b is the file's own breakdown (for the methods chosen).
+func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdown) *Comparison {
+	layers := prof.Layers()
+	embedded := map[int]bool{}
+	for _, r := range b.Rows {
+		embedded[r.Layer] = true
+	}
+	surf := p.Surface
+	if surf == 0 {
+		surf = pile.DefaultSurface(p.Section, p.Installation)
+	}
+	// withLayers returns m with the layers of class cls set by set.
+	withLayers := func(cls profile.Drainage, set func(lm *pile.LayerMethods)) pile.Methods {
+		mm := m
+		mm.Layers = make([]pile.LayerMethods, len(layers))
+		copy(mm.Layers, m.Layers)
+		for i, l := range layers {
+			if l.Drainage == cls {
+				set(&mm.Layers[i])
+			}
+		}
+		return mm
+	}
+	out := &Comparison{}
+	for _, cls := range []profile.Drainage{profile.Drained, profile.Undrained} {
+		g := CompareGroup{Drainage: cls.String()}
+		for i, l := range layers {
+			if l.Drainage == cls && embedded[i] {
+				g.Layers = append(g.Layers, l.Name)
+			}
+		}
+		if len(g.Layers) == 0 {
+			continue
+		}
+		chosen := ""
+		for _, r := range b.Rows {
+			if r.Drainage != cls || r.Method == "none" {
+				continue
+			}
+			if chosen == "" {
+				chosen = r.Method
+			} else if chosen != r.Method {
+				chosen = "-" // mixed: no single method is marked
+			}
+		}
+		for _, d := range shaft.Methods() {
+			if !shaftApplies(d, cls) {
+				continue
+			}
+			row := CompareRow{Method: d.ID, Equation: d.Equation(), Chosen: d.ID == chosen}
+			c, err := d.New(shaft.Values{Installation: p.Installation, Surface: surf})
+			if err == nil {
+				mm := withLayers(cls, func(lm *pile.LayerMethods) {
+					if lm.NoShaft {
+						return // the engineer's choice of no friction stays
+					}
+					lm.Shaft, lm.Lambda, lm.LambdaValue = nil, false, 0
+					if d.Kind == shaft.WholePile {
+						lm.Lambda = true
+					} else {
+						lm.Shaft = c.Unit
+					}
+				})
+				var bd pile.Breakdown
+				if bd, err = breakdownOf(prof, p, mm); err == nil {
+					for _, r := range bd.Rows {
+						if r.Drainage == cls {
+							row.Force += r.Force
+						}
+					}
+					row.Total = bd.Shaft
+				}
+			}
+			if err != nil {
+				row = CompareRow{Method: d.ID, Equation: d.Equation(), Chosen: row.Chosen, NotApplied: err.Error()}
+			}
+			g.Rows = append(g.Rows, row)
+		}
+		out.Shaft = append(out.Shaft, g)
+	}
+	// Tip: the bearing layer's class.
+	tl := b.Tip.Layer
+	if tl >= 0 && tl < len(layers) {
+		cls := layers[tl].Drainage
+		g := CompareGroup{Drainage: cls.String(), Layers: []string{layers[tl].Name}}
+		for _, d := range bearing.Methods() {
+			if string(d.Drainage) != cls.String() || requiresKey(d.Params) {
+				continue
+			}
+			row := CompareRow{Method: d.ID, Equation: d.Equation(), Chosen: d.ID == b.Tip.Method}
+			t, err := d.New(nil)
+			if err == nil {
+				mm := withLayers(cls, func(lm *pile.LayerMethods) { lm.Tip = t })
+				var a *pile.Analysis
+				if a, err = pile.NewAnalysis(prof, p, mm, nil); err == nil {
+					var k pile.Capacity
+					if k, err = a.Capacity(); err == nil {
+						row.Force, row.Total = k.Tip, k.Compression
+					}
+				}
+			}
+			if err != nil {
+				row = CompareRow{Method: d.ID, Equation: d.Equation(), Chosen: row.Chosen, NotApplied: err.Error()}
+			}
+			g.Rows = append(g.Rows, row)
+		}
+		out.Tip = append(out.Tip, g)
+	}
+	return out
+}
+
+// shaftApplies reports whether shaft method d is compared in layers of
+// class cls: written for the class (or for any layer by effective stress),
+// needing no key of its own, and giving resistance.
+func shaftApplies(d shaft.Descriptor, cls profile.Drainage) bool {
+	if d.Kind == shaft.NoResistance {
+		return false
+	}
+	for _, p := range d.Params {
+		if p.Required {
+			return false
+		}
+	}
+	return d.Drainage == shaft.AnyLayers || string(d.Drainage) == cls.String()
+}
+
+func requiresKey(ps []bearing.Param) bool {
+	for _, p := range ps {
+		if p.Required {
+			return true
+		}
+	}
+	return false
+}
+
+func breakdownOf(prof *profile.Profile, p pile.Pile, m pile.Methods) (pile.Breakdown, error) {
+	a, err := pile.NewAnalysis(prof, p, m, nil)
+	if err != nil {
+		return pile.Breakdown{}, err
+	}
+	return a.Breakdown()
+}
