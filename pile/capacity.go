@@ -287,7 +287,7 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 		}
 	}
 	var tr tipResult
-	if err := a.tipAt(t, &tr, nil, s.k); err != nil {
+	if err := a.tipQuick(t, &tr, s.k); err != nil {
 		return err
 	}
 	qp := tr.qp

@@ -281,25 +281,5 @@ func (a *Analysis) WithDepth(from, to, step units.Length, dst []Capacity) ([]Cap
 	if n > 1e6 {
 		return dst, fmt.Errorf("pile: %d depths asked for; at most 1e6", n)
 	}
-	var s sums
-	prev := float64(head)
-	for i := 0; i <= n; i++ {
-		z := float64(from) + float64(i)*float64(step)
-		if i == n {
-			if float64(to)-prev <= 1e-9*float64(step) {
-				break
-			}
-			z = float64(to)
-		}
-		z = min(z, float64(to))
-		if err := a.addShaft(&s, prev, z); err != nil {
-			return dst, err
-		}
-		prev = z
-		dst = append(dst, Capacity{})
-		if err := a.finish(&s, z, &dst[len(dst)-1]); err != nil {
-			return dst[:len(dst)-1], err
-		}
-	}
-	return dst, nil
+	return a.withDepth(float64(from), float64(step), float64(to), n, dst)
 }
