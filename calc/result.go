@@ -61,6 +61,9 @@ type Result struct {
 	// serviceability check (ServiceabilityPass).
 	Settlement *SettlementResult
 	LoadTest   *LoadTestResult
+	// Reliability is the probabilistic capacity (nil without a
+	// reliability section).
+	Reliability *ReliabilityResult
 
 	Warnings []string
 	Sources  []cite.Source

@@ -1,7 +1,6 @@
 package pile
 
 import (
-	"fmt"
 	"math"
 
 	"github.com/qultgeo/qult/profile"
@@ -108,14 +107,14 @@ func (p *depthPlan) alphaAPIF(s float64) float64 {
 }
 
 // closedPart adds to s the shaft of closed interval k from z0 to z1
-// (z0 < z1, both in it): the integral, its factored forms, the pile's
-// weight and the flags, as segment does.
+// (z0 < z1, both in it): the integral, its factored forms and the flags,
+// as segment does. The pile's weight is the caller's: it is summed step by
+// step, as Capacity sums it, so that it is the same to the last bit.
 func (a *Analysis) closedPart(s *sums, k int, z0, z1 float64) {
 	iv := &a.iv[k]
 	lp := &a.plans[iv.layer]
 	p := &a.dp[k]
 	h := z1 - z0
-	s.weight += a.pileWeight(z0, z1)
 	if lp.drilledOff {
 		s.flags |= DrilledZonesOff
 	}
@@ -195,6 +194,7 @@ func (a *Analysis) withDepth(from, step, to float64, n int, dst []Capacity) ([]C
 				if open != k {
 					open, openFrom = k, top
 				}
+				s.weight += a.pileWeight(top, bot)
 				if bot < iv.bot {
 					break // z lies inside: the interval stays open
 				}
@@ -270,9 +270,9 @@ func (a *Analysis) tipQuick(z float64, out *tipResult, hint int) error {
 		}
 		out.qp, out.upper, out.embed = q, upper, embed
 	}
-	out.weak = weakInfo{}
+	out.weak = weakInfo{} // not filled: only the breakdown reads it, through tipAt
 	if p.nextTop < z+WeakZoneRatio*d {
-		q, err := a.weakRule(li, z, out.qp, &out.flags, &out.weak)
+		q, err := a.weakRule(li, z, out.qp, &out.flags, nil)
 		if err != nil {
 			return err
 		}
@@ -290,5 +290,3 @@ func (a *Analysis) tipQuick(z float64, out *tipResult, hint int) error {
 	}
 	return nil
 }
-
-var _ = fmt.Sprint

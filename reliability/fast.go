@@ -50,6 +50,8 @@ type fastModel struct {
 	plug                pile.Plug
 	selfWeight          pile.SelfWeight
 	gp                  float64 // pile unit weight
+	byLayer             [][]int // indices of the targets of each layer
+	global              []int   // indices of the targets of the whole calculation
 }
 
 func (pm *PileModel) newFast() (*fastModel, bool) {
@@ -136,6 +138,14 @@ func (pm *PileModel) newFast() (*fastModel, bool) {
 	if f.tipLayer < 0 {
 		return nil, false
 	}
+	f.byLayer = make([][]int, len(f.lay))
+	for i, t := range f.targets {
+		if t.Layer < 0 {
+			f.global = append(f.global, i)
+		} else {
+			f.byLayer[t.Layer] = append(f.byLayer[t.Layer], i)
+		}
+	}
 	return f, true
 }
 
@@ -147,9 +157,9 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 	// the few that change, kept in w as overrides applied below.
 	zw := f.zw
 	ft, fs := 1.0, 1.0
-	for i, t := range f.targets {
-		if t.Layer < 0 {
-			switch t.Key {
+	for _, i := range f.global {
+		{
+			switch f.targets[i].Key {
 			case KeyWaterDepth:
 				zw = x[i]
 			case KeyTipFactor:
@@ -171,12 +181,9 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 	zt := f.tip
 	for li := range f.lay {
 		L := f.lay[li] // a copy: the sample's values replace the base ones
-		for i, t := range f.targets {
-			if t.Layer != li {
-				continue
-			}
+		for _, i := range f.byLayer[li] {
 			v := x[i]
-			switch t.Key {
+			switch f.targets[i].Key {
 			case KeyFrictionAngle:
 				L.phi = v
 			case KeyUndrainedStrength:

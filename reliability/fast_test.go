@@ -80,7 +80,7 @@ func TestPropFastMatchesFull(t *testing.T) {
 			p.Plug = rapid.SampledFrom([]pile.Plug{pile.PlugLesser, pile.Unplugged}).Draw(rt, "plug")
 		}
 		meth := pile.Methods{LayeredTip: true, Layers: lms, SelfWeight: rapid.SampledFrom([]pile.SelfWeight{pile.WeightIgnored, pile.WeightNet, pile.WeightGross}).Draw(rt, "self weight")}
-		pm, err := NewPileModel(spec, p, meth, targets, base)
+		pm, err := NewPileModel(spec, p, meth, targets)
 		if err != nil {
 			rt.Fatal(err)
 		}

@@ -25,7 +25,7 @@ const BlockSize = 4096
 const MaxSamples = 10_000_000
 
 // DefaultSamples is the number of samples when Options.Samples is 0.
-const DefaultSamples = 100_000
+const DefaultSamples = 10_000
 
 // Options control a Monte Carlo run.
 type Options struct {
@@ -215,7 +215,7 @@ type SampleError struct {
 }
 
 func (e *SampleError) Error() string {
-	return fmt.Sprintf("reliability: sample %d (%s): %v; no sample is clamped or dropped: give bounds inside the accepted range (a truncated normal) or a smaller spread", e.Sample, e.Values, e.Err)
+	return fmt.Sprintf("reliability: sample %d (in SI units: %s): %v; no sample is clamped or dropped: give bounds inside the accepted range (a truncated normal) or a smaller spread", e.Sample, e.Values, e.Err)
 }
 
 func (e *SampleError) Unwrap() error { return e.Err }

@@ -95,13 +95,10 @@ type PileModel struct {
 
 // NewPileModel prepares the model. The targets are checked against the
 // inputs (a layer that exists, a key its method reads); the error names
-// the target by its index ("targets[2].key"). base gives each target's
-// value at which the closed form, if eligible, is checked against the full
-// computation (usually the parameters' means).
-func NewPileModel(ground profile.Spec, p pile.Pile, m pile.Methods, targets []Target, base []float64) (*PileModel, error) {
-	if len(base) != len(targets) {
-		return nil, fmt.Errorf("reliability: %d base values for %d targets", len(base), len(targets))
-	}
+// the target by its index ("targets[2].key"). The closed form, where it
+// applies, is checked against the full computation at the inputs' own
+// values (Base).
+func NewPileModel(ground profile.Spec, p pile.Pile, m pile.Methods, targets []Target) (*PileModel, error) {
 	pm := &PileModel{ground: ground, pile: p, methods: m, targets: slices.Clone(targets)}
 	pm.ground.Layers = slices.Clone(ground.Layers)
 	pm.methods.Layers = slices.Clone(m.Layers)
@@ -120,6 +117,7 @@ func NewPileModel(ground profile.Spec, p pile.Pile, m pile.Methods, targets []Ta
 			return nil, err
 		}
 	}
+	base := pm.Base()
 	g, err := pm.NewEvaluator()
 	if err != nil {
 		return nil, err
@@ -136,6 +134,78 @@ func NewPileModel(ground profile.Spec, p pile.Pile, m pile.Methods, targets []Ta
 		}
 	}
 	return pm, nil
+}
+
+// Base returns the value of each target in the inputs as given (the
+// deterministic calculation): for undrained_strength the su at mid-layer,
+// for a model factor 1.
+func (pm *PileModel) Base() []float64 {
+	out := make([]float64, len(pm.targets))
+	for i, t := range pm.targets {
+		if t.Layer < 0 {
+			out[i] = 1
+			if t.Key == KeyWaterDepth {
+				out[i] = float64(pm.ground.WaterDepth)
+			}
+			continue
+		}
+		ls, lm := &pm.ground.Layers[t.Layer], &pm.methods.Layers[t.Layer]
+		var v float64
+		switch t.Key {
+		case KeyFrictionAngle:
+			v = float64(ls.Phi)
+		case KeyUndrainedStrength:
+			v = float64(ls.Su)
+			if v == 0 {
+				v = float64(ls.SuTop+ls.SuBottom) / 2
+			}
+		case KeyUnitWeight:
+			v = float64(ls.UnitWeight)
+		case KeySaturatedUnitWeight:
+			v = float64(ls.SaturatedUnitWeight)
+		case KeyK, KeyKOverK0, KeyKOverKp, KeyDelta, KeyDeltaOverPhi:
+			b := unwrap(lm.Shaft).(shaft.Beta)
+			switch r := b.K.(type) {
+			case shaft.KGiven:
+				if t.Key == KeyK {
+					v = r.K
+				}
+			case shaft.KOverK0:
+				if t.Key == KeyKOverK0 {
+					v = r.Ratio
+				}
+			case shaft.KOverKp:
+				if t.Key == KeyKOverKp {
+					v = r.Ratio
+				}
+			}
+			switch r := b.Delta.(type) {
+			case shaft.DeltaGiven:
+				if t.Key == KeyDelta {
+					v = float64(r.Delta)
+				}
+			case shaft.DeltaOverPhi:
+				if t.Key == KeyDeltaOverPhi {
+					v = r.Ratio
+				}
+			}
+		case KeyBeta:
+			v = unwrap(lm.Shaft).(shaft.BetaGiven).Beta
+		case KeyAlpha:
+			v = unwrap(lm.Shaft).(shaft.AlphaGiven).Alpha
+		case KeyNq:
+			v = lm.Tip.(bearing.GivenNq).Nq
+		case KeyNc:
+			switch tp := lm.Tip.(type) {
+			case bearing.GivenNq:
+				v = tp.Nc
+			case bearing.GivenNc:
+				v = tp.Nc
+			}
+		}
+		out[i] = v
+	}
+	return out
 }
 
 // Fast reports whether the model computes in closed form (see PileModel).

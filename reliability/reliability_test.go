@@ -43,7 +43,7 @@ func clayCase(t testing.TB, sd float64) Problem {
 	p := pile.Pile{Section: pile.Section{Shape: pile.Circle, Diameter: 0.5 * m}, Length: 20 * m, Installation: pile.DrivenHigh}
 	meth := pile.Methods{LayeredTip: true, Layers: []pile.LayerMethods{{Shaft: shaft.AlphaGiven{Alpha: 0.6}, Tip: bearing.GivenNc{Nc: 9}}}}
 	targets := []Target{{Layer: 0, Key: KeyUndrainedStrength}}
-	pm, err := NewPileModel(spec, p, meth, targets, []float64{60e3})
+	pm, err := NewPileModel(spec, p, meth, targets)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -268,7 +268,7 @@ func TestZeroVariance(t *testing.T) {
 	}
 	targets := []Target{{0, KeyUndrainedStrength}, {1, KeyFrictionAngle}, {1, KeySaturatedUnitWeight}, {-1, KeyWaterDepth}}
 	base := []float64{40e3, float64(34 * deg), 20e3, 2}
-	pm, err := NewPileModel(spec, pl, meth, targets, base)
+	pm, err := NewPileModel(spec, pl, meth, targets)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -370,7 +370,7 @@ func TestSampleOutsideRange(t *testing.T) {
 	spec := twoLayers()
 	pl := pile.Pile{Section: pile.Section{Shape: pile.Circle, Diameter: 0.6 * m}, Length: 18 * m, Installation: pile.DrivenHigh}
 	for _, meth := range []pile.Methods{pile.DefaultMethods(), fastMethods()} {
-		pm, err := NewPileModel(spec, pl, meth, []Target{{1, KeyFrictionAngle}}, []float64{float64(34 * deg)})
+		pm, err := NewPileModel(spec, pl, meth, []Target{{1, KeyFrictionAngle}})
 		if err != nil {
 			t.Fatal(err)
 		}

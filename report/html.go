@@ -84,6 +84,9 @@ func addFigures(d *doc, r *calc.Result, o Options) error {
 		if err := settleFigures(s, r, c); err != nil {
 			return err
 		}
+		if err := reliabilityFigures(s, r, c); err != nil {
+			return err
+		}
 	}
 	if o.View == ViewReport && len(r.Source) > 0 {
 		in := section{heading: "Inputs as entered", blocks: []block{{pre: string(r.Source)}}}

@@ -77,11 +77,15 @@ const (
 	// predicted load-settlement curve, the axial load with depth and the
 	// load test read by its criteria.
 	ViewSettle
+	// ViewReliability is the probabilistic capacity: the uncertain
+	// parameters, Monte Carlo and FOSM estimates, the sensitivity ranking.
+	ViewReliability
 )
 
-var viewNames = [...]string{ViewCheck: "check", ViewCapacity: "capacity", ViewLength: "length", ViewReport: "report", ViewSettle: "settle"}
+var viewNames = [...]string{ViewCheck: "check", ViewCapacity: "capacity", ViewLength: "length", ViewReport: "report", ViewSettle: "settle", ViewReliability: "reliability"}
 
-// String returns "check", "capacity", "length", "report" or "settle".
+// String returns "check", "capacity", "length", "report", "settle" or
+// "reliability".
 func (v View) String() string {
 	if v >= 0 && int(v) < len(viewNames) {
 		return viewNames[v]
@@ -96,7 +100,7 @@ func ParseView(s string) (View, error) {
 			return View(i), nil
 		}
 	}
-	return 0, fmt.Errorf("report: view %q: want check, capacity, length, report or settle", s)
+	return 0, fmt.Errorf("report: view %q: want check, capacity, length, report, settle or reliability", s)
 }
 
 // Options set how a result is rendered. The zero value renders the check
@@ -128,8 +132,8 @@ func Write(w io.Writer, r *calc.Result, f Format, o Options) error {
 	if o.Units != units.SI && o.Units != units.US {
 		return fmt.Errorf("report: unit system %v: want SI or US", o.Units)
 	}
-	if o.View < ViewCheck || o.View > ViewSettle {
-		return fmt.Errorf("report: view %v: want check, capacity, length, report or settle", o.View)
+	if o.View < ViewCheck || o.View > ViewReliability {
+		return fmt.Errorf("report: view %v: want check, capacity, length, report, settle or reliability", o.View)
 	}
 	bw := bufio.NewWriterSize(w, 32<<10)
 	var err error
