@@ -290,13 +290,21 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	if err := a.tipQuick(t, &tr, s.k); err != nil {
 		return err
 	}
+	a.assemble(c, &tr, outer, design, tension, uplift, s.weight, s.flags|lamFlags|zoneFlags)
+	return nil
+}
+
+// assemble sets c from the shaft integrals (outer, design, tension and
+// uplift, N/m), the pile's weight w′, the flags of the shaft and the tip:
+// the plug modes, self-weight, compression and tension.
+func (a *Analysis) assemble(c *Capacity, tr *tipResult, outer, design, tension, uplift, weight float64, flags Flags) {
 	qp := tr.qp
 	if a.methods.SelfWeight == WeightNet {
 		qp = max(0, qp-tr.sigma)
 	}
 	c.UnitTip = units.Stress(qp)
-	c.Flags = s.flags | tr.flags | lamFlags | zoneFlags
-	c.Weight = units.Force(s.weight)
+	c.Flags = flags | tr.flags
+	c.Weight = units.Force(weight)
 	// Modes: plugged (gross area, outer perimeter) and unplugged (material
 	// area, outer plus inner perimeter).
 	plTip, plShaft := qp*a.gross, outer*a.outer
@@ -330,7 +338,7 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	c.Compression = c.Tip + c.Shaft
 	if a.methods.SelfWeight == WeightGross {
 		c.Compression -= c.Weight
-		desC -= s.weight
+		desC -= weight
 		if c.Compression < 0 {
 			c.Flags |= WeightExceedsResistance
 		}
@@ -338,8 +346,7 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	c.TensionShaft = units.Force(tenShaft)
 	c.Tension = c.TensionShaft + c.Weight
 	c.DesignCompression = units.Force(desC)
-	c.DesignTension = units.Force(tenDes + a.upliftWeight()*s.weight)
-	return nil
+	c.DesignTension = units.Force(tenDes + a.upliftWeight()*weight)
 }
 
 // tipResult is the unit tip resistance at a depth with what made it.

@@ -28,6 +28,14 @@ type depthPlan struct {
 	// the embedment ramp or the layered rule can apply (−1: neither can),
 	// and the top of the next layer (+Inf: none).
 	zoneTop, zoneLen, nextTop float64
+	// run: a depth inside the interval needs nothing but the closed form,
+	// the tip model and the rules' checks (closed, quickTip, no drilled
+	// zones); withDepth then takes it in its tight loop.
+	run bool
+	// Constants of the tight loop: the flags of every segment of the
+	// interval, the tip model's own, the tension factor of the layer.
+	shaftFlags, tipFlags Flags
+	tension              float64
 }
 
 // prepareDepth fills the depth plan of every interval.
@@ -68,6 +76,20 @@ func (a *Analysis) prepareDepth() {
 		if lp.lambda || lp.noShaft || iv.noShaft || iv.check || (a.useCase && (lp.fShaft == 0 || lp.fTension == 0)) {
 			continue
 		}
+		if lp.drilledOff {
+			p.shaftFlags |= DrilledZonesOff
+		}
+		if iv.drilledTop {
+			p.shaftFlags |= DrilledZones
+		}
+		if iv.held {
+			p.shaftFlags |= CriticalDepthApplied
+		}
+		if lp.kind == kindBeta || lp.kind == kindAlpha {
+			p.shaftFlags |= shaftFlags(lp.flags)
+		}
+		p.tipFlags = tipFlags(lp.tm.flags)
+		p.tension = a.tension.For(lp.layer.Drainage)
 		switch lp.kind {
 		case kindBeta, kindAlpha:
 			p.closed = true
@@ -84,6 +106,7 @@ func (a *Analysis) prepareDepth() {
 				p.su75 = p.su5 * math.Sqrt(p.su5)
 			}
 		}
+		p.run = p.closed && p.quickTip && !a.drilled
 	}
 }
 
@@ -114,44 +137,99 @@ func (a *Analysis) closedPart(s *sums, k int, z0, z1 float64) {
 	iv := &a.iv[k]
 	lp := &a.plans[iv.layer]
 	p := &a.dp[k]
-	h := z1 - z0
-	if lp.drilledOff {
-		s.flags |= DrilledZonesOff
-	}
-	if iv.drilledTop {
-		s.flags |= DrilledZones
-	}
-	if iv.held {
-		s.flags |= CriticalDepthApplied
-	}
-	s0, s1 := iv.sigma(z0), iv.sigma(z1)
-	var q float64
-	switch lp.kind {
-	case kindBeta:
-		v, capped := linearIntegral(lp.coef, s0, s1, float64(lp.cap), h)
-		q = v
-		if capped {
-			s.flags |= ShaftLimit
-		}
-		s.flags |= shaftFlags(lp.flags)
-	case kindAlpha:
-		v, capped := linearIntegral(lp.coef, float64(lp.suAt(units.Length(z0))), float64(lp.suAt(units.Length(z1))), float64(lp.cap), h)
-		q = v
-		if capped {
-			s.flags |= ShaftLimit
-		}
-		s.flags |= shaftFlags(lp.flags)
-	case kindAlphaAPI:
-		q = (p.alphaAPIF(s1) - p.alphaAPIF(s0)) / iv.ds
-		if max(s0, s1) > 4*p.su {
-			s.flags |= BoundApplied
-		}
-	}
-	t := a.tension.For(lp.layer.Drainage)
+	q, fl := a.closedIntegral(k, z0, z1)
+	s.flags |= fl
+	t := p.tension
 	s.outer += q
 	s.design += lp.fShaft * q
 	s.tension += lp.fTension * t * q
 	s.uplift += t * q
+}
+
+// closedIntegral returns the shaft integral of closed interval k from z0
+// to z1 and the flags of the segment.
+func (a *Analysis) closedIntegral(k int, z0, z1 float64) (float64, Flags) {
+	iv := &a.iv[k]
+	lp := &a.plans[iv.layer]
+	p := &a.dp[k]
+	fl := p.shaftFlags
+	s0, s1 := iv.sigma(z0), iv.sigma(z1)
+	var q float64
+	switch lp.kind {
+	case kindBeta:
+		v, capped := linearIntegral(lp.coef, s0, s1, float64(lp.cap), z1-z0)
+		q = v
+		if capped {
+			fl |= ShaftLimit
+		}
+	case kindAlpha:
+		v, capped := linearIntegral(lp.coef, float64(lp.suAt(units.Length(z0))), float64(lp.suAt(units.Length(z1))), float64(lp.cap), z1-z0)
+		q = v
+		if capped {
+			fl |= ShaftLimit
+		}
+	case kindAlphaAPI:
+		q = (p.alphaAPIF(s1) - p.alphaAPIF(s0)) / iv.ds
+		if max(s0, s1) > 4*p.su {
+			fl |= BoundApplied
+		}
+	}
+	return q, fl
+}
+
+// runDepth is one depth z of the tight loop: inside run interval k
+// (prev < z < its bottom), with the committed sums s (the pile's weight
+// already to z) and the interval open from openFrom. It gives what
+// closedPart, finish and tipQuick give, without their general cases.
+func (a *Analysis) runDepth(s *sums, k int, openFrom, z float64, c *Capacity) error {
+	iv := &a.iv[k]
+	p := &a.dp[k]
+	lp := &a.plans[iv.layer]
+	q, fl := a.closedIntegral(k, openFrom, z)
+	// The tip, as tipQuick (the interval holds z, above its bottom).
+	var tr tipResult
+	sv := iv.e0 + iv.de*(z-iv.top)
+	var su float64
+	if lp.tm.useSu && lp.layer.HasSu {
+		su = float64(lp.suAt(min(max(units.Length(z), lp.layer.Top), lp.layer.Bottom)))
+	}
+	_, qp, limited := lp.tm.eval(sv, su)
+	tr.layer, tr.qp, tr.sigma, tr.f = iv.layer, qp, sv, lp.fTip
+	tr.flags = p.tipFlags
+	if limited {
+		tr.flags |= TipLimit
+	}
+	d := a.size
+	if z-p.zoneTop < p.zoneLen {
+		v, _, _, err := a.baseRules(iv.layer, z, tr.qp, &tr.flags)
+		if err != nil {
+			return err
+		}
+		tr.qp = v
+	}
+	if p.nextTop < z+WeakZoneRatio*d {
+		v, err := a.weakRule(iv.layer, z, tr.qp, &tr.flags, nil)
+		if err != nil {
+			return err
+		}
+		tr.qp = v
+	}
+	li := iv.layer
+	if z-float64(lp.layer.Top) < d && li > 0 || float64(lp.layer.Bottom)-z < d && li < len(a.plans)-1 {
+		tr.flags |= TipNearBoundary
+	}
+	if p.nextTop < z+a.weakBelow*d {
+		for j := li + 1; j < len(a.plans) && float64(a.plans[j].layer.Top) < z+a.weakBelow*d; j++ {
+			if a.plans[j].errTop != nil || a.plans[j].qpTop < tr.qp {
+				tr.flags |= WeakBelow
+				break
+			}
+		}
+	}
+	t := p.tension
+	c.TipDepth = units.Length(z)
+	a.assemble(c, &tr, s.outer+q, s.design+lp.fShaft*q, s.tension+lp.fTension*t*q, s.uplift+t*q, s.weight, s.flags|fl)
+	return nil
 }
 
 // withDepth is WithDepth after its checks: one pass down the pile. The
@@ -174,6 +252,17 @@ func (a *Analysis) withDepth(from, step, to float64, n int, dst []Capacity) ([]C
 			z = to
 		}
 		z = min(z, to)
+		// The tight loop: z inside the open interval, which is a run
+		// interval, with no λ layer above.
+		if open >= 0 && z > prev && z < a.iv[open].bot && a.dp[open].run && s.lamLen == 0 {
+			s.weight += a.pileWeight(prev, z)
+			prev = z
+			dst = append(dst, Capacity{})
+			if err := a.runDepth(&s, open, openFrom, z, &dst[len(dst)-1]); err != nil {
+				return dst[:len(dst)-1], err
+			}
+			continue
+		}
 		// Intervals between prev and z.
 		for ; k < len(a.iv) && a.iv[k].top < z; k++ {
 			iv := &a.iv[k]
