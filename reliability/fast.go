@@ -179,8 +179,14 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 	var qp, svTip float64
 	nq, nc := f.tipNq, f.tipNc
 	zt := f.tip
+	zwSampled := zw != f.zw
+	var own fastLayer
 	for li := range f.lay {
-		L := f.lay[li] // a copy: the sample's values replace the base ones
+		L := &f.lay[li]
+		if len(f.byLayer[li]) > 0 {
+			own = *L // a copy: the sample's values replace the base ones
+			L = &own
+		}
 		for _, i := range f.byLayer[li] {
 			v := x[i]
 			switch f.targets[i].Key {
@@ -193,10 +199,15 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 					mid := (L.su0 + L.su1) / 2
 					L.su0, L.su1 = L.su0*(v/mid), L.su1*(v/mid)
 				}
-			case KeyUnitWeight:
-				L.gamma = v
-			case KeySaturatedUnitWeight:
-				L.gsat = v
+			case KeyUnitWeight, KeySaturatedUnitWeight:
+				if !(v > 0) { // as the full computation refuses it
+					return Outcome{}, &FieldError{Path: fmt.Sprintf("layers[%d].%s", li, f.targets[i].Key), Msg: fmt.Sprintf("%.6g kN/m3 is outside (0, 35]", v/1e3)}
+				}
+				if f.targets[i].Key == KeyUnitWeight {
+					L.gamma = v
+				} else {
+					L.gsat = v
+				}
 			case KeyK:
 				L.k = v
 			case KeyDelta, KeyDeltaOverPhi:
@@ -215,8 +226,15 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 				}
 			}
 		}
-		if err := f.check(li, &L, zw); err != nil {
-			return Outcome{}, err
+		// The base values passed at construction: only a layer with a
+		// sampled value, or any layer when the water table moves, can fail.
+		if len(f.byLayer[li]) > 0 || zwSampled {
+			if err := f.check(li, L, zw); err != nil {
+				return Outcome{}, err
+			}
+		}
+		if li > f.tipLayer {
+			continue // below the tip: checked only, as profile.New checks every layer
 		}
 		// σ′v through the layer: γ above the water table, γsat − γw below.
 		var pieces [2][3]float64 // from, to, γ′
@@ -277,9 +295,6 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 					qp = f.limit
 				}
 			}
-		}
-		if L.bot >= zt && li >= f.tipLayer {
-			break
 		}
 	}
 	if f.selfWeight == pile.WeightNet {

@@ -243,7 +243,7 @@ func summarise(r []float64, load float64, bins int) Summary {
 	if n > 1 {
 		sd = math.Sqrt(ss / float64(n-1))
 	}
-	slices.Sort(r)
+	sortFloats(r)
 	out := Summary{Mean: mean, SD: sd, Min: r[0], Max: r[n-1],
 		P5: quantile(r, 0.05), P50: quantile(r, 0.5), P95: quantile(r, 0.95),
 		SEMean: sd / math.Sqrt(float64(n))}
@@ -284,6 +284,55 @@ func summarise(r []float64, load float64, bins int) Summary {
 		out.Histogram[k].Count++
 	}
 	return out
+}
+
+// sortFloats sorts finite r in place: a least-significant-digit radix sort
+// on the bits of each value mapped to an order-preserving unsigned key
+// (sign bit set: all bits flipped; else the sign bit set), 11 bits a pass,
+// six passes; small slices go to slices.Sort.
+func sortFloats(r []float64) {
+	n := len(r)
+	if n < 4096 {
+		slices.Sort(r)
+		return
+	}
+	key := make([]uint64, n)
+	tmp := make([]uint64, n)
+	for i, v := range r {
+		b := math.Float64bits(v)
+		if b>>63 != 0 {
+			b = ^b
+		} else {
+			b |= 1 << 63
+		}
+		key[i] = b
+	}
+	const bits, buckets = 11, 1 << 11
+	var count [buckets]int
+	for shift := uint(0); shift < 64; shift += bits {
+		clear(count[:])
+		for _, k := range key {
+			count[(k>>shift)&(buckets-1)]++
+		}
+		sum := 0
+		for i, c := range count {
+			count[i], sum = sum, sum+c
+		}
+		for _, k := range key {
+			d := (k >> shift) & (buckets - 1)
+			tmp[count[d]] = k
+			count[d]++
+		}
+		key, tmp = tmp, key
+	}
+	for i, b := range key {
+		if b>>63 != 0 {
+			b &^= 1 << 63
+		} else {
+			b = ^b
+		}
+		r[i] = math.Float64frombits(b)
+	}
 }
 
 // quantile returns the p-quantile of sorted r by linear interpolation

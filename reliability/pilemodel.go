@@ -369,10 +369,17 @@ func (g *general) Capacity(x []float64) (Outcome, error) {
 				ls.SuTop *= units.Stress(v) / mid
 				ls.SuBottom *= units.Stress(v) / mid
 			}
-		case KeyUnitWeight:
-			ls.UnitWeight = units.UnitWeight(v)
-		case KeySaturatedUnitWeight:
-			ls.SaturatedUnitWeight = units.UnitWeight(v)
+		case KeyUnitWeight, KeySaturatedUnitWeight:
+			// profile.New reads 0 as "not given": a sampled 0 is refused
+			// here, as any value out of range is.
+			if !(v > 0) {
+				return Outcome{}, &FieldError{Path: fmt.Sprintf("layers[%d].%s", t.Layer, t.Key), Msg: fmt.Sprintf("%.6g kN/m3 is outside (0, 35]", v/1e3)}
+			}
+			if t.Key == KeyUnitWeight {
+				ls.UnitWeight = units.UnitWeight(v)
+			} else {
+				ls.SaturatedUnitWeight = units.UnitWeight(v)
+			}
 		case KeyK, KeyKOverK0, KeyKOverKp, KeyDelta, KeyDeltaOverPhi:
 			b := unwrap(lm.Shaft).(shaft.Beta)
 			switch t.Key {

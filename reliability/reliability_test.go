@@ -3,7 +3,9 @@ package reliability
 import (
 	"errors"
 	"math"
+	"math/rand/v2"
 	"reflect"
+	"slices"
 	"testing"
 
 	"github.com/qultgeo/qult/bearing"
@@ -396,4 +398,33 @@ func fastMethods() pile.Methods {
 		{Shaft: shaft.AlphaGiven{Alpha: 0.7}, Tip: bearing.GivenNc{Nc: 9}},
 		{Shaft: shaft.Beta{K: shaft.KGiven{K: 1.2}, Delta: shaft.DeltaOverPhi{Ratio: 0.8}}, Tip: bearing.GivenNq{Nq: 40}},
 	}}
+}
+
+// sortFloats sorts as slices.Sort does (an oracle kept here), on random
+// values of both signs with repeats, infinities excepted.
+func TestSortFloats(t *testing.T) {
+	rng := rand.New(rand.NewPCG(1, 2))
+	for _, n := range []int{0, 1, 5, 4095, 4096, 10000, 100003} {
+		a := make([]float64, n)
+		for i := range a {
+			switch rng.IntN(4) {
+			case 0:
+				a[i] = float64(rng.IntN(7) - 3)
+			case 1:
+				a[i] = rng.NormFloat64() * 1e6
+			case 2:
+				a[i] = -rng.ExpFloat64() * 1e-300
+			default:
+				a[i] = rng.NormFloat64()
+			}
+		}
+		b := slices.Clone(a)
+		sortFloats(a)
+		slices.Sort(b)
+		for i := range a {
+			if a[i] != b[i] && !(a[i] == 0 && b[i] == 0) {
+				t.Fatalf("n %d: element %d is %g, want %g", n, i, a[i], b[i])
+			}
+		}
+	}
 }
