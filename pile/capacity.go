@@ -290,32 +290,33 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	if err := a.tipQuick(t, &tr, s.k); err != nil {
 		return err
 	}
-	a.assemble(c, &tr, outer, design, tension, uplift, s.weight, s.flags|lamFlags|zoneFlags)
+	a.assemble(c, tr.qp, tr.sigma, tr.f, outer, design, tension, uplift, s.weight, s.flags|lamFlags|zoneFlags|tr.flags)
 	return nil
 }
 
-// assemble sets c from the shaft integrals (outer, design, tension and
-// uplift, N/m), the pile's weight w′, the flags of the shaft and the tip:
-// the plug modes, self-weight, compression and tension.
-func (a *Analysis) assemble(c *Capacity, tr *tipResult, outer, design, tension, uplift, weight float64, flags Flags) {
-	qp := tr.qp
+// assemble sets c from the unit tip resistance qp (after the rules), σ′v
+// at the tip and the tip's design multiplier f, the shaft integrals
+// (outer, design, tension and uplift, N/m), the pile's weight W′ and the
+// flags of shaft and tip: the plug modes, self-weight, compression and
+// tension.
+func (a *Analysis) assemble(c *Capacity, qp, sigma, f, outer, design, tension, uplift, weight float64, flags Flags) {
 	if a.methods.SelfWeight == WeightNet {
-		qp = max(0, qp-tr.sigma)
+		qp = max(0, qp-sigma)
 	}
 	c.UnitTip = units.Stress(qp)
-	c.Flags = flags | tr.flags
+	c.Flags = flags
 	c.Weight = units.Force(weight)
 	// Modes: plugged (gross area, outer perimeter) and unplugged (material
 	// area, outer plus inner perimeter).
 	plTip, plShaft := qp*a.gross, outer*a.outer
-	plDes := tr.f*qp*a.gross + design*a.outer
+	plDes := f*qp*a.gross + design*a.outer
 	c.Plugged = true
 	c.Tip, c.Shaft = units.Force(plTip), units.Force(plShaft)
 	desC := plDes
 	tenShaft, tenDes := uplift*a.outer, tension*a.outer
 	if a.pile.Section.CanPlug() {
 		unTip, unShaft := qp*a.mat, outer*(a.outer+a.inner)
-		unDes := tr.f*qp*a.mat + design*(a.outer+a.inner)
+		unDes := f*qp*a.mat + design*(a.outer+a.inner)
 		// The lesser mode: on the design resistance in a design case (the
 		// factors on tip and shaft differ), else on the characteristic one.
 		lesserUn := unTip+unShaft < plTip+plShaft

@@ -32,6 +32,19 @@ type depthPlan struct {
 	// the tip model and the rules' checks (closed, quickTip, no drilled
 	// zones); withDepth then takes it in its tight loop.
 	run bool
+	// The layer's rules of the tip zone, read by the tight loop: ramp (the
+	// embedment ramp can apply) or layered (the layered rule can); for
+	// the layered rule, the upper layer's value at its bottom and whether
+	// it failed; zoneLen is then Lcr or 10·D.
+	ramp, layered bool
+	upBase        float64
+	upErr         bool
+	// For the weak-layer rule with one candidate (the next layer): its
+	// value at its top after its rules and whether it failed, and the top
+	// of the layer after it (+Inf: none).
+	nextEff  float64
+	nextErr  bool
+	next2Top float64
 	// Constants of the tight loop: the flags of every segment of the
 	// interval, the tip model's own, the tension factor of the layer.
 	shaftFlags, tipFlags Flags
@@ -54,12 +67,19 @@ func (a *Analysis) prepareDepth() {
 		switch {
 		case first && lp.layer.Drainage == profile.Drained && !lp.spt:
 			p.zoneLen = a.embedN * d
+			p.ramp = true
 		case !first:
 			p.zoneLen = 10 * d
+			p.layered = true
+			p.upBase, p.upErr = a.plans[li-1].baseBot, a.plans[li-1].errBot != nil
 		}
-		p.nextTop = math.Inf(1)
+		p.nextTop, p.next2Top = math.Inf(1), math.Inf(1)
 		if li+1 < len(a.plans) {
 			p.nextTop = float64(a.plans[li+1].layer.Top)
+			p.nextEff, p.nextErr = a.plans[li+1].effTop, a.plans[li+1].errEff != nil
+		}
+		if li+2 < len(a.plans) {
+			p.next2Top = float64(a.plans[li+2].layer.Top)
 		}
 		if lp.tm.ok && !(a.useCase && lp.fTip == 0) {
 			ok := true
@@ -187,48 +207,76 @@ func (a *Analysis) runDepth(s *sums, k int, openFrom, z float64, c *Capacity) er
 	lp := &a.plans[iv.layer]
 	q, fl := a.closedIntegral(k, openFrom, z)
 	// The tip, as tipQuick (the interval holds z, above its bottom).
-	var tr tipResult
 	sv := iv.e0 + iv.de*(z-iv.top)
 	var su float64
 	if lp.tm.useSu && lp.layer.HasSu {
 		su = float64(lp.suAt(min(max(units.Length(z), lp.layer.Top), lp.layer.Bottom)))
 	}
 	_, qp, limited := lp.tm.eval(sv, su)
-	tr.layer, tr.qp, tr.sigma, tr.f = iv.layer, qp, sv, lp.fTip
-	tr.flags = p.tipFlags
+	tf := p.tipFlags
 	if limited {
-		tr.flags |= TipLimit
+		tf |= TipLimit
 	}
 	d := a.size
-	if z-p.zoneTop < p.zoneLen {
-		v, _, _, err := a.baseRules(iv.layer, z, tr.qp, &tr.flags)
-		if err != nil {
-			return err
-		}
-		tr.qp = v
-	}
-	if p.nextTop < z+WeakZoneRatio*d {
-		v, err := a.weakRule(iv.layer, z, tr.qp, &tr.flags, nil)
-		if err != nil {
-			return err
-		}
-		tr.qp = v
-	}
 	li := iv.layer
+	// baseRules, decided in advance (see there for the rules).
+	if lb := z - p.zoneTop; lb < p.zoneLen {
+		switch {
+		case p.ramp && qp > 0:
+			if a.methods.NoEmbedment {
+				tf |= EmbedmentOff
+			} else {
+				qp *= lb / p.zoneLen
+				tf |= EmbedmentRamp
+			}
+		case p.layered:
+			switch {
+			case !a.methods.LayeredTip:
+				if p.upErr || p.upBase < qp {
+					tf |= LayeredTipOff
+				}
+			case p.upErr:
+				_, _, _, err := a.baseRules(li, z, qp, &tf) // the error, worded there
+				return err
+			case p.upBase < qp:
+				qp = p.upBase + (qp-p.upBase)*lb/(10*d)
+				tf |= LayeredTip
+			}
+		}
+	}
+	if lim := z + WeakZoneRatio*d; p.nextTop < lim {
+		if !(p.next2Top < lim) && !p.nextErr {
+			// weakRule with its one candidate, the next layer.
+			if p.nextEff < qp {
+				if a.methods.NoWeakLayer {
+					tf |= WeakLayerOff
+				} else if v := p.nextEff + (qp-p.nextEff)*(p.nextTop-z)/(WeakZoneRatio*d); v < qp {
+					qp = v
+					tf |= WeakLayerReduced
+				}
+			}
+		} else {
+			v, err := a.weakRule(li, z, qp, &tf, nil)
+			if err != nil {
+				return err
+			}
+			qp = v
+		}
+	}
 	if z-float64(lp.layer.Top) < d && li > 0 || float64(lp.layer.Bottom)-z < d && li < len(a.plans)-1 {
-		tr.flags |= TipNearBoundary
+		tf |= TipNearBoundary
 	}
 	if p.nextTop < z+a.weakBelow*d {
 		for j := li + 1; j < len(a.plans) && float64(a.plans[j].layer.Top) < z+a.weakBelow*d; j++ {
-			if a.plans[j].errTop != nil || a.plans[j].qpTop < tr.qp {
-				tr.flags |= WeakBelow
+			if a.plans[j].errTop != nil || a.plans[j].qpTop < qp {
+				tf |= WeakBelow
 				break
 			}
 		}
 	}
 	t := p.tension
 	c.TipDepth = units.Length(z)
-	a.assemble(c, &tr, s.outer+q, s.design+lp.fShaft*q, s.tension+lp.fTension*t*q, s.uplift+t*q, s.weight, s.flags|fl)
+	a.assemble(c, qp, sv, lp.fTip, s.outer+q, s.design+lp.fShaft*q, s.tension+lp.fTension*t*q, s.uplift+t*q, s.weight, s.flags|fl|tf)
 	return nil
 }
 
