@@ -212,3 +212,32 @@ func TestWithDepthMatchesOracleBench(t *testing.T) {
 		}
 	}
 }
+
+// BenchmarkCapacityWithDepthOracle times the implementation kept in
+// oracle_test.go on BenchmarkCapacityWithDepth's cases, so that before and
+// after can be measured side by side under the same load.
+func BenchmarkCapacityWithDepthOracle(b *testing.B) {
+	prof := benchProfileT(b)
+	p := Pile{Section: Section{Shape: Circle, Diameter: 0.6 * m}, Length: 60 * m, Installation: DrivenHigh}
+	for _, al := range benchAlphas {
+		for _, st := range []struct {
+			name string
+			step units.Length
+		}{{"600", 0.1 * m}, {"6000", 0.01 * m}} {
+			b.Run(al.name+"/"+st.name, func(b *testing.B) {
+				a, err := NewAnalysis(prof, p, Methods{TipDrained: bearing.Vesic{}, ShaftUndrained: al.m, LayeredTip: true}, nil)
+				if err != nil {
+					b.Fatal(err)
+				}
+				rows := make([]Capacity, 0, 6100)
+				b.ReportAllocs()
+				for b.Loop() {
+					rows, err = a.oracleWithDepth(st.step, 60*m, st.step, rows[:0])
+					if err != nil {
+						b.Fatal(err)
+					}
+				}
+			})
+		}
+	}
+}
