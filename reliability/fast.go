@@ -3,6 +3,7 @@ package reliability
 import (
 	"fmt"
 	"math"
+	"slices"
 
 	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/pile"
@@ -81,35 +82,41 @@ func (pm *PileModel) newFast() (*fastModel, bool) {
 			gamma: float64(l.UnitWeight), gsat: float64(l.SaturatedUnitWeight), phi: float64(l.Phi), c: float64(l.Cohesion),
 			su0: float64(l.SuTop), su1: float64(l.SuBottom), tension: tf.For(l.Drainage)}
 		lm := m.Layers[i]
-		if fl.top < f.tip && fl.bot > f.head {
-			switch s := lm.Shaft.(type) {
-			case shaft.BetaGiven:
-				fl.kind, fl.beta = fBetaGiven, s.Beta
-			case shaft.Beta:
-				kg, ok1 := s.K.(shaft.KGiven)
-				fl.k = kg.K
-				switch dr := s.Delta.(type) {
-				case shaft.DeltaGiven:
-					fl.delta = float64(dr.Delta)
-				case shaft.DeltaOverPhi:
-					fl.delta, fl.deltaRatio = dr.Ratio, true
-				default:
-					ok1 = false
-				}
-				if !ok1 {
-					return nil, false
-				}
-				fl.kind = fBetaKD
-			case shaft.AlphaGiven:
-				fl.kind, fl.alpha = fAlphaGiven, s.Alpha
+		// The layer's shaft factor. NewAnalysis checks every layer's method,
+		// on the pile or not: a layer with a sampled value must have one
+		// the closed form knows, so that its check matches.
+		onPile := fl.top < f.tip && fl.bot > f.head
+		sampled := slices.ContainsFunc(pm.targets, func(t Target) bool { return t.Layer == i })
+		known := true
+		switch s := lm.Shaft.(type) {
+		case shaft.BetaGiven:
+			fl.kind, fl.beta = fBetaGiven, s.Beta
+		case shaft.Beta:
+			kg, ok1 := s.K.(shaft.KGiven)
+			fl.k = kg.K
+			switch dr := s.Delta.(type) {
+			case shaft.DeltaGiven:
+				fl.delta = float64(dr.Delta)
+			case shaft.DeltaOverPhi:
+				fl.delta, fl.deltaRatio = dr.Ratio, true
 			default:
+				ok1 = false
+			}
+			fl.kind = fBetaKD
+			known = ok1
+		case shaft.AlphaGiven:
+			fl.kind, fl.alpha = fAlphaGiven, s.Alpha
+		default:
+			known = false
+		}
+		switch {
+		case lm.NoShaft:
+			fl.kind = fNone // not checked by NewAnalysis either
+		case lm.Lambda || !known:
+			if onPile || sampled {
 				return nil, false
 			}
-			if lm.NoShaft {
-				fl.kind = fNone
-			} else if lm.Lambda {
-				return nil, false
-			}
+			fl.kind = fNone
 		}
 		// The tip: in the layer below where it is a boundary.
 		if fl.top <= f.tip && (f.tip < fl.bot || i == prof.NumLayers()-1) && f.tipLayer < 0 {

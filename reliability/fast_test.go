@@ -25,10 +25,14 @@ func TestPropFastMatchesFull(t *testing.T) {
 		var targets []Target
 		var base []float64
 		z := 0.0
+		// The bearing layer, 30 m thick, holds the tip 15 m into it: no
+		// rule of the tip zone; layers below it are checked, not summed.
+		tl := rapid.IntRange(0, nl-1).Draw(rt, "bearing layer")
+		tip := 0.0
 		for i := range nl {
 			h := rapid.Float64Range(2, 15).Draw(rt, "thickness")
-			if i == nl-1 {
-				h = 30
+			if i == tl {
+				h, tip = 30, z+15
 			}
 			drained := rapid.Bool().Draw(rt, "drained")
 			ls := profile.LayerSpec{Thickness: units.Length(h), UnitWeight: units.UnitWeight(rapid.Float64Range(15e3, 19e3).Draw(rt, "gamma"))}
@@ -69,9 +73,8 @@ func TestPropFastMatchesFull(t *testing.T) {
 		spec.WaterDepth = units.Length(rapid.Float64Range(-3, 20).Draw(rt, "water"))
 		targets = append(targets, Target{-1, KeyWaterDepth}, Target{-1, KeyTipFactor}, Target{-1, KeyShaftFactor})
 		base = append(base, float64(spec.WaterDepth), 1, 1)
-		// The tip 15 m into the last layer (30 m thick): no rule of the tip zone.
 		d := rapid.Float64Range(0.3, 0.9).Draw(rt, "d")
-		p := pile.Pile{Section: pile.Section{Shape: pile.Circle, Diameter: units.Length(d)}, Length: units.Length(z - 15), Installation: pile.DrivenHigh,
+		p := pile.Pile{Section: pile.Section{Shape: pile.Circle, Diameter: units.Length(d)}, Length: units.Length(tip), Installation: pile.DrivenHigh,
 			UnitWeight: units.UnitWeight(rapid.SampledFrom([]float64{0, 24e3}).Draw(rt, "gp")),
 			HeadDepth:  units.Length(rapid.Float64Range(0, 1).Draw(rt, "head"))}
 		p.Length -= p.HeadDepth
