@@ -29,6 +29,7 @@ type fastLayer struct {
 	kind           int
 	beta, k, delta float64 // δ itself, or δ/φ′ with deltaRatio
 	deltaRatio     bool
+	tanDelta       float64 // tan δ of the values as given; recomputed when δ or φ′ is sampled
 	alpha          float64
 	tension        float64 // the layer's tension factor
 }
@@ -104,6 +105,11 @@ func (pm *PileModel) newFast() (*fastModel, bool) {
 			}
 			fl.kind = fBetaKD
 			known = ok1
+			dl := fl.delta
+			if fl.deltaRatio {
+				dl *= fl.phi
+			}
+			fl.tanDelta = math.Tan(dl)
 		case shaft.AlphaGiven:
 			fl.kind, fl.alpha = fAlphaGiven, s.Alpha
 		default:
@@ -199,6 +205,9 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 			switch f.targets[i].Key {
 			case KeyFrictionAngle:
 				L.phi = v
+				if L.deltaRatio {
+					L.tanDelta = math.Tan(L.delta * v)
+				}
 			case KeyUndrainedStrength:
 				if L.su0 == L.su1 {
 					L.su0, L.su1 = v, v
@@ -219,6 +228,11 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 				L.k = v
 			case KeyDelta, KeyDeltaOverPhi:
 				L.delta = v
+				if L.deltaRatio {
+					L.tanDelta = math.Tan(v * L.phi)
+				} else {
+					L.tanDelta = math.Tan(v)
+				}
 			case KeyBeta:
 				L.beta = v
 			case KeyAlpha:
@@ -270,12 +284,12 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 				case fBetaGiven:
 					q = L.beta * (sa + sb) / 2 * (zb - za)
 				case fBetaKD:
-					dl := L.delta
-					if L.deltaRatio {
-						dl *= L.phi
-					}
-					q = L.k * math.Tan(dl) * (sa + sb) / 2 * (zb - za)
+					q = L.k * L.tanDelta * (sa + sb) / 2 * (zb - za)
 				case fAlphaGiven:
+					if L.su0 == L.su1 {
+						q = L.alpha * L.su0 * (zb - za)
+						break
+					}
 					h := L.bot - L.top
 					sua := L.su0 + (L.su1-L.su0)*(za-L.top)/h
 					sub := L.su0 + (L.su1-L.su0)*(zb-L.top)/h
