@@ -71,7 +71,7 @@ func benchProblem(tb testing.TB) Problem {
 }
 
 // BenchmarkMonteCarlo: 1,000,000 samples of the 10-layer problem on all
-// cores (target: under 1 s on 2 cores).
+// cores; under 1 s on 2 cores is the aim.
 func BenchmarkMonteCarlo(b *testing.B) {
 	p := benchProblem(b)
 	const n = 1_000_000
