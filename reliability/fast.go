@@ -52,6 +52,7 @@ type fastModel struct {
 	plug                pile.Plug
 	selfWeight          pile.SelfWeight
 	gp                  float64 // pile unit weight
+	codes               []int   // each target's key as an index into keyCodes (a string switch costs)
 	byLayer             [][]int // indices of the targets of each layer
 	global              []int   // indices of the targets of the whole calculation
 }
@@ -151,6 +152,9 @@ func (pm *PileModel) newFast() (*fastModel, bool) {
 	if f.tipLayer < 0 {
 		return nil, false
 	}
+	for _, t := range f.targets {
+		f.codes = append(f.codes, keyCode(t.Key))
+	}
 	f.byLayer = make([][]int, len(f.lay))
 	for i, t := range f.targets {
 		if t.Layer < 0 {
@@ -172,12 +176,12 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 	ft, fs := 1.0, 1.0
 	for _, i := range f.global {
 		{
-			switch f.targets[i].Key {
-			case KeyWaterDepth:
+			switch f.codes[i] {
+			case cWaterDepth:
 				zw = x[i]
-			case KeyTipFactor:
+			case cTipFactor:
 				ft = x[i]
-			case KeyShaftFactor:
+			case cShaftFactor:
 				fs = x[i]
 			}
 		}
@@ -202,46 +206,46 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 		}
 		for _, i := range f.byLayer[li] {
 			v := x[i]
-			switch f.targets[i].Key {
-			case KeyFrictionAngle:
+			switch f.codes[i] {
+			case cFrictionAngle:
 				L.phi = v
 				if L.deltaRatio {
 					L.tanDelta = math.Tan(L.delta * v)
 				}
-			case KeyUndrainedStrength:
+			case cUndrainedStrength:
 				if L.su0 == L.su1 {
 					L.su0, L.su1 = v, v
 				} else {
 					mid := (L.su0 + L.su1) / 2
 					L.su0, L.su1 = L.su0*(v/mid), L.su1*(v/mid)
 				}
-			case KeyUnitWeight, KeySaturatedUnitWeight:
+			case cUnitWeight, cSaturatedUnitWeight:
 				if !(v > 0) { // as the full computation refuses it
 					return Outcome{}, &FieldError{Path: fmt.Sprintf("layers[%d].%s", li, f.targets[i].Key), Msg: fmt.Sprintf("%.6g kN/m3 is outside (0, 35]", v/1e3)}
 				}
-				if f.targets[i].Key == KeyUnitWeight {
+				if f.codes[i] == cUnitWeight {
 					L.gamma = v
 				} else {
 					L.gsat = v
 				}
-			case KeyK:
+			case cK:
 				L.k = v
-			case KeyDelta, KeyDeltaOverPhi:
+			case cDelta, cDeltaOverPhi:
 				L.delta = v
 				if L.deltaRatio {
 					L.tanDelta = math.Tan(v * L.phi)
 				} else {
 					L.tanDelta = math.Tan(v)
 				}
-			case KeyBeta:
+			case cBeta:
 				L.beta = v
-			case KeyAlpha:
+			case cAlpha:
 				L.alpha = v
-			case KeyNq:
+			case cNq:
 				if li == f.tipLayer {
 					nq = v
 				}
-			case KeyNc:
+			case cNc:
 				if li == f.tipLayer {
 					nc = v
 				}
@@ -275,8 +279,15 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 		for _, pc := range pieces[:np] {
 			a, b, g := pc[0], pc[1], pc[2]
 			s0 := sv
-			// The shaft over [max(a, head), min(b, tip)].
-			za, zb := max(a, f.head), min(b, zt)
+			// The shaft over [max(a, head), min(b, tip)]; plain comparisons
+			// (the builtins handle NaN, which cannot occur here, and cost more).
+			za, zb := a, b
+			if f.head > za {
+				za = f.head
+			}
+			if zt < zb {
+				zb = zt
+			}
 			if zb > za && L.kind != fNone {
 				sa, sb := s0+g*(za-a), s0+g*(zb-a)
 				var q float64
@@ -427,4 +438,35 @@ func (f *fastModel) checkTip(li int, nq, nc float64) error {
 		return bad(KeyNc, "%.6g is outside 0 to 1e+04", nc)
 	}
 	return nil
+}
+
+// Key codes of the closed form's hot loop.
+const (
+	cFrictionAngle = iota
+	cUndrainedStrength
+	cUnitWeight
+	cSaturatedUnitWeight
+	cK
+	cKOverK0
+	cKOverKp
+	cDelta
+	cDeltaOverPhi
+	cBeta
+	cAlpha
+	cNq
+	cNc
+	cWaterDepth
+	cTipFactor
+	cShaftFactor
+)
+
+// keyCode returns the code of a key (LayerKeys then GlobalKeys, in order).
+func keyCode(k string) int {
+	if i := slices.Index(LayerKeys, k); i >= 0 {
+		return i
+	}
+	if i := slices.Index(GlobalKeys, k); i >= 0 {
+		return cWaterDepth + i
+	}
+	panic("reliability: unknown key " + k)
 }

@@ -120,3 +120,19 @@ func TestPropFastMatchesFull(t *testing.T) {
 		}
 	})
 }
+
+// The closed form's key codes follow LayerKeys and GlobalKeys.
+func TestKeyCodes(t *testing.T) {
+	want := map[int]string{cFrictionAngle: KeyFrictionAngle, cUndrainedStrength: KeyUndrainedStrength, cUnitWeight: KeyUnitWeight,
+		cSaturatedUnitWeight: KeySaturatedUnitWeight, cK: KeyK, cKOverK0: KeyKOverK0, cKOverKp: KeyKOverKp, cDelta: KeyDelta,
+		cDeltaOverPhi: KeyDeltaOverPhi, cBeta: KeyBeta, cAlpha: KeyAlpha, cNq: KeyNq, cNc: KeyNc, cWaterDepth: KeyWaterDepth,
+		cTipFactor: KeyTipFactor, cShaftFactor: KeyShaftFactor}
+	for c, k := range want {
+		if got := keyCode(k); got != c {
+			t.Errorf("keyCode(%q) = %d, want %d", k, got, c)
+		}
+	}
+	if len(want) != len(LayerKeys)+len(GlobalKeys) {
+		t.Errorf("%d codes for %d keys", len(want), len(LayerKeys)+len(GlobalKeys))
+	}
+}

@@ -314,6 +314,9 @@ func sortFloats(r []float64) {
 		for _, k := range key {
 			count[(k>>shift)&(buckets-1)]++
 		}
+		if count[(key[0]>>shift)&(buckets-1)] == n {
+			continue // every key has this digit: the pass changes nothing
+		}
 		sum := 0
 		for i, c := range count {
 			count[i], sum = sum, sum+c
