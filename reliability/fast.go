@@ -253,7 +253,7 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 		}
 		// The base values passed at construction: only a layer with a
 		// sampled value, or any layer when the water table moves, can fail.
-		if len(f.byLayer[li]) > 0 || zwSampled {
+		if (len(f.byLayer[li]) > 0 || zwSampled) && !f.valid(L, zw) {
 			if err := f.check(li, L, zw); err != nil {
 				return Outcome{}, err
 			}
@@ -361,6 +361,45 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 		comp -= wt
 	}
 	return Outcome{Compression: comp, Tension: fs*tenShaft + wt}, nil
+}
+
+// valid reports whether check passes, without building its message.
+func (f *fastModel) valid(L *fastLayer, zw float64) bool {
+	const deg = math.Pi / 180
+	const maxGamma = 35e3
+	if L.drained && !(L.phi > 0 && L.phi <= 50*deg) {
+		return false
+	}
+	if L.su0 != 0 || L.su1 != 0 || !L.drained {
+		if !(L.su0 > 0) || !(L.su1 > 0) || !finite(L.su0) || !finite(L.su1) {
+			return false
+		}
+		if L.kind == fAlphaGiven && (L.su0 > 5e6 || L.su1 > 5e6) {
+			return false
+		}
+	}
+	needAbove := f.dry || L.top < zw
+	needBelow := !f.dry && L.bot > zw
+	if (L.gamma != 0 || needAbove) && !(L.gamma > 0 && L.gamma <= maxGamma) ||
+		(L.gsat != 0 || needBelow) && !(L.gsat > 0 && L.gsat <= maxGamma) ||
+		L.gsat != 0 && L.gsat <= f.gw || L.gamma != 0 && L.gsat != 0 && L.gamma > L.gsat {
+		return false
+	}
+	switch L.kind {
+	case fBetaGiven:
+		return L.beta >= 0 && L.beta <= 3
+	case fBetaKD:
+		if !(L.k >= 0 && L.k <= 10) {
+			return false
+		}
+		if L.deltaRatio {
+			return L.delta > 0 && L.delta <= 1
+		}
+		return L.delta >= 0 && L.delta <= 50*deg
+	case fAlphaGiven:
+		return L.alpha >= 0 && L.alpha <= 1.5
+	}
+	return true
 }
 
 // check refuses a sampled layer value that profile.New or the layer's

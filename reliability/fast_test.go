@@ -136,3 +136,28 @@ func TestKeyCodes(t *testing.T) {
 		t.Errorf("%d codes for %d keys", len(want), len(LayerKeys)+len(GlobalKeys))
 	}
 }
+
+// valid agrees with check on random layers, in and out of range.
+func TestPropValidMatchesCheck(t *testing.T) {
+	rapid.Check(t, func(rt *rapid.T) {
+		f := &fastModel{gw: 9.81e3, dry: rapid.Bool().Draw(rt, "dry")}
+		val := func(name string, lo, hi float64) float64 {
+			if rapid.IntRange(0, 6).Draw(rt, name+" zero") == 0 {
+				return 0
+			}
+			return rapid.Float64Range(lo, hi).Draw(rt, name)
+		}
+		L := &fastLayer{top: 2, bot: 8, drained: rapid.Bool().Draw(rt, "drained"),
+			phi: val("phi", -0.1, 1), su0: val("su0", -1e3, 6e6), gamma: val("gamma", -1e3, 40e3), gsat: val("gsat", -1e3, 40e3),
+			kind: rapid.IntRange(0, fNone).Draw(rt, "kind"), beta: val("beta", -0.5, 3.5), k: val("k", -1, 11),
+			delta: val("delta", -0.1, 1.2), deltaRatio: rapid.Bool().Draw(rt, "ratio"), alpha: val("alpha", -0.2, 1.7)}
+		L.su1 = L.su0
+		if rapid.Bool().Draw(rt, "linear") {
+			L.su1 = val("su1", -1e3, 6e6)
+		}
+		zw := rapid.Float64Range(-3, 12).Draw(rt, "zw")
+		if v, err := f.valid(L, zw), f.check(0, L, zw); v != (err == nil) {
+			rt.Fatalf("valid %v, check %v", v, err)
+		}
+	})
+}
