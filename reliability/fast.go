@@ -261,23 +261,33 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 		if li > f.tipLayer {
 			continue // below the tip: checked only, as profile.New checks every layer
 		}
-		// σ′v through the layer: γ above the water table, γsat − γw below.
-		var pieces [2][3]float64 // from, to, γ′
-		np := 0
-		if f.dry {
-			pieces[0], np = [3]float64{L.top, L.bot, L.gamma}, 1
-		} else {
-			if zw > L.top {
-				pieces[np] = [3]float64{L.top, min(L.bot, zw), L.gamma}
-				np++
+		// σ′v through the layer: γ above the water table, γsat − γw below,
+		// in at most two parts (plain comparisons: no NaN can occur here).
+		for part := 0; part < 2; part++ {
+			var a, b, g float64
+			switch {
+			case f.dry:
+				if part == 1 {
+					continue
+				}
+				a, b, g = L.top, L.bot, L.gamma
+			case part == 0:
+				if !(zw > L.top) {
+					continue
+				}
+				a, b, g = L.top, L.bot, L.gamma
+				if zw < b {
+					b = zw
+				}
+			default:
+				if !(L.bot > zw) {
+					continue
+				}
+				a, b, g = L.top, L.bot, L.gsat-f.gw
+				if zw > a {
+					a = zw
+				}
 			}
-			if L.bot > zw {
-				pieces[np] = [3]float64{max(L.top, zw), L.bot, L.gsat - f.gw}
-				np++
-			}
-		}
-		for _, pc := range pieces[:np] {
-			a, b, g := pc[0], pc[1], pc[2]
 			s0 := sv
 			// The shaft over [max(a, head), min(b, tip)]; plain comparisons
 			// (the builtins handle NaN, which cannot occur here, and cost more).
