@@ -17,6 +17,7 @@
 //	profile  the ground: layers, groundwater, excavation and scour, total and effective vertical stress
 //	pile     capacity of a pile in the ground, design bases, required length
 //	settle   single-pile settlement and static load-test interpretation
+//	reliability  probabilistic capacity: Monte Carlo, FOSM and sensitivities
 //	calc     the calc file: decoding, validation, the run and its result
 //	report   text, CSV, JSON, Markdown and HTML calculation packages
 //

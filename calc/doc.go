@@ -9,7 +9,9 @@
 // and line. Resolve turns every value into SI quantities (a bare number is
 // counted in the file's unit system, SI or US) and library inputs; Run
 // builds the profile, the analysis, capacity with depth, the design check
-// and the required length. Parse is Decode and Run in one call. Problems
+// and the required length, and, with a reliability section, the Monte
+// Carlo and FOSM estimates of package reliability (Result.Reliability).
+// Parse is Decode and Run in one call. Problems
 // keep the library errors behind them (errors.Is and errors.As reach a
 // *units.ParseError, a *profile.FieldError, a *pile.PathError, …).
 //

@@ -34,6 +34,8 @@ type File struct {
 	// serviceability load; LoadTest gives a static load test to read.
 	Settlement *Settlement `yaml:"settlement,omitempty" json:"settlement,omitempty" doc:"Settlement at the serviceability load: method, allowable settlement, load-transfer curves and the options of the elastic methods."`
 	LoadTest   *LoadTest   `yaml:"load_test,omitempty" json:"load_test,omitempty" doc:"A static compression load test on the pile, as points of head load and head settlement, read by the chosen criteria."`
+	// Reliability asks for the probabilistic capacity (Monte Carlo, FOSM).
+	Reliability *Reliability `yaml:"reliability,omitempty" json:"reliability,omitempty" doc:"Probabilistic capacity: uncertain parameters with their distributions and correlations, for Monte Carlo simulation and FOSM."`
 
 	// lines maps each field path read from the file to its line.
 	lines map[string]int

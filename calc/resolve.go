@@ -36,6 +36,8 @@ type Inputs struct {
 	// when the file has none.
 	Settle   *SettleInputs
 	LoadTest *LoadTestInputs
+	// reliability is the reliability section; nil when the file has none.
+	reliability *reliabilityInputs
 }
 
 // resolver turns Values into quantities, recording problems.
@@ -174,6 +176,7 @@ func Resolve(f *File) (*Inputs, error) {
 	r.loads(f, in)
 	r.search(f, in)
 	r.settlement(f, in)
+	r.reliabilitySection(f, in)
 	if len(r.probs) > 0 {
 		return in, r.probs
 	}

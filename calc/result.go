@@ -62,6 +62,9 @@ type Result struct {
 	// serviceability check (ServiceabilityPass).
 	Settlement *SettlementResult
 	LoadTest   *LoadTestResult
+	// Reliability is the probabilistic capacity (nil without a
+	// reliability section).
+	Reliability *ReliabilityResult
 
 	// Compared is the shaft and tip resistance of the same pile by every
 	// applicable method of the catalogues (nil when it could not be run).

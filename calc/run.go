@@ -151,6 +151,9 @@ func run(f *File, o runOptions) (*Result, error) {
 	if err != nil {
 		return nil, err
 	}
+	if err := runReliability(f, in, res); err != nil {
+		return nil, err
+	}
 	res.Warnings = append(res.Warnings, warnings(res)...)
 	res.Warnings = append(res.Warnings, settleWarnings(res)...)
 	var refs []cite.Source

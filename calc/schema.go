@@ -11,6 +11,7 @@ import (
 	"strings"
 
 	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/reliability"
 	"github.com/qultgeo/qult/shaft"
 	"github.com/qultgeo/qult/units"
 )
@@ -42,6 +43,9 @@ var enums = map[string][]string{
 	"method":   settleMethods,
 	"form":     {"elastic", "empirical"},
 	"criteria": LoadTestCriteria,
+	// reliability
+	"distribution": {"normal", "lognormal", "truncated-normal", "uniform"},
+	"key":          append(slices.Clone(reliability.LayerKeys), reliability.GlobalKeys...),
 	// The methods chosen for the whole pile: those that need no key (a
 	// given value belongs to a layer); shaft_drained takes a method that
 	// gives fs at each depth, shaft_undrained also the λ method.
@@ -210,6 +214,8 @@ var required = map[reflect.Type][]string{
 	reflect.TypeOf(PorePoint{}):   {"depth", "pressure"},
 	reflect.TypeOf(CurvePoints{}): {"points"},
 	reflect.TypeOf(LoadTest{}):    {"points"},
+	reflect.TypeOf(Uncertain{}):   {"key", "distribution"},
+	reflect.TypeOf(Correlation{}): {"between", "rho"},
 }
 
 var quantity = map[string]any{

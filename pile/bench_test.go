@@ -14,7 +14,10 @@ import (
 
 // benchProfile is a 10-layer profile of our own: sand and clay in turn,
 // 6.5 m each, water table at 1.5 m; sands carry Ir for Vesic's tip.
-func benchProfile(b *testing.B) *profile.Profile {
+func benchProfile(b *testing.B) *profile.Profile { return benchProfileT(b) }
+
+// benchProfileT is benchProfile for tests.
+func benchProfileT(b testing.TB) *profile.Profile {
 	var ls []profile.LayerSpec
 	for i := 0; i < 10; i++ {
 		if i%2 == 0 {
@@ -62,26 +65,32 @@ func BenchmarkCapacity(b *testing.B) {
 }
 
 // BenchmarkCapacityWithDepth: the same profile, tip depths every 0.1 m to
-// 60 m, in one pass.
+// 60 m (600 depths) and every 0.01 m (6,000 depths), in one pass.
 func BenchmarkCapacityWithDepth(b *testing.B) {
 	prof := benchProfile(b)
 	p := Pile{Section: Section{Shape: Circle, Diameter: 0.6 * m}, Length: 60 * m, Installation: DrivenHigh}
 	for _, al := range benchAlphas {
-		b.Run(al.name, func(b *testing.B) {
-			a, err := NewAnalysis(prof, p, Methods{TipDrained: bearing.Vesic{}, ShaftUndrained: al.m, LayeredTip: true}, nil)
-			if err != nil {
-				b.Fatal(err)
-			}
-			rows := make([]Capacity, 0, 700)
-			b.ReportAllocs()
-			for b.Loop() {
-				var err error
-				rows, err = a.WithDepth(DepthGrid{From: 0.1 * m, To: 60 * m, Step: 0.1 * m}, rows[:0])
+		for _, st := range []struct {
+			name string
+			step units.Length
+		}{{"600", 0.1 * m}, {"6000", 0.01 * m}} {
+			b.Run(al.name+"/"+st.name, func(b *testing.B) {
+				a, err := NewAnalysis(prof, p, Methods{TipDrained: bearing.Vesic{}, ShaftUndrained: al.m, LayeredTip: true}, nil)
 				if err != nil {
 					b.Fatal(err)
 				}
-			}
-		})
+				rows := make([]Capacity, 0, 6100)
+				b.ReportAllocs()
+				for b.Loop() {
+					var err error
+					rows, err = a.WithDepth(DepthGrid{From: st.step, To: 60 * m, Step: st.step}, rows[:0])
+					if err != nil {
+						b.Fatal(err)
+					}
+				}
+				b.ReportMetric(float64(len(rows))*float64(b.N)/b.Elapsed().Seconds(), "depths/s")
+			})
+		}
 	}
 }
 

@@ -287,27 +287,36 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 		}
 	}
 	var tr tipResult
-	if err := a.tipAt(t, &tr, nil, s.k); err != nil {
+	if err := a.tipQuick(t, &tr, s.k); err != nil {
 		return err
 	}
-	qp := tr.qp
+	a.assemble(c, tr.qp, tr.sigma, tr.f, outer, design, tension, uplift, s.weight, s.flags|lamFlags|zoneFlags|tr.flags)
+	return nil
+}
+
+// assemble sets c from the unit tip resistance qp (after the rules), σ′v
+// at the tip and the tip's design multiplier f, the shaft integrals
+// (outer, design, tension and uplift, N/m), the pile's weight W′ and the
+// flags of shaft and tip: the plug modes, self-weight, compression and
+// tension.
+func (a *Analysis) assemble(c *Capacity, qp, sigma, f, outer, design, tension, uplift, weight float64, flags Flags) {
 	if a.methods.SelfWeight == WeightNet {
-		qp = max(0, qp-tr.sigma)
+		qp = max(0, qp-sigma)
 	}
 	c.UnitTip = units.Stress(qp)
-	c.Flags = s.flags | tr.flags | lamFlags | zoneFlags
-	c.Weight = units.Force(s.weight)
+	c.Flags = flags
+	c.Weight = units.Force(weight)
 	// Modes: plugged (gross area, outer perimeter) and unplugged (material
 	// area, outer plus inner perimeter).
 	plTip, plShaft := qp*a.gross, outer*a.outer
-	plDes := tr.f*qp*a.gross + design*a.outer
+	plDes := f*qp*a.gross + design*a.outer
 	c.Plugged = true
 	c.Tip, c.Shaft = units.Force(plTip), units.Force(plShaft)
 	desC := plDes
 	tenShaft, tenDes := uplift*a.outer, tension*a.outer
 	if a.pile.Section.CanPlug() {
 		unTip, unShaft := qp*a.mat, outer*(a.outer+a.inner)
-		unDes := tr.f*qp*a.mat + design*(a.outer+a.inner)
+		unDes := f*qp*a.mat + design*(a.outer+a.inner)
 		// The lesser mode: on the design resistance in a design case (the
 		// factors on tip and shaft differ), else on the characteristic one.
 		lesserUn := unTip+unShaft < plTip+plShaft
@@ -330,7 +339,7 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	c.Compression = c.Tip + c.Shaft
 	if a.methods.SelfWeight == WeightGross {
 		c.Compression -= c.Weight
-		desC -= s.weight
+		desC -= weight
 		if c.Compression < 0 {
 			c.Flags |= WeightExceedsResistance
 		}
@@ -338,8 +347,7 @@ func (a *Analysis) finish(s *sums, t float64, c *Capacity) error {
 	c.TensionShaft = units.Force(tenShaft)
 	c.Tension = c.TensionShaft + c.Weight
 	c.DesignCompression = units.Force(desC)
-	c.DesignTension = units.Force(tenDes + a.upliftWeight()*s.weight)
-	return nil
+	c.DesignTension = units.Force(tenDes + a.upliftWeight()*weight)
 }
 
 // tipResult is the unit tip resistance at a depth with what made it.

@@ -231,7 +231,7 @@ func RequiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, 
 		if err != nil {
 			return LengthResult{}, fmt.Errorf("design case %s: %w", cs.Name, err)
 		}
-		r, err := a.withDepth(p.HeadDepth+step, maxTip, step, nil)
+		r, err := a.checkedWithDepth(p.HeadDepth+step, maxTip, step, nil)
 		if err != nil {
 			return LengthResult{}, fmt.Errorf("design case %s: %w", cs.Name, err)
 		}
@@ -327,10 +327,11 @@ func (a *Analysis) WithDepth(g DepthGrid, dst []Capacity) ([]Capacity, error) {
 	if to == 0 {
 		to = a.prof.Depth()
 	}
-	return a.withDepth(from, to, step, dst)
+	return a.checkedWithDepth(from, to, step, dst)
 }
 
-func (a *Analysis) withDepth(from, to, step units.Length, dst []Capacity) ([]Capacity, error) {
+// checkedWithDepth checks the depth range and runs withDepth.
+func (a *Analysis) checkedWithDepth(from, to, step units.Length, dst []Capacity) ([]Capacity, error) {
 	head := a.pile.HeadDepth
 	if !(from > head) || to > a.prof.Depth() || !(to >= from) {
 		return dst, fmt.Errorf("pile: depth range %v to %v: want below the head (%v) and within the profile (to %v)", from, to, head, a.prof.Depth())
@@ -342,25 +343,5 @@ func (a *Analysis) withDepth(from, to, step units.Length, dst []Capacity) ([]Cap
 	if n > 1e6 {
 		return dst, fmt.Errorf("pile: %d depths asked for; at most 1e6", n)
 	}
-	var s sums
-	prev := float64(head)
-	for i := 0; i <= n; i++ {
-		z := float64(from) + float64(i)*float64(step)
-		if i == n {
-			if float64(to)-prev <= 1e-9*float64(step) {
-				break
-			}
-			z = float64(to)
-		}
-		z = min(z, float64(to))
-		if err := a.addShaft(&s, prev, z); err != nil {
-			return dst, err
-		}
-		prev = z
-		dst = append(dst, Capacity{})
-		if err := a.finish(&s, z, &dst[len(dst)-1]); err != nil {
-			return dst[:len(dst)-1], err
-		}
-	}
-	return dst, nil
+	return a.withDepth(float64(from), float64(step), float64(to), n, dst)
 }

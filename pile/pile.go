@@ -344,8 +344,9 @@ type Analysis struct {
 	useCase   bool
 	cs        Case
 	weakBelow float64
-	embedN    float64 // (Lb/D)cr of the embedment ramp
-	drilled   bool    // some layer has the drilled-shaft zones in force
+	embedN    float64     // (Lb/D)cr of the embedment ramp
+	drilled   bool        // some layer has the drilled-shaft zones in force
+	dp        []depthPlan // per interval: how capacity with depth treats it (prepareDepth)
 }
 
 // Validate checks the pile's geometry and installation.

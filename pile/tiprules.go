@@ -201,4 +201,5 @@ func (a *Analysis) prepareTipRules() {
 			lp.effTop, lp.errEff = a.weakRule(i, float64(lp.layer.Top), lp.baseTop, &fl, nil)
 		}
 	}
+	a.prepareDepth()
 }

@@ -14,6 +14,7 @@ import (
 //	capacity, report: the shaft segments, then one tip row
 //	length:          capacity with depth
 //	settle:          the predicted load-settlement curve, with the load test's points
+//	reliability:     the Monte Carlo and FOSM estimates (the capacity table without a reliability section)
 func csvTable(r *calc.Result, o Options) *table {
 	c := conv{o.sys}
 	switch o.View {
@@ -28,6 +29,10 @@ func csvTable(r *calc.Result, o Options) *table {
 		return withDepthTable(r, c)
 	case ViewSettle:
 		return settleCSV(r, c)
+	case ViewReliability:
+		if r.Reliability != nil && r.Reliability.MonteCarlo != nil {
+			return reliabilityTable(r.Reliability, c)
+		}
 	}
 	return breakdownTable(r, c)
 }

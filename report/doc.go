@@ -27,6 +27,10 @@
 //	ViewSettle    loads, capacity totals, the settlement at the serviceability load against the allowable
 //	              (method, inputs, worked equations or the curves used), the predicted load-settlement
 //	              curve, axial load and displacement with depth, the load test's points and criteria
+//	ViewReliability  capacity totals and the probabilistic capacity: the uncertain parameters and their
+//	              correlations, Monte Carlo and FOSM side by side (mean, σ, CoV, 5/50/95 % percentiles,
+//	              P(R < Q), β), the sensitivity ranking; also in ViewReport when the file has a
+//	              reliability section
 //
 // Each format renders the view as follows.
 //
@@ -36,14 +40,16 @@
 //	Markdown  the same content as Text, as headings and pipe tables
 //	CSV       one table per view: check, one row per design case (characteristic totals without a design
 //	          basis); capacity and report, one row per shaft segment then a tip row; length, capacity with depth;
-//	          settle, the predicted load-settlement curve then the load test's points
+//	          settle, the predicted load-settlement curve then the load test's points; reliability, the
+//	          Monte Carlo and FOSM table
 //	JSON      the whole result for every view (schema calc.ResultSchema, described in JSON.md)
 //	HTML      the view's sections in one self-contained page (inline CSS and SVG, no scripts, no external
 //	          fetches). ViewReport is the calculation package: it adds the inputs as entered, a drawing of
 //	          the ground profile to scale, a plot of vertical stress with depth and a plot of capacity with
 //	          depth; ViewLength adds the capacity plot; the settlement section adds the load-settlement
-//	          curve (predicted and measured) and the axial load with depth; ViewCheck and ViewCapacity
-//	          are tables only. Print styles give A4 or Letter pages with the PDF's header and footer.
+//	          curve (predicted and measured) and the axial load with depth; the reliability section adds
+//	          the histogram, the distribution function and the sensitivity chart; ViewCheck and
+//	          ViewCapacity are tables only. Print styles give A4 or Letter pages with the PDF's header and footer.
 //	PDF       the view's sections as HTML has them, on A4 (SI) or Letter (US) pages (Options.Paper), with
 //	          fpdf and the Liberation fonts embedded: a header (title, project, revision) and a footer
 //	          (version, the calc file's SHA-256 prefix, date, page x of y, the cautions) on every page;

@@ -149,6 +149,9 @@ func addFigures(d *doc, r *calc.Result, o Options) error {
 		if err := settleFigures(s, r, c); err != nil {
 			return err
 		}
+		if err := reliabilityFigures(s, r, c); err != nil {
+			return err
+		}
 	}
 	return nil
 }

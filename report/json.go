@@ -89,6 +89,7 @@ type jResult struct {
 	WithDepth []jDepthRow  `json:"capacity_with_depth"`
 	Settle    *jSettle     `json:"settlement,omitempty"`
 	LoadTest  *jLoadTest   `json:"load_test,omitempty"`
+	Reliab    *jReliab     `json:"reliability,omitempty"`
 	Warnings  []string     `json:"warnings"`
 	Defaults  []defaultRow `json:"defaults"`
 	Sources   []jSource    `json:"sources"`
@@ -481,6 +482,7 @@ func toJSON(r *calc.Result, o Options) *jResult {
 		j.Sources = append(j.Sources, jSource{s.Key, s.Authors, s.Year, s.Title, s.Publication, s.String()})
 	}
 	j.Settle, j.LoadTest = settleJSON(r, c), loadTestJSON(r, c)
+	j.Reliab = reliabilityJSON(r, c)
 	return j
 }
 

@@ -135,7 +135,11 @@ func build(r *calc.Result, o Options) *doc {
 		add(secWithDepth(r, c))
 		add(secSettlement(r, c))
 		add(secLoadTest(r, c))
+		add(secReliability(r, c))
 		add(secDefaults(r, c))
+	case ViewReliability:
+		add(secTotals(r, c))
+		add(secReliability(r, c))
 	case ViewSettle:
 		add(secLoads(r, c))
 		add(secTotals(r, c))

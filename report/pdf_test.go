@@ -17,7 +17,6 @@ import (
 	"strings"
 	"testing"
 	"unicode/utf16"
-
 )
 
 // pdfDoc is what the tests read from a PDF: its page count, media boxes

@@ -82,11 +82,15 @@ const (
 	// predicted load-settlement curve, the axial load with depth and the
 	// load test read by its criteria.
 	ViewSettle
+	// ViewReliability is the probabilistic capacity: the uncertain
+	// parameters, Monte Carlo and FOSM estimates, the sensitivity ranking.
+	ViewReliability
 )
 
-var viewNames = [...]string{ViewCheck: "check", ViewCapacity: "capacity", ViewLength: "length", ViewReport: "report", ViewSettle: "settle"}
+var viewNames = [...]string{ViewCheck: "check", ViewCapacity: "capacity", ViewLength: "length", ViewReport: "report", ViewSettle: "settle", ViewReliability: "reliability"}
 
-// String returns "check", "capacity", "length", "report" or "settle".
+// String returns "check", "capacity", "length", "report", "settle" or
+// "reliability".
 func (v View) String() string {
 	if v >= 0 && int(v) < len(viewNames) {
 		return viewNames[v]
@@ -101,7 +105,7 @@ func ParseView(s string) (View, error) {
 			return View(i), nil
 		}
 	}
-	return 0, fmt.Errorf("report: view %q: want check, capacity, length, report or settle", s)
+	return 0, fmt.Errorf("report: view %q: want check, capacity, length, report, settle or reliability", s)
 }
 
 // Units chooses the display system of a report.
@@ -194,7 +198,7 @@ func Write(w io.Writer, r *calc.Result, f Format, o Options) error {
 		return err
 	}
 	if o.View < 0 || int(o.View) >= len(viewNames) {
-		return fmt.Errorf("report: view %v: want check, capacity, length, report or settle", o.View)
+		return fmt.Errorf("report: view %v: want check, capacity, length, report, settle or reliability", o.View)
 	}
 	bw := bufio.NewWriterSize(w, 32<<10)
 	switch f {

@@ -10,6 +10,7 @@
 //	qult length   [flags] FILE   required length and capacity with depth (exit 1 when none passes)
 //	qult report   [flags] FILE   the calculation package (HTML when -o ends in .html)
 //	qult settle   [flags] FILE   settlement at the serviceability load and the load test (exit 1 when it exceeds the allowable)
+//	qult reliability [flags] FILE  probabilistic capacity: Monte Carlo, FOSM and sensitivities
 //	qult phase    [flags]        three-phase relations of one soil element
 //	qult factors  [flags]        tip bearing factors by every applicable method
 //	qult batch    [flags] [FILE] JSON Lines in (one calc file per line), JSON Lines out
@@ -74,6 +75,7 @@ func init() {
 		{"length", "required pile length and capacity with depth; exit 1 when no length passes", runLength},
 		{"report", "the calculation package (text, or HTML when -o ends in .html)", runReport},
 		{"settle", "settlement at the serviceability load and the load test; exit 1 when it exceeds the allowable", runSettle},
+		{"reliability", "probabilistic capacity: Monte Carlo, FOSM and the sensitivity ranking", runReliability},
 		{"phase", "three-phase relations of one soil element (Gs, e, n, w, S, unit weights)", runPhase},
 		{"factors", "tip bearing factors by every applicable method, side by side", runFactors},
 		{"batch", "JSON Lines in (one calc file per line), JSON Lines out, in parallel, order kept", runBatch},
@@ -168,15 +170,15 @@ func writeUsage(w io.Writer) {
 	fmt.Fprintf(w, "qult: axial capacity of piles and drilled shafts from a calc file\n\n")
 	fmt.Fprintf(w, "usage: qult VERB [flags] [FILE]\n\n")
 	for _, v := range verbs {
-		for i, l := range wrapWords(v.summary, textWidth-12) {
+		for i, l := range wrapWords(v.summary, textWidth-14) {
 			name := ""
 			if i == 0 {
 				name = v.name
 			}
-			fmt.Fprintf(w, "  %-9s %s\n", name, l)
+			fmt.Fprintf(w, "  %-11s %s\n", name, l)
 		}
 	}
-	fmt.Fprintf(w, "  %-9s %s\n", "help", "help for a verb, with an example: qult help VERB")
+	fmt.Fprintf(w, "  %-11s %s\n", "help", "help for a verb, with an example: qult help VERB")
 	fmt.Fprintf(w, "\nFILE is a calc file in YAML or JSON; \"-\" reads standard input.\n")
 	fmt.Fprintf(w, "Exit codes: 0 done, 1 the design check fails, 2 bad input or usage.\n")
 }

@@ -1,0 +1,152 @@
+package reliability
+
+import (
+	"fmt"
+	"math"
+
+	"gonum.org/v1/gonum/mat"
+)
+
+// Param is one uncertain parameter: a name for the output (a calc-file
+// path such as "layers[2].friction_angle") and its distribution.
+type Param struct {
+	Name string
+	Dist Distribution
+}
+
+// Outcome is the capacity for one set of parameter values, N.
+type Outcome struct {
+	Compression, Tension float64
+}
+
+// Evaluator computes the capacity for one vector of parameter values (in
+// the order of Problem.Params). An Evaluator is used by one goroutine at a
+// time; it should not allocate.
+type Evaluator interface {
+	Capacity(x []float64) (Outcome, error)
+}
+
+// Model makes Evaluators, one for each worker.
+type Model interface {
+	NewEvaluator() (Evaluator, error)
+}
+
+// Problem is a probabilistic capacity problem.
+type Problem struct {
+	Params []Param
+	// Correlation is the matrix of correlation coefficients between the
+	// parameters (in the Gaussian copula: between their normal scores),
+	// len(Params) × len(Params), symmetric, with a unit diagonal and
+	// entries in [−1, 1]; nil means independent parameters. It must be
+	// positive definite.
+	Correlation [][]float64
+	Model       Model
+}
+
+// prepared is a validated problem: its marginals and the Cholesky factor
+// of its correlation matrix (nil for independent parameters).
+type prepared struct {
+	m    []marginal
+	chol []float64 // lower triangle, row-major n×n; nil: identity
+	n    int
+}
+
+func (p *Problem) prepare() (*prepared, error) {
+	if p.Model == nil {
+		return nil, fmt.Errorf("reliability: no model")
+	}
+	n := len(p.Params)
+	if n == 0 {
+		return nil, &FieldError{Path: "params", Msg: "no uncertain parameter given"}
+	}
+	out := &prepared{n: n}
+	seen := map[string]int{}
+	for i, pr := range p.Params {
+		if err := pr.Dist.Validate(); err != nil {
+			fe := err.(*FieldError)
+			fe.Path = fmt.Sprintf("params[%d]", i)
+			if pr.Name != "" {
+				fe.Path = pr.Name
+			}
+			return nil, fe
+		}
+		if pr.Name != "" {
+			if j, ok := seen[pr.Name]; ok {
+				return nil, &FieldError{Path: fmt.Sprintf("params[%d]", i), Msg: fmt.Sprintf("%q is given twice (also params[%d])", pr.Name, j)}
+			}
+			seen[pr.Name] = i
+		}
+		out.m = append(out.m, newMarginal(pr.Dist))
+	}
+	if p.Correlation == nil {
+		return out, nil
+	}
+	c := p.Correlation
+	if len(c) != n {
+		return nil, &FieldError{Path: "correlation", Msg: fmt.Sprintf("%d rows for %d parameters", len(c), n)}
+	}
+	sym := mat.NewSymDense(n, nil)
+	for i := range n {
+		if len(c[i]) != n {
+			return nil, &FieldError{Path: fmt.Sprintf("correlation[%d]", i), Msg: fmt.Sprintf("%d entries for %d parameters", len(c[i]), n)}
+		}
+		for j := range n {
+			v := c[i][j]
+			if !(v >= -1 && v <= 1) {
+				return nil, &FieldError{Path: fmt.Sprintf("correlation[%d][%d]", i, j), Msg: fmt.Sprintf("%g is outside −1 to 1", v)}
+			}
+			if i == j && v != 1 {
+				return nil, &FieldError{Path: fmt.Sprintf("correlation[%d][%d]", i, j), Msg: fmt.Sprintf("%g: the diagonal must be 1", v)}
+			}
+			if v != c[j][i] {
+				return nil, &FieldError{Path: fmt.Sprintf("correlation[%d][%d]", i, j), Msg: fmt.Sprintf("%g differs from correlation[%d][%d] = %g: want a symmetric matrix", v, j, i, c[j][i])}
+			}
+			if j >= i {
+				sym.SetSym(i, j, v)
+			}
+		}
+	}
+	var ch mat.Cholesky
+	if ok := ch.Factorize(sym); !ok {
+		return nil, &FieldError{Path: "correlation", Msg: "the matrix of correlation coefficients is not positive definite: some coefficients contradict each other (a ρ of ±1, or three pairs that cannot hold together); lower their magnitudes"}
+	}
+	var l mat.TriDense
+	ch.LTo(&l)
+	out.chol = make([]float64, n*n)
+	for i := range n {
+		for j := 0; j <= i; j++ {
+			out.chol[i*n+j] = l.At(i, j)
+		}
+	}
+	return out, nil
+}
+
+// transform maps independent standard normals u into the parameter
+// values x: z = L·u (correlated normal scores), x = F⁻¹(Φ(z)). It does
+// not allocate.
+func (p *prepared) transform(u, x []float64) {
+	n := p.n
+	for i := range n {
+		z := u[i]
+		if p.chol != nil {
+			z = 0
+			row := p.chol[i*n : i*n+i+1]
+			for j, l := range row {
+				z += l * u[j]
+			}
+		}
+		x[i] = p.m[i].fromNormal(z)
+	}
+}
+
+// means returns the parameters' means.
+func (p *prepared) means() []float64 {
+	x := make([]float64, p.n)
+	for i := range p.m {
+		x[i] = p.m[i].mean
+	}
+	return x
+}
+
+// finite reports whether v is neither NaN nor infinite.
+func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
