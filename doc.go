@@ -9,17 +9,18 @@
 // published source. The packages, from the lowest floor up (an import only
 // points down):
 //
-//	units    typed quantities in SI base units; SI and US customary parsing and display
-//	cite     published sources as data
-//	phase    three-phase relations of one soil element
-//	bearing  tip resistance: bearing-capacity factors and unit tip resistance
-//	shaft    unit shaft resistance: β, α and λ methods, with limits
-//	profile  the ground: layers, groundwater, excavation and scour, total and effective vertical stress
-//	pile     capacity of a pile in the ground, design bases, required length
-//	settle   single-pile settlement and static load-test interpretation
+//	units        typed quantities in SI base units; SI and US customary parsing and display
+//	cite         published sources as data
+//	phase        three-phase relations of one soil element
+//	bearing      tip resistance: bearing-capacity factors and unit tip resistance
+//	shaft        unit shaft resistance: β, α and λ methods, with limits
+//	profile      the ground: layers, groundwater, excavation and scour, total and effective vertical stress
+//	pile         capacity of a pile in the ground, design bases, required length
+//	settle       single-pile settlement and static load-test interpretation
 //	reliability  probabilistic capacity: Monte Carlo, FOSM and sensitivities
-//	calc     the calc file: decoding, validation, the run and its result
-//	report   text, CSV, JSON, Markdown and HTML calculation packages
+//	calc         the calc file: decoding, validation, the run and its result; batch
+//	report       text, CSV, JSON, records, Markdown, HTML and PDF calculation packages
+//	verify       the verification record: reference cases from published sources
 //
 // The command-line tool is cmd/qult.
 //
