@@ -86,6 +86,9 @@ type Layer struct {
 	Bottom    Value  `yaml:"bottom,omitempty" json:"bottom,omitempty" q:"length,0," doc:"Depth of the bottom of the layer below ground level."`
 	// Drainage is "drained" (φ′, c′ govern) or "undrained" (su governs).
 	Drainage string `yaml:"drainage" json:"drainage"`
+	// Soil is the kind of soil as the log names it; description only (the
+	// report's ground drawing shows it with a pattern).
+	Soil string `yaml:"soil,omitempty" json:"soil,omitempty" doc:"Kind of soil as the log names it (description only: the ground drawing shows it with a fill pattern)."`
 
 	UnitWeight          Value `yaml:"unit_weight,omitempty" json:"unit_weight,omitempty" q:"unitweight,0," doc:"Unit weight above the water table."`
 	SaturatedUnitWeight Value `yaml:"saturated_unit_weight,omitempty" json:"saturated_unit_weight,omitempty" q:"unitweight,0," doc:"Saturated unit weight, used below the water table."`

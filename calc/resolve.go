@@ -239,6 +239,13 @@ func (r *resolver) groundSpec(g *Ground, pre string, sys units.System) profile.S
 		default:
 			r.add(path+".drainage", 0, "%q: want drained or undrained", l.Drainage)
 		}
+		if l.Soil != "" {
+			soil, err := profile.ParseSoil(strings.ToLower(strings.TrimSpace(l.Soil)))
+			if err != nil {
+				r.add(path+".soil", 0, "%v", err)
+			}
+			ls.Soil = soil
+		}
 		ls.UnitWeight = r.weight(l.UnitWeight, path+".unit_weight")
 		ls.SaturatedUnitWeight = r.weight(l.SaturatedUnitWeight, path+".saturated_unit_weight")
 		ls.DryUnitWeight = r.weight(l.DryUnitWeight, path+".dry_unit_weight")

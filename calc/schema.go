@@ -28,6 +28,7 @@ const SchemaID = "urn:qult:calc-file:1"
 // enums lists the accepted words of string fields, by key.
 var enums = map[string][]string{
 	"drainage":     {"drained", "undrained"},
+	"soil":         {"gravel", "sand", "silt", "clay", "peat", "fill"},
 	"shape":        {"circle", "square", "closed-pipe", "open-pipe", "h-section", "given"},
 	"installation": {"driven-high", "driven-low", "bored", "augered", "jetted"},
 	"surface":      {"rough-concrete", "smooth-concrete", "rough-steel", "smooth-steel", "timber"},

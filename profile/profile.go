@@ -273,6 +273,10 @@ func (p *Profile) resolveLayer(i int, ls LayerSpec, geometryOK bool, c *collecto
 	if geometryOK {
 		l.Removed = min(max(units.Length(p.design)-l.Top, 0), l.Bottom-l.Top)
 	}
+	l.Soil = ls.Soil
+	if ls.Soil > Fill {
+		c.add(path+".soil", "%v: want one of gravel, sand, silt, clay, peat, fill", ls.Soil)
+	}
 	l.Drainage = ls.Drainage
 	switch ls.Drainage {
 	case Drained, Undrained:

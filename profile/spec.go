@@ -88,6 +88,8 @@ type PorePoint struct {
 // LayerSpec is one layer as a log gives it. Zero means not given throughout.
 type LayerSpec struct {
 	Name string // free text; empty becomes "layer N"
+	// Soil is the kind of soil as the log names it (description only).
+	Soil Soil
 	// Thickness, or Top and Bottom depths (Bottom non-zero selects them).
 	// Giving all three requires Bottom − Top = Thickness.
 	Thickness   units.Length
@@ -165,6 +167,7 @@ func (b Basis) String() string {
 // Layer is one resolved layer of a Profile.
 type Layer struct {
 	Name        string
+	Soil        Soil // the kind of soil as the log names it; SoilUnset if not
 	Top, Bottom units.Length
 	Drainage    Drainage
 	Phi         units.Angle

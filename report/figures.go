@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"image/color"
 	"math"
+	"slices"
 	"sort"
 	"strings"
 
@@ -152,7 +153,7 @@ func groundFigure(r *calc.Result, c conv) (figure, error) {
 		colW      = vg.Length(190)
 		labelX    = left + colW + 16
 		top       = vg.Length(26)
-		bottom    = vg.Length(52) // room for the key
+		keyRow    = vg.Length(18) // a row of the key
 		drawH     = vg.Length(520)
 		fontSize  = vg.Length(9.5)
 		lineH     = vg.Length(11.5)
@@ -165,6 +166,27 @@ func groundFigure(r *calc.Result, c conv) (figure, error) {
 	if r.Ground == nil || len(r.Layers) == 0 {
 		return figure{}, nil
 	}
+	// The soils the log names, in the order of the layers, for the key.
+	var soils []profile.Soil
+	for _, l := range r.Layers {
+		if l.Soil != profile.SoilUnset && !slices.Contains(soils, l.Soil) {
+			soils = append(soils, l.Soil)
+		}
+	}
+	bottom := vg.Length(52) // room for the key
+	f := sans(fontSize, false)
+	const soilKey = "Soil as logged:"
+	if len(soils) > 0 {
+		bottom += keyRow
+		kx := left - 40 + f.Width(soilKey) + 10
+		for _, s := range soils {
+			if kx+keyBoxW+4+f.Width(s.String()) > W-2 {
+				bottom += keyRow
+				kx = left - 40
+			}
+			kx += keyBoxW + 4 + f.Width(s.String()) + 14
+		}
+	}
 	H := top + drawH + bottom
 	zBot := float64(r.Ground.Depth())
 	zw, wet := r.Ground.WaterDepth()
@@ -174,7 +196,6 @@ func groundFigure(r *calc.Result, c conv) (figure, error) {
 	}
 	scale := float64(drawH) / (zBot - zTop) // pt per metre
 	y := func(z float64) vg.Length { return top + vg.Length((z-zTop)*scale) }
-	f := sans(fontSize, false)
 	fb := sans(fontSize, true)
 	ft := sans(tickFont, false)
 	p0 := r.Pile
@@ -241,6 +262,7 @@ func groundFigure(r *calc.Result, c conv) (figure, error) {
 			}
 			y0, y1 := y(float64(l.Top)), y(float64(l.Bottom))
 			p.rect(left, y0, colW, y1-y0, fill, grey, 0.8)
+			p.soilPattern(l.Soil, left, y0, colW, y1-y0)
 		}
 		// The soil removed above the design ground line is shaded out.
 		if zd > 0 {
@@ -310,8 +332,12 @@ func groundFigure(r *calc.Result, c conv) (figure, error) {
 		}
 		// the key: the fill shows drainage only
 		ky := H - bottom + 24
-		p.text(f, left-40, ky+keyBoxH/2, "Fill shows drainage, not soil type:", 'l', color.Black)
-		kx := left - 40 + f.Width("Fill shows drainage, not soil type:") + 10
+		fillKey := "Fill shows drainage, not soil type:"
+		if len(soils) > 0 {
+			fillKey = "Shading shows drainage:"
+		}
+		p.text(f, left-40, ky+keyBoxH/2, fillKey, 'l', color.Black)
+		kx := left - 40 + f.Width(fillKey) + 10
 		for _, k := range []struct {
 			fill color.Color
 			name string
@@ -323,6 +349,22 @@ func groundFigure(r *calc.Result, c conv) (figure, error) {
 		if wet {
 			p.line(kx, ky+keyBoxH/2, kx+keyBoxW, ky+keyBoxH/2, water, 1.5, []vg.Length{6, 3})
 			p.text(f, kx+keyBoxW+4, ky+keyBoxH/2, "water", 'l', color.Black)
+		}
+		// the second row: the pattern of each soil the log names
+		if len(soils) > 0 {
+			ky += keyRow
+			p.text(f, left-40, ky+keyBoxH/2, soilKey, 'l', color.Black)
+			kx = left - 40 + f.Width(soilKey) + 10
+			for _, s := range soils {
+				if kx+keyBoxW+4+f.Width(s.String()) > W-2 { // a further row when the key runs out of width
+					ky += keyRow
+					kx = left - 40
+				}
+				p.rect(kx, ky, keyBoxW, keyBoxH, color.White, grey, 0.8)
+				p.soilPattern(s, kx, ky, keyBoxW, keyBoxH)
+				p.text(f, kx+keyBoxW+4, ky+keyBoxH/2, s.String(), 'l', color.Black)
+				kx += keyBoxW + 4 + f.Width(s.String()) + 14
+			}
 		}
 	}
 	return newFigure("Ground profile", W, H, paint)

@@ -119,7 +119,11 @@ func addFigures(d *doc, r *calc.Result, o Options) error {
 				return err
 			}
 			if g.svg != "" {
-				s.blocks = append(s.blocks, figBlock(g, "Ground profile drawn to scale (depths and pile width at the same scale; the width of the ground column is arbitrary; the fill shows drainage, not soil type)."))
+				caption := "Ground profile drawn to scale (depths and pile width at the same scale; the width of the ground column is arbitrary; the fill shows drainage, not soil type)."
+				if hasSoil(r) {
+					caption = "Ground profile drawn to scale (depths and pile width at the same scale; the width of the ground column is arbitrary; the shading shows drainage, the pattern the soil the log names)."
+				}
+				s.blocks = append(s.blocks, figBlock(g, caption))
 			}
 		case headCompared:
 			g, err := compareFigure(r, c)

@@ -132,6 +132,7 @@ type jLayer struct {
 	Top                 qty    `json:"top"`
 	Bottom              qty    `json:"bottom"`
 	Drainage            string `json:"drainage"`
+	Soil                string `json:"soil,omitempty"`
 	FrictionAngle       *qty   `json:"friction_angle,omitempty"`
 	Cohesion            *qty   `json:"cohesion,omitempty"`
 	SuTop               *qty   `json:"su_top,omitempty"`
@@ -363,7 +364,7 @@ func toJSON(r *calc.Result, o Options) *jResult {
 	}
 	j.Ground.Layers = []jLayer{}
 	for i, l := range r.Layers {
-		jl := jLayer{Name: l.Name, Top: c.L(l.Top), Bottom: c.L(l.Bottom), Drainage: l.Drainage.String(),
+		jl := jLayer{Name: l.Name, Top: c.L(l.Top), Bottom: c.L(l.Bottom), Drainage: l.Drainage.String(), Soil: l.Soil.String(),
 			FrictionAngle: opt(c.deg(l.Phi), l.Phi > 0), Cohesion: opt(c.S(l.Cohesion), l.Cohesion > 0),
 			SuTop: opt(c.S(l.SuTop), l.HasSu), SuBottom: opt(c.S(l.SuBottom), l.HasSu),
 			UnitWeight: opt(c.G(l.UnitWeight), l.UnitWeight > 0), SaturatedUnitWeight: opt(c.G(l.SaturatedUnitWeight), l.SaturatedUnitWeight > 0),

@@ -170,6 +170,7 @@ var badCases = []badCase{
 	{file: "315-reliability-sd-in-kpa-for-angle", want: []string{"reliability.parameters[0].sd (line 29)", "want an angle"}},
 	{file: "316-reliability-no-parameters", want: []string{"reliability.parameters (line 28)", "at least one"}},
 	{file: "317-reliability-same-value-twice", want: []string{"reliability.parameters[1].key (line 30)", "same value"}},
+	{file: "318-unknown-soil", want: []string{"ground.layers[0].soil (line 7)", "want one of gravel, sand, silt, clay, peat, fill"}},
 }
 
 const badTimeout = 5 * time.Second
