@@ -316,12 +316,12 @@ type Basis interface {
 //
 // In a calc file these are the keys of design (basis: safety-factor):
 // Global is factor, Tip is tip_factor, Shaft is shaft_factor, Tension is
-// tension_factor and WeightUnfactored is weight_unfactored.
+// tension_safety_factor and WeightUnfactored is weight_unfactored.
 type SafetyFactor struct {
 	Global           float64 // the global factor of safety (calc file: factor)
 	Tip              float64 // the factor on the tip (tip_factor)
 	Shaft            float64 // the factor on the shaft (shaft_factor)
-	Tension          float64 // the factor in tension (tension_factor)
+	Tension          float64 // the factor in tension (tension_safety_factor)
 	WeightUnfactored bool    // count W′ unfactored in uplift (weight_unfactored)
 }
 
