@@ -12,6 +12,11 @@ import (
 	"pgregory.net/rapid"
 )
 
+// The expected values in this file come from the oracle (the former
+// implementation of capacity with depth, kept in oracle_test.go), not from
+// a published source: these tests check that the faster pass computes the
+// same numbers.
+//
 // drawAnalysis draws a random profile, pile and methods (scenarios of our
 // own, no published numbers): 1 to 6 layers of drained and undrained soil
 // with constant or linear su, the shaft and tip methods of each class

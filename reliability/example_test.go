@@ -19,7 +19,7 @@ import (
 //
 // so μR = 60 kPa × 20.6167 m² = 1237.0 kN, σR = 9 kPa × 20.6167 m² =
 // 185.6 kN and, against 700 kN, β = (1237.0 − 700)/185.6 = 2.894: FOSM
-// gives these exactly, Monte Carlo within its sampling error.
+// gives these exactly (closed form), Monte Carlo within its sampling error.
 func ExampleFOSM() {
 	ground := profile.Spec{WaterDepth: 2 * units.Metre, Layers: []profile.LayerSpec{{Name: "clay", Thickness: 30 * units.Metre,
 		Drainage: profile.Undrained, Su: 60 * units.Kilopascal,
