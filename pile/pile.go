@@ -448,6 +448,7 @@ func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analy
 		}
 	}
 	var errs []error
+	a.plans = make([]layerPlan, 0, prof.NumLayers())
 	for i := 0; i < prof.NumLayers(); i++ {
 		lp, err := a.plan(i)
 		if err == nil {
