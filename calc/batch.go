@@ -23,10 +23,12 @@ type BatchOptions struct {
 	// Memory is bounded by the window, not by the length of the input.
 	// Negative is an error.
 	Window int
-	// NoWithDepth leaves capacity with depth uncomputed (Result.WithDepth
-	// and DesignWithDepth empty), for callers that do not show it: the
-	// table is the largest part of most results and of their cost.
-	NoWithDepth bool
+	// Lean leaves capacity with depth (Result.WithDepth and
+	// DesignWithDepth) and the methods compared (Result.Compared)
+	// uncomputed, for callers that do not show them: the table is the
+	// largest part of most results and the comparison the largest part of
+	// their cost.
+	Lean bool
 	// Finish, when set, is called once for every item, in the worker that
 	// ran it and before the item is delivered, so that work on the result
 	// (such as rendering it) runs in parallel too. It may set the item's
@@ -107,7 +109,7 @@ func RunBatch(ctx context.Context, in io.Reader, o BatchOptions, emit func(Batch
 		go func() {
 			defer wg.Done()
 			for j := range jobs {
-				it := batchOne(j.line, j.data, j.long, runOptions{noWithDepth: o.NoWithDepth})
+				it := batchOne(j.line, j.data, j.long, runOptions{lean: o.Lean})
 				if o.Finish != nil {
 					finish(o.Finish, &it)
 				}

@@ -47,7 +47,7 @@ func benchLines(b *testing.B, n int) []byte {
 
 // BenchmarkBatch runs 1,000 calc lines through RunBatch with one worker
 // per CPU and reports calculations per second: full results, results
-// without capacity with depth (NoWithDepth), and full results with the
+// without capacity with depth (Lean), and full results with the
 // collector's target at 400 % (as qult batch sets it; see RunBatch).
 func BenchmarkBatch(b *testing.B) {
 	const n = 1000
@@ -56,8 +56,8 @@ func BenchmarkBatch(b *testing.B) {
 		name string
 		o    calc.BatchOptions
 		gogc int
-	}{{"full", calc.BatchOptions{}, 0}, {"lean", calc.BatchOptions{NoWithDepth: true}, 0}, {"full-gogc400", calc.BatchOptions{}, 400},
-		{"lean-gogc400", calc.BatchOptions{NoWithDepth: true}, 400}} {
+	}{{"full", calc.BatchOptions{}, 0}, {"lean", calc.BatchOptions{Lean: true}, 0}, {"full-gogc400", calc.BatchOptions{}, 400},
+		{"lean-gogc400", calc.BatchOptions{Lean: true}, 400}} {
 		b.Run(c.name, func(b *testing.B) {
 			if c.gogc > 0 {
 				defer debug.SetGCPercent(debug.SetGCPercent(c.gogc))

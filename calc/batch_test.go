@@ -226,12 +226,12 @@ func TestRunBatchStops(t *testing.T) {
 	}
 }
 
-// TestRunBatchNoWithDepth: NoWithDepth leaves capacity with depth out and
-// changes nothing else of the result.
-func TestRunBatchNoWithDepth(t *testing.T) {
+// TestRunBatchLean: Lean leaves capacity with depth and the methods
+// compared out and changes nothing else of the result.
+func TestRunBatchLean(t *testing.T) {
 	in, _ := batchInput()
 	full := collect(t, in, calc.BatchOptions{Workers: 2})
-	lean := collect(t, in, calc.BatchOptions{Workers: 2, NoWithDepth: true})
+	lean := collect(t, in, calc.BatchOptions{Workers: 2, Lean: true})
 	for i := range full {
 		f, l := full[i].Result, lean[i].Result
 		if f == nil {
@@ -239,6 +239,9 @@ func TestRunBatchNoWithDepth(t *testing.T) {
 		}
 		if len(f.WithDepth) == 0 || len(l.WithDepth) != 0 || len(l.DesignWithDepth) != 0 {
 			t.Errorf("line %d: %d rows with depth in full, %d and %d in lean", full[i].Line, len(f.WithDepth), len(l.WithDepth), len(l.DesignWithDepth))
+		}
+		if f.Compared == nil || l.Compared != nil {
+			t.Errorf("line %d: methods compared %v in full, %v in lean", full[i].Line, f.Compared != nil, l.Compared != nil)
 		}
 		if f.Breakdown.Capacity != l.Breakdown.Capacity || !reflect.DeepEqual(f.Design, l.Design) || !reflect.DeepEqual(f.Length, l.Length) ||
 			!reflect.DeepEqual(f.Warnings, l.Warnings) {

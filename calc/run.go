@@ -52,9 +52,10 @@ func Run(f *File) (*Result, error) { return run(f, runOptions{}) }
 
 // runOptions trim a run to what its caller shows.
 type runOptions struct {
-	// noWithDepth leaves capacity with depth (characteristic and design)
-	// uncomputed: Result.WithDepth and DesignWithDepth stay empty.
-	noWithDepth bool
+	// lean leaves capacity with depth (characteristic and design) and the
+	// methods compared uncomputed: Result.WithDepth, DesignWithDepth and
+	// Compared stay empty.
+	lean bool
 }
 
 func run(f *File, o runOptions) (*Result, error) {
@@ -85,7 +86,9 @@ func run(f *File, o runOptions) (*Result, error) {
 		return nil, translate(f, err)
 	}
 	res.Methods = layerMethods(prof, res.Breakdown)
-	res.Compared = compare(prof, in.Pile, in.Methods, res.Breakdown)
+	if !o.lean {
+		res.Compared = compare(prof, in.Pile, in.Methods, res.Breakdown)
+	}
 	// Capacity with depth: from one step below the head to the search
 	// depth (default: the bottom of the profile).
 	step, maxTip := in.Step, in.MaxTip
@@ -109,7 +112,7 @@ func run(f *File, o runOptions) (*Result, error) {
 	deep := in.Pile
 	deep.Length = maxTip - in.Pile.HeadDepth
 	ad, err := pile.NewAnalysis(prof, deep, in.Methods, nil)
-	if err == nil && !o.noWithDepth {
+	if err == nil && !o.lean {
 		res.WithDepth, err = ad.WithDepth(pile.DepthGrid{From: in.Pile.HeadDepth + step, To: maxTip, Step: step}, nil)
 	}
 	if err != nil {

@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"math"
 	"reflect"
+	"slices"
 	"strconv"
 	"strings"
 	"sync"
@@ -116,9 +117,9 @@ type fieldPlan struct {
 	enc       encFunc
 }
 
-// structEncoder plans a struct's fields in order, leaving out the field
-// whose key is skip (if any).
-func structEncoder(t reflect.Type, skip string) encFunc {
+// structEncoder plans a struct's fields in order, leaving out the fields
+// whose keys are in skip.
+func structEncoder(t reflect.Type, skip ...string) encFunc {
 	var fields []fieldPlan
 	for i := range t.NumField() {
 		f := t.Field(i)
@@ -139,7 +140,7 @@ func structEncoder(t reflect.Type, skip string) encFunc {
 		if name == "" {
 			name = f.Name
 		}
-		if name == skip {
+		if slices.Contains(skip, name) {
 			continue
 		}
 		if !jsonPlainKey(name) {

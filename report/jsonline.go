@@ -23,9 +23,10 @@ type LineOptions struct {
 	// ID identifies the calc file (its id key, or its title), written as
 	// "id" after the line; "" leaves it out.
 	ID string
-	// OmitWithDepth leaves the capacity-with-depth table out (the bulk of
-	// most results) and says so in "omitted": ["capacity_with_depth"].
-	OmitWithDepth bool
+	// Lean leaves out the capacity-with-depth table (the bulk of most
+	// results) and the methods compared (the costliest part to compute)
+	// and says so in "omitted": ["capacity_with_depth", "methods_compared"].
+	Lean bool
 }
 
 // WriteLine writes result r as one line of compact JSON ending in a line
@@ -58,8 +59,8 @@ func WriteLine(w io.Writer, r *calc.Result, o LineOptions) error {
 		b = append(b, ',')
 	}
 	enc, tail := fullLine(), "}\n"
-	if o.OmitWithDepth {
-		enc, tail = leanLine(), `,"omitted":["capacity_with_depth"]}`+"\n"
+	if o.Lean {
+		enc, tail = leanLine(), `,"omitted":["capacity_with_depth","methods_compared"]}`+"\n"
 	}
 	// The document is {…}: its members follow the line and id, so its
 	// braces are dropped.
@@ -75,8 +76,11 @@ func WriteLine(w io.Writer, r *calc.Result, o LineOptions) error {
 // linePool recycles the line buffers (tens of kB each).
 var linePool = sync.Pool{New: func() any { b := make([]byte, 0, 64<<10); return &b }}
 
-// The plans of the result document, whole and without capacity with depth.
+// The plans of the result document, whole and lean (without capacity with
+// depth and the methods compared).
 var (
 	fullLine = sync.OnceValue(func() encFunc { return encoderOf(reflect.TypeOf(jResult{})) })
-	leanLine = sync.OnceValue(func() encFunc { return structEncoder(reflect.TypeOf(jResult{}), "capacity_with_depth") })
+	leanLine = sync.OnceValue(func() encFunc {
+		return structEncoder(reflect.TypeOf(jResult{}), "capacity_with_depth", "methods_compared")
+	})
 )

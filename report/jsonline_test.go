@@ -27,14 +27,15 @@ type jLine struct {
 	*jResult
 }
 
-// jLeanLine is jLine without capacity with depth: the nil field shadows
-// the embedded one (encoding/json takes the shallower field) and is
-// omitted.
+// jLeanLine is jLine without capacity with depth and the methods
+// compared: the nil fields shadow the embedded ones (encoding/json takes
+// the shallower field) and are omitted.
 type jLeanLine struct {
 	Line int    `json:"line,omitempty"`
 	ID   string `json:"id,omitempty"`
 	*jResult
 	WithDepth []jDepthRow `json:"capacity_with_depth,omitempty"`
+	Compared  *jCompared  `json:"methods_compared,omitempty"`
 	Omitted   []string    `json:"omitted"`
 }
 
@@ -76,7 +77,7 @@ func TestWriteLineMatchesEncodingJSON(t *testing.T) {
 				if c.title != "" {
 					rr.Title = c.title
 				}
-				o := LineOptions{Units: UnitsOf(sys), Verification: "12 cases <all> pass", Line: c.line, ID: c.id, OmitWithDepth: c.lean}
+				o := LineOptions{Units: UnitsOf(sys), Verification: "12 cases <all> pass", Line: c.line, ID: c.id, Lean: c.lean}
 				var got bytes.Buffer
 				if err := WriteLine(&got, &rr, o); err != nil {
 					t.Fatal(err)
@@ -84,7 +85,7 @@ func TestWriteLineMatchesEncodingJSON(t *testing.T) {
 				j := toJSON(&rr, Options{Units: UnitsOf(sys), sys: sys, View: ViewReport, Verification: o.Verification})
 				var v any = jLine{c.line, c.id, j}
 				if c.lean {
-					v = jLeanLine{Line: c.line, ID: c.id, jResult: j, Omitted: []string{"capacity_with_depth"}}
+					v = jLeanLine{Line: c.line, ID: c.id, jResult: j, Omitted: []string{"capacity_with_depth", "methods_compared"}}
 				}
 				var want bytes.Buffer
 				if err := json.NewEncoder(&want).Encode(v); err != nil {

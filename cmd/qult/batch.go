@@ -148,7 +148,7 @@ func batch(in io.Reader, out io.Writer, s batchSettings) (bad, fail int, err err
 		}
 		buf := bytes.NewBuffer(outPool.get())
 		if err := report.WriteLine(buf, r, report.LineOptions{Units: report.FileUnits, Verification: verify,
-			Line: it.Line, ID: it.ID, OmitWithDepth: s.lean}); err != nil {
+			Line: it.Line, ID: it.ID, Lean: s.lean}); err != nil {
 			it.Result, it.Err = nil, err
 			it.Out = errLine(it.Line, it.ID, err)
 			return
@@ -163,7 +163,7 @@ func batch(in io.Reader, out io.Writer, s batchSettings) (bad, fail int, err err
 	if os.Getenv("GOGC") == "" {
 		defer debug.SetGCPercent(debug.SetGCPercent(batchGOGC))
 	}
-	o := calc.BatchOptions{Workers: s.workers, NoWithDepth: s.lean, Finish: finish}
+	o := calc.BatchOptions{Workers: s.workers, Lean: s.lean, Finish: finish}
 	err = calc.RunBatch(context.Background(), in, o, func(it calc.BatchItem) error {
 		if it.Out == nil { // finish did not run to the end (a recovered panic)
 			if it.Err == nil {

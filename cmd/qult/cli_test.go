@@ -332,8 +332,9 @@ func TestBatch(t *testing.T) {
 
 func lines0(s string, i int) string { return strings.Split(s, "\n")[i] }
 
-// TestBatchLean: --lean leaves capacity with depth out of each result and
-// names it under "omitted"; every other member is as without it.
+// TestBatchLean: --lean leaves capacity with depth and the methods
+// compared out of each result and names them under "omitted"; every other
+// member is as without it.
 func TestBatchLean(t *testing.T) {
 	in, _ := batchInput(t)
 	line := lines0(in, 0) + "\n"
@@ -351,13 +352,19 @@ func TestBatchLean(t *testing.T) {
 	if rows, _ := full["capacity_with_depth"].([]any); len(rows) == 0 {
 		t.Fatalf("the full line has no capacity with depth")
 	}
-	if _, ok := lean["capacity_with_depth"]; ok {
-		t.Errorf("--lean kept capacity_with_depth")
+	if _, ok := full["methods_compared"]; !ok {
+		t.Fatalf("the full line has no methods compared")
 	}
-	if fmt.Sprint(lean["omitted"]) != "[capacity_with_depth]" {
-		t.Errorf("omitted %v, want [capacity_with_depth]", lean["omitted"])
+	for _, k := range []string{"capacity_with_depth", "methods_compared"} {
+		if _, ok := lean[k]; ok {
+			t.Errorf("--lean kept %s", k)
+		}
+	}
+	if fmt.Sprint(lean["omitted"]) != "[capacity_with_depth methods_compared]" {
+		t.Errorf("omitted %v, want [capacity_with_depth methods_compared]", lean["omitted"])
 	}
 	delete(full, "capacity_with_depth")
+	delete(full, "methods_compared")
 	delete(lean, "omitted")
 	if fmt.Sprint(full) != fmt.Sprint(lean) {
 		t.Errorf("--lean changed other members")

@@ -104,10 +104,10 @@ parallel (--workers N at once, 0 for one per CPU) and writes one line per
 input line, in input order: the result in the report's JSON form, opened
 by "line" (the input line number) and "id" (the file's id key, or its
 title), or {"line": N, "id": "...", "error": "...", "problems": [...]} for
-a bad line. --lean leaves the capacity-with-depth table out of each
-result. Blank lines are skipped. Reads standard input when FILE is "-" or
-absent. Exit code 2 when any line is bad input, else 1 when any design
-check fails, else 0.`,
+a bad line. --lean leaves the capacity-with-depth table and the methods
+compared out of each result (and does not compute them). Blank lines are
+skipped. Reads standard input when FILE is "-" or absent. Exit code 2
+when any line is bad input, else 1 when any design check fails, else 0.`,
 			example: `qult batch piles.jsonl > results.jsonl
   cat piles.jsonl | qult batch -`,
 			flags: func() *flag.FlagSet { return batchFlags(&batchOpts{}) },
