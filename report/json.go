@@ -68,6 +68,7 @@ type jResult struct {
 	Schema    string       `json:"schema"`
 	Version   string       `json:"qult_version"`
 	Verify    string       `json:"verification,omitempty"`
+	ID        string       `json:"id,omitempty"`
 	Title     string       `json:"title"`
 	Project   string       `json:"project,omitempty"`
 	Revision  string       `json:"revision,omitempty"`
@@ -342,7 +343,7 @@ func toJSON(r *calc.Result, o Options) *jResult {
 	if schema == "" {
 		schema = calc.ResultSchema
 	}
-	j := &jResult{Schema: schema, Version: r.Version, Verify: o.Verification, Title: r.Title, Project: r.Project, Revision: r.Revision,
+	j := &jResult{Schema: schema, Version: r.Version, Verify: o.Verification, ID: r.ID, Title: r.Title, Project: r.Project, Revision: r.Revision,
 		Engineer: r.Engineer, Date: date(r, o), Units: o.sys.String(), Source: string(r.Source), SHA256: SourceHash(r),
 		Warnings: nonNil(allWarnings(r, c.conv)), Defaults: defaultRows(r, c.conv), Cautions: nonNil(r.Cautions), Sources: []jSource{}, WithDepth: []jDepthRow{}, Segments: []jSegment{}}
 	j.Compared = compareJSON(r.Compared, c)

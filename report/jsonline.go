@@ -79,8 +79,8 @@ var linePool = sync.Pool{New: func() any { b := make([]byte, 0, 64<<10); return 
 // The plans of the result document, whole and lean (without capacity with
 // depth and the methods compared).
 var (
-	fullLine = sync.OnceValue(func() encFunc { return encoderOf(reflect.TypeOf(jResult{})) })
+	fullLine = sync.OnceValue(func() encFunc { return structEncoder(reflect.TypeOf(jResult{}), "id") })
 	leanLine = sync.OnceValue(func() encFunc {
-		return structEncoder(reflect.TypeOf(jResult{}), "capacity_with_depth", "methods_compared")
+		return structEncoder(reflect.TypeOf(jResult{}), "id", "capacity_with_depth", "methods_compared")
 	})
 )

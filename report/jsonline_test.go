@@ -77,6 +77,7 @@ func TestWriteLineMatchesEncodingJSON(t *testing.T) {
 				if c.title != "" {
 					rr.Title = c.title
 				}
+				rr.ID = c.id // the result's own id: the line's opening "id" stands for it
 				o := LineOptions{Units: UnitsOf(sys), Verification: "12 cases <all> pass", Line: c.line, ID: c.id, Lean: c.lean}
 				var got bytes.Buffer
 				if err := WriteLine(&got, &rr, o); err != nil {
@@ -168,5 +169,26 @@ func TestAppendString(t *testing.T) {
 		if got := appendString(nil, s); string(got) != string(want) {
 			t.Fatalf("%q: %s, want %s", s, got, want)
 		}
+	}
+}
+
+// TestJSONCarriesID: the result document of a calc file with an id key
+// carries it as "id", and a batch line carries it once, at the start.
+func TestJSONCarriesID(t *testing.T) {
+	r := load(t, example, nil)
+	rr := *r
+	rr.ID = "P-17"
+	var doc struct {
+		ID string `json:"id"`
+	}
+	if err := json.Unmarshal([]byte(render(t, &rr, JSON, Options{})), &doc); err != nil || doc.ID != "P-17" {
+		t.Errorf("JSON id %q (%v), want P-17", doc.ID, err)
+	}
+	var line bytes.Buffer
+	if err := WriteLine(&line, &rr, LineOptions{Line: 3, ID: rr.ID}); err != nil {
+		t.Fatal(err)
+	}
+	if n := strings.Count(line.String(), `"id":`); n != 1 || !strings.HasPrefix(line.String(), `{"line":3,"id":"P-17",`) {
+		t.Errorf("the batch line has %d ids and starts %.40q", n, line.String())
 	}
 }
