@@ -375,14 +375,7 @@ func tablesOf(j *jResult, sys units.System) ([]Table, error) {
 //
 // Errors: a nil result, an unknown unit system, and write errors from w.
 func WriteRecords(w io.Writer, r *calc.Result, o Options) error {
-	if r == nil {
-		return fmt.Errorf("report: nil result")
-	}
-	sys, err := o.Units.resolve(r)
-	if err != nil {
-		return err
-	}
-	ts, err := Tables(r, sys)
+	ts, sys, err := recordTables(r, o)
 	if err != nil {
 		return err
 	}
@@ -463,14 +456,7 @@ func recValue(b []byte, v any) []byte {
 //
 // Errors: a nil result, an unknown unit system, and write errors from w.
 func WriteRecordsCSV(w io.Writer, r *calc.Result, o Options) error {
-	if r == nil {
-		return fmt.Errorf("report: nil result")
-	}
-	sys, err := o.Units.resolve(r)
-	if err != nil {
-		return err
-	}
-	ts, err := Tables(r, sys)
+	ts, sys, err := recordTables(r, o)
 	if err != nil {
 		return err
 	}
@@ -513,4 +499,18 @@ func recQuote(s string) string {
 		return s
 	}
 	return `"` + strings.ReplaceAll(s, `"`, `""`) + `"`
+}
+
+// recordTables returns the tables of r in the display system o.Units
+// stands for, and that system.
+func recordTables(r *calc.Result, o Options) ([]Table, units.System, error) {
+	if r == nil {
+		return nil, 0, fmt.Errorf("report: nil result")
+	}
+	sys, err := o.Units.resolve(r)
+	if err != nil {
+		return nil, 0, err
+	}
+	ts, err := Tables(r, sys)
+	return ts, sys, err
 }
