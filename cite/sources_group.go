@@ -1,0 +1,12 @@
+package cite
+
+// Sources of pile-group efficiency, block failure, group uplift and group
+// settlement (package group).
+var (
+	TerzaghiPeck1967 = Source{Key: "terzaghi-peck1967", Authors: "Terzaghi, K., Peck, R.B.", Year: 1967,
+		Title: "Soil Mechanics in Engineering Practice", Publication: "2nd ed., John Wiley & Sons, New York"}
+	Vesic1969 = Source{Key: "vesic1969", Authors: "Vesic, A.S.", Year: 1969,
+		Title: "Experiments with instrumented pile groups in sand", Publication: "Performance of Deep Foundations, ASTM STP 444, American Society for Testing and Materials, Philadelphia, 177-222"}
+	GATE2023CE = Source{Key: "gate-ce-2023", Authors: "Indian Institute of Technology Kanpur", Year: 2023,
+		Title: "GATE 2023 Civil Engineering (CE), official question paper, shift 1", Publication: "Graduate Aptitude Test in Engineering; question on nine friction piles of 300 mm at 60 % group efficiency, worked solution by the Converse-Labarre formula published by testbook.com"}
+)
