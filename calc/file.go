@@ -36,6 +36,8 @@ type File struct {
 	LoadTest   *LoadTest   `yaml:"load_test,omitempty" json:"load_test,omitempty" doc:"A static compression load test on the pile, as points of head load and head settlement, read by the chosen criteria."`
 	// Reliability asks for the probabilistic capacity (Monte Carlo, FOSM).
 	Reliability *Reliability `yaml:"reliability,omitempty" json:"reliability,omitempty" doc:"Probabilistic capacity: uncertain parameters with their distributions and correlations, for Monte Carlo simulation and FOSM."`
+	// Group is a group of the file's piles under a rigid cap.
+	Group *Group `yaml:"group,omitempty" json:"group,omitempty" doc:"A group of the file's piles under a rigid cap: layout, efficiency, block failure, uplift and settlement."`
 
 	// lines maps each field path read from the file to its line.
 	lines map[string]int

@@ -65,6 +65,8 @@ type Result struct {
 	// Reliability is the probabilistic capacity (nil without a
 	// reliability section).
 	Reliability *ReliabilityResult
+	// Group is the pile group (nil without a group section).
+	Group *GroupResult
 
 	// Compared is the shaft and tip resistance of the same pile by every
 	// applicable method of the catalogues (nil when it could not be run).

@@ -157,6 +157,9 @@ func run(f *File, o runOptions) (*Result, error) {
 	if err := runReliability(f, in, res); err != nil {
 		return nil, err
 	}
+	if err := runGroup(f, in, prof, res); err != nil {
+		return nil, err
+	}
 	res.Warnings = append(res.Warnings, warnings(res)...)
 	res.Warnings = append(res.Warnings, settleWarnings(res)...)
 	var refs []cite.Source
@@ -164,6 +167,9 @@ func run(f *File, o runOptions) (*Result, error) {
 	refs = append(refs, cite.Collect(srefs...)...)
 	if in.Basis != nil {
 		refs = append(refs, cite.Collect(in.Basis.Refs()...)...)
+	}
+	if res.Group != nil {
+		refs = append(refs, cite.Collect(res.Group.Refs...)...)
 	}
 	res.Sources = uniqueSources(refs)
 	return res, nil

@@ -11,6 +11,7 @@ import (
 	"strings"
 
 	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/group"
 	"github.com/qultgeo/qult/reliability"
 	"github.com/qultgeo/qult/shaft"
 	"github.com/qultgeo/qult/units"
@@ -44,6 +45,8 @@ var enums = map[string][]string{
 	"method":   settleMethods,
 	"form":     {"elastic", "empirical"},
 	"criteria": LoadTestCriteria,
+	// group
+	"efficiency": group.RuleIDs(),
 	// reliability
 	"distribution": {"normal", "lognormal", "truncated-normal", "uniform"},
 	"key":          append(slices.Clone(reliability.LayerKeys), reliability.GlobalKeys...),
