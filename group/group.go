@@ -93,6 +93,7 @@ type VesicResult struct {
 // compression and tension, the design check, and the settlements.
 type Result struct {
 	N          int
+	Layout     Layout       // as given
 	Width      units.Length // the pile's width D
 	Geometry   Geometry
 	Efficiency Efficiency
@@ -138,7 +139,7 @@ func Analyse(in Input) (*Result, error) {
 	if err != nil {
 		return nil, err
 	}
-	res := &Result{N: geo.N, Width: d, Geometry: geo, Warnings: warn, Refs: SpacingRefs()}
+	res := &Result{N: geo.N, Layout: in.Layout, Width: d, Geometry: geo, Warnings: warn, Refs: SpacingRefs()}
 	top := max(p.HeadDepth, in.Profile.DesignGround())
 	undrained, err := anyUndrained(in.Profile, top, p.Tip())
 	if err != nil {

@@ -108,6 +108,7 @@ func build(r *calc.Result, o Options) *doc {
 		add(secTotals(r, c))
 		add(secDesign(r, c))
 		add(secServiceability(r, c))
+		add(secGroup(r, c))
 	case ViewCapacity:
 		add(secShaft(r, c))
 		add(secTip(r, c))
@@ -136,6 +137,7 @@ func build(r *calc.Result, o Options) *doc {
 		add(secSettlement(r, c))
 		add(secLoadTest(r, c))
 		add(secReliability(r, c))
+		add(secGroup(r, c))
 		add(secDefaults(r, c))
 	case ViewReliability:
 		add(secTotals(r, c))

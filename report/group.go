@@ -1,0 +1,209 @@
+package report
+
+import (
+	"fmt"
+	"image/color"
+	"strings"
+
+	"gonum.org/v1/plot/vg"
+	"gonum.org/v1/plot/vg/draw"
+
+	"github.com/qultgeo/qult/calc"
+	"github.com/qultgeo/qult/group"
+	"github.com/qultgeo/qult/units"
+)
+
+// headGroup is the heading of the pile group's section (the HTML and PDF
+// writers add the plan of the group to it).
+const headGroup = "Pile group"
+
+// secGroup is the pile group: layout, efficiency, block, uplift, the
+// design check of the group and its settlement.
+func secGroup(r *calc.Result, c conv) section {
+	g := r.Group
+	if g == nil {
+		return section{}
+	}
+	geo := g.Geometry
+	layout := fmt.Sprintf("%d piles at the positions given", g.N)
+	if l := g.Layout; l.IsGrid() {
+		layout = fmt.Sprintf("%d rows × %d columns, spacing %s (x) and %s (y)", l.Rows, l.Cols, c.ls(l.Sx), c.ls(l.Sy))
+	}
+	it := []item{
+		{"Layout", txt(layout), ""},
+		{"Number of piles n", num(float64(g.N)), ""},
+		{"Pile width D", txt(c.ls(g.Width)), ""},
+		{"Block Bg × Lg (outer faces of the piles)", txt(c.ls(geo.Bg) + " × " + c.ls(geo.Lg)), ""},
+		{"Cap (edge " + c.ls(geo.CapEdge) + " outside the piles' faces)", txt(c.ls(geo.CapMaxX-geo.CapMinX) + " × " + c.ls(geo.CapMaxY-geo.CapMinY)), ""},
+	}
+	if g.N > 1 {
+		it = append(it, item{"Least spacing", txt(fmt.Sprintf("%s = %s D (minimum %s, AASHTO LRFD 10.7.1.2/10.8.1.2)", c.ls(geo.MinSpacing),
+			fmtNum(float64(geo.MinSpacing/g.Width), 3), c.ls(group.MinSpacingRule(g.Width, isBored(r))))), ""})
+	}
+	it = append(it, item{"Loads on the cap", txt(fmt.Sprintf("compression G %s + Q %s; tension G %s + Q %s (%s)",
+		c.fs(g.Loads.Compression.Permanent), c.fs(g.Loads.Compression.Variable), c.fs(g.Loads.Tension.Permanent), c.fs(g.Loads.Tension.Variable), g.LoadsFrom)), ""})
+	e := g.Efficiency
+	blocks := []block{{items: it},
+		{para: fmt.Sprintf("Group efficiency by %s: %s. η = %s%s.", e.Rule, e.Equation, fmtNum(e.Value, 3), capped(e))}}
+
+	k := &table{cols: []column{{"Compression (characteristic)", ""}, {"Value", c.uF()}}}
+	k.rows = append(k.rows,
+		[]cell{txt("Single pile Rc"), num(c.F(g.Single.Compression))},
+		[]cell{txt(fmt.Sprintf("Sum of single piles n·Rc (n = %d)", g.N)), num(c.F(g.SumSingles))},
+		[]cell{txt("Piles η·n·Rc"), num(c.F(g.Reduced))})
+	if b := g.Block; b != nil {
+		k.rows = append(k.rows,
+			[]cell{txt("Block base qb·Bg·Lg"), num(c.F(b.Base))},
+			[]cell{txt("Block side 2(Bg + Lg)·Σ τ·ΔL"), num(c.F(b.Side))},
+			[]cell{txt("Block Qblock"), num(c.F(b.Capacity))})
+	}
+	k.rows = append(k.rows, []cell{txt("Group Qg = the lesser (" + g.Governs + " govern)"), num(c.F(g.Capacity))})
+	blocks = append(blocks, block{tbl: k})
+	if b := g.Block; b != nil {
+		base := fmt.Sprintf("Block base in %q: qb = %s (the single pile's unit tip resistance in a drained layer)", b.BaseLayer, c.ss(b.UnitBase))
+		if b.BaseUndrained {
+			how := "Skempton (1951), Nc = 5(1 + 0.2·Df/Bg)(1 + 0.2·Bg/Lg), Df/Bg ≤ 2.5"
+			if b.NcGiven {
+				how = "given"
+			}
+			base = fmt.Sprintf("Block base in %q: qb = Nc·su = %s × %s = %s (Nc %s)", b.BaseLayer, fmtNum(b.Nc, sig), c.ss(b.Su), c.ss(b.UnitBase), how)
+		}
+		blocks = append(blocks, block{eqs: []string{"Qblock = qb·Bg·Lg + 2(Bg + Lg)·Σ τ·ΔL (Terzaghi & Peck 1967); τ = su in undrained layers, c′ + K0·σ′v·tanφ′ with K0 = 1 − sinφ′ in drained ones"}},
+			block{para: base + "."})
+		bt := &table{cols: []column{{"Top", c.uL()}, {"Bottom", c.uL()}, {"Layer", ""}, {"τ mean", c.uS()}, {"K0", ""}, {"Side force", c.uF()}}}
+		for _, row := range b.Rows {
+			k0 := txt("")
+			if !row.Undrained {
+				k0 = num(row.K0)
+			}
+			bt.rows = append(bt.rows, []cell{num(c.L(row.Top)), num(c.L(row.Bottom)), txt(row.Layer), num(c.S(row.Tau)), k0, num(c.F(row.Force))})
+		}
+		blocks = append(blocks, block{tbl: bt})
+	}
+	t := &table{cols: []column{{"Tension (characteristic)", ""}, {"Value", c.uF()}}}
+	t.rows = append(t.rows, []cell{txt("Single pile Rt"), num(c.F(g.Single.Tension))}, []cell{txt("Piles n·Rt"), num(c.F(g.SumTension))})
+	if b := g.Block; b != nil {
+		t.rows = append(t.rows, []cell{txt("Block effective weight W′"), num(c.F(b.Weight))}, []cell{txt("Block W′ + side shear"), num(c.F(g.BlockUplift))})
+	}
+	t.rows = append(t.rows, []cell{txt("Group uplift Tg = the lesser (" + g.UpliftGoverns + " govern)"), num(c.F(g.Uplift))})
+	blocks = append(blocks, block{tbl: t})
+	if d := g.Design; d != nil {
+		dt := &table{cols: []column{{"Case", ""}, {"Rd/Rk", ""}, {"η·n·Rd", c.uF()}, {"Block Rd", c.uF()}, {"Rd", c.uF()}, {"Ed", c.uF()}, {"Ed/Rd", ""},
+			{"Rt,d", c.uF()}, {"Et,d", c.uF()}, {"Et,d/Rt,d", ""}, {"Check", ""}}}
+		for _, cs := range d.Cases {
+			blockRd := txt("")
+			if g.Block != nil {
+				blockRd = num(c.F(cs.BlockRd))
+			}
+			dt.rows = append(dt.rows, []cell{txt(cs.Case), num(cs.Ratio), num(c.F(cs.PilesRd)), blockRd, num(c.F(cs.Rd)), num(c.F(cs.Ed)), useCell(cs.Use),
+				num(c.F(cs.TensionRd)), num(c.F(cs.TensionEd)), useCell(cs.TensionUse), txt(passText(cs.Pass))})
+		}
+		blocks = append(blocks, block{para: fmt.Sprintf("Design check of the group (%s): each case's design resistance of the single pile Rd gives η·n·Rd; the block takes the case's overall multiplier Rd/Rk of the single pile; the lesser governs. Ed factors the loads on the cap as the case factors a pile's loads. Verdict: %s.", d.Basis, passText(d.Pass))},
+			block{tbl: dt})
+	}
+	var st []item
+	if v := g.Vesic; v != nil {
+		st = append(st, item{"Vesic (1969), sg = s·√(Bg/D)", txt(fmt.Sprintf("%s × √(%s/%s) = %s", c.sms(v.Single), fmtNum(c.L(geo.Bg), sig), fmtNum(c.L(g.Width), sig), c.sms(v.Group))), ""})
+	}
+	if rf := g.Raft; rf != nil {
+		st = append(st, item{"Equivalent raft", txt(fmt.Sprintf("%s × %s at %s depth under %s (%s), spread 2:1, counted to %s: %s",
+			c.ls(rf.Bg), c.ls(rf.Lg), c.ls(rf.Depth), c.fs(rf.Load), c.ss(rf.Pressure), c.ls(rf.Bottom), c.sms(rf.Total))), ""})
+	}
+	if g.HasAllowable {
+		st = append(st, item{"Allowable settlement", txt(fmt.Sprintf("%s: %s", c.sms(g.Allowable), passText(g.SettlementPass))), ""})
+	}
+	if len(st) > 0 {
+		blocks = append(blocks, block{para: "Settlement of the group:"}, block{items: st})
+	}
+	if rf := g.Raft; rf != nil && len(rf.Layers) > 0 {
+		rt := &table{cols: []column{{"Layer", ""}, {"Top", c.uL()}, {"Bottom", c.uL()}, {"How", ""}, {"Settlement", c.uSm()}}}
+		for _, l := range rf.Layers {
+			rt.rows = append(rt.rows, []cell{txt(l.Layer), num(c.L(l.Top)), num(c.L(l.Bottom)), txt(l.Kind), num(c.sm(l.Settlement))})
+		}
+		blocks = append(blocks, block{eqs: []string{"Δσ(z) = Q/((Bg + z′)(Lg + z′)), z′ below the raft; elastic: s = ∫ Δσ/E dz; consolidation: the layer's compressibility"}}, block{tbl: rt})
+	}
+	return section{heading: headGroup, blocks: blocks}
+}
+
+func capped(e group.Efficiency) string {
+	if e.Raw > e.Value {
+		return fmt.Sprintf(" (the formula gives %s; taken as 1)", fmtNum(e.Raw, 3))
+	}
+	return ""
+}
+
+func isBored(r *calc.Result) bool {
+	s := r.Pile.Installation.String()
+	return s == "bored" || s == "augered"
+}
+
+// groupFigures adds the plan of the group to its section.
+func groupFigures(s *section, r *calc.Result, c conv) error {
+	if s.heading != headGroup || r.Group == nil {
+		return nil
+	}
+	f, err := groupFigure(r, c)
+	if err != nil {
+		return err
+	}
+	s.blocks = append(s.blocks, figBlock(f, "Plan of the group drawn to scale: the cap (solid), the block Bg × Lg enclosing the piles' outer faces (dashed), the piles numbered in the order of the calc file."))
+	return nil
+}
+
+// groupFigure draws the plan of the group to scale: the cap, the block's
+// outline and each pile at its width, numbered, with the block's
+// dimensions.
+func groupFigure(r *calc.Result, c conv) (figure, error) {
+	g := r.Group
+	geo := g.Geometry
+	const (
+		w, h   = vg.Length(460), vg.Length(320)
+		mx, my = vg.Length(84), vg.Length(36)
+	)
+	spanX := float64(geo.CapMaxX - geo.CapMinX)
+	spanY := float64(geo.CapMaxY - geo.CapMinY)
+	scale := min(float64(w-2*mx)/spanX, float64(h-2*my)/spanY)
+	ox := float64(w)/2 - scale*float64(geo.CapMinX+geo.CapMaxX)/2
+	oy := float64(h)/2 + scale*float64(geo.CapMinY+geo.CapMaxY)/2 // y upwards in plan, downwards on the page
+	X := func(x units.Length) vg.Length { return vg.Length(ox + scale*float64(x)) }
+	Y := func(y units.Length) vg.Length { return vg.Length(oy - scale*float64(y)) }
+	d := g.Width
+	round := r.Pile.Section.Shape.String() == "circle" || strings.Contains(r.Pile.Section.Shape.String(), "pipe")
+	pts := g.Layout.Points
+	label := fmt.Sprintf("Plan of a group of %d piles", g.N)
+	return newFigure(label, w, h, func(dc draw.Canvas) {
+		p := painter{dc: dc, h: h}
+		p.rect(0, 0, w, h, color.White, nil, 0)
+		capFill := color.RGBA{0xee, 0xee, 0xee, 255}
+		p.rect(X(geo.CapMinX), Y(geo.CapMaxY), vg.Length(scale*spanX), vg.Length(scale*spanY), capFill, color.Black, 1)
+		bx0, by0 := geo.MinX-d/2, geo.MaxY+d/2
+		dash := []vg.Length{4, 3}
+		x0, y0, x1, y1 := X(bx0), Y(by0), X(bx0+geo.Bg), Y(by0-geo.Lg)
+		p.line(x0, y0, x1, y0, grey, 1, dash)
+		p.line(x1, y0, x1, y1, grey, 1, dash)
+		p.line(x1, y1, x0, y1, grey, 1, dash)
+		p.line(x0, y1, x0, y0, grey, 1, dash)
+		small := sans(8, false)
+		for i, pt := range pts {
+			cx, cy := X(pt.X), Y(pt.Y)
+			rad := vg.Length(scale * float64(d) / 2)
+			if round {
+				var path vg.Path
+				path.Move(p.pt(cx+rad, cy))
+				path.Arc(p.pt(cx, cy), rad, 0, 2*3.141592653589793)
+				path.Close()
+				p.dc.SetColor(color.RGBA{0x88, 0x88, 0x88, 255})
+				p.dc.Fill(path)
+			} else {
+				p.rect(cx-rad, cy-rad, 2*rad, 2*rad, color.RGBA{0x88, 0x88, 0x88, 255}, nil, 0)
+			}
+			if g.N <= 60 {
+				p.text(small, cx, cy-rad-6, fmt.Sprint(i+1), 'c', color.Black)
+			}
+		}
+		f := sans(9, false)
+		p.text(f, (x0+x1)/2, Y(geo.CapMinY)+12, "block Bg = "+c.ls(geo.Bg), 'c', grey)
+		p.text(f, X(geo.CapMaxX)+6, (y0+y1)/2, "Lg = "+c.ls(geo.Lg), 'l', grey)
+		p.text(f, X(geo.CapMinX), Y(geo.CapMaxY)-10, "cap "+c.ls(geo.CapMaxX-geo.CapMinX)+" × "+c.ls(geo.CapMaxY-geo.CapMinY)+"; x to the right, y up", 'l', color.Black)
+	})
+}
