@@ -81,6 +81,7 @@ func (r *resolver) groupSection(f *File, in *Inputs) {
 	case grid && len(g.Positions) > 0:
 		r.add("group.positions", 0, "give either rows and columns with their spacings, or positions, not both")
 	case grid:
+		n0 := len(r.probs)
 		rows, cols := whole(g.Rows, "group.rows"), whole(g.Columns, "group.columns")
 		if !g.Rows.IsSet() || !g.Columns.IsSet() {
 			r.add("group", 0, "rows and columns: give both (1 or more each), or give positions")
@@ -93,7 +94,7 @@ func (r *resolver) groupSection(f *File, in *Inputs) {
 		if rows > 1 && !g.SpacingY.IsSet() {
 			r.add("group.spacing_y", lineOf(f, "group.rows"), "not given: %d rows need a spacing between them", rows)
 		}
-		if rows < 1 || cols < 1 {
+		if rows < 1 || cols < 1 || len(r.probs) > n0 {
 			break
 		}
 		l, err := group.Grid(rows, cols, sx, sy)
@@ -104,6 +105,7 @@ func (r *resolver) groupSection(f *File, in *Inputs) {
 		gi.layout = l
 	case len(g.Positions) > 0:
 		pts := make([]group.Point, len(g.Positions))
+		n0 := len(r.probs)
 		ok := true
 		for i, pv := range g.Positions {
 			path := fmt.Sprintf("group.positions[%d]", i)
@@ -114,7 +116,7 @@ func (r *resolver) groupSection(f *File, in *Inputs) {
 			}
 			pts[i] = group.Point{X: r.length(pv[0], path+"[0]"), Y: r.length(pv[1], path+"[1]")}
 		}
-		if !ok {
+		if !ok || len(r.probs) > n0 {
 			break
 		}
 		l, err := group.Positions(pts)
@@ -142,7 +144,7 @@ func (r *resolver) groupSection(f *File, in *Inputs) {
 	switch {
 	case o.Rule == group.Given && !g.EfficiencyValue.IsSet():
 		r.add("group.efficiency_value", lineOf(f, "group.efficiency"), "not given: efficiency given needs a value more than 0 and at most 1")
-	case o.Rule == group.Given && g.EfficiencyValue.IsSet() && !(o.Value > 0):
+	case o.Rule == group.Given && g.EfficiencyValue.IsSet() && zeroValue(g.EfficiencyValue):
 		r.add("group.efficiency_value", g.EfficiencyValue.Line, "%q: want more than 0 and at most 1", g.EfficiencyValue.Raw)
 	case o.Rule != group.Given && g.EfficiencyValue.IsSet():
 		r.add("group.efficiency_value", g.EfficiencyValue.Line, "efficiency %s does not read a value; write efficiency: given", orDefault(o.Rule, group.Practice))

@@ -163,10 +163,10 @@ func (l Layout) Measure(d, capEdge units.Length, bored bool) (Geometry, []string
 		case g.MinSpacing == 0:
 			return g, nil, &FieldError{l.path(j), fmt.Sprintf("pile %d stands on pile %d (the same position): piles may not overlap", j+1, i+1)}
 		case g.MinSpacing < d:
-			return g, nil, &FieldError{l.path(j), fmt.Sprintf("piles %d and %d are %v apart, centre to centre: less than one pile width (%v), so they overlap", i+1, j+1, g.MinSpacing, d)}
+			return g, nil, &FieldError{l.path(j), fmt.Sprintf("piles %d and %d are %.4g m apart, centre to centre: less than one pile width (%v), so they overlap", i+1, j+1, float64(g.MinSpacing), d)}
 		}
 		if need := MinSpacingRule(d, bored); g.MinSpacing < need {
-			warn = append(warn, fmt.Sprintf("the least spacing, %v (piles %d and %d), is under the minimum of %v (AASHTO LRFD 10.7.1.2/10.8.1.2)", g.MinSpacing, i+1, j+1, need))
+			warn = append(warn, fmt.Sprintf("the least spacing, %.4g m (piles %d and %d), is under the minimum of %.4g m (AASHTO LRFD 10.7.1.2/10.8.1.2)", float64(g.MinSpacing), i+1, j+1, float64(need)))
 		}
 	}
 	if capEdge < MinCapEdge {

@@ -207,3 +207,188 @@ func groupFigure(r *calc.Result, c conv) (figure, error) {
 		p.text(f, X(geo.CapMinX), Y(geo.CapMaxY)-10, "cap "+c.ls(geo.CapMaxX-geo.CapMinX)+" × "+c.ls(geo.CapMaxY-geo.CapMinY)+"; x to the right, y up", 'l', color.Black)
 	})
 }
+
+// The JSON form of the pile group (see JSON.md).
+type jGroup struct {
+	N          int          `json:"n"`
+	Rows       int          `json:"rows,omitempty"`
+	Columns    int          `json:"columns,omitempty"`
+	SpacingX   *qty         `json:"spacing_x,omitempty"`
+	SpacingY   *qty         `json:"spacing_y,omitempty"`
+	Positions  [][2]qty     `json:"positions"`
+	Width      qty          `json:"pile_width"`
+	Bg         qty          `json:"block_width"`
+	Lg         qty          `json:"block_length"`
+	MinSpacing qty          `json:"least_spacing"`
+	Cap        [4]qty       `json:"cap"` // min x, min y, max x, max y
+	Efficiency jGroupEff    `json:"efficiency"`
+	Single     qty          `json:"single_compression"`
+	SumSingles qty          `json:"sum_of_singles"`
+	Reduced    qty          `json:"piles_compression"`
+	Block      *jGroupBlock `json:"block"`
+	Capacity   qty          `json:"compression"`
+	Governs    string       `json:"compression_governed_by"`
+	Tension    jGroupUplift `json:"uplift"`
+	Loads      jLoads       `json:"loads_on_cap"`
+	LoadsFrom  string       `json:"loads_from"`
+	Design     *jGroupDes   `json:"design"`
+	Vesic      *qty         `json:"settlement_vesic"`
+	Raft       *jGroupRaft  `json:"equivalent_raft"`
+	Allowable  *qty         `json:"allowable_settlement"`
+	SettlePass bool         `json:"settlement_pass"`
+	Pass       bool         `json:"pass"`
+	Warnings   []string     `json:"warnings"`
+}
+
+type jGroupEff struct {
+	Rule     string `json:"rule"`
+	Value    jnum   `json:"value"`
+	Formula  jnum   `json:"formula_value"`
+	Equation string `json:"equation"`
+}
+
+type jGroupBlock struct {
+	Top       qty            `json:"top"`
+	Tip       qty            `json:"tip"`
+	Perimeter qty            `json:"perimeter"`
+	BaseLayer string         `json:"base_layer"`
+	Nc        *jnum          `json:"nc"`
+	UnitBase  qty            `json:"unit_base"`
+	Base      qty            `json:"base"`
+	Side      qty            `json:"side_force"`
+	Capacity  qty            `json:"capacity"`
+	Weight    qty            `json:"effective_weight"`
+	Rows      []jGroupSideRw `json:"side_rows"`
+}
+
+type jGroupSideRw struct {
+	Top    qty    `json:"top"`
+	Bottom qty    `json:"bottom"`
+	Layer  string `json:"layer"`
+	Tau    qty    `json:"tau"`
+	K0     *jnum  `json:"k0"`
+	Force  qty    `json:"force"`
+}
+
+type jGroupUplift struct {
+	Single  qty    `json:"single_tension"`
+	Piles   qty    `json:"piles_tension"`
+	Block   *qty   `json:"block"`
+	Uplift  qty    `json:"uplift"`
+	Governs string `json:"governed_by"`
+}
+
+type jGroupDes struct {
+	Basis     string        `json:"basis"`
+	Pass      bool          `json:"pass"`
+	Governing string        `json:"governing_case"`
+	Cases     []jGroupCheck `json:"cases"`
+}
+
+type jGroupCheck struct {
+	Case         string `json:"case"`
+	Ratio        jnum   `json:"rd_over_rk"`
+	PilesRd      qty    `json:"piles_rd"`
+	BlockRd      *qty   `json:"block_rd"`
+	Rd           qty    `json:"rd"`
+	Ed           qty    `json:"ed"`
+	Use          jnum   `json:"utilisation"`
+	TensionRd    qty    `json:"tension_rd"`
+	TensionEd    qty    `json:"tension_ed"`
+	TensionUse   jnum   `json:"tension_utilisation"`
+	Pass         bool   `json:"pass"`
+	TensionRatio jnum   `json:"tension_rd_over_rk"`
+}
+
+type jGroupRaft struct {
+	Depth         qty           `json:"depth"`
+	Bottom        qty           `json:"bottom"`
+	Load          qty           `json:"load"`
+	Pressure      qty           `json:"pressure"`
+	Elastic       qty           `json:"elastic"`
+	Consolidation qty           `json:"consolidation"`
+	Total         qty           `json:"total"`
+	Layers        []jGroupRaftL `json:"layers"`
+}
+
+type jGroupRaftL struct {
+	Layer      string `json:"layer"`
+	Top        qty    `json:"top"`
+	Bottom     qty    `json:"bottom"`
+	Kind       string `json:"kind"`
+	Settlement qty    `json:"settlement"`
+}
+
+func groupJSON(r *calc.Result, c jconv) *jGroup {
+	g := r.Group
+	if g == nil {
+		return nil
+	}
+	geo := g.Geometry
+	j := &jGroup{N: g.N, Width: c.L(g.Width), Bg: c.L(geo.Bg), Lg: c.L(geo.Lg), MinSpacing: c.L(geo.MinSpacing),
+		Cap:        [4]qty{c.L(geo.CapMinX), c.L(geo.CapMinY), c.L(geo.CapMaxX), c.L(geo.CapMaxY)},
+		Efficiency: jGroupEff{g.Efficiency.Rule, jnum(g.Efficiency.Value), jnum(g.Efficiency.Raw), g.Efficiency.Equation},
+		Single:     c.F(g.Single.Compression), SumSingles: c.F(g.SumSingles), Reduced: c.F(g.Reduced), Capacity: c.F(g.Capacity), Governs: g.Governs,
+		Tension:   jGroupUplift{Single: c.F(g.Single.Tension), Piles: c.F(g.SumTension), Uplift: c.F(g.Uplift), Governs: g.UpliftGoverns},
+		Loads:     jLoads{c.F(g.Loads.Compression.Permanent), c.F(g.Loads.Compression.Variable), c.F(g.Loads.Tension.Permanent), c.F(g.Loads.Tension.Variable)},
+		LoadsFrom: g.LoadsFrom, SettlePass: g.SettlementPass, Pass: g.Pass, Warnings: nonNil(g.Warnings)}
+	if l := g.Layout; l.IsGrid() {
+		j.Rows, j.Columns = l.Rows, l.Cols
+		sx, sy := c.L(l.Sx), c.L(l.Sy)
+		j.SpacingX, j.SpacingY = &sx, &sy
+	}
+	j.Positions = [][2]qty{}
+	for _, p := range g.Layout.Points {
+		j.Positions = append(j.Positions, [2]qty{c.L(p.X), c.L(p.Y)})
+	}
+	if b := g.Block; b != nil {
+		jb := &jGroupBlock{Top: c.L(b.Top), Tip: c.L(b.Tip), Perimeter: c.L(b.Perimeter), BaseLayer: b.BaseLayer, UnitBase: c.S(b.UnitBase),
+			Base: c.F(b.Base), Side: c.F(b.Side), Capacity: c.F(b.Capacity), Weight: c.F(b.Weight), Rows: []jGroupSideRw{}}
+		if b.BaseUndrained {
+			jb.Nc = jn(b.Nc)
+		}
+		for _, row := range b.Rows {
+			var k0 *jnum
+			if !row.Undrained {
+				k0 = jn(row.K0)
+			}
+			jb.Rows = append(jb.Rows, jGroupSideRw{c.L(row.Top), c.L(row.Bottom), row.Layer, c.S(row.Tau), k0, c.F(row.Force)})
+		}
+		j.Block = jb
+		u := c.F(g.BlockUplift)
+		j.Tension.Block = &u
+	}
+	if d := g.Design; d != nil {
+		jd := &jGroupDes{Basis: d.Basis, Pass: d.Pass, Cases: []jGroupCheck{}}
+		if d.Governing >= 0 && d.Governing < len(d.Cases) {
+			jd.Governing = d.Cases[d.Governing].Case
+		}
+		for _, cs := range d.Cases {
+			jc := jGroupCheck{Case: cs.Case, Ratio: jnum(cs.Ratio), PilesRd: c.F(cs.PilesRd), Rd: c.F(cs.Rd), Ed: c.F(cs.Ed), Use: jnum(min(cs.Use, 1e300)),
+				TensionRd: c.F(cs.TensionRd), TensionEd: c.F(cs.TensionEd), TensionUse: jnum(cs.TensionUse), Pass: cs.Pass, TensionRatio: jnum(cs.TensionRatio)}
+			if g.Block != nil {
+				b := c.F(cs.BlockRd)
+				jc.BlockRd = &b
+			}
+			jd.Cases = append(jd.Cases, jc)
+		}
+		j.Design = jd
+	}
+	if v := g.Vesic; v != nil {
+		q := c.sm(v.Group)
+		j.Vesic = &q
+	}
+	if rf := g.Raft; rf != nil {
+		jr := &jGroupRaft{Depth: c.L(rf.Depth), Bottom: c.L(rf.Bottom), Load: c.F(rf.Load), Pressure: c.S(rf.Pressure),
+			Elastic: c.sm(rf.Elastic), Consolidation: c.sm(rf.Consolidation), Total: c.sm(rf.Total), Layers: []jGroupRaftL{}}
+		for _, l := range rf.Layers {
+			jr.Layers = append(jr.Layers, jGroupRaftL{l.Layer, c.L(l.Top), c.L(l.Bottom), l.Kind, c.sm(l.Settlement)})
+		}
+		j.Raft = jr
+	}
+	if g.HasAllowable {
+		q := c.sm(g.Allowable)
+		j.Allowable = &q
+	}
+	return j
+}

@@ -171,6 +171,18 @@ var badCases = []badCase{
 	{file: "316-reliability-no-parameters", want: []string{"reliability.parameters (line 28)", "at least one"}},
 	{file: "317-reliability-same-value-twice", want: []string{"reliability.parameters[1].key (line 30)", "same value"}},
 	{file: "318-unknown-soil", want: []string{"ground.layers[0].soil (line 7)", "want one of gravel, sand, silt, clay, peat, fill"}},
+	{file: "450-group-positions-overlap", want: []string{"group.positions[2] (line 27)", "same position"}},
+	{file: "451-group-spacing-under-diameter", want: []string{"group.spacing_x (line 29)", "less than one pile width"}},
+	{file: "452-group-positions-closer-than-diameter", want: []string{"group.positions[1] (line 29)", "less than one pile width"}},
+	{file: "453-group-unknown-efficiency", want: []string{"group.efficiency (line 31)", "want one of practice"}},
+	{file: "454-group-given-without-value", want: []string{"group.efficiency_value (line 31)", "more than 0 and at most 1"}},
+	{file: "455-group-rows-and-positions", want: []string{"group.positions (line 31)", "not both"}},
+	{file: "456-group-formula-with-positions", want: []string{"group.efficiency (line 28)", "needs rows and columns"}},
+	{file: "457-group-rows-not-whole", want: []string{"group.rows (line 27)", "whole number"}},
+	{file: "458-group-spacing-missing", want: []string{"group.spacing_y (line 27)", "need a spacing"}},
+	{file: "459-group-position-one-value", want: []string{"group.positions[1] (line 27)", "want [x, y]"}},
+	{file: "460-group-efficiency-value-above-1", want: []string{"group.efficiency_value (line 32)", "outside 0 to 1"}},
+	{file: "461-group-spacing-in-kn", want: []string{"group.spacing_x (line 29)", "want a length"}},
 }
 
 const badTimeout = 5 * time.Second

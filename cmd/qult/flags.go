@@ -30,7 +30,9 @@ func init() {
 			about: `Runs the calc file and verifies the design: the design resistance of
 every case of the design basis against the factored loads, the
 utilisation and whether each passes. The file needs a design section and
-loads. Exit code 1 when any case fails.`,
+loads. With a group section it checks the group too (efficiency, block
+failure, uplift, settlement; loads on the cap). Exit code 1 when any case
+fails.`,
 			example: `qult check examples/pump-station-bored.yaml
   qult check --format json - < pile.yaml`,
 			flags: calcFlagsOnly("check", calcFormats),
