@@ -1,0 +1,107 @@
+package verify
+
+import (
+	"errors"
+
+	"github.com/qultgeo/qult/group"
+	"github.com/qultgeo/qult/profile"
+	"github.com/qultgeo/qult/units"
+)
+
+// The pile group's functions (package group). This file's init runs after
+// functions.go's, which builds the map (files initialise in name order).
+func init() {
+	runners["group.ConverseLabarreEfficiency"] = runConverseLabarre
+	runners["group.SkemptonNc"] = runSkemptonNc
+	runners["group.BlockCapacity"] = runBlockCapacity
+	runners["group.VesicSettlement"] = runVesicGroup
+	runners["group.RaftSettlement"] = runRaft
+}
+
+func runConverseLabarre(a *args) (values, error) {
+	n1, n2 := int(a.num("rows")), int(a.num("columns"))
+	d := units.Length(a.qty("width", units.DimLength))
+	s := units.Length(a.qty("spacing", units.DimLength))
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	if n1 < 1 || n2 < 1 || !(d > 0) || !(s > 0) {
+		return nil, errBad("rows, columns, width and spacing must be positive")
+	}
+	return values{"efficiency": num(group.ConverseLabarreEfficiency(n1, n2, d, s))}, nil
+}
+
+func runSkemptonNc(a *args) (values, error) {
+	b := units.Length(a.qty("width", units.DimLength))
+	l := units.Length(a.qty("length", units.DimLength))
+	df := units.Length(a.qty("depth", units.DimLength))
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	if !(b > 0) || !(l > 0) || !(df >= 0) {
+		return nil, errBad("width and length must be positive, depth zero or more")
+	}
+	return values{"nc": num(group.SkemptonNc(b, l, df))}, nil
+}
+
+// runBlockCapacity: a block in one undrained layer (su, saturated unit
+// weight, thickness, water at the surface).
+func runBlockCapacity(a *args) (values, error) {
+	su := units.Stress(a.qty("su", units.DimStress))
+	g := units.UnitWeight(a.qty("unit_weight", units.DimUnitWeight))
+	h := units.Length(a.qty("thickness", units.DimLength))
+	tip := units.Length(a.qty("tip", units.DimLength))
+	bg := units.Length(a.qty("bg", units.DimLength))
+	lg := units.Length(a.qty("lg", units.DimLength))
+	nc := a.optNum("nc", 0)
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	p, err := profile.New(profile.Spec{Layers: []profile.LayerSpec{{Name: "clay", Thickness: h, Drainage: profile.Undrained, Su: su, SaturatedUnitWeight: g}}})
+	if err != nil {
+		return nil, err
+	}
+	b, err := group.BlockCapacity(p, group.BlockInput{Tip: tip, Bg: bg, Lg: lg, Nc: nc})
+	if err != nil {
+		return nil, err
+	}
+	return values{"base": force(b.Base), "side": force(b.Side), "capacity": force(b.Capacity), "nc": num(b.Nc)}, nil
+}
+
+func runVesicGroup(a *args) (values, error) {
+	s := units.Length(a.qty("single", units.DimLength))
+	bg := units.Length(a.qty("bg", units.DimLength))
+	d := units.Length(a.qty("width", units.DimLength))
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	if !(s >= 0) || !(bg > 0) || !(d > 0) {
+		return nil, errBad("single settlement zero or more, bg and width positive")
+	}
+	return values{"settlement": length(group.VesicSettlement(s, bg, d))}, nil
+}
+
+// runRaft: an equivalent raft in one elastic layer (Young's modulus,
+// unit weight, thickness, dry).
+func runRaft(a *args) (values, error) {
+	e := units.Stress(a.qty("modulus", units.DimStress))
+	h := units.Length(a.qty("thickness", units.DimLength))
+	in := group.RaftInput{Load: units.Force(a.qty("load", units.DimForce)), Bg: units.Length(a.qty("bg", units.DimLength)),
+		Lg: units.Length(a.qty("lg", units.DimLength)), Depth: units.Length(a.qty("depth", units.DimLength)),
+		Bottom: units.Length(a.optQty("bottom", units.DimLength))}
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	p, err := profile.New(profile.Spec{NoWater: true, Layers: []profile.LayerSpec{{Name: "soil", Thickness: h, Drainage: profile.Drained,
+		Phi: 30 * units.Degree, UnitWeight: 19 * units.KilonewtonPerCubicMetre, E: e}}})
+	if err != nil {
+		return nil, err
+	}
+	r, err := group.RaftSettlement(p, in)
+	if err != nil {
+		return nil, err
+	}
+	return values{"settlement": length(r.Total)}, nil
+}
+
+func errBad(msg string) error { return errors.New("group: " + msg) }
