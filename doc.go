@@ -17,6 +17,7 @@
 //	profile      the ground: layers, groundwater, excavation and scour, total and effective vertical stress
 //	pile         capacity of a pile in the ground, design bases, required length
 //	settle       single-pile settlement and static load-test interpretation
+//	group        pile groups: efficiency, block failure, uplift, group settlement
 //	reliability  probabilistic capacity: Monte Carlo, FOSM and sensitivities
 //	calc         the calc file: decoding, validation, the run and its result; batch
 //	report       text, CSV, JSON, records, Markdown, HTML and PDF calculation packages

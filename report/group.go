@@ -242,8 +242,8 @@ type jGroup struct {
 
 type jGroupEff struct {
 	Rule     string `json:"rule"`
-	Value    jnum   `json:"value"`
-	Formula  jnum   `json:"formula_value"`
+	Value    jnum   `json:"eta"`
+	Formula  jnum   `json:"formula_eta"`
 	Equation string `json:"equation"`
 }
 

@@ -1,0 +1,95 @@
+package calc
+
+// Sources: examples/footbridge-pier-group.yaml is a scenario of our own
+// (invented numbers); the expected values here are worked by hand from the
+// file's inputs and the equations of package group.
+
+import (
+	"errors"
+	"math"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"github.com/qultgeo/qult/units"
+)
+
+func readGroupExample(t *testing.T) []byte {
+	t.Helper()
+	b, err := os.ReadFile(filepath.Join("..", "examples", "footbridge-pier-group.yaml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	return b
+}
+
+// TestGroupExample: the shipped group runs; the layout, the efficiency and
+// the loads on the cap follow the file by hand.
+func TestGroupExample(t *testing.T) {
+	r, err := Parse(readGroupExample(t))
+	if err != nil {
+		t.Fatal(err)
+	}
+	g := r.Group
+	if g == nil {
+		t.Fatal("no group result")
+	}
+	// 3 rows × 4 columns at 1.6 m (x) and 1.4 m (y), 400 mm piles:
+	// Bg = 3·1.6 + 0.4 = 5.2 m, Lg = 2·1.4 + 0.4 = 3.2 m.
+	if g.N != 12 || math.Abs(float64(g.Geometry.Bg)-5.2) > 1e-12 || math.Abs(float64(g.Geometry.Lg)-3.2) > 1e-12 {
+		t.Errorf("n %d, Bg %v, Lg %v", g.N, g.Geometry.Bg, g.Geometry.Lg)
+	}
+	// Undrained ground, cap not in contact, s = 1.4/0.4 = 3.5 D:
+	// η = 0.65 + 0.35·(3.5 − 2.5)/3.5 = 0.75.
+	if math.Abs(g.Efficiency.Value-0.75) > 1e-12 {
+		t.Errorf("η = %g, want 0.75", g.Efficiency.Value)
+	}
+	// Loads on the cap: 12 × (320 + 110) kN.
+	if got := g.Loads.Compression.Total().KN(); math.Abs(got-12*430) > 1e-9 {
+		t.Errorf("cap load %g kN, want 5160", got)
+	}
+	if rc := r.Breakdown.Capacity.Compression; math.Abs(float64(g.SumSingles-12*rc)) > 1e-6 {
+		t.Errorf("Σ singles %v, want 12 × %v", g.SumSingles, rc)
+	}
+	if g.Design == nil || len(g.Design.Cases) != 1 || !g.Pass {
+		t.Errorf("design %+v, pass %v", g.Design, g.Pass)
+	}
+	// The raft at two-thirds of 22 m: 14.667 m.
+	if g.Raft == nil || math.Abs(float64(g.Raft.Depth)-22.0*2/3) > 1e-9 {
+		t.Errorf("raft %+v", g.Raft)
+	}
+}
+
+// TestGroupLoadsGiven: loads on the cap given in the group section replace
+// the file's loads × n, and a failing group fails the result.
+func TestGroupLoadsGiven(t *testing.T) {
+	src := string(readGroupExample(t)) + "  loads:\n    compression: {permanent: 9000 kN, variable: 2000 kN}\n"
+	r, err := Parse([]byte(src))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := r.Group.Loads.Compression.Total(); got != 11000*units.Kilonewton || r.Group.LoadsFrom != "group.loads" {
+		t.Errorf("loads %v from %q", got, r.Group.LoadsFrom)
+	}
+	if r.Group.Pass {
+		t.Error("11 000 kN on a group good for about 5800 kN passes")
+	}
+}
+
+// TestGroupProblems: bad group keys are problems naming the key.
+func TestGroupProblems(t *testing.T) {
+	base := string(readGroupExample(t))
+	for _, c := range []struct{ from, to, path string }{
+		{"spacing_x: 1.6 m", "spacing_x: 0.3 m", "group.spacing_x"},
+		{"efficiency: practice", "efficiency: feld\n  efficiency_value: 0.5", "group.efficiency_value"},
+		{"cap_edge: 350 mm", "cap_edge: 0 mm", "group.cap_edge"},
+		{"allowable: 50 mm", "allowable: -5 mm", "group.allowable"},
+	} {
+		_, err := Parse([]byte(strings.Replace(base, c.from, c.to, 1)))
+		var ps Problems
+		if !errors.As(err, &ps) || len(ps) == 0 || ps[0].Path != c.path || ps[0].Line == 0 {
+			t.Errorf("%s: %v, want a problem at %s with its line", c.to, err, c.path)
+		}
+	}
+}
