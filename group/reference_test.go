@@ -210,3 +210,27 @@ func TestRaftElasticClosedForm(t *testing.T) {
 	}
 	near(t, "square raft mm", r2.Total.Millimetres(), 1200.0/20000*0.4166667*1000, 1e-6)
 }
+
+// TestRaftConsolidationClosedForm: the same raft as above on a layer with
+// a constrained modulus M = 20 MPa (mv = 0.05 m²/MN) and no Young's
+// modulus: the consolidation s = ∫ mv·Δσ dz has the same closed form,
+// 1200/20 000 × 0.325422 m = 19.5253 mm, now counted as consolidation; a
+// layer of neither kind below adds nothing and a warning.
+func TestRaftConsolidationClosedForm(t *testing.T) {
+	p, err := profile.New(profile.Spec{NoWater: true, Layers: []profile.LayerSpec{
+		{Name: "clay", Thickness: 16 * m, Drainage: profile.Undrained, Su: 60 * kPa, UnitWeight: 19 * kNm, M: 20 * units.Megapascal},
+		{Name: "unknown", Thickness: 10 * m, Drainage: profile.Undrained, Su: 80 * kPa, UnitWeight: 19 * kNm},
+	}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	r, err := group.RaftSettlement(p, group.RaftInput{Load: 1200 * kN, Bg: 2 * m, Lg: 3 * m, Depth: 6 * m})
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "consolidation mm", r.Consolidation.Millimetres(), 19.5253, 1e-4)
+	near(t, "total mm", r.Total.Millimetres(), 19.5253, 1e-4)
+	if r.Elastic != 0 || len(r.Warnings) != 1 || len(r.Layers) != 2 || r.Layers[0].Kind != "consolidation" || r.Layers[1].Kind != "none" {
+		t.Errorf("raft %+v", r)
+	}
+}

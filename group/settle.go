@@ -82,19 +82,6 @@ type Raft struct {
 	Refs          []cite.Ref
 }
 
-// consolidate is the primitive that settles the compressible layers of a
-// profile under a stress change; nil while no profile layer can have
-// compressibility.
-var consolidate func(p *profile.Profile, top, bottom units.Length, ds func(units.Length) units.Stress) (units.Length, []profileCompression, bool, error)
-
-// profileCompression is one layer's consolidation as the profile reports it.
-type profileCompression struct {
-	Layer       int
-	Top, Bottom units.Length
-	Settlement  units.Length
-	Counted     bool
-}
-
 // RaftSettlement returns the settlement of an equivalent raft in profile
 // prof: the load spread 2:1 below the raft (SpreadStress), the elastic
 // compression ∫Δσ/E dz of layers with a Young's modulus E, in closed form,
@@ -122,19 +109,17 @@ func RaftSettlement(prof *profile.Profile, in RaftInput) (Raft, error) {
 		return SpreadStress(in.Load, in.Bg, in.Lg, z-in.Depth)
 	}
 	consolidated := map[int]bool{}
-	if consolidate != nil {
-		_, parts, _, err := consolidate(prof, in.Depth, bottom, ds)
-		if err != nil {
-			return Raft{}, err
+	_, parts, err := prof.Consolidation(in.Depth, bottom, ds)
+	if err != nil {
+		return Raft{}, err
+	}
+	for _, p := range parts {
+		if p.Model == profile.Incompressible {
+			continue
 		}
-		for _, p := range parts {
-			if !p.Counted {
-				continue
-			}
-			consolidated[p.Layer] = true
-			r.Layers = append(r.Layers, RaftLayer{Layer: prof.Layer(p.Layer).Name, Top: p.Top, Bottom: p.Bottom, Kind: "consolidation", Settlement: p.Settlement})
-			r.Consolidation += p.Settlement
-		}
+		consolidated[p.Layer] = true
+		r.Layers = append(r.Layers, RaftLayer{Layer: prof.Layer(p.Layer).Name, Top: p.Top, Bottom: p.Bottom, Kind: "consolidation", Settlement: p.Settlement})
+		r.Consolidation += p.Settlement
 	}
 	for i := range prof.NumLayers() {
 		lay := prof.Layer(i)
