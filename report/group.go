@@ -392,3 +392,16 @@ func groupJSON(r *calc.Result, c jconv) *jGroup {
 	}
 	return j
 }
+
+// groupSummary is the group's line in the summary: its verdict, the
+// governing mode and the settlement.
+func groupSummary(g *calc.GroupResult, c conv) string {
+	s := fmt.Sprintf("%d piles: Qg %s (%s govern), uplift %s", g.N, c.fs(g.Capacity), g.Governs, c.fs(g.Uplift))
+	if d := g.Design; d != nil {
+		s = passText(g.Pass) + ": " + s + fmt.Sprintf(", highest utilisation %s", fmtNum(d.MaxUse(), 3))
+	}
+	if g.Raft != nil {
+		s += ", equivalent raft settlement " + c.sms(g.Raft.Total)
+	}
+	return s
+}

@@ -236,6 +236,9 @@ func secSummary(r *calc.Result, c conv) section {
 		}
 		it = append(it, item{"Serviceability", txt(v), ""})
 	}
+	if g := r.Group; g != nil {
+		it = append(it, item{"Pile group", txt(groupSummary(g, c)), ""})
+	}
 	n := len(allWarnings(r, c))
 	w := "none"
 	if n > 0 {
