@@ -209,7 +209,7 @@ func runGroup(f *File, in *Inputs, prof *profile.Profile, res *Result) error {
 		o.SingleSettlement, o.HasSingleSettlement = s.Settlement, true
 	}
 	gr, err := group.Analyse(group.Input{Profile: prof, Pile: in.Pile, Methods: in.Methods, Basis: in.Basis,
-		Loads: gi.loads, Layout: gi.layout, Options: o})
+		Loads: gi.loads, Layout: gi.layout, Options: o, Single: res.Design})
 	if err != nil {
 		var fe *group.FieldError
 		if errors.As(err, &fe) {

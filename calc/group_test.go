@@ -93,3 +93,27 @@ func TestGroupProblems(t *testing.T) {
 		}
 	}
 }
+
+// TestGroupVesic: with a settlement section the group settles by Vesic's
+// ratio sg = s·√(Bg/D) from the single pile's settlement (5.2 m block of
+// 0.4 m piles: √13), and the larger of that and the raft meets the
+// allowable.
+func TestGroupVesic(t *testing.T) {
+	src := strings.Replace(string(readGroupExample(t)), "group:\n", "settlement:\n  method: load-transfer\ngroup:\n", 1)
+	r, err := Parse([]byte(src))
+	if err != nil {
+		t.Fatal(err)
+	}
+	g := r.Group
+	if g.Vesic == nil || r.Settlement == nil {
+		t.Fatal("no Vesic settlement")
+	}
+	want := float64(r.Settlement.Settlement) * math.Sqrt(13)
+	if math.Abs(float64(g.Vesic.Group)-want) > 1e-12*want {
+		t.Errorf("sg %v, want %v", g.Vesic.Group, want)
+	}
+	worst := max(g.Vesic.Group, g.Raft.Total)
+	if g.SettlementPass != (worst <= g.Allowable) {
+		t.Errorf("settlement pass %v with %v against %v", g.SettlementPass, worst, g.Allowable)
+	}
+}

@@ -55,11 +55,17 @@ type Input struct {
 	Loads   pile.Loads // on the whole cap
 	Layout  Layout
 	Options Options
+	// Single is the single pile's design check under Basis when the
+	// caller has it (such as one over several ground profiles, EN 1997-1
+	// eq. 7.8); nil: Analyse checks the pile in Profile. Only its design
+	// resistances are read.
+	Single *pile.Design
 }
 
 // CaseCheck is the group's verification in one design case. The single
-// pile's design resistance Rd and characteristic resistance Rk give the
-// case's overall multiplier Rd/Rk, which the block's resistance takes too:
+// pile's design resistance Rd and its characteristic resistance Rk in the
+// profile give the case's overall multiplier Rd/Rk, which the block's
+// resistance takes too:
 //
 //	Rd,group = min(η·n·Rd,single, (Rd/Rk)·Qblock)
 //	Rt,d,group = min(n·Rt,d,single, (Rt,d/Rt,k)·Tblock)
@@ -236,9 +242,13 @@ func design(in Input, res *Result) (*Design, error) {
 	if err != nil {
 		return nil, err
 	}
-	sd, err := pile.Check(in.Profile, in.Pile, in.Methods, in.Basis, pile.Loads{})
-	if err != nil {
-		return nil, err
+	sd := in.Single
+	if sd == nil {
+		d, err := pile.Check(in.Profile, in.Pile, in.Methods, in.Basis, pile.Loads{})
+		if err != nil {
+			return nil, err
+		}
+		sd = &d
 	}
 	if len(sd.Cases) != len(cases) {
 		return nil, fmt.Errorf("group: %d design cases, %d verifications", len(cases), len(sd.Cases))
@@ -250,8 +260,8 @@ func design(in Input, res *Result) (*Design, error) {
 	for i, cs := range cases {
 		v := sd.Cases[i]
 		c := CaseCheck{Case: cs.Name}
-		c.Ratio = ratio(v.CompressionRd, sd.Characteristic.Compression)
-		c.TensionRatio = ratio(v.TensionRd, sd.Characteristic.Tension)
+		c.Ratio = ratio(v.CompressionRd, res.Single.Compression)
+		c.TensionRatio = ratio(v.TensionRd, res.Single.Tension)
 		c.PilesRd = eta * n * v.CompressionRd
 		c.Rd = c.PilesRd
 		c.PilesTensionRd = n * v.TensionRd
