@@ -222,6 +222,10 @@ func runGroup(f *File, in *Inputs, prof *profile.Profile, res *Result) error {
 			}
 			return Problems{{Path: path, Line: lineOf(f, path), Msg: fe.Msg, Err: err}}
 		}
+		var pe *profile.FieldError
+		if errors.As(err, &pe) {
+			return translate(f, err) // a layer's value the group's settlement needs
+		}
 		return Problems{{Path: "group", Line: lineOf(f, "group"), Msg: err.Error(), Err: err}}
 	}
 	out := &GroupResult{Result: gr, Loads: gi.loads, LoadsFrom: gi.loadsFrom, Allowable: gi.allowable, HasAllowable: gi.hasAllowable,

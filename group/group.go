@@ -203,24 +203,38 @@ func Analyse(in Input) (*Result, error) {
 		res.Refs = append(res.Refs, VesicRef)
 	}
 	if !o.NoRaft {
-		load := o.ServiceLoad
-		if load == 0 {
-			load = in.Loads.Compression.Total()
-		}
-		depth := o.RaftDepth
-		if depth == 0 {
-			depth = top + units.Length(RaftDepthRatio)*(p.Tip()-top)
-		}
-		r, err := RaftSettlement(in.Profile, RaftInput{Load: load, Bg: geo.Bg, Lg: geo.Lg, Depth: depth, Bottom: o.RaftBottom})
-		if err != nil {
+		if err := equivalentRaft(in, res, top); err != nil {
 			return nil, err
 		}
-		res.Raft = &r
-		res.Warnings = append(res.Warnings, r.Warnings...)
-		res.Refs = append(res.Refs, r.Refs...)
 	}
 	res.Refs = uniqueRefs(res.Refs)
 	return res, nil
+}
+
+// equivalentRaft adds the settlement of the equivalent raft under the
+// service load to res; without a load, a warning instead.
+func equivalentRaft(in Input, res *Result, top units.Length) error {
+	o := in.Options
+	load := o.ServiceLoad
+	if load == 0 {
+		load = in.Loads.Compression.Total()
+	}
+	if load == 0 {
+		res.Warnings = append(res.Warnings, "no compression load on the cap: the equivalent raft's settlement is not computed")
+		return nil
+	}
+	depth := o.RaftDepth
+	if depth == 0 {
+		depth = top + units.Length(RaftDepthRatio)*(in.Pile.Tip()-top)
+	}
+	r, err := RaftSettlement(in.Profile, RaftInput{Load: load, Bg: res.Geometry.Bg, Lg: res.Geometry.Lg, Depth: depth, Bottom: o.RaftBottom})
+	if err != nil {
+		return err
+	}
+	res.Raft = &r
+	res.Warnings = append(res.Warnings, r.Warnings...)
+	res.Refs = append(res.Refs, r.Refs...)
+	return nil
 }
 
 // uniqueRefs drops repeated references, keeping the first of each.

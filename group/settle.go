@@ -95,8 +95,11 @@ func RaftSettlement(prof *profile.Profile, in RaftInput) (Raft, error) {
 	if !(in.Bg > 0) || !(in.Lg > 0) || !(in.Load >= 0) || math.IsInf(float64(in.Load), 0) {
 		return Raft{}, fmt.Errorf("group: raft %v × %v under %v: want positive dimensions and a load ≥ 0", in.Bg, in.Lg, in.Load)
 	}
-	if !(in.Depth >= 0) || !(bottom > in.Depth) || bottom > prof.Depth() {
-		return Raft{}, fmt.Errorf("group: raft at %v counted to %v: want the raft above the bottom and within the profile (to %v)", in.Depth, bottom, prof.Depth())
+	if !(in.Depth >= 0) || !(in.Depth < prof.Depth()) {
+		return Raft{}, &FieldError{"raft_depth", fmt.Sprintf("%v: want 0 or more and above the bottom of the ground profile (%v)", in.Depth, prof.Depth())}
+	}
+	if !(bottom > in.Depth) || bottom > prof.Depth() {
+		return Raft{}, &FieldError{"raft_bottom", fmt.Sprintf("%v: want below the raft (%v) and within the ground profile (to %v)", bottom, in.Depth, prof.Depth())}
 	}
 	r := Raft{Depth: in.Depth, Bottom: bottom, Bg: in.Bg, Lg: in.Lg, Load: in.Load,
 		Pressure: units.StressOf(in.Load, units.Rectangle(in.Bg, in.Lg)),

@@ -183,6 +183,7 @@ var badCases = []badCase{
 	{file: "459-group-position-one-value", want: []string{"group.positions[1] (line 27)", "want [x, y]"}},
 	{file: "460-group-efficiency-value-above-1", want: []string{"group.efficiency_value (line 32)", "outside 0 to 1"}},
 	{file: "461-group-spacing-in-kn", want: []string{"group.spacing_x (line 29)", "want a length"}},
+	{file: "462-group-raft-below-profile", want: []string{"group.raft_depth (line 30)", "above the bottom of the ground profile"}},
 }
 
 const badTimeout = 5 * time.Second
