@@ -83,9 +83,15 @@
 //
 //	Δσ(z) = Q/((Bg + z′)(Lg + z′)),  z′ = z − zr
 //
-// with the elastic compression ∫ Δσ/E dz of layers that have a Young's
-// modulus and no compressibility, and the consolidation of layers with
-// compressibility (package profile).
+// with the consolidation of layers with compressibility (Cc, Cr, e0 and
+// σ′p, or a constrained modulus; profile.Profile.Consolidation) and the
+// compression ∫ Δσ/E dz of layers that have only a Young's modulus (E
+// taken as a one-dimensional modulus, our simplification; it understates
+// the compression of a laterally confined layer). A layer with neither
+// adds nothing, with a warning. Where the piles pass through soft ground
+// into a firm stratum, Tomlinson & Woodward place the raft at two-thirds
+// of the length in the firm stratum: give the raft's depth (calc file:
+// group.raft_depth).
 //
 // These routines are aids for qualified engineers; check them against the
 // governing code, the site investigation and load tests.
