@@ -74,6 +74,12 @@
 //
 //	Tg = min(n·Tsingle, W′block + 2(Bg + Lg)·Σ τ·ΔL)
 //
+// with τ as for the block in compression. In cohesionless soil AASHTO's
+// block spreads outwards (a pyramid at 1 horizontal in 4 vertical, from
+// memory); it is not modelled: the vertical block here is the smaller, the
+// lower uplift resistance. W′ is the soil's effective weight inside the
+// block; the piles' extra weight over the soil they replace is left out.
+//
 // # Settlement
 //
 // Vesic (1969): sg = s·√(Bg/D), s the single pile's settlement at the same

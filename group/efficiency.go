@@ -33,7 +33,8 @@ var dasGroup = cite.Ref{Source: cite.Das2019, Where: "section on group efficienc
 
 var rules = []Rule{
 	{ID: Practice, Equation: "undrained ground, cap not in firm contact: η = 0.65 at s = 2.5D to 1 at 6D; cap in contact: 1; drained: 1 (driven), 0.67 at 2.5D to 1 at 4D (bored)",
-		Refs: []cite.Ref{{Source: cite.AASHTO2020, Where: "10.7.3.9 and 10.8.3.6, group resistance (from memory)"}}},
+		Refs: []cite.Ref{{Source: cite.AASHTO2020, Where: "10.7.3.9 and 10.8.3.6, group resistance (from memory)"},
+			{Source: cite.Hannigan2016, Where: "group capacity of driven piles: efficiency 1 in cohesionless soil, the block check in cohesive soil (from memory)"}}},
 	{ID: ConverseLabarre, Grid: true, Equation: "η = 1 − θ·[(n1 − 1)·n2 + (n2 − 1)·n1]/(90·n1·n2), θ = atan(D/s) in degrees", Refs: []cite.Ref{dasGroup}},
 	{ID: LosAngeles, Grid: true, Equation: "η = 1 − D/(π·s·n1·n2)·[n1(n2 − 1) + n2(n1 − 1) + √2·(n1 − 1)(n2 − 1)]", Refs: []cite.Ref{dasGroup}},
 	{ID: SeilerKeeney, Grid: true, Equation: "η = 1 − [11s/(7(s² − 1))]·[(n1 + n2 − 2)/(n1 + n2 − 1)] + 0.3/(n1 + n2), s in ft", Refs: []cite.Ref{dasGroup}},
