@@ -109,7 +109,10 @@ func secGroup(r *calc.Result, c conv) section {
 		st = append(st, item{"Equivalent raft", txt(fmt.Sprintf("%s × %s at %s depth under %s (%s), spread 2:1, counted to %s: %s",
 			c.ls(rf.Bg), c.ls(rf.Lg), c.ls(rf.Depth), c.fs(rf.Load), c.ss(rf.Pressure), c.ls(rf.Bottom), c.sms(rf.Total))), ""})
 	}
-	if g.HasAllowable {
+	switch {
+	case g.HasAllowable && g.Raft == nil && g.Vesic == nil:
+		st = append(st, item{"Allowable settlement", txt(c.sms(g.Allowable) + ": not checked (no settlement computed: no load on the cap and no settlement section)"), ""})
+	case g.HasAllowable:
 		st = append(st, item{"Allowable settlement", txt(fmt.Sprintf("%s: %s", c.sms(g.Allowable), passText(g.SettlementPass))), ""})
 	}
 	if len(st) > 0 {
