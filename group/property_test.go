@@ -143,3 +143,35 @@ func TestPropBlockGrowsWithLength(t *testing.T) {
 		}
 	})
 }
+
+// TestPropGroupNeverAboveSum: whatever the grid and the rule, the group's
+// compression never exceeds n·Rc, its uplift never exceeds n·Rt, and the
+// governing value is one of the two modes.
+func TestPropGroupNeverAboveSum(t *testing.T) {
+	rapid.Check(t, func(t *rapid.T) {
+		su := units.Stress(rapid.Float64Range(10, 150).Draw(t, "su kPa")) * units.Kilopascal
+		prof, err := profile.New(profile.Spec{WaterDepth: 0, Layers: []profile.LayerSpec{
+			{Name: "clay", Thickness: 40, Drainage: profile.Undrained, Su: su, SaturatedUnitWeight: 18 * kNm}}})
+		if err != nil {
+			t.Fatal(err)
+		}
+		d := units.Length(rapid.Float64Range(0.3, 1).Draw(t, "d"))
+		s := d * units.Length(rapid.Float64Range(1.05, 8).Draw(t, "s/d"))
+		l, err := group.Grid(rapid.IntRange(1, 8).Draw(t, "rows"), rapid.IntRange(1, 8).Draw(t, "cols"), s, s)
+		if err != nil {
+			t.Fatal(err)
+		}
+		r, err := group.Analyse(group.Input{Profile: prof, Pile: pile.Pile{Section: pile.Section{Shape: pile.Circle, Diameter: d},
+			Length: units.Length(rapid.Float64Range(5, 30).Draw(t, "L")), Installation: pile.DrivenHigh}, Methods: pile.DefaultMethods(),
+			Layout: l, Options: group.Options{Rule: rapid.SampledFrom([]string{group.Practice, group.ConverseLabarre, group.LosAngeles, group.Feld}).Draw(t, "rule"), NoRaft: true}})
+		if err != nil {
+			return // a formula refusing a layout
+		}
+		if r.Capacity > r.SumSingles || r.Uplift > r.SumTension {
+			t.Fatalf("group %v above n·Rc %v, or uplift %v above n·Rt %v", r.Capacity, r.SumSingles, r.Uplift, r.SumTension)
+		}
+		if r.Capacity != r.Reduced && (r.Block == nil || r.Capacity != r.Block.Capacity) {
+			t.Fatalf("capacity %v is neither mode", r.Capacity)
+		}
+	})
+}
