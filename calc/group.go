@@ -21,7 +21,7 @@ type Group struct {
 	SpacingX  Value     `yaml:"spacing_x,omitempty" json:"spacing_x,omitempty" q:"length,0," doc:"Centre-to-centre spacing between columns (along x)."`
 	SpacingY  Value     `yaml:"spacing_y,omitempty" json:"spacing_y,omitempty" q:"length,0," doc:"Centre-to-centre spacing between rows (along y)."`
 	Positions [][]Value `yaml:"positions,omitempty" json:"positions,omitempty" doc:"[x, y] centres of the piles in plan (lengths), instead of rows and columns."`
-	CapEdge   Value     `yaml:"cap_edge,omitempty" json:"cap_edge,omitempty" q:"length,0," doc:"Clear distance from the outer piles' faces to the cap's edge (default 300 mm; AASHTO's minimum 225 mm)."`
+	CapEdge   Value     `yaml:"cap_edge,omitempty" json:"cap_edge,omitempty" q:"length,0," doc:"Clear distance from the outer piles' faces to the cap's edge (default 300 mm; AASHTO's minimum 9 in, 229 mm)."`
 	// CapContact: the cap bears firmly on the ground (AASHTO's efficiency
 	// of 1 in clay); default false.
 	CapContact      bool   `yaml:"cap_contact,omitempty" json:"cap_contact,omitempty" doc:"The cap bears firmly on the ground (practice efficiency 1 in clay); default false."`

@@ -10,9 +10,9 @@
 // A layout is rows × columns at spacings sx (between columns, along x) and
 // sy (between rows, along y), or a list of positions. Two piles closer than
 // one pile width (centre to centre) overlap: an error. A spacing under the
-// minimum of AASHTO LRFD 10.7.1.2 (the greater of 2.5 widths and 750 mm for
+// minimum of AASHTO LRFD 10.7.1.2 (the greater of 2.5 widths and 30 in (762 mm) for
 // driven piles; 3 widths for bored and augered piles, AASHTO LRFD 10.8.1.2)
-// and a clear distance from a pile's face to the cap's edge under 225 mm
+// and a clear distance from a pile's face to the cap's edge under 9 in (229 mm)
 // (AASHTO LRFD 10.7.1.2) are warnings. The clause numbers and values were
 // written from memory of the 9th edition, not read in this session.
 //

@@ -41,7 +41,7 @@ type Options struct {
 
 // DefaultCapEdge is the clear distance from the outer piles' faces to the
 // cap's edge when none is given: 300 mm (common practice; above AASHTO's
-// minimum of 225 mm).
+// minimum of 9 in, 229 mm).
 const DefaultCapEdge = 0.3 * units.Metre
 
 // Input is a group of identical piles: the ground, the pile and its

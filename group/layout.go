@@ -105,18 +105,18 @@ type Geometry struct {
 }
 
 // MinSpacingRule returns the least centre-to-centre spacing AASHTO LRFD
-// asks for, for piles of width d: the greater of 2.5 d and 750 mm (30 in)
+// asks for, for piles of width d: the greater of 2.5 d and 30 in (762 mm)
 // for driven piles (10.7.1.2), 3 d for bored piles (10.8.1.2); from memory.
 func MinSpacingRule(d units.Length, bored bool) units.Length {
 	if bored {
 		return 3 * d
 	}
-	return max(2.5*d, 0.75*units.Metre)
+	return max(2.5*d, 30*units.Inch)
 }
 
 // MinCapEdge is the least clear distance from a pile's face to the cap's
-// edge, 225 mm (9 in, AASHTO LRFD 10.7.1.2; from memory).
-const MinCapEdge = 0.225 * units.Metre
+// edge, 9 in (229 mm; AASHTO LRFD 10.7.1.2, from memory).
+const MinCapEdge = 9 * units.Inch
 
 // SpacingRefs are the sources of the spacing and edge-distance checks.
 func SpacingRefs() []cite.Ref {
