@@ -31,6 +31,10 @@
 //	              correlations, Monte Carlo and FOSM side by side (mean, σ, CoV, 5/50/95 % percentiles,
 //	              P(R < Q), β), the sensitivity ranking; also in ViewReport when the file has a
 //	              reliability section
+//	(group)       ViewCheck and ViewReport add the pile group when the file has a group section:
+//	              layout, efficiency, the block and its side shear by layer, uplift, the group's design
+//	              check, Vesic's settlement and the equivalent raft by layer; HTML and PDF draw the plan
+//	              of the group to scale (cap, block outline, piles numbered)
 //
 // Each format renders the view as follows.
 //
