@@ -36,6 +36,8 @@ type File struct {
 	LoadTest   *LoadTest   `yaml:"load_test,omitempty" json:"load_test,omitempty" doc:"A static compression load test on the pile, as points of head load and head settlement, read by the chosen criteria."`
 	// Reliability asks for the probabilistic capacity (Monte Carlo, FOSM).
 	Reliability *Reliability `yaml:"reliability,omitempty" json:"reliability,omitempty" doc:"Probabilistic capacity: uncertain parameters with their distributions and correlations, for Monte Carlo simulation and FOSM."`
+	// Candidates lists pile types to compare (qult choose).
+	Candidates *Candidates `yaml:"candidates,omitempty" json:"candidates,omitempty" doc:"Pile types to compare: sections, installations and materials, with unit costs; each gets its shortest passing length, quantities and cost."`
 
 	// lines maps each field path read from the file to its line.
 	lines map[string]int

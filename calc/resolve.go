@@ -38,6 +38,8 @@ type Inputs struct {
 	LoadTest *LoadTestInputs
 	// reliability is the reliability section; nil when the file has none.
 	reliability *reliabilityInputs
+	// candidates is the candidates section; nil when the file has none.
+	candidates *candidatesInputs
 }
 
 // resolver turns Values into quantities, recording problems.
@@ -177,6 +179,7 @@ func Resolve(f *File) (*Inputs, error) {
 	r.search(f, in)
 	r.settlement(f, in)
 	r.reliabilitySection(f, in)
+	r.candidatesSection(f, in)
 	if len(r.probs) > 0 {
 		return in, r.probs
 	}
