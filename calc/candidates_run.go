@@ -2,9 +2,11 @@ package calc
 
 import (
 	"cmp"
+	"errors"
 	"fmt"
 	"runtime"
 	"slices"
+	"strings"
 	"sync"
 
 	"github.com/qultgeo/qult/cite"
@@ -227,7 +229,13 @@ func runCandidate(f *File, in *Inputs, prof *profile.Profile, c *candidateInput,
 	ed := largestAxialForce(cases, in.Loads)
 	r, err := c.rule.Compression(c.member)
 	if err != nil {
-		return prob(c.path+".material", err)
+		path := c.path + ".material"
+		var fe *structural.FieldError
+		if errors.As(err, &fe) {
+			path = c.path + strings.TrimPrefix(fe.Field, "candidate")
+			err = errors.New(fe.Msg)
+		}
+		return prob(path, err)
 	}
 	out.Structural = structural.Verify(r, ed)
 	geo, err := pile.RequiredLength(prof, c.pile, in.Methods, in.Basis, in.Loads, pile.Search{Step: step, MaxTip: maxTip})

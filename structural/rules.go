@@ -268,7 +268,8 @@ func enClass(m Member) error {
 // augered), 0.33 for concrete in a permanent casing and for precast
 // non-prestressed driven piles; fr = 0.40 on the bars; fs = 0.50 on the
 // steel of pipes and H-sections. Fields left zero take these values;
-// given, each is 0.1 to 0.6.
+// given, each is 0.1 to 0.6. A steel section with slender elements (the
+// limits of AASHTO 6.9.4.2, see AASHTO) is refused.
 type Allowable struct {
 	Concrete, Rebar, Steel float64
 }
@@ -302,6 +303,9 @@ func (a Allowable) Compression(m Member) (Resistance, error) {
 	}
 	r := Resistance{Rule: a.ID(), Refs: a.Refs(), Notes: []string{fullyEmbedded}}
 	if m.IsSteel() {
+		if err := aashtoCompact(m); err != nil {
+			return Resistance{}, err
+		}
 		fs := pick(a.Steel, 0.50)
 		as := m.Section.MaterialArea()
 		r.Material, r.SteelArea = "steel", as
