@@ -371,9 +371,9 @@ func (r *resolver) costs(currency string, c *Costs, path string) costInput {
 		per   map[string]float64 // accepted "/unit" suffixes: SI units per unit
 		label string
 	}{
-		{"per_metre", c.PerMetre, &out.perMetre, map[string]float64{"m": 1, "ft": 1 / units.Foot.Metres()}, "m or ft"},
-		{"concrete", c.Concrete, &out.perM3, map[string]float64{"m3": 1, "m³": 1, "yd3": 1 / math.Pow(3*units.Foot.Metres(), 3), "ft3": 1 / units.CubicFoot.CubicMetres()}, "m3, yd3 or ft3"},
-		{"steel", c.Steel, &out.perKg, map[string]float64{"t": 1e-3, "kg": 1, "lb": 1 / 0.45359237}, "t, kg or lb"},
+		{"per_metre", c.PerMetre, &out.perMetre, map[string]float64{"m": 1, "ft": 1 / units.Foot.Metres()}, "/m or /ft"},
+		{"concrete", c.Concrete, &out.perM3, map[string]float64{"m3": 1, "m³": 1, "yd3": 1 / math.Pow(3*units.Foot.Metres(), 3), "ft3": 1 / units.CubicFoot.CubicMetres()}, "/m3, /yd3 or /ft3"},
+		{"steel", c.Steel, &out.perKg, map[string]float64{"t": 1e-3, "kg": 1, "lb": 1 / 0.45359237}, "/t, /kg or /lb"},
 		{"per_pile", c.PerPile, &out.perPile, map[string]float64{"": 1}, ""},
 	} {
 		if !k.v.IsSet() {
@@ -383,7 +383,7 @@ func (r *resolver) costs(currency string, c *Costs, path string) costInput {
 		if err != nil {
 			want := "a number, optionally with the currency"
 			if k.label != "" {
-				want += " and /" + strings.ReplaceAll(k.label, " or ", " or /")
+				want += " and " + k.label
 			}
 			r.add(path+"."+k.key, k.v.Line, "%q: %v (want %s)", k.v.Raw, err, want)
 			continue

@@ -31,6 +31,10 @@
 //	              correlations, Monte Carlo and FOSM side by side (mean, σ, CoV, 5/50/95 % percentiles,
 //	              P(R < Q), β), the sensitivity ranking; also in ViewReport when the file has a
 //	              reliability section
+//	ViewChoose    the candidate piles ranked by cost (or length × area): each one's shortest passing
+//	              length, what governs it, the utilisations, the section's axial resistance with its
+//	              equation, quantities and cost, why a failing one fails; HTML and PDF add the required
+//	              length against the diameter; also in ViewReport when the file has a candidates section
 //
 // Each format renders the view as follows.
 //

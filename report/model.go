@@ -136,7 +136,10 @@ func build(r *calc.Result, o Options) *doc {
 		add(secSettlement(r, c))
 		add(secLoadTest(r, c))
 		add(secReliability(r, c))
+		add(secCandidates(r, c))
 		add(secDefaults(r, c))
+	case ViewChoose:
+		add(secCandidates(r, c))
 	case ViewReliability:
 		add(secTotals(r, c))
 		add(secReliability(r, c))

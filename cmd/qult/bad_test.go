@@ -171,6 +171,14 @@ var badCases = []badCase{
 	{file: "316-reliability-no-parameters", want: []string{"reliability.parameters (line 28)", "at least one"}},
 	{file: "317-reliability-same-value-twice", want: []string{"reliability.parameters[1].key (line 30)", "same value"}},
 	{file: "318-unknown-soil", want: []string{"ground.layers[0].soil (line 7)", "want one of gravel, sand, silt, clay, peat, fill"}},
+	{file: "500-candidate-without-material", want: []string{"candidates.piles[0].material (line 21)", "not given"}},
+	{file: "501-candidate-cost-in-another-currency", want: []string{"candidates.piles[0].costs.per_metre (line 26)", `unknown currency unit "USD"`}},
+	{file: "502-candidate-negative-cost", want: []string{"candidates.piles[0].costs.concrete (line 28)", "not negative"}},
+	{file: "503-candidates-unknown-currency", want: []string{"candidates.currency (line 20)", "not a currency unit"}},
+	{file: "504-candidate-slender-pipe", want: []string{"candidates.piles[0].section.wall (line 22)", "slender"}},
+	{file: "505-candidate-concrete-in-steel-pipe", want: []string{"candidates.piles[0].material.concrete_strength (line 24)", "not counted"}},
+	{file: "506-candidate-diameter-too-large", want: []string{"candidates.piles[0].diameters[1] (line 23)", "outside"}},
+	{file: "507-candidates-without-design", want: []string{"candidates (line 17)", "design"}},
 }
 
 const badTimeout = 5 * time.Second
