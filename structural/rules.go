@@ -65,6 +65,7 @@ func (a AASHTO) Compression(m Member) (Resistance, error) {
 		}
 		r.Material, r.SteelArea = "steel", as
 		r.Nominal = squash(m.SteelYield, as)
+		r.Squash = r.Nominal
 		r.Factor, r.Design = phi, units.Force(phi)*r.Nominal
 		r.Equation = fmt.Sprintf("Pr = φc·Fy·As = %.3g × %.4g MPa × %.6g mm² = %.6g kN (φc of a %s under %s driving)",
 			phi, mpa(m.SteelYield), mm2(as), kn(r.Design), what, drive)
@@ -78,7 +79,7 @@ func (a AASHTO) Compression(m Member) (Resistance, error) {
 	const phi = 0.75
 	po := concreteSquash(m.Concrete, ag, ast, m.RebarYield)
 	r.Material, r.ConcreteArea, r.SteelArea = "concrete", ag-ast, ast
-	r.Nominal = units.Force(k) * po
+	r.Nominal, r.Squash = units.Force(k)*po, po
 	r.Factor, r.Design = phi, units.Force(phi)*r.Nominal
 	r.Equation = fmt.Sprintf("Pr = φ·k·[0.85·f′c·(Ag − Ast) + fy·Ast] = %.2g × %.2f × [0.85 × %.4g MPa × %.6g mm² + %.4g MPa × %.6g mm²] = %.6g kN (k for %s)",
 		phi, k, mpa(m.Concrete), mm2(ag-ast), mpa(m.RebarYield), mm2(ast), kn(r.Design), how)
@@ -196,6 +197,7 @@ func (e Eurocode) Compression(m Member) (Resistance, error) {
 		a := m.Section.MaterialArea()
 		r.Material, r.SteelArea = "steel", a
 		r.Nominal = squash(m.SteelYield, a)
+		r.Squash = r.Nominal
 		r.Design = r.Nominal / enGammaM0
 		r.Factor = 1 / enGammaM0
 		r.Equation = fmt.Sprintf("Npl,Rd = A·fy/γM0 = %.6g mm² × %.4g MPa / %.2g = %.6g kN", mm2(a), mpa(m.SteelYield), enGammaM0, kn(r.Design))
@@ -223,6 +225,7 @@ func (e Eurocode) Compression(m Member) (Resistance, error) {
 	r.Material, r.ConcreteArea, r.SteelArea = "concrete", ac, as
 	r.Design = units.ForceOn(fcd, ac) + units.ForceOn(ssd, as)
 	r.Nominal = units.ForceOn(m.Concrete, ac) + units.ForceOn(min(m.RebarYield, lim), as)
+	r.Squash = r.Nominal
 	r.Factor = float64(r.Design / r.Nominal)
 	r.Equation = fmt.Sprintf("NRd = fcd·Ac + σsd·As, fcd = αcc·fck/(kf·γc) = %.3g × %.4g MPa / (%.2g × %.2g) = %.4g MPa; σsd = min(fyk/γs, Es·εc2) = %.4g MPa; NRd = %.4g MPa × %.6g mm² + %.4g MPa × %.6g mm² = %.6g kN",
 		acc, mpa(m.Concrete), kf, enGammaC, mpa(fcd), mpa(ssd), mpa(fcd), mm2(ac), mpa(ssd), mm2(as), kn(r.Design))
@@ -310,6 +313,7 @@ func (a Allowable) Compression(m Member) (Resistance, error) {
 		as := m.Section.MaterialArea()
 		r.Material, r.SteelArea = "steel", as
 		r.Nominal = squash(m.SteelYield, as)
+		r.Squash = r.Nominal
 		r.Factor, r.Design = fs, units.Force(fs)*r.Nominal
 		r.Equation = fmt.Sprintf("Pa = fs·Fy·As = %.3g × %.4g MPa × %.6g mm² = %.6g kN", fs, mpa(m.SteelYield), mm2(as), kn(r.Design))
 		return r, nil
@@ -322,6 +326,7 @@ func (a Allowable) Compression(m Member) (Resistance, error) {
 	ag, as := m.Section.GrossArea(), m.Rebar
 	r.Material, r.ConcreteArea, r.SteelArea = "concrete", ag-as, as
 	r.Nominal = units.ForceOn(m.Concrete, ag-as) + units.ForceOn(m.RebarYield, as)
+	r.Squash = r.Nominal
 	r.Design = units.ForceOn(units.Stress(fc)*m.Concrete, ag-as) + units.ForceOn(units.Stress(fr)*m.RebarYield, as)
 	r.Factor = float64(r.Design / r.Nominal)
 	r.Equation = fmt.Sprintf("Pa = fc·f′c·(Ag − As) + fr·fy·As = %.3g × %.4g MPa × %.6g mm² + %.3g × %.4g MPa × %.6g mm² = %.6g kN",

@@ -157,6 +157,10 @@ type Resistance struct {
 	// factors), and for the allowable rule the squash load f′c·Ac +
 	// fy·As or Fy·As.
 	Nominal units.Force
+	// Squash is the load at which the whole area yields or crushes, before
+	// any factor: AASHTO 5.6.4.4's Po = 0.85·f′c·(Ag − Ast) + fy·Ast for
+	// concrete (Nominal is k·Po), and Nominal otherwise.
+	Squash units.Force
 	// Design is the resistance the largest axial force is checked
 	// against: φPn, NRd, or the allowable load.
 	Design units.Force
