@@ -39,6 +39,8 @@ type Candidate struct {
 	Plug          string    `yaml:"plug,omitempty" json:"plug,omitempty"`
 	YoungsModulus Value     `yaml:"youngs_modulus,omitempty" json:"youngs_modulus,omitempty" q:"stress,0," doc:"Young's modulus of the pile material, for settlement (default: pile.youngs_modulus)."`
 	UnitWeight    Value     `yaml:"unit_weight,omitempty" json:"unit_weight,omitempty" q:"unitweight,0," doc:"Unit weight of the pile material, for its self-weight (default: pile.unit_weight)."`
+	FreeLength    Value     `yaml:"free_length,omitempty" json:"free_length,omitempty" q:"length,0," doc:"Unbraced length of a steel pile above the ground or in water, down to the depth of fixity you assess; absent: fully embedded (no buckling). Steel sections only."`
+	EffectiveK    Value     `yaml:"effective_length_factor,omitempty" json:"effective_length_factor,omitempty" q:"number,0.5,3" doc:"Effective length factor K of the free length (default 2.1: fixed at depth, free at the head)."`
 	Material      *Material `yaml:"material,omitempty" json:"material,omitempty" doc:"The section's material: concrete_strength for circle, square and given sections (with reinforcement), steel_yield for pipes and H-sections."`
 	Costs         *Costs    `yaml:"costs,omitempty" json:"costs,omitempty" doc:"Unit costs in the section's currency: per_metre of pile, per m3 of concrete, per tonne of steel, per pile."`
 }
@@ -195,6 +197,10 @@ func (r *resolver) candidate(f *File, in *Inputs, out *candidatesInputs, c *Cand
 		p.Plug = pl
 	}
 	m, rule := r.material(f, in, c, path, shape)
+	m.Column = structural.Column{Length: r.length(c.FreeLength, path+".free_length"), K: r.num(c.EffectiveK, path+".effective_length_factor", 0.5, 3)}
+	if c.EffectiveK.IsSet() && !c.FreeLength.IsSet() {
+		r.add(path+".effective_length_factor", c.EffectiveK.Line, "given without free_length; K applies to a free length")
+	}
 	costs := r.costs(out.currency, c.Costs, path+".costs")
 	if len(r.probs) > before {
 		return

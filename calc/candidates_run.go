@@ -211,7 +211,15 @@ func chooseCandidates(f *File, in *Inputs, prof *profile.Profile, step, maxTip u
 	if !out.Settlement && in.Settle != nil {
 		out.Notes = append(out.Notes, "the settlement section gives no allowable settlement: the candidates are not checked for settlement")
 	}
-	out.Notes = append(out.Notes, "each section is taken as fully embedded: no buckling; a free length above the ground or in water needs a column check")
+	embedded := true
+	for i := range ci.list {
+		embedded = embedded && ci.list[i].member.Column.Length == 0
+	}
+	if embedded {
+		out.Notes = append(out.Notes, "each section is taken as fully embedded: no buckling; a free length above the ground or in water needs a column check (free_length, steel sections)")
+	} else {
+		out.Notes = append(out.Notes, "steel sections with a free_length are checked as columns over it; the others are taken as fully embedded (no buckling); bending at the head is not checked")
+	}
 	return out, nil
 }
 

@@ -351,3 +351,39 @@ func BenchmarkCandidates(b *testing.B) {
 		}
 	}
 }
+
+// TestCandidateFreeLength: a steel pile with a free length has a lower
+// structural resistance than the same pile embedded; a concrete one with
+// a free length is refused at its key.
+func TestCandidateFreeLength(t *testing.T) {
+	ls := []candLayer{{5, 30, 18}, {25, 36, 19}}
+	cands := `  piles:
+    - name: embedded
+      section: {shape: closed-pipe, diameter: 508 mm, wall: 12.5 mm}
+      installation: driven-high
+      material: {steel_yield: 355 MPa}
+    - name: free
+      section: {shape: closed-pipe, diameter: 508 mm, wall: 12.5 mm}
+      installation: driven-high
+      free_length: 8 m
+      effective_length_factor: 2
+      material: {steel_yield: 355 MPa}
+`
+	f, in, prof := resolveCand(t, candFile(ls, 2, 1500, 0, 0.25, 30, `{basis: en1997, approach: DA1}`, cands))
+	out, probs := chooseCandidates(f, in, prof, 0.25, 30, 2)
+	if len(probs) > 0 {
+		t.Fatal(probs)
+	}
+	rd := map[string]float64{}
+	for _, c := range out.Rows {
+		rd[c.Name] = c.Structural.Resistance.Design.KN()
+	}
+	if !(rd["free"] < rd["embedded"]) || rd["free"] <= 0 {
+		t.Errorf("free-length resistance %g kN, embedded %g kN", rd["free"], rd["embedded"])
+	}
+	bad := "  piles:\n    - {section: {shape: circle, diameter: 600 mm}, installation: bored, free_length: 4 m, material: {concrete_strength: 30 MPa}}\n"
+	_, err := Parse([]byte(candFile(ls, 2, 800, 0, 0.5, 25, "", bad)))
+	if err == nil || !strings.Contains(err.Error(), "candidates.piles[0].free_length (line 13)") {
+		t.Errorf("concrete with a free length: %v", err)
+	}
+}

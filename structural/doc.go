@@ -27,10 +27,14 @@
 //
 // # Assumptions
 //
-// The pile is fully embedded: no buckling (AASHTO λ = 0; EN flexural
-// buckling not checked). A pile with a free length above the ground or in
-// water, or in very soft soil, needs a column check that this package does
-// not make. Steel sections must not be slender (AASHTO: b/t and D/t limits
+// The pile is fully embedded unless a steel member is given a free length
+// (Column: the unbraced length down to the depth of fixity the engineer
+// assesses, and K, default 2.1): then AASHTO 6.9.4.1.1's column curve
+// (Pn = 0.658^(Po/Pe)·Po, or 0.877·Pe below Pe/Po = 0.44; the allowable
+// rule takes its fraction of this Pn) or EN 1993-1-1 6.3.1 (χ on curve c)
+// reduces the resistance. Bending at the head is not checked, and a
+// concrete section with a free length is refused: its column check is not
+// made here. Steel sections must not be slender (AASHTO: b/t and D/t limits
 // of 6.9.4.2; EN 1993-1-1: Class 1 to 3 in compression, Table 5.2):
 // a slender section is refused, not reduced. A steel pipe's concrete fill
 // and a precast pile's prestress are not counted (both would change the

@@ -63,12 +63,20 @@ func (a AASHTO) Compression(m Member) (Resistance, error) {
 			phi += 0.10
 			drive = "good"
 		}
+		red, col, err := steelColumn("aashto", m, m.Column)
+		if err != nil {
+			return Resistance{}, err
+		}
 		r.Material, r.SteelArea = "steel", as
-		r.Nominal = squash(m.SteelYield, as)
-		r.Squash = r.Nominal
+		r.Squash = squash(m.SteelYield, as)
+		r.Nominal = units.Force(red) * r.Squash
 		r.Factor, r.Design = phi, units.Force(phi)*r.Nominal
 		r.Equation = fmt.Sprintf("Pr = φc·Fy·As = %.3g × %.4g MPa × %.6g mm² = %.6g kN (φc of a %s under %s driving)",
 			phi, mpa(m.SteelYield), mm2(as), kn(r.Design), what, drive)
+		if col != "" {
+			r.Equation = fmt.Sprintf("Pr = φc·Pn = %.3g × %.6g kN = %.6g kN (φc of a %s under %s driving); %s", phi, kn(r.Nominal), kn(r.Design), what, drive, col)
+			r.Notes = []string{"a column over the free length given (AASHTO 6.9.4.1.1, Q = 1); bending at the head is not checked"}
+		}
 		return r, nil
 	}
 	ag, ast := m.Section.GrossArea(), m.Rebar
@@ -195,12 +203,20 @@ func (e Eurocode) Compression(m Member) (Resistance, error) {
 			return Resistance{}, err
 		}
 		a := m.Section.MaterialArea()
+		chi, col, err := steelColumn("en", m, m.Column)
+		if err != nil {
+			return Resistance{}, err
+		}
 		r.Material, r.SteelArea = "steel", a
 		r.Nominal = squash(m.SteelYield, a)
 		r.Squash = r.Nominal
-		r.Design = r.Nominal / enGammaM0
-		r.Factor = 1 / enGammaM0
+		r.Design = units.Force(chi) * r.Nominal / enGammaM0
+		r.Factor = float64(r.Design / r.Nominal)
 		r.Equation = fmt.Sprintf("Npl,Rd = A·fy/γM0 = %.6g mm² × %.4g MPa / %.2g = %.6g kN", mm2(a), mpa(m.SteelYield), enGammaM0, kn(r.Design))
+		if col != "" {
+			r.Equation = fmt.Sprintf("Nb,Rd = χ·A·fy/γM1 = %.4g × %.6g mm² × %.4g MPa / 1.0 = %.6g kN; %s", chi, mm2(a), mpa(m.SteelYield), kn(r.Design), col)
+			r.Notes = []string{"a column over the free length given (EN 1993-1-1 6.3.1, flexural buckling about the weaker axis); bending at the head is not checked"}
+		}
 		r.Notes = append(r.Notes, "cross-section in Class 1 to 3 (EN 1993-1-1 Table 5.2)")
 		r.Refs = r.Refs[1:]
 		return r, nil
@@ -311,11 +327,19 @@ func (a Allowable) Compression(m Member) (Resistance, error) {
 		}
 		fs := pick(a.Steel, 0.50)
 		as := m.Section.MaterialArea()
+		red, col, err := steelColumn("allowable", m, m.Column)
+		if err != nil {
+			return Resistance{}, err
+		}
 		r.Material, r.SteelArea = "steel", as
-		r.Nominal = squash(m.SteelYield, as)
-		r.Squash = r.Nominal
+		r.Squash = squash(m.SteelYield, as)
+		r.Nominal = units.Force(red) * r.Squash
 		r.Factor, r.Design = fs, units.Force(fs)*r.Nominal
 		r.Equation = fmt.Sprintf("Pa = fs·Fy·As = %.3g × %.4g MPa × %.6g mm² = %.6g kN", fs, mpa(m.SteelYield), mm2(as), kn(r.Design))
+		if col != "" {
+			r.Equation = fmt.Sprintf("Pa = fs·Pn = %.3g × %.6g kN = %.6g kN; %s", fs, kn(r.Nominal), kn(r.Design), col)
+			r.Notes = []string{"a column over the free length given: Pn by AASHTO 6.9.4.1.1 (the AISC 360 E3 curve), times the allowable fraction; bending at the head is not checked"}
+		}
 		return r, nil
 	}
 	def := 0.33

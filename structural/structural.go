@@ -31,6 +31,11 @@ type Member struct {
 	// casing: EN 1992-1-1's reduced design diameter (2.3.4.2(2)) and
 	// increased γc (2.4.2.5(2)) then do not apply.
 	Cased bool
+	// Column is the unbraced length of a steel pile above the ground or
+	// in water; the zero value is a fully embedded pile. A concrete
+	// section with a free length is refused (its column check is not
+	// made here).
+	Column Column
 }
 
 // Limits of the inputs. 8 % of the gross area is the upper limit of
@@ -83,6 +88,9 @@ func (m Member) Validate(path string) error {
 		return err
 	}
 	p := func(f string) string { return path + ".material." + f }
+	if !m.IsSteel() && m.Column.Length != 0 {
+		return fieldErrorf(path+".free_length", "a column check of a %s (concrete) section is not made here; give the free length only for steel pipes and H-sections, and check a concrete pile above the ground as a column separately", m.Section.Shape)
+	}
 	if m.IsSteel() {
 		if m.SteelYield == 0 {
 			return fieldErrorf(p("steel_yield"), "not given; a %s section needs the yield strength of its steel", m.Section.Shape)

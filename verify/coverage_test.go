@@ -116,6 +116,7 @@ var reasons = map[string]string{
 	"structural.Member.ConcreteArea":        "gross area less the bars, arithmetic on the given section",
 	"structural.Member.SteelArea":           "the section's steel area (pile.Section.MaterialArea) or the bars given",
 	"structural.Verify":                     "Ed/Rd, a ratio of the inputs",
+	"structural.MinRadius":                  "radius of gyration from the nominal dimensions (root radii left out), checked in closed form; the column curve it feeds is checked against the AISC column table in the package's tests",
 	"settle.Cs":                             "Vesic's empirical Cs = (0.93 + 0.16·√(L/D))·Cp; Cp from memory (settle.CpRange); checked in closed form",
 	"settle.CpRange":                        "Vesic's Cp as tabulated by Das, from memory; not read",
 	"settle.ShearModulus":                   "G = E/(2(1 + ν)), a definition; enters settle.RandolphWroth.Solve, which is checked against a published calculation",
