@@ -15,9 +15,11 @@ import (
 	"pgregory.net/rapid"
 )
 
-// candLayer is one drained layer of a generated ground.
+// candLayer is one layer of a generated ground: drained with φ′, or,
+// when suTop > 0, undrained with su from suTop to suBottom (kPa).
 type candLayer struct {
 	thick, phi, gamma float64
+	suTop, suBottom   float64
 }
 
 // candFile writes a calc file: the layers, a safety-factor basis, the
@@ -27,6 +29,11 @@ func candFile(layers []candLayer, water, comp, tens, step, maxTip float64, basis
 	var b strings.Builder
 	fmt.Fprintf(&b, "title: generated\nground:\n  water_depth: %g m\n  layers:\n", water)
 	for i, l := range layers {
+		if l.suTop > 0 {
+			fmt.Fprintf(&b, "    - {name: l%d, thickness: %g m, drainage: undrained, unit_weight: %g kN/m3, saturated_unit_weight: %g kN/m3, undrained_strength: {top: %g kPa, bottom: %g kPa}}\n",
+				i, l.thick, l.gamma, l.gamma+1.5, l.suTop, l.suBottom)
+			continue
+		}
 		fmt.Fprintf(&b, "    - {name: l%d, thickness: %g m, drainage: drained, unit_weight: %g kN/m3, saturated_unit_weight: %g kN/m3, friction_angle: %g deg}\n",
 			i, l.thick, l.gamma, l.gamma+1.5, l.phi)
 	}
@@ -41,11 +48,22 @@ func candFile(layers []candLayer, water, comp, tens, step, maxTip float64, basis
 	return b.String()
 }
 
-// drawGround draws 2 to 5 drained layers whose friction angle does not
-// fall with depth (so that strength does not decrease with depth).
+// drawGround draws 2 to 5 layers whose strength does not fall with depth:
+// drained layers with φ′ never falling, or (one draw in three) undrained
+// layers with su never falling, within and between layers.
 func drawGround(r *rapid.T) ([]candLayer, float64) {
 	n := rapid.IntRange(2, 5).Draw(r, "layers")
 	var ls []candLayer
+	if rapid.IntRange(0, 2).Draw(r, "clay") == 0 {
+		su := rapid.Float64Range(20, 80).Draw(r, "su0")
+		gamma := rapid.Float64Range(16, 19).Draw(r, "gamma")
+		for i := range n {
+			top := su
+			su += rapid.Float64Range(0, 40).Draw(r, fmt.Sprintf("dsu%d", i))
+			ls = append(ls, candLayer{thick: rapid.Float64Range(2, 8).Draw(r, fmt.Sprintf("thick%d", i)), gamma: gamma, suTop: top, suBottom: su})
+		}
+		return ls, rapid.Float64Range(0, 3).Draw(r, "water")
+	}
 	phi := rapid.Float64Range(26, 32).Draw(r, "phi0")
 	gamma := rapid.Float64Range(17, 19.5).Draw(r, "gamma")
 	for i := range n {
@@ -202,7 +220,7 @@ func TestCandidatesWorkers(t *testing.T) {
 // passing ones first, the cheapest recommended; the cost is the sum of
 // its parts worked by hand.
 func TestCandidatesRanking(t *testing.T) {
-	ls := []candLayer{{4, 30, 18}, {10, 34, 19}, {16, 38, 20}}
+	ls := []candLayer{{thick: 4, phi: 30, gamma: 18}, {thick: 10, phi: 34, gamma: 19}, {thick: 16, phi: 38, gamma: 20}}
 	cands := `  currency: EUR
   piles:
     - name: big
@@ -256,7 +274,7 @@ func TestCandidatesRanking(t *testing.T) {
 // another currency, a negative cost, an unknown currency: each a problem
 // naming the key and its line.
 func TestCandidatesBadInput(t *testing.T) {
-	ls := []candLayer{{5, 30, 18}, {20, 36, 19}}
+	ls := []candLayer{{thick: 5, phi: 30, gamma: 18}, {thick: 20, phi: 36, gamma: 19}}
 	for _, c := range []struct {
 		name, cands, path, msg string
 		line                   int
@@ -322,7 +340,7 @@ func TestParseCost(t *testing.T) {
 func benchFile(n int) string {
 	var ls []candLayer
 	for i := range 10 {
-		ls = append(ls, candLayer{3, 28 + float64(i), 18 + 0.2*float64(i)})
+		ls = append(ls, candLayer{thick: 3, phi: 28 + float64(i), gamma: 18 + 0.2*float64(i)})
 	}
 	var b strings.Builder
 	b.WriteString("  currency: EUR\n  piles:\n")
@@ -356,7 +374,7 @@ func BenchmarkCandidates(b *testing.B) {
 // structural resistance than the same pile embedded; a concrete one with
 // a free length is refused at its key.
 func TestCandidateFreeLength(t *testing.T) {
-	ls := []candLayer{{5, 30, 18}, {25, 36, 19}}
+	ls := []candLayer{{thick: 5, phi: 30, gamma: 18}, {thick: 25, phi: 36, gamma: 19}}
 	cands := `  piles:
     - name: embedded
       section: {shape: closed-pipe, diameter: 508 mm, wall: 12.5 mm}
