@@ -67,11 +67,14 @@ type CandidateResult struct {
 	// "settlement"), or, for a candidate that fails, the check that fails
 	// ("structure", or the geotechnical case that comes nearest).
 	Governs string
-	// Use is the highest utilisation at the length (Pass), or the nearest
-	// the candidate came (the least over the search) otherwise.
+	// Use is the highest utilisation at the length (Pass): the largest of
+	// GeoUse, the structural Ed/Rd and SettlementUse; otherwise the
+	// nearest the candidate came (the least over the search) or, for a
+	// section too weak, its Ed/Rd.
 	Use float64
-	// GeoUse is the geotechnical utilisation at the length; Geotechnical
-	// the search for it.
+	// GeoUse is the geotechnical utilisation at the shortest length that
+	// passes the geotechnical cases (the length itself unless settlement
+	// lengthens it); Geotechnical the search for it.
 	GeoUse       float64
 	Geotechnical pile.LengthResult
 	// Structural is the section's check; it fails at every length when

@@ -75,7 +75,7 @@ func secCandidates(r *calc.Result, c conv) section {
 		cost += " (" + k.Currency + ")"
 	}
 	t := &table{key: 2, cols: []column{{"Rank", ""}, {"Candidate", ""}, {"Section", ""}, {"Installation", ""}, {"Length", c.uL()},
-		{"Governs", ""}, {"Ed/Rd", ""}, {"Structure Ed/Rd", ""}, {"Settlement", c.uSm()}, {"Concrete", c.u(units.DimVolume)},
+		{"Governs", ""}, {"Utilisation", ""}, {"Structure Ed/Rd", ""}, {"Settlement", c.uSm()}, {"Concrete", c.u(units.DimVolume)},
 		{"Steel", mu}, {cost, ""}, {"Verdict", ""}}}
 	var why []string
 	for i := range k.Rows {
