@@ -211,6 +211,9 @@ func chooseCandidates(f *File, in *Inputs, prof *profile.Profile, step, maxTip u
 	if n > 0 && out.Rows[0].Pass {
 		out.Recommended = 0
 	}
+	if len(in.OtherProfiles) > 0 {
+		out.Notes = append(out.Notes, "the candidates are checked in the file's own ground only, not in design.other_profiles (as the required length is)")
+	}
 	if !out.Settlement && in.Settle != nil {
 		out.Notes = append(out.Notes, "the settlement section gives no allowable settlement: the candidates are not checked for settlement")
 	}
@@ -235,6 +238,10 @@ func runCandidate(f *File, in *Inputs, prof *profile.Profile, c *candidateInput,
 	}
 	cases, err := in.Basis.Cases(c.pile.Installation)
 	if err != nil {
+		var pe *pile.PathError
+		if errors.As(err, &pe) {
+			err = errors.New(pe.Msg)
+		}
 		return prob(c.path+".installation", err)
 	}
 	ed := largestAxialForce(cases, in.Loads)
@@ -251,7 +258,17 @@ func runCandidate(f *File, in *Inputs, prof *profile.Profile, c *candidateInput,
 	out.Structural = structural.Verify(r, ed)
 	geo, err := pile.RequiredLength(prof, c.pile, in.Methods, in.Basis, in.Loads, pile.Search{Step: step, MaxTip: maxTip})
 	if err != nil {
-		return prob(c.path, err)
+		// The inputs of the analysis (a missing resistance factor, a
+		// method out of its range) belong to their own keys; the message
+		// names the candidate.
+		var ps Problems
+		if !errors.As(translate(f, err), &ps) || len(ps) == 0 {
+			return prob(c.path, err)
+		}
+		for i := range ps {
+			ps[i].Msg = c.name + " (" + c.path + "): " + ps[i].Msg
+		}
+		return out, ps
 	}
 	out.Geotechnical = geo
 	settleOn := in.Settle != nil && in.Settle.HasAllowable
