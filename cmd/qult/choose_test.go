@@ -52,3 +52,17 @@ func TestChooseExitCodes(t *testing.T) {
 		t.Errorf("choose without a candidates section: exit %d, stderr %q", r.code, r.stderr)
 	}
 }
+
+// TestGoldenChoosePDF: choose as a PDF, with its figure, footers and
+// cautions; the structure kept as a golden file.
+func TestGoldenChoosePDF(t *testing.T) {
+	r := runQ(t, slow, "", "choose", "--format", "pdf", examplePath(chooseFile))
+	if r.code != 0 {
+		t.Fatalf("exit %d; stderr:\n%s", r.code, r.stderr)
+	}
+	pages, s := pdfStructure(t, []byte(r.stdout))
+	if pages < 1 || !strings.Contains(s, "Candidate piles compared") || !strings.Contains(s, "they prevail") {
+		t.Errorf("%d pages; the comparison or the cautions missing:\n%.500s", pages, s)
+	}
+	golden(t, "pdf/choose/"+chooseFile+".pdftext", []byte(s))
+}
