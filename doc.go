@@ -19,6 +19,7 @@
 //	settle       single-pile settlement and static load-test interpretation
 //	group        pile groups: efficiency, block failure, uplift, group settlement
 //	reliability  probabilistic capacity: Monte Carlo, FOSM and sensitivities
+//	structural   axial resistance of a pile's own section (AASHTO LRFD, EN 1992-1-1/1993-1-1, allowable stresses)
 //	calc         the calc file: decoding, validation, the run and its result; batch
 //	report       text, CSV, JSON, records, Markdown, HTML and PDF calculation packages
 //	verify       the verification record: reference cases from published sources

@@ -10,7 +10,10 @@
 // counted in the file's unit system, SI or US) and library inputs; Run
 // builds the profile, the analysis, capacity with depth, the design check
 // and the required length, and, with a reliability section, the Monte
-// Carlo and FOSM estimates of package reliability (Result.Reliability).
+// Carlo and FOSM estimates of package reliability (Result.Reliability),
+// and, with a candidates section, the candidate piles compared, each with
+// its shortest passing length, its section's strength (package
+// structural), quantities and cost (Result.Candidates).
 // Parse is Decode and Run in one call. Problems
 // keep the library errors behind them (errors.Is and errors.As reach a
 // *units.ParseError, a *profile.FieldError, a *pile.PathError, …).

@@ -38,6 +38,8 @@ type File struct {
 	Reliability *Reliability `yaml:"reliability,omitempty" json:"reliability,omitempty" doc:"Probabilistic capacity: uncertain parameters with their distributions and correlations, for Monte Carlo simulation and FOSM."`
 	// Group is a group of the file's piles under a rigid cap.
 	Group *Group `yaml:"group,omitempty" json:"group,omitempty" doc:"A group of the file's piles under a rigid cap: layout, efficiency, block failure, uplift and settlement."`
+	// Candidates lists pile types to compare (qult choose).
+	Candidates *Candidates `yaml:"candidates,omitempty" json:"candidates,omitempty" doc:"Pile types to compare: sections, installations and materials, with unit costs; each gets its shortest passing length, quantities and cost."`
 
 	// lines maps each field path read from the file to its line.
 	lines map[string]int

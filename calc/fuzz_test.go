@@ -20,6 +20,7 @@ func FuzzParse(f *testing.F) {
 	f.Add([]byte("{\"title\": 1}"))
 	f.Add([]byte(base + "design: {basis: en1997, approach: DA1}\nloads: {compression: {permanent: 500 kN}}\n"))
 	f.Add([]byte(base + "methods: {shaft_undrained: lambda, critical_depth: 20}\n"))
+	f.Add([]byte(base + "design: {basis: safety-factor, factor: 2.5}\nloads: {compression: {permanent: 500 kN}}\ncandidates: {currency: EUR, piles: [{section: {shape: circle}, diameters: [450 mm, 600 mm], installation: bored, material: {concrete_strength: 30 MPa, reinforcement_ratio: 1 %, reinforcement_yield: 500 MPa}, costs: {per_metre: 40 EUR/m, per_pile: 300}}, {section: {shape: h-section, depth: 300 mm, width: 300 mm, web: 12 mm, flange: 12 mm}, installation: driven-low, free_length: 3 m, material: {steel_yield: 355 MPa}}]}\n"))
 	// Layer methods with the keys of the catalogues (an inline map in the
 	// decoder).
 	f.Add([]byte(strings.Replace(base, "friction_angle: 34 deg", "friction_angle: 34 deg\n      tip: {method: given-nq, nq: 40, nc: 5, limit: 8 MPa}\n      shaft: {method: beta, k0: ocr, delta: 30 deg, limit: 90 kPa}", 1)))
@@ -48,6 +49,15 @@ func FuzzParse(f *testing.F) {
 		for _, v := range []float64{float64(c.Tip), float64(c.Shaft), float64(c.Compression), float64(c.Tension)} {
 			if math.IsNaN(v) || math.IsInf(v, 0) {
 				t.Fatalf("non-finite result %+v", c)
+			}
+		}
+		if k := r.Candidates; k != nil {
+			for _, x := range k.Rows {
+				for _, v := range []float64{x.Cost, x.Use, float64(x.Length), x.SteelMass, float64(x.Concrete), float64(x.Structural.Resistance.Design)} {
+					if math.IsNaN(v) || math.IsInf(v, 0) {
+						t.Fatalf("non-finite candidate %+v", x)
+					}
+				}
 			}
 		}
 	})

@@ -40,6 +40,8 @@ type Inputs struct {
 	reliability *reliabilityInputs
 	// group is the group section; nil when the file has none.
 	group *groupInputs
+	// candidates is the candidates section; nil when the file has none.
+	candidates *candidatesInputs
 }
 
 // resolver turns Values into quantities, recording problems.
@@ -180,6 +182,7 @@ func Resolve(f *File) (*Inputs, error) {
 	r.settlement(f, in)
 	r.reliabilitySection(f, in)
 	r.groupSection(f, in)
+	r.candidatesSection(f, in)
 	if len(r.probs) > 0 {
 		return in, r.probs
 	}

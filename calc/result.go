@@ -68,6 +68,10 @@ type Result struct {
 	// Group is the pile group (nil without a group section).
 	Group *GroupResult
 
+	// Candidates compares the candidate piles (nil without a candidates
+	// section).
+	Candidates *CandidatesResult
+
 	// Compared is the shaft and tip resistance of the same pile by every
 	// applicable method of the catalogues (nil when it could not be run).
 	Compared *Comparison

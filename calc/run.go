@@ -160,6 +160,10 @@ func run(f *File, o runOptions) (*Result, error) {
 	if err := runGroup(f, in, prof, res); err != nil {
 		return nil, err
 	}
+	if err := runCandidates(f, in, prof, res, step, maxTip); err != nil {
+		return nil, err
+	}
+	srefs = append(srefs, candidateRefs(in)...)
 	res.Warnings = append(res.Warnings, warnings(res)...)
 	res.Warnings = append(res.Warnings, settleWarnings(res)...)
 	var refs []cite.Source

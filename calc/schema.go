@@ -50,6 +50,11 @@ var enums = map[string][]string{
 	// reliability
 	"distribution": {"normal", "lognormal", "truncated-normal", "uniform"},
 	"key":          append(slices.Clone(reliability.LayerKeys), reliability.GlobalKeys...),
+	// candidates
+	"transverse": {"ties", "spiral"},
+	"driving":    {"severe", "good"},
+	"casing":     {"none", "permanent"},
+	"currency":   currencies,
 	// The methods chosen for the whole pile: those that need no key (a
 	// given value belongs to a layer); shaft_drained takes a method that
 	// gives fs at each depth, shaft_undrained also the λ method.

@@ -15,6 +15,7 @@ import (
 //	length:          capacity with depth
 //	settle:          the predicted load-settlement curve, with the load test's points
 //	reliability:     the Monte Carlo and FOSM estimates (the capacity table without a reliability section)
+//	choose:          the candidates ranked (the capacity table without a candidates section)
 func csvTable(r *calc.Result, o Options) *table {
 	c := conv{o.sys}
 	switch o.View {
@@ -32,6 +33,10 @@ func csvTable(r *calc.Result, o Options) *table {
 	case ViewReliability:
 		if r.Reliability != nil && r.Reliability.MonteCarlo != nil {
 			return reliabilityTable(r.Reliability, c)
+		}
+	case ViewChoose:
+		if r.Candidates != nil {
+			return secCandidates(r, c).blocks[1].tbl
 		}
 	}
 	return breakdownTable(r, c)

@@ -35,6 +35,10 @@
 //	              layout, efficiency, the block and its side shear by layer, uplift, the group's design
 //	              check, Vesic's settlement and the equivalent raft by layer; HTML and PDF draw the plan
 //	              of the group to scale (cap, block outline, piles numbered)
+//	ViewChoose    the candidate piles ranked by cost (or length × area): each one's shortest passing
+//	              length, what governs it, the utilisations, the section's axial resistance with its
+//	              equation, quantities and cost, why a failing one fails; HTML and PDF add the required
+//	              length against the diameter; also in ViewReport when the file has a candidates section
 //
 // Each format renders the view as follows.
 //

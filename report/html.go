@@ -159,6 +159,9 @@ func addFigures(d *doc, r *calc.Result, o Options) error {
 		if err := groupFigures(s, r, c); err != nil {
 			return err
 		}
+		if err := candidatesFigures(s, r, c); err != nil {
+			return err
+		}
 	}
 	return nil
 }

@@ -92,6 +92,7 @@ type jResult struct {
 	LoadTest  *jLoadTest   `json:"load_test,omitempty"`
 	Reliab    *jReliab     `json:"reliability,omitempty"`
 	Group     *jGroup      `json:"group,omitempty"`
+	Cands     *jCandidates `json:"candidates,omitempty"`
 	Warnings  []string     `json:"warnings"`
 	Defaults  []defaultRow `json:"defaults"`
 	Sources   []jSource    `json:"sources"`
@@ -487,6 +488,7 @@ func toJSON(r *calc.Result, o Options) *jResult {
 	j.Settle, j.LoadTest = settleJSON(r, c), loadTestJSON(r, c)
 	j.Reliab = reliabilityJSON(r, c)
 	j.Group = groupJSON(r, c)
+	j.Cands = candidatesJSON(r, c)
 	return j
 }
 

@@ -138,7 +138,10 @@ func build(r *calc.Result, o Options) *doc {
 		add(secLoadTest(r, c))
 		add(secReliability(r, c))
 		add(secGroup(r, c))
+		add(secCandidates(r, c))
 		add(secDefaults(r, c))
+	case ViewChoose:
+		add(secCandidates(r, c))
 	case ViewReliability:
 		add(secTotals(r, c))
 		add(secReliability(r, c))

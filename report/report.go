@@ -85,12 +85,15 @@ const (
 	// ViewReliability is the probabilistic capacity: the uncertain
 	// parameters, Monte Carlo and FOSM estimates, the sensitivity ranking.
 	ViewReliability
+	// ViewChoose is the comparison of the candidate piles: the ranking,
+	// the recommended one, the figure of length against size.
+	ViewChoose
 )
 
-var viewNames = [...]string{ViewCheck: "check", ViewCapacity: "capacity", ViewLength: "length", ViewReport: "report", ViewSettle: "settle", ViewReliability: "reliability"}
+var viewNames = [...]string{ViewCheck: "check", ViewCapacity: "capacity", ViewLength: "length", ViewReport: "report", ViewSettle: "settle", ViewReliability: "reliability", ViewChoose: "choose"}
 
-// String returns "check", "capacity", "length", "report", "settle" or
-// "reliability".
+// String returns "check", "capacity", "length", "report", "settle",
+// "reliability" or "choose".
 func (v View) String() string {
 	if v >= 0 && int(v) < len(viewNames) {
 		return viewNames[v]
@@ -105,7 +108,7 @@ func ParseView(s string) (View, error) {
 			return View(i), nil
 		}
 	}
-	return 0, fmt.Errorf("report: view %q: want check, capacity, length, report, settle or reliability", s)
+	return 0, fmt.Errorf("report: view %q: want check, capacity, length, report, settle, reliability or choose", s)
 }
 
 // Units chooses the display system of a report.
@@ -198,7 +201,7 @@ func Write(w io.Writer, r *calc.Result, f Format, o Options) error {
 		return err
 	}
 	if o.View < 0 || int(o.View) >= len(viewNames) {
-		return fmt.Errorf("report: view %v: want check, capacity, length, report, settle or reliability", o.View)
+		return fmt.Errorf("report: view %v: want check, capacity, length, report, settle, reliability or choose", o.View)
 	}
 	bw := bufio.NewWriterSize(w, 32<<10)
 	switch f {

@@ -13,6 +13,7 @@ import (
 	"github.com/qultgeo/qult/profile"
 	"github.com/qultgeo/qult/settle"
 	"github.com/qultgeo/qult/shaft"
+	"github.com/qultgeo/qult/structural"
 	"github.com/qultgeo/qult/units"
 )
 
@@ -102,6 +103,11 @@ func init() {
 		"pile.Verify":                    runVerify,
 		"pile.EN1997Recommended":         runEN7Table(func(*args) pile.EN7Factors { return pile.EN1997Recommended() }),
 		"pile.UKAnnex":                   runEN7Table(func(a *args) pile.EN7Factors { return pile.UKAnnex(a.optBool("sls_verified")) }),
+
+		"structural.AASHTO.Compression":    runStructural("aashto"),
+		"structural.Eurocode.Compression":  runStructural("en"),
+		"structural.Allowable.Compression": runStructural("allowable"),
+		"structural.DesignDiameter":        runDesignDiameter,
 
 		"settle.Iws":                 runIws,
 		"settle.Vesic.Settlement":    runVesicSettlement,
@@ -720,6 +726,49 @@ func runEN7Table(table func(*args) pile.EN7Factors) runner {
 		}
 		return v, nil
 	}
+}
+
+// ---- structural ----
+
+// runStructural runs a structural rule on a member: shape and its sizes,
+// installation, concrete, steel, rebar, rebar_yield, cased, and the rule's
+// options spiral and good_driving (aashto), alpha_cc (en).
+func runStructural(rule string) runner {
+	return func(a *args) (values, error) {
+		shape, err := pile.ParseShape(a.str("shape"))
+		inst, ierr := pile.ParseInstallation(a.str("installation"))
+		m := structural.Member{Section: pile.Section{Shape: shape, Diameter: units.Length(a.optQty("diameter", units.DimLength)),
+			Width: units.Length(a.optQty("width", units.DimLength)), Wall: units.Length(a.optQty("wall", units.DimLength)),
+			Depth: units.Length(a.optQty("depth", units.DimLength)), Web: units.Length(a.optQty("web", units.DimLength)),
+			Flange: units.Length(a.optQty("flange", units.DimLength))},
+			Installation: inst, Concrete: units.Stress(a.optQty("concrete", units.DimStress)),
+			SteelYield: units.Stress(a.optQty("steel", units.DimStress)), Rebar: units.Area(a.optQty("rebar", units.DimArea)),
+			RebarYield: units.Stress(a.optQty("rebar_yield", units.DimStress)), Cased: a.optBool("cased")}
+		var r structural.Rule
+		switch rule {
+		case "aashto":
+			r = structural.AASHTO{Spiral: a.optBool("spiral"), GoodDriving: a.optBool("good_driving")}
+		case "en":
+			r = structural.Eurocode{AlphaCC: a.optNum("alpha_cc", 0)}
+		default:
+			r = structural.Allowable{}
+		}
+		if err := joinErr(joinErr(a.done(), err), ierr); err != nil {
+			return nil, err
+		}
+		res, err := r.Compression(m)
+		return values{"design": force(res.Design), "nominal": force(res.Nominal), "squash": force(res.Squash),
+			"factor": num(res.Factor), "concrete_area": qv(float64(res.ConcreteArea), units.DimArea),
+			"steel_area": qv(float64(res.SteelArea), units.DimArea), "design_diameter": length(res.DesignDiameter)}, err
+	}
+}
+
+func runDesignDiameter(a *args) (values, error) {
+	d := units.Length(a.qty("diameter", units.DimLength))
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	return values{"value": length(structural.DesignDiameter(d))}, nil
 }
 
 // ---- settle ----

@@ -184,6 +184,14 @@ var badCases = []badCase{
 	{file: "460-group-efficiency-value-above-1", want: []string{"group.efficiency_value (line 32)", "outside 0 to 1"}},
 	{file: "461-group-spacing-in-kn", want: []string{"group.spacing_x (line 29)", "want a length"}},
 	{file: "462-group-raft-below-profile", want: []string{"group.raft_depth (line 30)", "above the bottom of the ground profile"}},
+	{file: "500-candidate-without-material", want: []string{"candidates.piles[0].material (line 21)", "not given"}},
+	{file: "501-candidate-cost-in-another-currency", want: []string{"candidates.piles[0].costs.per_metre (line 26)", `unknown currency unit "USD"`}},
+	{file: "502-candidate-negative-cost", want: []string{"candidates.piles[0].costs.concrete (line 28)", "not negative"}},
+	{file: "503-candidates-unknown-currency", want: []string{"candidates.currency (line 20)", "not a currency unit"}},
+	{file: "504-candidate-slender-pipe", want: []string{"candidates.piles[0].section.wall (line 22)", "slender"}},
+	{file: "505-candidate-concrete-in-steel-pipe", want: []string{"candidates.piles[0].material.concrete_strength (line 24)", "not counted"}},
+	{file: "506-candidate-diameter-too-large", want: []string{"candidates.piles[0].diameters[1] (line 23)", "outside"}},
+	{file: "507-candidates-without-design", want: []string{"candidates (line 17)", "design"}},
 }
 
 const badTimeout = 5 * time.Second

@@ -134,6 +134,11 @@ func (c *cmd) calcVerb(args []string, view report.View) int {
 		if code, ok = c.reliabilityCode(name, res); !ok {
 			return code
 		}
+	case viewChoose:
+		var ok bool
+		if code, ok = c.chooseCode(name, res); !ok {
+			return code
+		}
 	}
 	var buf bytes.Buffer
 	if err := render(&buf, res, format, view, res.Display, o.wide, paper); err != nil {

@@ -11,6 +11,7 @@
 //	qult report   [flags] FILE   the calculation package (HTML when -o ends in .html)
 //	qult settle   [flags] FILE   settlement at the serviceability load and the load test (exit 1 when it exceeds the allowable)
 //	qult reliability [flags] FILE  probabilistic capacity: Monte Carlo, FOSM and sensitivities
+//	qult choose   [flags] FILE   candidate piles compared, the recommended one (exit 1 when none passes)
 //	qult phase    [flags]        three-phase relations of one soil element
 //	qult factors  [flags]        tip bearing factors by every applicable method
 //	qult batch    [flags] [FILE] JSON Lines in (one calc file per line), JSON Lines out
@@ -76,6 +77,7 @@ func init() {
 		{"report", "the calculation package (text, or HTML when -o ends in .html)", runReport},
 		{"settle", "settlement at the serviceability load and the load test; exit 1 when it exceeds the allowable", runSettle},
 		{"reliability", "probabilistic capacity: Monte Carlo, FOSM and the sensitivity ranking", runReliability},
+		{"choose", "candidate piles compared: each one's shortest passing length, quantities and cost; exit 1 when none passes", runChoose},
 		{"phase", "three-phase relations of one soil element (Gs, e, n, w, S, unit weights)", runPhase},
 		{"factors", "tip bearing factors by every applicable method, side by side", runFactors},
 		{"batch", "JSON Lines in (one calc file per line), JSON Lines out, in parallel, order kept", runBatch},
