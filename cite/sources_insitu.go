@@ -25,6 +25,10 @@ var (
 		Title: "The standard penetration test in insensitive clays and soft rocks", Publication: "Proc. European Symp. on Penetration Testing (ESOPT), Stockholm, Vol. 2.2, 367-375"}
 	FHWAGEC5 = Source{Key: "fhwa-gec5-2017", Authors: "Loehr, J.E., Lutenegger, A., Rosenblad, B., Boeckmann, A.", Year: 2017,
 		Title: "Geotechnical Site Characterization, Geotechnical Engineering Circular No. 5", Publication: "FHWA-NHI-16-072, Federal Highway Administration, Washington, DC"}
+	// ISRNCE2012 is the article whose Table 1 lists the SPT corrections
+	// read for package insitu; its authors and title were not reached.
+	ISRNCE2012 = Source{Key: "isrn-ce-2012-346439", Authors: "ISRN Civil Engineering (authors not read)", Year: 2012,
+		Title: "Article 346439, Table 1: SPT correction factors", Publication: "ISRN Civil Engineering, Hindawi, article ID 346439"}
 	AGS4 = Source{Key: "ags4", Authors: "Association of Geotechnical and Geoenvironmental Specialists", Year: 2023,
 		Title: "AGS4 Data Format, edition 4.1.1, standard dictionary", Publication: "AGS, Bromley, UK"}
 	GEFCPT = Source{Key: "gef-cpt-report", Authors: "CUR", Year: 2006,
