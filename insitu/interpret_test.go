@@ -323,3 +323,17 @@ func TestSuggestLayers(t *testing.T) {
 		t.Errorf("layers %+v", got)
 	}
 }
+
+// TestOverburdenFactorPrinted: a published worked answer (question and
+// answer site of the University of Nairobi, "indextestingapp.uonbi.ac.ke",
+// item 14976980, read): σ′v = 6 m × 9.7 kN/m³ = 58.2 kPa,
+// CN = √(95.76/58.2) = 1.282716 with pa = 1 tsf = 95.76 kPa.
+func TestOverburdenFactorPrinted(t *testing.T) {
+	got, err := OverburdenFactor(58.2*units.Kilopascal, units.TSF)
+	if err != nil || !near(got, 1.282716, 1e-5) { // 1 tsf = 95.7605 kPa, printed 95.76
+		t.Errorf("CN = %.6f, %v; want 1.282716", got, err)
+	}
+	if _, err := OverburdenFactor(0, units.TSF); err == nil {
+		t.Error("σ′v = 0: no error")
+	}
+}

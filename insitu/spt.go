@@ -39,6 +39,10 @@ type SPTOptions struct {
 	// CNMax limits the overburden factor CN (shallow tests). Zero means no
 	// limit.
 	CNMax float64
+	// ReferencePressure is pa in CN = (pa/σ′v)^0.5. Zero means 100 kPa;
+	// Liao & Whitman wrote the rule with σ′v in tons per square foot, that
+	// is pa = 1 tsf = 95.76 kPa (units.TSF).
+	ReferencePressure units.Stress
 }
 
 // DefaultSPTOptions: an unrecorded energy ratio is an error (the factor
@@ -126,13 +130,17 @@ func SamplerFactor(s Sampler) (float64, error) {
 	return 0, fmt.Errorf("insitu: sampler %d is not a known sampler", int(s))
 }
 
-// OverburdenFactor returns Liao & Whitman's (1986) CN = (pa/σ′v)^0.5 with
-// pa = 100 kPa. σ′v must be positive.
-func OverburdenFactor(sigmaVEff units.Stress) (float64, error) {
+// OverburdenFactor returns Liao & Whitman's (1986) CN = (pa/σ′v)^0.5.
+// σ′v and pa must be positive; pa is commonly 100 kPa (ReferencePressure)
+// or 1 tsf (units.TSF, 95.76 kPa).
+func OverburdenFactor(sigmaVEff, pa units.Stress) (float64, error) {
 	if !(sigmaVEff > 0) || math.IsInf(float64(sigmaVEff), 0) {
 		return 0, fmt.Errorf("insitu: σ′v %g kPa must be positive", sigmaVEff.KPa())
 	}
-	return math.Sqrt(float64(ReferencePressure / sigmaVEff)), nil
+	if !(pa > 0) || math.IsInf(float64(pa), 0) {
+		return 0, fmt.Errorf("insitu: reference pressure %g kPa must be positive", pa.KPa())
+	}
+	return math.Sqrt(float64(pa / sigmaVEff)), nil
 }
 
 // CorrectSPT corrects each test:
@@ -194,7 +202,11 @@ func CorrectSPT(tests []SPT, stresses Stresses, opt *SPTOptions) ([]CorrectedSPT
 		c.N60 = t.N * c.CE * c.CB * c.CS * c.CR
 		sv, u0 := stresses(t.Depth)
 		c.SigmaVEff = sv - u0
-		if c.CN, err = OverburdenFactor(c.SigmaVEff); err != nil {
+		pa := opt.ReferencePressure
+		if pa == 0 {
+			pa = ReferencePressure
+		}
+		if c.CN, err = OverburdenFactor(c.SigmaVEff, pa); err != nil {
 			return nil, fmt.Errorf("%s: %w", where("stresses"), err)
 		}
 		if opt.CNMax > 0 && c.CN > opt.CNMax {
