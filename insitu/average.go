@@ -179,3 +179,60 @@ func SuggestLayers(points []Point, minThickness units.Length) ([]SuggestedLayer,
 	}
 	return out, nil
 }
+
+// MeansPerLayer returns MeanOver for each layer between consecutive
+// boundaries (depths increasing: the top of the first layer, then each
+// layer's bottom). A layer without a valid reading is an error naming it.
+func MeansPerLayer(points []Point, boundaries []units.Length, v Value) ([]Mean, error) {
+	if len(boundaries) < 2 {
+		return nil, fmt.Errorf("insitu: means per layer: give at least two boundaries")
+	}
+	out := make([]Mean, 0, len(boundaries)-1)
+	for i := 1; i < len(boundaries); i++ {
+		if !(boundaries[i] > boundaries[i-1]) {
+			return nil, fmt.Errorf("insitu: means per layer: boundaries[%d] = %g m is not below boundaries[%d] = %g m",
+				i, boundaries[i].Metres(), i-1, boundaries[i-1].Metres())
+		}
+		m, err := MeanOver(points, boundaries[i-1], boundaries[i], v)
+		if err != nil {
+			return nil, fmt.Errorf("layers[%d]: %w", i-1, err)
+		}
+		out = append(out, m)
+	}
+	return out, nil
+}
+
+// SPTValue picks the quantity to average from a corrected test, such as
+// func(c *CorrectedSPT) float64 { return c.N60 }.
+type SPTValue func(c *CorrectedSPT) float64
+
+// MeanSPT returns the arithmetic mean of v over the tests with
+// top ≤ depth ≤ bottom (common practice for discrete tests; a
+// depth-weighted mean would weight a test by its distance to its
+// neighbours, which SPT spacing does not justify). Tests of several
+// boreholes are averaged together: filter by Location first to keep them
+// apart. It is an error when no test lies in the range.
+func MeanSPT(tests []CorrectedSPT, top, bottom units.Length, v SPTValue) (Mean, error) {
+	m := Mean{Top: top, Bottom: bottom}
+	if !(bottom >= top) {
+		return m, fmt.Errorf("insitu: SPT mean: bottom %g m is above top %g m", bottom.Metres(), top.Metres())
+	}
+	sum := 0.0
+	for i := range tests {
+		c := &tests[i]
+		if c.Test.Depth < top || c.Test.Depth > bottom {
+			continue
+		}
+		x := v(c)
+		if math.IsNaN(x) || math.IsInf(x, 0) {
+			return m, fmt.Errorf("insitu: SPT mean: value at %g m is not finite", c.Test.Depth.Metres())
+		}
+		sum += x
+		m.Readings++
+	}
+	if m.Readings == 0 {
+		return m, fmt.Errorf("insitu: SPT mean: no test from %g to %g m", top.Metres(), bottom.Metres())
+	}
+	m.Value = sum / float64(m.Readings)
+	return m, nil
+}

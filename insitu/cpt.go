@@ -153,6 +153,9 @@ func InterpretCPT(s *Sounding, stresses Stresses, dst []Point) ([]Point, error) 
 	pa := float64(ReferencePressure)
 	for i := range s.Rows {
 		r := &s.Rows[i]
+		if !finite(float64(r.Depth)) || !finite(float64(r.Qc)) || !finite(float64(r.Fs)) || !finite(float64(r.U2)) || !finite(float64(s.Qt(i))) {
+			return out, fmt.Errorf("insitu: sounding %q: rows[%d]: depth, qc, fs, u2 and qt must be finite", s.ID, i)
+		}
 		sv, u0 := stresses(r.Depth)
 		if math.IsNaN(float64(sv)) || math.IsInf(float64(sv), 0) || sv < 0 || math.IsNaN(float64(u0)) || math.IsInf(float64(u0), 0) {
 			return out, fmt.Errorf("insitu: sounding %q: stresses at %g m: σv = %g Pa, u0 = %g Pa (σv must be finite and ≥ 0, u0 finite)",
@@ -237,6 +240,8 @@ func normalise(qnPa, effPa, fr float64) (n, ic, qtn float64) {
 	ic, _ = icOf(n)
 	return n, ic, math.Exp((lq0 + n*l) * math.Ln10)
 }
+
+func finite(x float64) bool { return !math.IsNaN(x) && !math.IsInf(x, 0) }
 
 // SBTIndex returns Ic from Qtn and Fr (percent), Robertson (2009) eq. 6:
 //

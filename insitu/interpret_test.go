@@ -337,3 +337,50 @@ func TestOverburdenFactorPrinted(t *testing.T) {
 		t.Error("σ′v = 0: no error")
 	}
 }
+
+func TestMeansPerLayerAndSPT(t *testing.T) {
+	p := pointsAt([]float64{1, 2, 3, 4, 5}, []float64{10, 20, 40, 5, 7})
+	ic := func(p *Point) float64 { return p.Ic }
+	// (15 + 30)/2 = 22.5 over 1 to 3 m; (22.5 + 6)/2 = 14.25 over 3 to 5 m
+	m, err := MeansPerLayer(p, []units.Length{1, 3, 5}, ic)
+	if err != nil || len(m) != 2 || m[0].Value != 22.5 || m[1].Value != 14.25 {
+		t.Errorf("means %+v, %v", m, err)
+	}
+	if _, err := MeansPerLayer(p, []units.Length{1, 1}, ic); err == nil {
+		t.Error("equal boundaries: no error")
+	}
+	tests := []CorrectedSPT{{Test: SPT{Depth: 1}, N60: 4}, {Test: SPT{Depth: 2.5}, N60: 10}, {Test: SPT{Depth: 4}, N60: 16}}
+	n60 := func(c *CorrectedSPT) float64 { return c.N60 }
+	if m, err := MeanSPT(tests, 2, 5, n60); err != nil || m.Value != 13 || m.Readings != 2 {
+		t.Errorf("SPT mean %+v, %v; want (10 + 16)/2 = 13", m, err)
+	}
+	if _, err := MeanSPT(tests, 5, 6, n60); err == nil {
+		t.Error("no test in range: no error")
+	}
+}
+
+// FuzzInterpretCPT: any sounding and stresses give points without NaN or
+// Inf, or an error.
+func FuzzInterpretCPT(f *testing.F) {
+	f.Add(1.0, 2.0, 20.0, 50.0, 18.0, 1.5, 0.8)
+	f.Add(0.1, 0.05, 0.0, -20.0, 20.0, 0.0, 1.0)
+	f.Add(2.0, 3.0, math.Inf(1), 0.0, 18.0, 1.0, 0.8)
+	f.Add(2.0, 1e300, 10.0, 0.0, 18.0, 1.0, 0.8)
+	f.Fuzz(func(t *testing.T, z, qcMPa, fsKPa, u2KPa, gamma, water, a float64) {
+		s := &Sounding{AreaRatio: a, HasU2: true, Rows: []Row{{Depth: units.Length(z), Qc: units.Stress(qcMPa * 1e6),
+			Fs: units.Stress(fsKPa * 1e3), U2: units.Stress(u2KPa * 1e3)}}}
+		st := func(z units.Length) (units.Stress, units.Stress) {
+			return units.Stress(gamma * 1e3 * float64(z)), units.Stress(9.81e3 * math.Max(0, float64(z)-water))
+		}
+		pts, err := InterpretCPT(s, st, nil)
+		if err != nil {
+			return
+		}
+		p := pts[0]
+		for _, v := range []float64{p.Qtn, p.N, p.Fr, p.Bq, p.Ic} {
+			if math.IsNaN(v) || math.IsInf(v, 0) {
+				t.Fatalf("point %+v", p)
+			}
+		}
+	})
+}
