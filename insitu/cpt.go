@@ -143,8 +143,9 @@ func CPTInterpretationRefs() []cite.Ref {
 // n is solved with Ic until it changes by less than 1e-9 (Robertson
 // iterates to Δn < 0.01), by a bracketed Newton iteration. Readings
 // where qn, fs or σ′v is not positive are returned with Flags set and no
-// normalised values. stresses must return finite σv ≥ 0 and u0; an error
-// names the depth otherwise.
+// normalised values. Rows must hold finite values at increasing depths,
+// and stresses must return finite σv ≥ 0 and u0; an error names the row
+// or the depth otherwise.
 func InterpretCPT(s *Sounding, stresses Stresses, dst []Point) ([]Point, error) {
 	if !(s.AreaRatio > 0 && s.AreaRatio <= 1) {
 		return dst[:0], fmt.Errorf("insitu: sounding %q: area ratio %g is outside 0 (exclusive) to 1", s.ID, s.AreaRatio)
@@ -155,6 +156,9 @@ func InterpretCPT(s *Sounding, stresses Stresses, dst []Point) ([]Point, error) 
 		r := &s.Rows[i]
 		if !finite(float64(r.Depth)) || !finite(float64(r.Qc)) || !finite(float64(r.Fs)) || !finite(float64(r.U2)) || !finite(float64(s.Qt(i))) {
 			return out, fmt.Errorf("insitu: sounding %q: rows[%d]: depth, qc, fs, u2 and qt must be finite", s.ID, i)
+		}
+		if i > 0 && !(r.Depth > s.Rows[i-1].Depth) {
+			return out, fmt.Errorf("insitu: sounding %q: rows[%d]: depth %g m does not increase from %g m", s.ID, i, r.Depth.Metres(), s.Rows[i-1].Depth.Metres())
 		}
 		sv, u0 := stresses(r.Depth)
 		if math.IsNaN(float64(sv)) || math.IsInf(float64(sv), 0) || sv < 0 || math.IsNaN(float64(u0)) || math.IsInf(float64(u0), 0) {

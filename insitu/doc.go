@@ -17,8 +17,9 @@
 // writers WriteCPTCSV and WriteSPTCSV write the same form, so a file
 // round-trips. ReadAGS reads the AGS4 data-transfer format (groups LOCA,
 // GEOL, ISPT, SCPG and SCPT of the AGS 4.1 dictionary); ReadGEF reads a
-// GEF-CPT-Report file. A malformed file gives a *ParseError naming the
-// file, the line and the field; no reader panics.
+// GEF-CPT-Report file. WriteAGS and WriteGEF write soundings that these
+// readers read back. A malformed file gives a *ParseError naming the file,
+// the line and the field; no reader panics.
 //
 // # Interpretation
 //

@@ -9,6 +9,7 @@ import (
 	"testing"
 
 	"github.com/google/go-cmp/cmp"
+	"github.com/qultgeo/qult/units"
 )
 
 func open(t *testing.T, name string) *os.File {
@@ -23,9 +24,15 @@ func open(t *testing.T, name string) *os.File {
 
 // closeRel compares floats to a relative tolerance: the same decimal read
 // in MPa and in kPa may differ in the last bit.
-var closeRel = cmp.Comparer(func(a, b float64) bool {
+var closeRel = cmp.Options{
+	cmp.Comparer(relEq),
+	cmp.Comparer(func(a, b units.Length) bool { return relEq(float64(a), float64(b)) }),
+	cmp.Comparer(func(a, b units.Stress) bool { return relEq(float64(a), float64(b)) }),
+}
+
+func relEq(a, b float64) bool {
 	return a == b || math.Abs(a-b) <= 1e-12*math.Max(math.Abs(a), math.Abs(b))
-})
+}
 
 func TestAGSAndGEFGiveTheSameSounding(t *testing.T) {
 	ags, err := ReadAGS(open(t, "cpt-north.ags"), "cpt-north.ags")
