@@ -39,7 +39,9 @@ const (
 // penetration length or 11 corrected depth (m; 11 is used when both are
 // given), 2 cone resistance qc, 3 sleeve friction fs, 6 pore pressure u2
 // (MPa or kPa). A row holding a column's void value in any column read is
-// left out and counted in Sounding.Voids.
+// left out and counted in Sounding.Voids. Quantity numbers 1, 2, 3, 4 and
+// 6 and measurement variable 3 were read in files written to the
+// definition; 11 (corrected depth) is from memory.
 func ReadGEF(r io.Reader, file string) (*Sounding, error) {
 	b, err := readAllLimited(r, file)
 	if err != nil {
