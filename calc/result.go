@@ -65,6 +65,9 @@ type Result struct {
 	// Reliability is the probabilistic capacity (nil without a
 	// reliability section).
 	Reliability *ReliabilityResult
+	// Sounding is the cone sounding the ground names, interpreted (nil
+	// without ground.sounding).
+	Sounding *SoundingResult
 
 	// Compared is the shaft and tip resistance of the same pile by every
 	// applicable method of the catalogues (nil when it could not be run).
