@@ -160,6 +160,9 @@ func run(f *File, o runOptions) (*Result, error) {
 	if in.Basis != nil {
 		refs = append(refs, cite.Collect(in.Basis.Refs()...)...)
 	}
+	if res.Sounding != nil {
+		refs = append(refs, cite.Collect(res.Sounding.Refs...)...)
+	}
 	res.Sources = uniqueSources(refs)
 	return res, nil
 }

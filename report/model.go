@@ -136,6 +136,7 @@ func build(r *calc.Result, o Options) *doc {
 		add(secSettlement(r, c))
 		add(secLoadTest(r, c))
 		add(secReliability(r, c))
+		add(secSounding(r, c))
 		add(secDefaults(r, c))
 	case ViewReliability:
 		add(secTotals(r, c))

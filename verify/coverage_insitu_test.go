@@ -25,6 +25,8 @@ var insituReasons = map[string]string{
 	"insitu.StrengthN60.Su":   "su = f1·N60 with f1 given, Stroud (1974); a product checked in closed form",
 	"insitu.StrengthNkt.Su":   "su = (qt − σv)/Nkt with Nkt given; a quotient checked in closed form",
 	"insitu.MeanOver":         "a depth-weighted mean by the trapezoidal rule; checked against means worked by hand",
+	"insitu.MeansPerLayer":    "insitu.MeanOver for each layer; checked against means worked by hand",
+	"insitu.MeanSPT":          "an arithmetic mean of the tests in a range; checked against a mean worked by hand",
 	"insitu.TipZone":          "insitu.MeanOver over a zone the engineer gives; checked against a mean worked by hand",
 	"insitu.SuggestLayers":    "groups readings by zone: no published value; checked on a sounding of our own whose layering is known",
 	"insitu.ReadAGS":          "a reader: checked against files written to the AGS 4.1.1 dictionary (the same sounding as from GEF and CSV) and a table of malformed files",

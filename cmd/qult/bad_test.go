@@ -171,6 +171,13 @@ var badCases = []badCase{
 	{file: "316-reliability-no-parameters", want: []string{"reliability.parameters (line 28)", "at least one"}},
 	{file: "317-reliability-same-value-twice", want: []string{"reliability.parameters[1].key (line 30)", "same value"}},
 	{file: "318-unknown-soil", want: []string{"ground.layers[0].soil (line 7)", "want one of gravel, sand, silt, clay, peat, fill"}},
+	{file: "550-sounding-missing-file", want: []string{"ground.sounding.file (line 17)"}},
+	{file: "551-sounding-unknown-format", want: []string{"ground.sounding.format (line 17)", "want csv, ags or gef"}},
+	{file: "552-sounding-nkt-out-of-range", want: []string{"ground.sounding.nkt (line 17)", "outside 6 to 30"}},
+	{file: "553-sounding-malformed-gef", want: []string{"ground.sounding.file (line 17)"}},
+	{file: "554-sounding-ags-which-location", want: []string{"ground.sounding", "(line 17)"}},
+	{file: "555-sounding-csv-depth-order", want: []string{"ground.sounding.file (line 17)"}},
+	{file: "556-sounding-without-file", want: []string{"ground.sounding.file (line 17)", "missing"}},
 }
 
 const badTimeout = 5 * time.Second
