@@ -20,7 +20,8 @@ import (
 // from breaks in Ic. The interpretation is reported beside the
 // calculation and changes no capacity: the layering it suggests and the
 // values it correlates are for the engineer to compare with the layers
-// given and, if accepted, to write into them.
+// given and, if accepted, to write into them. The sounding's depths are
+// read as the ground's: below the original ground surface.
 type Sounding struct {
 	File     string `yaml:"file" json:"file" doc:"The sounding file, relative to the calc file: the CSV form of qult (.csv), AGS4 (.ags) or GEF-CPT-Report (.gef)."`
 	Format   string `yaml:"format,omitempty" json:"format,omitempty" doc:"csv, ags or gef; default from the file's extension."`

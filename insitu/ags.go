@@ -5,6 +5,7 @@ import (
 	"encoding/csv"
 	"errors"
 	"io"
+	"slices"
 	"strings"
 
 	"github.com/qultgeo/qult/units"
@@ -201,18 +202,10 @@ func (a agsReader) unit(i int, accepted map[string]float64) (float64, error) {
 		for k := range accepted {
 			names = append(names, "\""+k+"\"")
 		}
-		return 0, perr(a.file, a.g.unitLine, a.g.name+"."+a.g.headings[i], ErrUnit, "%q (accepted: %s)", u, strings.Join(sortStrings(names), ", "))
+		slices.Sort(names)
+		return 0, perr(a.file, a.g.unitLine, a.g.name+"."+a.g.headings[i], ErrUnit, "%q (accepted: %s)", u, strings.Join(names, ", "))
 	}
 	return s, nil
-}
-
-func sortStrings(s []string) []string {
-	for i := 1; i < len(s); i++ {
-		for j := i; j > 0 && s[j] < s[j-1]; j-- {
-			s[j], s[j-1] = s[j-1], s[j]
-		}
-	}
-	return s
 }
 
 func (a agsReader) num(r agsRow, i int) (float64, error) {
