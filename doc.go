@@ -14,6 +14,7 @@
 //	phase        three-phase relations of one soil element
 //	bearing      tip resistance: bearing-capacity factors and unit tip resistance
 //	shaft        unit shaft resistance: β, α and λ methods, with limits
+//	insitu       CPT and SPT records: readers (CSV, AGS4, GEF), corrections, Ic, cited correlations
 //	profile      the ground: layers, groundwater, excavation and scour, total and effective vertical stress
 //	pile         capacity of a pile in the ground, design bases, required length
 //	settle       single-pile settlement and static load-test interpretation

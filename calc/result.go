@@ -71,6 +71,9 @@ type Result struct {
 	// Candidates compares the candidate piles (nil without a candidates
 	// section).
 	Candidates *CandidatesResult
+	// Sounding is the cone sounding the ground names, interpreted (nil
+	// without ground.sounding).
+	Sounding *SoundingResult
 
 	// Compared is the shaft and tip resistance of the same pile by every
 	// applicable method of the catalogues (nil when it could not be run).

@@ -32,17 +32,7 @@ func CautionText() []string {
 const CautionLine = "For qualified engineers only: check against the governing code, the site investigation and load tests; the code and licensed practice prevail."
 
 // Parse decodes and runs a calc file.
-func Parse(data []byte) (*Result, error) {
-	f, err := Decode(data)
-	if err != nil {
-		return nil, err
-	}
-	r, err := Run(f)
-	if r != nil {
-		r.Source = data
-	}
-	return r, err
-}
+func Parse(data []byte) (*Result, error) { return ParseWith(data, ParseOptions{}) }
 
 // Run resolves and runs a decoded calc file: the profile, the
 // characteristic capacity with its breakdown, capacity with depth, and,
@@ -56,6 +46,8 @@ type runOptions struct {
 	// methods compared uncomputed: Result.WithDepth, DesignWithDepth and
 	// Compared stay empty.
 	lean bool
+	// readFile reads the files the calc file names (ground.sounding).
+	readFile ReadFileFunc
 }
 
 func run(f *File, o runOptions) (*Result, error) {
@@ -164,6 +156,9 @@ func run(f *File, o runOptions) (*Result, error) {
 		return nil, err
 	}
 	srefs = append(srefs, candidateRefs(in)...)
+	if err := runSounding(f, in, prof, res, o.readFile); err != nil {
+		return nil, err
+	}
 	res.Warnings = append(res.Warnings, warnings(res)...)
 	res.Warnings = append(res.Warnings, settleWarnings(res)...)
 	var refs []cite.Source
@@ -174,6 +169,9 @@ func run(f *File, o runOptions) (*Result, error) {
 	}
 	if res.Group != nil {
 		refs = append(refs, cite.Collect(res.Group.Refs...)...)
+	}
+	if res.Sounding != nil {
+		refs = append(refs, cite.Collect(res.Sounding.Refs...)...)
 	}
 	res.Sources = uniqueSources(refs)
 	return res, nil

@@ -93,6 +93,7 @@ type jResult struct {
 	Reliab    *jReliab     `json:"reliability,omitempty"`
 	Group     *jGroup      `json:"group,omitempty"`
 	Cands     *jCandidates `json:"candidates,omitempty"`
+	Sounding  *jSounding   `json:"sounding,omitempty"`
 	Warnings  []string     `json:"warnings"`
 	Defaults  []defaultRow `json:"defaults"`
 	Sources   []jSource    `json:"sources"`
@@ -489,6 +490,7 @@ func toJSON(r *calc.Result, o Options) *jResult {
 	j.Reliab = reliabilityJSON(r, c)
 	j.Group = groupJSON(r, c)
 	j.Cands = candidatesJSON(r, c)
+	j.Sounding = soundingJSON(r, c)
 	return j
 }
 

@@ -139,6 +139,7 @@ func build(r *calc.Result, o Options) *doc {
 		add(secReliability(r, c))
 		add(secGroup(r, c))
 		add(secCandidates(r, c))
+		add(secSounding(r, c))
 		add(secDefaults(r, c))
 	case ViewChoose:
 		add(secCandidates(r, c))

@@ -113,6 +113,7 @@ func init() {
 		"settle.Vesic.Settlement":    runVesicSettlement,
 		"settle.RandolphWroth.Solve": runRandolphWroth,
 	}
+	addInsituRunners(runners)
 }
 
 // Functions returns the names of the functions the catalogue can run,

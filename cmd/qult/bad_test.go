@@ -192,6 +192,13 @@ var badCases = []badCase{
 	{file: "505-candidate-concrete-in-steel-pipe", want: []string{"candidates.piles[0].material.concrete_strength (line 24)", "not counted"}},
 	{file: "506-candidate-diameter-too-large", want: []string{"candidates.piles[0].diameters[1] (line 23)", "outside"}},
 	{file: "507-candidates-without-design", want: []string{"candidates (line 17)", "design"}},
+	{file: "550-sounding-missing-file", want: []string{"ground.sounding.file (line 17)"}},
+	{file: "551-sounding-unknown-format", want: []string{"ground.sounding.format (line 17)", "want csv, ags or gef"}},
+	{file: "552-sounding-nkt-out-of-range", want: []string{"ground.sounding.nkt (line 17)", "outside 6 to 30"}},
+	{file: "553-sounding-malformed-gef", want: []string{"ground.sounding.file (line 17)"}},
+	{file: "554-sounding-ags-which-location", want: []string{"ground.sounding", "(line 17)"}},
+	{file: "555-sounding-csv-depth-order", want: []string{"ground.sounding.file (line 17)"}},
+	{file: "556-sounding-without-file", want: []string{"ground.sounding.file (line 17)", "missing"}},
 }
 
 const badTimeout = 5 * time.Second

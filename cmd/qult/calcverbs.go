@@ -99,7 +99,7 @@ func (c *cmd) calcVerb(args []string, view report.View) int {
 		c.errorf("%v", err)
 		return exitUsage
 	}
-	res, err := calc.Parse(data)
+	res, err := calc.ParseWith(data, calc.ParseOptions{ReadFile: filesBeside(name)})
 	if err != nil {
 		c.problems(displayName(name), err)
 		return exitUsage

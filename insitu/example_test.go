@@ -1,0 +1,63 @@
+package insitu_test
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"github.com/qultgeo/qult/insitu"
+	"github.com/qultgeo/qult/units"
+)
+
+// A sounding of our own through soft clay into sand, in the CSV form, read,
+// interpreted with hydrostatic water 1.2 m below ground and a unit weight of
+// 18 kN/m³, and averaged about the tip of a 0.8 m pile at 6 m (1.5 diameters each side).
+func Example() {
+	const file = `# id: CPT-E1
+# area_ratio: 0.75
+depth_m,qc_MPa,fs_kPa,u2_kPa
+2,0.45,9,60
+3,0.52,10,85
+4,0.60,12,110
+5,6.5,45,45
+6,11.2,70,55
+7,13.8,84,63
+8,15.1,95,72
+`
+	s, err := insitu.ReadCPTCSV(strings.NewReader(file), "cpt-e1.csv")
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	ground := func(z units.Length) (units.Stress, units.Stress) {
+		sv := 18e3 * z.Metres()
+		u0 := 9.81e3 * math.Max(0, z.Metres()-1.2)
+		return units.Stress(sv), units.Stress(u0)
+	}
+	pts, err := insitu.InterpretCPT(s, ground, nil)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	for _, p := range pts {
+		fmt.Printf("%3.0f m  qt %5.2f MPa  Qtn %6.1f  Fr %4.2f %%  Ic %4.2f  %v\n",
+			p.Depth.Metres(), p.Qt.MPa(), p.Qtn, p.Fr, p.Ic, p.Zone)
+	}
+	m, err := insitu.TipZone(pts, 6, 1.5*0.8, 1.5*0.8, func(p *insitu.Point) float64 { return p.Qt.MPa() })
+	fmt.Printf("mean qt from 4.8 to 7.2 m: %.2f MPa (%d readings) %v\n", m.Value, m.Readings, err)
+	layers, _ := insitu.SuggestLayers(pts, 1)
+	for _, l := range layers {
+		fmt.Printf("suggested: %.1f to %.1f m, %v\n", l.Top.Metres(), l.Bottom.Metres(), l.Zone)
+	}
+	// Output:
+	// 2 m  qt  0.47 MPa  Qtn   13.9  Fr 2.10 %  Ic 2.79  4: silt mixtures: clayey silt to silty clay
+	//   3 m  qt  0.54 MPa  Qtn   12.7  Fr 2.05 %  Ic 2.82  4: silt mixtures: clayey silt to silty clay
+	//   4 m  qt  0.63 MPa  Qtn   12.1  Fr 2.16 %  Ic 2.85  4: silt mixtures: clayey silt to silty clay
+	//   5 m  qt  6.51 MPa  Qtn   93.0  Fr 0.70 %  Ic 1.84  6: sands: clean sand to silty sand
+	//   6 m  qt 11.21 MPa  Qtn  143.3  Fr 0.63 %  Ic 1.66  6: sands: clean sand to silty sand
+	//   7 m  qt 13.82 MPa  Qtn  164.5  Fr 0.61 %  Ic 1.61  6: sands: clean sand to silty sand
+	//   8 m  qt 15.12 MPa  Qtn  170.3  Fr 0.63 %  Ic 1.61  6: sands: clean sand to silty sand
+	// mean qt from 4.8 to 7.2 m: 10.69 MPa (3 readings) <nil>
+	// suggested: 2.0 to 4.5 m, 4: silt mixtures: clayey silt to silty clay
+	// suggested: 4.5 to 8.0 m, 6: sands: clean sand to silty sand
+}

@@ -1,0 +1,107 @@
+package insitu
+
+import (
+	"bytes"
+	"errors"
+	"math"
+	"os"
+	"testing"
+)
+
+func seedFile(f *testing.F, name string) {
+	b, err := os.ReadFile("testdata/" + name)
+	if err != nil {
+		f.Fatal(err)
+	}
+	f.Add(b)
+}
+
+// checkSounding: a reader's result holds no NaN or Inf and depths increase.
+func checkSounding(t *testing.T, s *Sounding) {
+	prev := math.Inf(-1)
+	for _, r := range s.Rows {
+		for _, v := range []float64{float64(r.Depth), float64(r.Qc), float64(r.Fs), float64(r.U2)} {
+			if math.IsNaN(v) || math.IsInf(v, 0) {
+				t.Fatalf("row %+v holds NaN or Inf", r)
+			}
+		}
+		if !(float64(r.Depth) > prev) {
+			t.Fatalf("depth %v after %v", r.Depth, prev)
+		}
+		prev = float64(r.Depth)
+	}
+	if !(s.AreaRatio > 0 && s.AreaRatio <= 1) {
+		t.Fatalf("area ratio %v", s.AreaRatio)
+	}
+}
+
+func checkErr(t *testing.T, err error) {
+	var pe *ParseError
+	if err != nil && !errors.As(err, &pe) {
+		t.Fatalf("error %v is not a *ParseError", err)
+	}
+}
+
+func FuzzReadCPTCSV(f *testing.F) {
+	seedFile(f, "cpt-north.csv")
+	f.Add([]byte("depth_m,qt_kPa,fs_MPa\n1,2,3\n"))
+	f.Fuzz(func(t *testing.T, b []byte) {
+		s, err := ReadCPTCSV(bytes.NewReader(b), "fuzz")
+		checkErr(t, err)
+		if err == nil {
+			checkSounding(t, s)
+			var w bytes.Buffer
+			if err := WriteCPTCSV(&w, s); err != nil {
+				t.Fatal(err)
+			}
+			s2, err := ReadCPTCSV(&w, "again")
+			if err != nil {
+				t.Fatalf("written file does not read back: %v\n%s", err, w.String())
+			}
+			if len(s2.Rows) != len(s.Rows) {
+				t.Fatalf("rows %d then %d", len(s.Rows), len(s2.Rows))
+			}
+		}
+	})
+}
+
+func FuzzReadSPTCSV(f *testing.F) {
+	f.Add([]byte("location,depth_m,n,energy_ratio_pct,rod_length_m,borehole_mm,sampler\nB,1.5,3,72,2.7,150,no-liner\n"))
+	f.Fuzz(func(t *testing.T, b []byte) {
+		s, err := ReadSPTCSV(bytes.NewReader(b), "fuzz")
+		checkErr(t, err)
+		if err == nil {
+			var w bytes.Buffer
+			if err := WriteSPTCSV(&w, s); err != nil {
+				t.Fatal(err)
+			}
+			if _, err := ReadSPTCSV(&w, "again"); err != nil {
+				t.Fatalf("written file does not read back: %v", err)
+			}
+		}
+	})
+}
+
+func FuzzReadAGS(f *testing.F) {
+	seedFile(f, "cpt-north.ags")
+	f.Fuzz(func(t *testing.T, b []byte) {
+		d, err := ReadAGS(bytes.NewReader(b), "fuzz")
+		checkErr(t, err)
+		if err == nil {
+			for i := range d.Soundings {
+				checkSounding(t, &d.Soundings[i])
+			}
+		}
+	})
+}
+
+func FuzzReadGEF(f *testing.F) {
+	seedFile(f, "cpt-north.gef")
+	f.Fuzz(func(t *testing.T, b []byte) {
+		s, err := ReadGEF(bytes.NewReader(b), "fuzz")
+		checkErr(t, err)
+		if err == nil {
+			checkSounding(t, s)
+		}
+	})
+}

@@ -1,0 +1,111 @@
+package verify
+
+import (
+	"github.com/qultgeo/qult/insitu"
+	"github.com/qultgeo/qult/units"
+)
+
+// addInsituRunners adds the runners of package insitu.
+func addInsituRunners(r map[string]runner) {
+	r["insitu.InterpretCPT"] = runInterpretCPT
+	r["insitu.SBTIndex"] = runSBTIndex
+	r["insitu.ZoneOf"] = runZoneOf
+	r["insitu.OverburdenFactor"] = runOverburdenFactor
+	r["insitu.RodFactor"] = runRodFactor
+	r["insitu.BoreholeFactor"] = runBoreholeFactor
+	r["insitu.SamplerFactor"] = runSamplerFactor
+	r["insitu.PhiQtn.Phi"] = runPhiQtn
+}
+
+// runInterpretCPT interprets one reading: qc, fs, u2, area_ratio and the
+// total and effective vertical stresses at its depth.
+func runInterpretCPT(a *args) (values, error) {
+	row := insitu.Row{Depth: units.Length(a.optQty("z", units.DimLength)),
+		Qc: units.Stress(a.qty("qc", units.DimStress)), Fs: units.Stress(a.qty("fs", units.DimStress))}
+	s := &insitu.Sounding{AreaRatio: a.optNum("area_ratio", 1)}
+	if a.has("u2") {
+		row.U2 = units.Stress(a.qty("u2", units.DimStress))
+		s.HasU2 = true
+	}
+	s.Rows = []insitu.Row{row}
+	sv := units.Stress(a.qty("sigma_v", units.DimStress))
+	eff := units.Stress(a.qty("sigma_v_eff", units.DimStress))
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	p, err := insitu.InterpretCPT(s, func(units.Length) (units.Stress, units.Stress) { return sv, sv - eff }, nil)
+	if err != nil {
+		return nil, err
+	}
+	q := p[0]
+	return values{"qt": stress(q.Qt), "qnet": stress(q.Qnet), "fr": num(q.Fr), "bq": num(q.Bq), "qtn": num(q.Qtn),
+		"n": num(q.N), "ic": num(q.Ic), "zone": num(float64(q.Zone))}, nil
+}
+
+func runSBTIndex(a *args) (values, error) {
+	qtn, fr := a.num("qtn"), a.num("fr")
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	ic, err := insitu.SBTIndex(qtn, fr)
+	return values{"ic": num(ic)}, err
+}
+
+func runZoneOf(a *args) (values, error) {
+	ic := a.num("ic")
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	return values{"zone": num(float64(insitu.ZoneOf(ic)))}, nil
+}
+
+func runOverburdenFactor(a *args) (values, error) {
+	eff := units.Stress(a.qty("sigma_v_eff", units.DimStress))
+	pa := units.Stress(a.qty("pa", units.DimStress))
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	cn, err := insitu.OverburdenFactor(eff, pa)
+	return values{"cn": num(cn)}, err
+}
+
+func runRodFactor(a *args) (values, error) {
+	l := units.Length(a.qty("rod_length", units.DimLength))
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	f, err := insitu.RodFactor(l)
+	return values{"cr": num(f)}, err
+}
+
+func runBoreholeFactor(a *args) (values, error) {
+	d := units.Length(a.qty("diameter", units.DimLength))
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	f, err := insitu.BoreholeFactor(d)
+	return values{"cb": num(f)}, err
+}
+
+func runSamplerFactor(a *args) (values, error) {
+	name := a.str("sampler")
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	s, ok := insitu.ParseSampler(name)
+	if !ok {
+		a.fail("sampler", "%q is not no-liner, liner-dense or liner-loose", name)
+		return nil, a.done()
+	}
+	f, err := insitu.SamplerFactor(s)
+	return values{"cs": num(f)}, err
+}
+
+func runPhiQtn(a *args) (values, error) {
+	p := &insitu.Point{Qtn: a.num("qtn"), Ic: a.num("ic")}
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	phi, err := (insitu.PhiQtn{}).Phi(p)
+	return values{"phi": qv(float64(phi), units.DimAngle)}, err
+}
