@@ -82,12 +82,20 @@ type Breakdown struct {
 // Breakdown returns the capacity with the pile's own tip depth and a row
 // per shaft segment. It allocates; Capacity is the lean path.
 func (a *Analysis) Breakdown() (Breakdown, error) {
-	c, err := a.Capacity()
+	// Capacity, recording its segments: a row on one of them takes it
+	// rather than integrating it again.
+	head, t := float64(a.pile.HeadDepth), float64(a.pile.Tip())
+	var c Capacity
+	var s0 sums
+	rec := make([]segRecord, 0, len(a.iv))
+	err := a.addShaft(&s0, head, t, &rec)
+	if err == nil {
+		err = a.finish(&s0, t, &c)
+	}
 	if err != nil {
 		return Breakdown{}, err
 	}
 	b := Breakdown{Capacity: c}
-	head, t := float64(a.pile.HeadDepth), float64(a.pile.Tip())
 	perim := a.outer
 	if !c.Plugged {
 		perim += a.inner
@@ -112,7 +120,12 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 		li := iv.layer
 		lp := &a.plans[li]
 		if !bottomZone {
-			if err := a.segment(&s, iv, top, bot); err != nil {
+			for len(rec) > 0 && &a.iv[rec[0].k] != iv && rec[0].top < top {
+				rec = rec[1:] // a segment no row takes whole (split at the bottom zone)
+			}
+			if len(rec) > 0 && &a.iv[rec[0].k] == iv && rec[0].top == top && rec[0].bot == bot {
+				s, rec = rec[0].s, rec[1:]
+			} else if err := a.segment(&s, iv, top, bot); err != nil {
 				return err
 			}
 		}

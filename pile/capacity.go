@@ -62,7 +62,7 @@ func (a *Analysis) CapacityAt(tip units.Length) (Capacity, error) {
 		return Capacity{}, fmt.Errorf("pile: tip depth %v: want below the head (%v) and within the profile (to %v)", tip, a.pile.HeadDepth, a.prof.Depth())
 	}
 	var s sums
-	if err := a.addShaft(&s, head, t); err != nil {
+	if err := a.addShaft(&s, head, t, nil); err != nil {
 		return Capacity{}, err
 	}
 	var c Capacity
@@ -70,9 +70,20 @@ func (a *Analysis) CapacityAt(tip units.Length) (Capacity, error) {
 	return c, err
 }
 
+// segRecord is one segment of a shaft sum: interval k from top to bot, and
+// what segment added to a sum that was zero.
+type segRecord struct {
+	k        int
+	top, bot float64
+	s        sums
+}
+
 // addShaft adds the shaft from z0 to z1 (z0 < z1) to s, interval by
-// interval.
-func (a *Analysis) addShaft(s *sums, z0, z1 float64) error {
+// interval. With rec not nil, each segment is also appended to *rec, so
+// that Breakdown can show it as a row without integrating it again: it is
+// then integrated from a zero sum and added to s field by field, which
+// gives s the same bits (x + (0 + q) = x + q).
+func (a *Analysis) addShaft(s *sums, z0, z1 float64, rec *[]segRecord) error {
 	for k := a.intervalFrom(z0, s.k); k < len(a.iv) && a.iv[k].top < z1; k++ {
 		s.k = k
 		iv := &a.iv[k]
@@ -83,13 +94,39 @@ func (a *Analysis) addShaft(s *sums, z0, z1 float64) error {
 		if z1 < bot {
 			bot = z1
 		}
-		if bot > top {
+		if !(bot > top) {
+			continue
+		}
+		if rec == nil {
 			if err := a.segment(s, iv, top, bot); err != nil {
 				return err
 			}
+			continue
 		}
+		var t sums
+		if err := a.segment(&t, iv, top, bot); err != nil {
+			return err
+		}
+		*rec = append(*rec, segRecord{k: k, top: top, bot: bot, s: t})
+		s.add(&t)
 	}
 	return nil
+}
+
+// add adds to s the sums t of one segment, as segment adds them.
+func (s *sums) add(t *sums) {
+	s.weight += t.weight
+	s.flags |= t.flags
+	s.outer += t.outer
+	s.design += t.design
+	s.tension += t.tension
+	s.uplift += t.uplift
+	if t.lamLen != 0 {
+		s.lamSig += t.lamSig
+		s.lamSu += t.lamSu
+		s.lamLen += t.lamLen
+		s.lamF, s.lamFt, s.lamVal = t.lamF, t.lamFt, t.lamVal
+	}
 }
 
 // intervalFrom returns the index of the interval holding z0: the hint if

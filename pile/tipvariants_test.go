@@ -1,0 +1,84 @@
+package pile
+
+import (
+	"fmt"
+	"testing"
+
+	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/profile"
+	"pgregory.net/rapid"
+)
+
+// TestPropCapacityWithTipsMatchesNewAnalysis: CapacityWithTips gives, for
+// every set of tip methods, exactly what the general path gives (an
+// analysis built whole by NewAnalysis with those tip methods, then
+// Capacity): every field to the bit, and the same error. The expected
+// values come from that general path, not from a published source; the
+// scenarios are drawAnalysis's (our own).
+func TestPropCapacityWithTipsMatchesNewAnalysis(t *testing.T) {
+	var drained, undrained []bearing.Tip
+	for _, d := range bearing.Methods() {
+		req := false
+		for _, p := range d.Params {
+			req = req || p.Required
+		}
+		if req {
+			continue
+		}
+		m, err := d.New(nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if d.Drainage == bearing.DrainedLayers {
+			drained = append(drained, m)
+		} else {
+			undrained = append(undrained, m)
+		}
+	}
+	rapid.Check(t, func(rt *rapid.T) {
+		a, _ := drawAnalysis(rt)
+		nsets := rapid.IntRange(1, 4).Draw(rt, "sets")
+		sets := make([][]bearing.Tip, nsets)
+		for j := range sets {
+			n := rapid.IntRange(0, a.prof.NumLayers()).Draw(rt, fmt.Sprintf("set %d length", j))
+			for i := range n {
+				var m bearing.Tip
+				pool := undrained
+				if a.prof.Layer(i).Drainage == profile.Drained {
+					pool = drained
+				}
+				if k := rapid.IntRange(-1, len(pool)-1).Draw(rt, fmt.Sprintf("set %d layer %d", j, i)); k >= 0 {
+					m = pool[k]
+				}
+				sets[j] = append(sets[j], m)
+			}
+		}
+		got, gerrs := a.CapacityWithTips(sets)
+		for j, set := range sets {
+			m := a.methods
+			m.Layers = make([]LayerMethods, max(len(a.methods.Layers), len(set)))
+			copy(m.Layers, a.methods.Layers)
+			for i, tp := range set {
+				if tp != nil {
+					m.Layers[i].Tip = tp
+				}
+			}
+			var opt *Options
+			if a.useCase {
+				cs := a.cs
+				opt = &Options{Case: &cs}
+			}
+			var want Capacity
+			b, werr := NewAnalysis(a.prof, a.pile, m, opt)
+			if werr == nil {
+				want, werr = b.Capacity()
+			}
+			if (werr == nil) != (gerrs[j] == nil) || (werr != nil && werr.Error() != gerrs[j].Error()) {
+				rt.Fatalf("set %d: error %v, whole analysis %v", j, gerrs[j], werr)
+			}
+			if got[j] != want {
+				rt.Fatalf("set %d: got %+v, whole analysis %+v", j, got[j], want)
+			}
+		}
+	})
+}
