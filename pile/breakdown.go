@@ -95,7 +95,7 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 	if err != nil {
 		return Breakdown{}, err
 	}
-	b := Breakdown{Capacity: c}
+	b := Breakdown{Capacity: c, Rows: make([]Row, 0, len(rec)+1)}
 	perim := a.outer
 	if !c.Plugged {
 		perim += a.inner

@@ -61,7 +61,12 @@ type depthPlan struct {
 
 // prepareDepth fills the depth plan of every interval.
 func (a *Analysis) prepareDepth() {
-	a.dp = make([]depthPlan, len(a.iv))
+	if cap(a.dp) >= len(a.iv) {
+		a.dp = a.dp[:len(a.iv)] // CapacityWithTips prepares one copy again and again
+		clear(a.dp)
+	} else {
+		a.dp = make([]depthPlan, len(a.iv))
+	}
 	zd := float64(a.prof.DesignGround())
 	d := a.size
 	for k := range a.iv {

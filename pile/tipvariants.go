@@ -3,7 +3,6 @@ package pile
 import (
 	"errors"
 	"fmt"
-	"slices"
 
 	"github.com/qultgeo/qult/bearing"
 )
@@ -44,8 +43,11 @@ func (a *Analysis) CapacityWithTips(sets [][]bearing.Tip) ([]Capacity, []error) 
 	head, t := float64(a.pile.HeadDepth), float64(a.pile.Tip())
 	var s sums
 	shaftErr := a.addShaft(&s, head, t, nil)
+	// One copy of a serves every set in turn.
+	b := *a
+	b.plans, b.dp = make([]layerPlan, len(a.plans)), nil
 	for j, set := range sets {
-		b, err := a.withTips(set)
+		err := b.withTips(a, set)
 		if err == nil {
 			err = shaftErr
 		}
@@ -58,14 +60,14 @@ func (a *Analysis) CapacityWithTips(sets [][]bearing.Tip) ([]Capacity, []error) 
 	return out, errs
 }
 
-// withTips returns a copy of a (without a design case) whose layer i takes
-// tip method set[i] where that is not nil, prepared as NewAnalysis
-// prepares it: the layer plans' tip fields as plan sets them (with its
-// check of N60), the tip models, the tips at the layers' ends and the
-// rules of the tip zone. Everything else is shared with a, read only.
-func (a *Analysis) withTips(set []bearing.Tip) (*Analysis, error) {
-	b := *a
-	b.plans = slices.Clone(a.plans)
+// withTips makes b, a copy of a (without a design case) with plans and
+// depth plans of its own, the analysis whose layer i takes tip method
+// set[i] where that is not nil, prepared as NewAnalysis prepares it: the
+// layer plans' tip fields as plan sets them (with its check of N60), the
+// tip models, the tips at the layers' ends and the rules of the tip zone.
+// Everything else is shared with a, read only.
+func (b *Analysis) withTips(a *Analysis, set []bearing.Tip) error {
+	copy(b.plans, a.plans)
 	var errs []error
 	for i, t := range set {
 		if t == nil || i >= len(b.plans) {
@@ -90,8 +92,8 @@ func (a *Analysis) withTips(set []bearing.Tip) (*Analysis, error) {
 		lp.qpBot, lp.errBot = b.directTip(lp, float64(l.Bottom))
 	}
 	if err := errors.Join(errs...); err != nil {
-		return nil, err
+		return err
 	}
 	b.prepareTipRules()
-	return &b, nil
+	return nil
 }
