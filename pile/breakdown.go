@@ -146,13 +146,17 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 			row.Method, row.Equation = "none", "fs = 0"
 		case lp.lambda:
 			row.Method, row.Equation = lambdaID, a.lambda.Equation()
-			addRefs(lambdaID, a.lambda.Refs())
+			if !seen[lambdaID] {
+				addRefs(lambdaID, a.lambda.Refs())
+			}
 			all.lamSig += s.lamSig
 			all.lamSu += s.lamSu
 			all.lamLen += s.lamLen
 		default:
 			row.Method, row.Equation = lp.shaft.ID(), lp.shaft.Equation()
-			addRefs(lp.shaft.ID(), lp.shaft.Refs())
+			if !seen[row.Method] { // Refs builds its list: only once per method
+				addRefs(row.Method, lp.shaft.Refs())
+			}
 			for j, z := range endPoints(top, bot) {
 				sv := s0 + (s1-s0)*(z-top)/(bot-top)
 				r, err := lp.shaft.Unit(a.point(lp, units.Length(z), units.Stress(sv)))

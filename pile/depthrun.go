@@ -286,6 +286,7 @@ func (a *Analysis) spanShaft(k int, openFrom, prev, from, step, to float64, i in
 		apiF0 = p.alphaAPIF(s0)
 		su4 = 4 * p.su
 	}
+	bound0 := s0 > su4
 	f0 := coef * g0
 	// The pile's weight per metre dry and wet, as pileWeight.
 	var wDry, wWet float64
@@ -302,7 +303,10 @@ func (a *Analysis) spanShaft(k int, openFrom, prev, from, step, to float64, i in
 	weight := w0
 	j := 0
 	for ; j < len(rows); j++ {
-		z := min(from+float64(i+j)*step, to)
+		z := from + float64(i+j)*step
+		if z > to { // min(z, to): z is never NaN
+			z = to
+		}
 		if !(z > prev && z < ivBot) {
 			break
 		}
@@ -339,7 +343,7 @@ func (a *Analysis) spanShaft(k int, openFrom, prev, from, step, to float64, i in
 			}
 		case kindAlphaAPI:
 			q = (p.alphaAPIF(s1) - apiF0) / sDs
-			if max(s0, s1) > su4 {
+			if bound0 || s1 > su4 { // max(s0, s1) > su4
 				fl = BoundApplied
 			}
 		}
