@@ -87,8 +87,20 @@ func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdow
 		}
 		return mm
 	}
+	// The file's own analysis and its shaft, segment by segment: a method
+	// compared in the layers of one class leaves the other layers' shaft
+	// as it is, and their segments are taken from here (to the bit).
+	base, baseErr := pile.NewAnalysis(prof, p, m, nil)
+	var pass *pile.ShaftPass
+	if baseErr == nil {
+		pass, _ = base.ShaftPass() // on an error, every breakdown integrates its own shaft
+	}
 	out := &Comparison{}
 	for _, cls := range []profile.Drainage{profile.Drained, profile.Undrained} {
+		same := make([]bool, len(layers))
+		for i, l := range layers {
+			same[i] = l.Drainage != cls
+		}
 		g := CompareGroup{Drainage: cls.String()}
 		for i, l := range layers {
 			if l.Drainage == cls && embedded[i] {
@@ -128,7 +140,7 @@ func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdow
 					}
 				})
 				var bd pile.Breakdown
-				if bd, err = breakdownOf(prof, p, mm); err == nil {
+				if bd, err = breakdownOf(prof, p, mm, pass, same); err == nil {
 					for _, r := range bd.Rows {
 						if r.Drainage == cls {
 							row.Force += r.Force
@@ -172,7 +184,7 @@ func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdow
 			}
 			ds, sets, newErrs = append(ds, d), append(sets, set), append(newErrs, err)
 		}
-		caps, errs := tipCapacities(prof, p, m, sets)
+		caps, errs := tipCapacities(base, baseErr, prof, p, m, sets)
 		for j, d := range ds {
 			row := CompareRow{Method: d.ID, Equation: d.Equation(), Chosen: d.ID == b.Tip.Method}
 			err := newErrs[j]
@@ -217,11 +229,11 @@ func requiresKey(ps []bearing.Param) bool {
 
 // tipCapacities returns the capacity of pile p in prof with methods m
 // and, for each set, the tip methods of the set (nil entries and sets keep
-// m's): through pile.CapacityWithTips, or, where the file's own analysis
-// cannot be built, an analysis built whole per set.
-func tipCapacities(prof *profile.Profile, p pile.Pile, m pile.Methods, sets [][]bearing.Tip) ([]pile.Capacity, []error) {
-	if a, err := pile.NewAnalysis(prof, p, m, nil); err == nil {
-		return a.CapacityWithTips(sets)
+// m's): through pile.CapacityWithTips on base (the analysis with m), or,
+// where that could not be built (baseErr), an analysis built whole per set.
+func tipCapacities(base *pile.Analysis, baseErr error, prof *profile.Profile, p pile.Pile, m pile.Methods, sets [][]bearing.Tip) ([]pile.Capacity, []error) {
+	if baseErr == nil {
+		return base.CapacityWithTips(sets)
 	}
 	caps, errs := make([]pile.Capacity, len(sets)), make([]error, len(sets))
 	for j, set := range sets {
@@ -242,10 +254,13 @@ func tipCapacities(prof *profile.Profile, p pile.Pile, m pile.Methods, sets [][]
 	return caps, errs
 }
 
-func breakdownOf(prof *profile.Profile, p pile.Pile, m pile.Methods) (pile.Breakdown, error) {
+// breakdownOf returns the breakdown of pile p in prof with methods m,
+// taking from pass (when not nil) the shaft segments of the layers marked
+// same (see pile.Analysis.BreakdownSharing).
+func breakdownOf(prof *profile.Profile, p pile.Pile, m pile.Methods, pass *pile.ShaftPass, same []bool) (pile.Breakdown, error) {
 	a, err := pile.NewAnalysis(prof, p, m, nil)
 	if err != nil {
 		return pile.Breakdown{}, err
 	}
-	return a.Breakdown()
+	return a.BreakdownSharing(pass, same)
 }

@@ -81,14 +81,48 @@ type Breakdown struct {
 
 // Breakdown returns the capacity with the pile's own tip depth and a row
 // per shaft segment. It allocates; Capacity is the lean path.
-func (a *Analysis) Breakdown() (Breakdown, error) {
+func (a *Analysis) Breakdown() (Breakdown, error) { return a.breakdown(nil) }
+
+// ShaftPass is the shaft of an analysis' capacity, segment by segment, kept
+// so that the breakdown of another analysis of the same pile in the same
+// profile can take the segments it shares (BreakdownSharing).
+type ShaftPass struct {
+	segs []segRecord
+}
+
+// ShaftPass integrates the shaft of the pile at its own tip depth, as
+// Capacity does, and keeps it segment by segment.
+func (a *Analysis) ShaftPass() (*ShaftPass, error) {
+	var s sums
+	p := &ShaftPass{segs: make([]segRecord, 0, len(a.iv))}
+	if err := a.addShaft(&s, float64(a.pile.HeadDepth), float64(a.pile.Tip()), &p.segs, nil); err != nil {
+		return nil, err
+	}
+	return p, nil
+}
+
+// BreakdownSharing is Breakdown, to the bit, for an analysis of the same
+// pile in the same profile as the one that made pass, with the same
+// methods and options except in layers i where same[i] is false: a shaft
+// segment of a layer marked the same, with the same ends as a segment of
+// pass, is taken from pass rather than integrated again. A caller that
+// marks a layer the same whose methods differ gets that layer's segments
+// from the other analysis.
+func (a *Analysis) BreakdownSharing(pass *ShaftPass, same []bool) (Breakdown, error) {
+	if pass == nil {
+		return a.breakdown(nil)
+	}
+	return a.breakdown(&reuse{segs: pass.segs, same: same})
+}
+
+func (a *Analysis) breakdown(from *reuse) (Breakdown, error) {
 	// Capacity, recording its segments: a row on one of them takes it
 	// rather than integrating it again.
 	head, t := float64(a.pile.HeadDepth), float64(a.pile.Tip())
 	var c Capacity
 	var s0 sums
 	rec := make([]segRecord, 0, len(a.iv))
-	err := a.addShaft(&s0, head, t, &rec)
+	err := a.addShaft(&s0, head, t, &rec, from)
 	if err == nil {
 		err = a.finish(&s0, t, &c)
 	}

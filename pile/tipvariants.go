@@ -42,7 +42,7 @@ func (a *Analysis) CapacityWithTips(sets [][]bearing.Tip) ([]Capacity, []error) 
 	}
 	head, t := float64(a.pile.HeadDepth), float64(a.pile.Tip())
 	var s sums
-	shaftErr := a.addShaft(&s, head, t, nil)
+	shaftErr := a.addShaft(&s, head, t, nil, nil)
 	// One copy of a serves every set in turn.
 	b := *a
 	b.plans, b.dp = make([]layerPlan, len(a.plans)), nil

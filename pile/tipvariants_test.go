@@ -2,10 +2,12 @@ package pile
 
 import (
 	"fmt"
+	"reflect"
 	"testing"
 
 	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/profile"
+	"github.com/qultgeo/qult/shaft"
 	"pgregory.net/rapid"
 )
 
@@ -79,6 +81,69 @@ func TestPropCapacityWithTipsMatchesNewAnalysis(t *testing.T) {
 			if got[j] != want {
 				rt.Fatalf("set %d: got %+v, whole analysis %+v", j, got[j], want)
 			}
+		}
+	})
+}
+
+// TestPropBreakdownSharingMatchesBreakdown: the breakdown of an analysis
+// that takes the segments it shares from another analysis' shaft pass is
+// exactly its own breakdown (every row, the tip block, the sources and
+// warnings), for analyses that differ in the shaft methods of some
+// layers. The expected values come from Breakdown itself, not from a
+// published source; the scenarios are drawAnalysis's (our own).
+func TestPropBreakdownSharingMatchesBreakdown(t *testing.T) {
+	drained := []func() LayerMethods{
+		func() LayerMethods { return LayerMethods{Shaft: shaft.BetaGiven{Beta: 0.4}} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.Burland{}} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.DrilledSandK0{}} },
+		func() LayerMethods { return LayerMethods{NoShaft: true} },
+	}
+	undrained := []func() LayerMethods{
+		func() LayerMethods { return LayerMethods{Shaft: shaft.AlphaGiven{Alpha: 0.5}} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.AlphaAPI{}} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.AlphaChart{}} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.AlphaDrilled{}} },
+		func() LayerMethods { return LayerMethods{Lambda: true} },
+	}
+	rapid.Check(t, func(rt *rapid.T) {
+		a, _ := drawAnalysis(rt)
+		pass, err := a.ShaftPass()
+		if err != nil {
+			rt.Skip(err)
+		}
+		m := a.methods
+		n := a.prof.NumLayers()
+		m.Layers = make([]LayerMethods, n)
+		copy(m.Layers, a.methods.Layers)
+		same := make([]bool, n)
+		for i := range n {
+			if same[i] = rapid.Bool().Draw(rt, fmt.Sprintf("same %d", i)); same[i] {
+				continue
+			}
+			pool := undrained
+			if a.prof.Layer(i).Drainage == profile.Drained {
+				pool = drained
+			}
+			lm := pool[rapid.IntRange(0, len(pool)-1).Draw(rt, fmt.Sprintf("method %d", i))]()
+			lm.Tip = m.Layers[i].Tip
+			m.Layers[i] = lm
+		}
+		var opt *Options
+		if a.useCase {
+			cs := a.cs
+			opt = &Options{Case: &cs}
+		}
+		b, err := NewAnalysis(a.prof, a.pile, m, opt)
+		if err != nil {
+			rt.Skip(err)
+		}
+		want, werr := b.Breakdown()
+		got, gerr := b.BreakdownSharing(pass, same)
+		if (werr == nil) != (gerr == nil) || (werr != nil && werr.Error() != gerr.Error()) {
+			rt.Fatalf("error %v, Breakdown %v", gerr, werr)
+		}
+		if !reflect.DeepEqual(got, want) {
+			rt.Fatalf("got %+v\nwant %+v", got, want)
 		}
 	})
 }

@@ -30,6 +30,8 @@ var reasons = map[string]string{
 	"reliability.MonteCarlo":                "sampling; checked within 4 standard errors against the exact moments, percentiles and probability of falling short of a capacity linear in a normal su (worked by hand), against the deterministic capacity with zero variance, and for the same result with 1, 2 and 8 workers",
 	"reliability.NewPileModel":              "prepares the model; its closed form is checked against the full pile analysis (pile.NewAnalysis, which carries the published cases) on random profiles",
 	"reliability.PileModel.Base":            "returns the values given in the inputs",
+	"pile.Analysis.ShaftPass":               "keeps the shaft integral of pile.Analysis.Capacity (which carries the published cases) segment by segment, for BreakdownSharing",
+	"pile.Analysis.BreakdownSharing":        "a faster path to pile.Analysis.Breakdown (which carries the published cases) for analyses that share layers; checked to the bit against Breakdown, on random profiles",
 	"pile.Analysis.CapacityWithTips":        "a faster path to pile.Analysis.Capacity (which carries the published cases) with other tip methods; checked to the bit against analyses built whole, on random profiles",
 	"phase.PorosityFromVoidRatio":           "a definition, n = e/(1 + e); checked in closed form; phase.Solve carries the published cases",
 	"phase.VoidRatioFromPorosity":           "a definition, e = n/(1 − n); checked in closed form; phase.Solve carries the published cases",
