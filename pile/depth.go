@@ -2,6 +2,7 @@ package pile
 
 import (
 	"math"
+	"slices"
 
 	"github.com/qultgeo/qult/profile"
 	"github.com/qultgeo/qult/shaft"
@@ -225,6 +226,7 @@ func (a *Analysis) closedIntegral(k int, z0, z1 float64) (float64, Flags) {
 // segment as Capacity sums it. The tip takes the quick path of tipQuick.
 func (a *Analysis) withDepth(from, step, to float64, n int, dst []Capacity) ([]Capacity, error) {
 	head := float64(a.pile.HeadDepth)
+	dst = slices.Grow(dst, n+1) // at most n+1 rows: one allocation, not a doubling per row
 	var s sums // committed: everything above prev, except the open interval
 	open, openFrom := -1, 0.0
 	prev := head
