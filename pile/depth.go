@@ -256,6 +256,7 @@ func (a *Analysis) withDepth(from, step, to float64, n int, dst []Capacity) ([]C
 			continue
 		}
 		// Intervals between prev and z.
+		handover := false
 		for ; k < len(a.iv) && a.iv[k].top < z; k++ {
 			iv := &a.iv[k]
 			top, bot := iv.top, iv.bot
@@ -274,6 +275,13 @@ func (a *Analysis) withDepth(from, step, to float64, n int, dst []Capacity) ([]C
 			if a.dp[k].closed {
 				if open != k {
 					open, openFrom = k, top
+				}
+				if bot < iv.bot && a.dp[k].fast && s.lamLen == 0 && i < n {
+					// z lies inside a fast interval the pile has just
+					// entered: the tight loop takes it from its top, the
+					// pile's weight too (the same product as pileWeight).
+					handover, prev = true, top
+					break
 				}
 				s.weight += a.pileWeight(top, bot)
 				if bot < iv.bot {
@@ -295,6 +303,11 @@ func (a *Analysis) withDepth(from, step, to float64, n int, dst []Capacity) ([]C
 			k = len(a.iv) - 1
 		}
 		s.k = k
+		if handover {
+			i, prev, dst = a.spanFast(&s, open, openFrom, prev, from, step, to, i, n, dst)
+			i--
+			continue
+		}
 		prev = z
 		dst = append(dst, Capacity{})
 		c := &dst[len(dst)-1]
