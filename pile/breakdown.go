@@ -107,12 +107,14 @@ func (a *Analysis) ShaftPass() (*ShaftPass, error) {
 // segment of a layer marked the same, with the same ends as a segment of
 // pass, is taken from pass rather than integrated again. A caller that
 // marks a layer the same whose methods differ gets that layer's segments
-// from the other analysis.
+// from the other analysis. It is for callers that want the numbers: it
+// leaves Sources and Warnings empty.
 func (a *Analysis) BreakdownSharing(pass *ShaftPass, same []bool) (Breakdown, error) {
-	if pass == nil {
-		return a.breakdown(nil)
+	var segs []segRecord
+	if pass != nil {
+		segs = pass.segs
 	}
-	return a.breakdown(&reuse{segs: pass.segs, same: same})
+	return a.breakdown(&reuse{segs: segs, same: same})
 }
 
 func (a *Analysis) breakdown(from *reuse) (Breakdown, error) {
@@ -289,7 +291,9 @@ func (a *Analysis) breakdown(from *reuse) (Breakdown, error) {
 		addRefs("layered-tip", []cite.Ref{{Source: cite.Meyerhof1976, Where: "tip in a stronger layer below a weaker one"}})
 	}
 	addRefs("tension-"+a.tension.Name, a.tension.Refs)
-	b.Sources = cite.Collect(refs...)
-	b.Warnings = c.Flags.Messages()
+	if from == nil { // BreakdownSharing leaves them out
+		b.Sources = cite.Collect(refs...)
+		b.Warnings = c.Flags.Messages()
+	}
 	return b, nil
 }
