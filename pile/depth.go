@@ -226,7 +226,8 @@ func (a *Analysis) closedIntegral(k int, z0, z1 float64) (float64, Flags) {
 // segment as Capacity sums it. The tip takes the quick path of tipQuick.
 func (a *Analysis) withDepth(from, step, to float64, n int, dst []Capacity) ([]Capacity, error) {
 	head := float64(a.pile.HeadDepth)
-	dst = slices.Grow(dst, n+1) // at most n+1 rows: one allocation, not a doubling per row
+	// At most n+1 rows: one allocation, not a doubling per row.
+	dst = slices.Grow(dst, n+1)
 	var s sums // committed: everything above prev, except the open interval
 	open, openFrom := -1, 0.0
 	prev := head
