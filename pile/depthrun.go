@@ -396,6 +396,9 @@ func (a *Analysis) spanTip(s *sums, k int, rows []Capacity) {
 	ramp, layered, upBase, upErr := p.ramp, p.layered, p.upBase, p.upErr
 	nextTop, nextEff := p.nextTop, p.nextEff
 	weakZone := WeakZoneRatio * d
+	// The rules' divisions as products: a few ulps from baseRules and
+	// weakRule (the oracle comparison holds them to 1e-12).
+	invZone, inv10d, invWeak := 1/zoneLen, 1/(10*d), 1/weakZone
 	weakBelow := a.weakBelow * d
 	nextWeaker, nextQp := p.nextErrTop, p.nextQpTop
 	noEmbed, layeredOn, noWeak := a.methods.NoEmbedment, a.methods.LayeredTip, a.methods.NoWeakLayer
@@ -456,7 +459,7 @@ func (a *Analysis) spanTip(s *sums, k int, rows []Capacity) {
 				if noEmbed {
 					fl |= EmbedmentOff
 				} else {
-					qp *= lb / zoneLen
+					qp *= lb * invZone
 					fl |= EmbedmentRamp
 				}
 			case layered:
@@ -466,7 +469,7 @@ func (a *Analysis) spanTip(s *sums, k int, rows []Capacity) {
 						fl |= LayeredTipOff
 					}
 				case upBase < qp: // upErr with the rule on is not fast
-					qp = upBase + (qp-upBase)*lb/(10*d)
+					qp = upBase + (qp-upBase)*lb*inv10d
 					fl |= LayeredTip
 				}
 			}
@@ -475,7 +478,7 @@ func (a *Analysis) spanTip(s *sums, k int, rows []Capacity) {
 		if nextTop < z+weakZone && nextEff < qp {
 			if noWeak {
 				fl |= WeakLayerOff
-			} else if v := nextEff + (qp-nextEff)*(nextTop-z)/weakZone; v < qp {
+			} else if v := nextEff + (qp-nextEff)*(nextTop-z)*invWeak; v < qp {
 				qp = v
 				fl |= WeakLayerReduced
 			}
