@@ -240,8 +240,10 @@ func (a *Analysis) runSpan(s *sums, k int, openFrom, prev, from, step, to float6
 // shaft's closed form from openFrom (kept in the row's Shaft field until
 // the second pass); the second adds the tip (the tip model and the rules
 // of the tip zone, whose choices depthPlan made once) and assembles the
-// row as assemble does. Every value is computed by the same operations as
-// in runSpan, so it gives the same bits. It returns the first depth it did
+// row as assemble does. Values are computed by the same operations as in
+// runSpan, except the API α's closed form and the rules of the tip zone,
+// which multiply by reciprocals worked out once (see alphaAPIConst and
+// spanTip): a few units in the last place. It returns the first depth it did
 // not take, prev and dst.
 func (a *Analysis) spanFast(s *sums, k int, openFrom, prev, from, step, to float64, i, n int, dst []Capacity) (int, float64, []Capacity) {
 	if cap(dst)-len(dst) < n-i {
