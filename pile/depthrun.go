@@ -233,18 +233,19 @@ func (a *Analysis) runSpan(s *sums, k int, openFrom, prev, from, step, to float6
 	return i, prev, dst, nil
 }
 
-// spanFast is runSpan for a fast interval (depthPlan.fast), in two passes
-// over the rows, each with few values live so that they stay in registers
-// and neither pass calls a function: the first takes the depths inside the
-// interval and stores with each its depth, the pile's weight and the
-// shaft's closed form from openFrom (kept in the row's Shaft field until
-// the second pass); the second adds the tip (the tip model and the rules
-// of the tip zone, whose choices depthPlan made once) and assembles the
-// row as assemble does. Values are computed by the same operations as in
-// runSpan, except the API α's closed form and the rules of the tip zone,
-// which multiply by reciprocals worked out once (see alphaAPIConst and
-// spanTip): a few units in the last place. It returns the first depth it did
-// not take, prev and dst.
+// spanFast is runSpan for a fast interval (depthPlan.fast), in three
+// passes over the rows, each with few values live so that they stay in
+// registers and no pass calls a function: spanShaft takes the depths
+// inside the interval and stores with each its depth, the pile's weight
+// and the shaft's closed form from openFrom (kept in the row's Shaft field
+// until the last pass); spanTip adds the unit tip resistance (the tip
+// model and the rules of the tip zone, whose choices depthPlan made once;
+// kept in UnitTip); spanAssemble assembles the row as assemble does.
+// Values are computed by the same operations as in runSpan, except the API
+// α's closed form and the rules of the tip zone, which multiply by
+// reciprocals worked out once (see alphaAPIConst and spanTip): a few units
+// in the last place. It returns the first depth it did not take, prev and
+// dst.
 func (a *Analysis) spanFast(s *sums, k int, openFrom, prev, from, step, to float64, i, n int, dst []Capacity) (int, float64, []Capacity) {
 	if cap(dst)-len(dst) < n-i {
 		dst = slices.Grow(dst, n-i)
@@ -372,10 +373,10 @@ func cappedIntegral(f0, f1, capv, h float64) float64 {
 	return capv*t*h + (capv+f1)/2*(1-t)*h
 }
 
-// spanTip is spanFast's second pass: the tip at each row's depth, as
-// runSpan computes it, and the row assembled as assemble does for a
-// section that cannot plug, with the committed sums s and the shaft
-// integral that spanShaft left in Shaft.
+// spanTip is spanFast's second pass: the unit tip resistance at each
+// row's depth, as runSpan computes it (the rules' divisions as products
+// by reciprocals), left in UnitTip with the row's flags; then it calls
+// spanAssemble with the committed sums s.
 func (a *Analysis) spanTip(s *sums, k int, rows []Capacity) {
 	iv := &a.iv[k]
 	p := &a.dp[k]
