@@ -308,32 +308,22 @@ func (a *Analysis) spanShaft(k int, openFrom, prev, from, step, to float64, i in
 	}
 	weight := w0
 	j := 0
-	for ; j < len(rows); j++ {
-		z := from + float64(i+j)*step
-		if z > to { // min(z, to): z is never NaN
-			z = to
-		}
-		if !(z > prev && z < ivBot) {
-			break
-		}
-		if weighted {
-			switch {
-			case zw >= z:
-				weight += wDry * (z - prev)
-			case zw <= prev:
-				weight += wWet * (z - prev)
-			default:
-				weight += wDry*(zw-prev) + wWet*(z-zw)
+	// One loop per kind, so that each holds only its own values.
+	switch kind {
+	case kindBeta, kindAlpha:
+		for ; j < len(rows); j++ {
+			z := from + float64(i+j)*step
+			if z > to { // min(z, to): z is never NaN
+				z = to
 			}
-		}
-		prev = z
-		s1 := sS0 + sDs*(z-ivTop)
-		h := z - openFrom
-		var q float64
-		var fl Flags
-		switch kind {
-		case kindBeta, kindAlpha:
-			g1 := s1
+			if !(z > prev && z < ivBot) {
+				break
+			}
+			if weighted {
+				weight = addWeight(weight, wDry, wWet, zw, prev, z)
+			}
+			prev = z
+			g1 := sS0 + sDs*(z-ivTop)
 			if kind == kindAlpha {
 				g1 = su0
 				if suVaries {
@@ -341,22 +331,56 @@ func (a *Analysis) spanShaft(k int, openFrom, prev, from, step, to float64, i in
 				}
 			}
 			f1 := coef * g1
+			h := z - openFrom
+			var q float64
+			var fl Flags
 			if capv <= 0 || (f0 <= capv && f1 <= capv) {
 				q = (f0 + f1) / 2 * h
 			} else {
 				q = cappedIntegral(f0, f1, capv, h)
 				fl = ShaftLimit
 			}
-		case kindAlphaAPI:
-			q = (api.f(s1) - apiF0) * invDs
+			c := &rows[j]
+			c.TipDepth, c.Weight, c.Shaft, c.Flags = units.Length(z), units.Force(weight), units.Force(q), fl
+		}
+	case kindAlphaAPI:
+		for ; j < len(rows); j++ {
+			z := from + float64(i+j)*step
+			if z > to {
+				z = to
+			}
+			if !(z > prev && z < ivBot) {
+				break
+			}
+			if weighted {
+				weight = addWeight(weight, wDry, wWet, zw, prev, z)
+			}
+			prev = z
+			s1 := sS0 + sDs*(z-ivTop)
+			q := (api.f(s1) - apiF0) * invDs
+			var fl Flags
 			if bound0 || s1 > su4 { // max(s0, s1) > su4
 				fl = BoundApplied
 			}
+			c := &rows[j]
+			c.TipDepth, c.Weight, c.Shaft, c.Flags = units.Length(z), units.Force(weight), units.Force(q), fl
 		}
-		c := &rows[j]
-		c.TipDepth, c.Weight, c.Shaft, c.Flags = units.Length(z), units.Force(weight), units.Force(q), fl
 	}
 	return j, weight
+}
+
+// addWeight adds to w the pile's weight from z0 to z1 as pileWeight
+// computes it, from the weights per metre dry and wet and the water depth
+// zw (+Inf for none).
+func addWeight(w, wDry, wWet, zw, z0, z1 float64) float64 {
+	switch {
+	case zw >= z1:
+		return w + wDry*(z1-z0)
+	case zw <= z0:
+		return w + wWet*(z1-z0)
+	default:
+		return w + (wDry*(zw-z0) + wWet*(z1-zw))
+	}
 }
 
 // cappedIntegral is linearIntegral where the cap governs somewhere: the
