@@ -87,8 +87,20 @@ func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdow
 		}
 		return mm
 	}
+	// The file's own analysis and its shaft, segment by segment: a method
+	// compared in the layers of one class leaves the other layers' shaft
+	// as it is, and their segments are taken from here (to the bit).
+	base, baseErr := pile.NewAnalysis(prof, p, m, nil)
+	var pass *pile.ShaftPass
+	if baseErr == nil {
+		pass, _ = base.ShaftPass() // on an error, every breakdown integrates its own shaft
+	}
 	out := &Comparison{}
 	for _, cls := range []profile.Drainage{profile.Drained, profile.Undrained} {
+		same := make([]bool, len(layers))
+		for i, l := range layers {
+			same[i] = l.Drainage != cls
+		}
 		g := CompareGroup{Drainage: cls.String()}
 		for i, l := range layers {
 			if l.Drainage == cls && embedded[i] {
@@ -128,7 +140,7 @@ func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdow
 					}
 				})
 				var bd pile.Breakdown
-				if bd, err = breakdownOf(prof, p, mm); err == nil {
+				if bd, err = breakdownOf(prof, p, mm, pass, same); err == nil {
 					for _, r := range bd.Rows {
 						if r.Drainage == cls {
 							row.Force += r.Force
@@ -149,23 +161,39 @@ func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdow
 	if tl >= 0 && tl < len(layers) {
 		cls := layers[tl].Drainage
 		g := CompareGroup{Drainage: cls.String(), Layers: []string{layers[tl].Name}}
+		// Each method on every layer of the class: one set of tip methods
+		// per method, computed together (pile.CapacityWithTips integrates
+		// the shaft, which they share, once; it gives what an analysis
+		// built whole with them gives).
+		var ds []bearing.Descriptor
+		var sets [][]bearing.Tip
+		var newErrs []error
 		for _, d := range bearing.Methods() {
 			if string(d.Drainage) != cls.String() || requiresKey(d.Params) {
 				continue
 			}
-			row := CompareRow{Method: d.ID, Equation: d.Equation(), Chosen: d.ID == b.Tip.Method}
 			t, err := d.New(nil)
+			var set []bearing.Tip
 			if err == nil {
-				mm := withLayers(cls, func(lm *pile.LayerMethods) { lm.Tip = t })
-				var a *pile.Analysis
-				if a, err = pile.NewAnalysis(prof, p, mm, nil); err == nil {
-					var k pile.Capacity
-					if k, err = a.Capacity(); err == nil {
-						row.Force, row.Total = k.Tip, k.Compression
+				set = make([]bearing.Tip, len(layers))
+				for i, l := range layers {
+					if l.Drainage == cls {
+						set[i] = t
 					}
 				}
 			}
-			if err != nil {
+			ds, sets, newErrs = append(ds, d), append(sets, set), append(newErrs, err)
+		}
+		caps, errs := tipCapacities(base, baseErr, prof, p, m, sets)
+		for j, d := range ds {
+			row := CompareRow{Method: d.ID, Equation: d.Equation(), Chosen: d.ID == b.Tip.Method}
+			err := newErrs[j]
+			if err == nil {
+				err = errs[j]
+			}
+			if err == nil {
+				row.Force, row.Total = caps[j].Tip, caps[j].Compression
+			} else {
 				row = CompareRow{Method: d.ID, Equation: d.Equation(), Chosen: row.Chosen, NotApplied: err.Error()}
 			}
 			g.Rows = append(g.Rows, row)
@@ -199,10 +227,40 @@ func requiresKey(ps []bearing.Param) bool {
 	return false
 }
 
-func breakdownOf(prof *profile.Profile, p pile.Pile, m pile.Methods) (pile.Breakdown, error) {
+// tipCapacities returns the capacity of pile p in prof with methods m
+// and, for each set, the tip methods of the set (nil entries and sets keep
+// m's): through pile.CapacityWithTips on base (the analysis with m), or,
+// where that could not be built (baseErr), an analysis built whole per set.
+func tipCapacities(base *pile.Analysis, baseErr error, prof *profile.Profile, p pile.Pile, m pile.Methods, sets [][]bearing.Tip) ([]pile.Capacity, []error) {
+	if baseErr == nil {
+		return base.CapacityWithTips(sets)
+	}
+	caps, errs := make([]pile.Capacity, len(sets)), make([]error, len(sets))
+	for j, set := range sets {
+		mm := m
+		mm.Layers = make([]pile.LayerMethods, max(len(m.Layers), len(set)))
+		copy(mm.Layers, m.Layers)
+		for i, t := range set {
+			if t != nil {
+				mm.Layers[i].Tip = t
+			}
+		}
+		a, err := pile.NewAnalysis(prof, p, mm, nil)
+		if err == nil {
+			caps[j], err = a.Capacity()
+		}
+		errs[j] = err
+	}
+	return caps, errs
+}
+
+// breakdownOf returns the breakdown of pile p in prof with methods m,
+// taking from pass (when not nil) the shaft segments of the layers marked
+// same (see pile.Analysis.BreakdownSharing).
+func breakdownOf(prof *profile.Profile, p pile.Pile, m pile.Methods, pass *pile.ShaftPass, same []bool) (pile.Breakdown, error) {
 	a, err := pile.NewAnalysis(prof, p, m, nil)
 	if err != nil {
 		return pile.Breakdown{}, err
 	}
-	return a.Breakdown()
+	return a.BreakdownSharing(pass, same)
 }

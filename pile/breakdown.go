@@ -81,13 +81,57 @@ type Breakdown struct {
 
 // Breakdown returns the capacity with the pile's own tip depth and a row
 // per shaft segment. It allocates; Capacity is the lean path.
-func (a *Analysis) Breakdown() (Breakdown, error) {
-	c, err := a.Capacity()
+func (a *Analysis) Breakdown() (Breakdown, error) { return a.breakdown(nil) }
+
+// ShaftPass is the shaft of an analysis' capacity, segment by segment, kept
+// so that the breakdown of another analysis of the same pile in the same
+// profile can take the segments it shares (BreakdownSharing).
+type ShaftPass struct {
+	segs []segRecord
+}
+
+// ShaftPass integrates the shaft of the pile at its own tip depth, as
+// Capacity does, and keeps it segment by segment.
+func (a *Analysis) ShaftPass() (*ShaftPass, error) {
+	var s sums
+	p := &ShaftPass{segs: make([]segRecord, 0, len(a.iv))}
+	if err := a.addShaft(&s, float64(a.pile.HeadDepth), float64(a.pile.Tip()), &p.segs, nil); err != nil {
+		return nil, err
+	}
+	return p, nil
+}
+
+// BreakdownSharing is Breakdown, to the bit, for an analysis of the same
+// pile in the same profile as the one that made pass, with the same
+// methods and options except in layers i where same[i] is false: a shaft
+// segment of a layer marked the same, with the same ends as a segment of
+// pass, is taken from pass rather than integrated again. A caller that
+// marks a layer the same whose methods differ gets that layer's segments
+// from the other analysis. It is for callers that want the numbers: it
+// leaves Sources and Warnings empty.
+func (a *Analysis) BreakdownSharing(pass *ShaftPass, same []bool) (Breakdown, error) {
+	var segs []segRecord
+	if pass != nil {
+		segs = pass.segs
+	}
+	return a.breakdown(&reuse{segs: segs, same: same})
+}
+
+func (a *Analysis) breakdown(from *reuse) (Breakdown, error) {
+	// Capacity, recording its segments: a row on one of them takes it
+	// rather than integrating it again.
+	head, t := float64(a.pile.HeadDepth), float64(a.pile.Tip())
+	var c Capacity
+	var s0 sums
+	rec := make([]segRecord, 0, len(a.iv))
+	err := a.addShaft(&s0, head, t, &rec, from)
+	if err == nil {
+		err = a.finish(&s0, t, &c)
+	}
 	if err != nil {
 		return Breakdown{}, err
 	}
-	b := Breakdown{Capacity: c}
-	head, t := float64(a.pile.HeadDepth), float64(a.pile.Tip())
+	b := Breakdown{Capacity: c, Rows: make([]Row, 0, len(rec)+1)}
 	perim := a.outer
 	if !c.Plugged {
 		perim += a.inner
@@ -112,7 +156,12 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 		li := iv.layer
 		lp := &a.plans[li]
 		if !bottomZone {
-			if err := a.segment(&s, iv, top, bot); err != nil {
+			for len(rec) > 0 && &a.iv[rec[0].k] != iv && rec[0].top < top {
+				rec = rec[1:] // a segment no row takes whole (split at the bottom zone)
+			}
+			if len(rec) > 0 && &a.iv[rec[0].k] == iv && rec[0].top == top && rec[0].bot == bot {
+				s, rec = rec[0].s, rec[1:]
+			} else if err := a.segment(&s, iv, top, bot); err != nil {
 				return err
 			}
 		}
@@ -133,13 +182,17 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 			row.Method, row.Equation = "none", "fs = 0"
 		case lp.lambda:
 			row.Method, row.Equation = lambdaID, a.lambda.Equation()
-			addRefs(lambdaID, a.lambda.Refs())
+			if !seen[lambdaID] {
+				addRefs(lambdaID, a.lambda.Refs())
+			}
 			all.lamSig += s.lamSig
 			all.lamSu += s.lamSu
 			all.lamLen += s.lamLen
 		default:
 			row.Method, row.Equation = lp.shaft.ID(), lp.shaft.Equation()
-			addRefs(lp.shaft.ID(), lp.shaft.Refs())
+			if !seen[row.Method] { // Refs builds its list: only once per method
+				addRefs(row.Method, lp.shaft.Refs())
+			}
 			for j, z := range endPoints(top, bot) {
 				sv := s0 + (s1-s0)*(z-top)/(bot-top)
 				r, err := lp.shaft.Unit(a.point(lp, units.Length(z), units.Stress(sv)))
@@ -238,7 +291,9 @@ func (a *Analysis) Breakdown() (Breakdown, error) {
 		addRefs("layered-tip", []cite.Ref{{Source: cite.Meyerhof1976, Where: "tip in a stronger layer below a weaker one"}})
 	}
 	addRefs("tension-"+a.tension.Name, a.tension.Refs)
-	b.Sources = cite.Collect(refs...)
-	b.Warnings = c.Flags.Messages()
+	if from == nil { // BreakdownSharing leaves them out
+		b.Sources = cite.Collect(refs...)
+		b.Warnings = c.Flags.Messages()
+	}
 	return b, nil
 }

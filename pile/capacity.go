@@ -62,7 +62,7 @@ func (a *Analysis) CapacityAt(tip units.Length) (Capacity, error) {
 		return Capacity{}, fmt.Errorf("pile: tip depth %v: want below the head (%v) and within the profile (to %v)", tip, a.pile.HeadDepth, a.prof.Depth())
 	}
 	var s sums
-	if err := a.addShaft(&s, head, t); err != nil {
+	if err := a.addShaft(&s, head, t, nil, nil); err != nil {
 		return Capacity{}, err
 	}
 	var c Capacity
@@ -70,9 +70,50 @@ func (a *Analysis) CapacityAt(tip units.Length) (Capacity, error) {
 	return c, err
 }
 
+// segRecord is one segment of a shaft sum: interval k from top to bot, and
+// what segment added to a sum that was zero.
+type segRecord struct {
+	k, layer int
+	top, bot float64
+	s        sums
+}
+
+// reuse is what addShaft may take from another analysis' pass: its
+// segments, and which layers have the same methods in both analyses.
+type reuse struct {
+	segs []segRecord
+	same []bool
+	cur  int
+}
+
+// find returns the recorded segment of layer li from top to bot, if there
+// is one; the calls come in depth order.
+func (r *reuse) find(li int, top, bot float64) (*sums, bool) {
+	if r == nil || li >= len(r.same) || !r.same[li] {
+		return nil, false
+	}
+	for r.cur < len(r.segs) && r.segs[r.cur].top < top {
+		r.cur++
+	}
+	if r.cur < len(r.segs) {
+		g := &r.segs[r.cur]
+		if g.layer == li && g.top == top && g.bot == bot {
+			return &g.s, true
+		}
+	}
+	return nil, false
+}
+
 // addShaft adds the shaft from z0 to z1 (z0 < z1) to s, interval by
-// interval.
-func (a *Analysis) addShaft(s *sums, z0, z1 float64) error {
+// interval. With rec not nil, each segment is also appended to *rec, so
+// that Breakdown can show it as a row without integrating it again: it is
+// then integrated from a zero sum and added to s field by field, which
+// gives s the same bits (x + (0 + q) = x + q).
+//
+// With from not nil, a segment of a layer that from marks the same, with
+// the same ends as one from recorded, is taken from it: the same
+// operations on the same values (see ShaftPass), so the same bits.
+func (a *Analysis) addShaft(s *sums, z0, z1 float64, rec *[]segRecord, from *reuse) error {
 	for k := a.intervalFrom(z0, s.k); k < len(a.iv) && a.iv[k].top < z1; k++ {
 		s.k = k
 		iv := &a.iv[k]
@@ -83,13 +124,41 @@ func (a *Analysis) addShaft(s *sums, z0, z1 float64) error {
 		if z1 < bot {
 			bot = z1
 		}
-		if bot > top {
+		if !(bot > top) {
+			continue
+		}
+		if rec == nil {
 			if err := a.segment(s, iv, top, bot); err != nil {
 				return err
 			}
+			continue
 		}
+		var t sums
+		if g, ok := from.find(iv.layer, top, bot); ok {
+			t = *g
+		} else if err := a.segment(&t, iv, top, bot); err != nil {
+			return err
+		}
+		*rec = append(*rec, segRecord{k: k, layer: iv.layer, top: top, bot: bot, s: t})
+		s.add(&t)
 	}
 	return nil
+}
+
+// add adds to s the sums t of one segment, as segment adds them.
+func (s *sums) add(t *sums) {
+	s.weight += t.weight
+	s.flags |= t.flags
+	s.outer += t.outer
+	s.design += t.design
+	s.tension += t.tension
+	s.uplift += t.uplift
+	if t.lamLen != 0 {
+		s.lamSig += t.lamSig
+		s.lamSu += t.lamSu
+		s.lamLen += t.lamLen
+		s.lamF, s.lamFt, s.lamVal = t.lamF, t.lamFt, t.lamVal
+	}
 }
 
 // intervalFrom returns the index of the interval holding z0: the hint if

@@ -2,6 +2,7 @@ package pile
 
 import (
 	"math"
+	"slices"
 
 	"github.com/qultgeo/qult/profile"
 	"github.com/qultgeo/qult/shaft"
@@ -49,11 +50,24 @@ type depthPlan struct {
 	// interval, the tip model's own, the tension factor of the layer.
 	shaftFlags, tipFlags Flags
 	tension              float64
+	// fast: a run interval that spanFast takes: a section that cannot
+	// plug, and rules of the tip zone that need no other layer than the
+	// next one (nor an error of the layer above) at any depth in it.
+	fast bool
+	// The next layer's own tip resistance at its top and whether it
+	// failed (for the check of a weaker layer below).
+	nextQpTop  float64
+	nextErrTop bool
 }
 
 // prepareDepth fills the depth plan of every interval.
 func (a *Analysis) prepareDepth() {
-	a.dp = make([]depthPlan, len(a.iv))
+	if cap(a.dp) >= len(a.iv) {
+		a.dp = a.dp[:len(a.iv)] // CapacityWithTips prepares one copy again and again
+		clear(a.dp)
+	} else {
+		a.dp = make([]depthPlan, len(a.iv))
+	}
 	zd := float64(a.prof.DesignGround())
 	d := a.size
 	for k := range a.iv {
@@ -127,6 +141,14 @@ func (a *Analysis) prepareDepth() {
 			}
 		}
 		p.run = p.closed && p.quickTip && !a.drilled
+		if li+1 < len(a.plans) {
+			p.nextQpTop, p.nextErrTop = a.plans[li+1].qpTop, a.plans[li+1].errTop != nil
+		}
+		// lim = z + c grows with z, so a test at the bottom of the
+		// interval holds for every depth inside it.
+		weakOne := !(p.nextTop < iv.bot+WeakZoneRatio*d) || !p.nextErr && !(p.next2Top < iv.bot+WeakZoneRatio*d)
+		p.fast = p.run && !a.pile.Section.CanPlug() && weakOne && !(p.next2Top < iv.bot+a.weakBelow*d) &&
+			!(p.layered && a.methods.LayeredTip && p.upErr)
 	}
 }
 
@@ -197,89 +219,6 @@ func (a *Analysis) closedIntegral(k int, z0, z1 float64) (float64, Flags) {
 	return q, fl
 }
 
-// runDepth is one depth z of the tight loop: inside run interval k
-// (prev < z < its bottom), with the committed sums s (the pile's weight
-// already to z) and the interval open from openFrom. It gives what
-// closedPart, finish and tipQuick give, without their general cases.
-func (a *Analysis) runDepth(s *sums, k int, openFrom, z float64, c *Capacity) error {
-	iv := &a.iv[k]
-	p := &a.dp[k]
-	lp := &a.plans[iv.layer]
-	q, fl := a.closedIntegral(k, openFrom, z)
-	// The tip, as tipQuick (the interval holds z, above its bottom).
-	sv := iv.e0 + iv.de*(z-iv.top)
-	var su float64
-	if lp.tm.useSu && lp.layer.HasSu {
-		su = float64(lp.suAt(min(max(units.Length(z), lp.layer.Top), lp.layer.Bottom)))
-	}
-	_, qp, limited := lp.tm.eval(sv, su)
-	tf := p.tipFlags
-	if limited {
-		tf |= TipLimit
-	}
-	d := a.size
-	li := iv.layer
-	// baseRules, decided in advance (see there for the rules).
-	if lb := z - p.zoneTop; lb < p.zoneLen {
-		switch {
-		case p.ramp && qp > 0:
-			if a.methods.NoEmbedment {
-				tf |= EmbedmentOff
-			} else {
-				qp *= lb / p.zoneLen
-				tf |= EmbedmentRamp
-			}
-		case p.layered:
-			switch {
-			case !a.methods.LayeredTip:
-				if p.upErr || p.upBase < qp {
-					tf |= LayeredTipOff
-				}
-			case p.upErr:
-				_, _, _, err := a.baseRules(li, z, qp, &tf) // the error, worded there
-				return err
-			case p.upBase < qp:
-				qp = p.upBase + (qp-p.upBase)*lb/(10*d)
-				tf |= LayeredTip
-			}
-		}
-	}
-	if lim := z + WeakZoneRatio*d; p.nextTop < lim {
-		if !(p.next2Top < lim) && !p.nextErr {
-			// weakRule with its one candidate, the next layer.
-			if p.nextEff < qp {
-				if a.methods.NoWeakLayer {
-					tf |= WeakLayerOff
-				} else if v := p.nextEff + (qp-p.nextEff)*(p.nextTop-z)/(WeakZoneRatio*d); v < qp {
-					qp = v
-					tf |= WeakLayerReduced
-				}
-			}
-		} else {
-			v, err := a.weakRule(li, z, qp, &tf, nil)
-			if err != nil {
-				return err
-			}
-			qp = v
-		}
-	}
-	if z-float64(lp.layer.Top) < d && li > 0 || float64(lp.layer.Bottom)-z < d && li < len(a.plans)-1 {
-		tf |= TipNearBoundary
-	}
-	if p.nextTop < z+a.weakBelow*d {
-		for j := li + 1; j < len(a.plans) && float64(a.plans[j].layer.Top) < z+a.weakBelow*d; j++ {
-			if a.plans[j].errTop != nil || a.plans[j].qpTop < qp {
-				tf |= WeakBelow
-				break
-			}
-		}
-	}
-	t := p.tension
-	c.TipDepth = units.Length(z)
-	a.assemble(c, qp, sv, lp.fTip, s.outer+q, s.design+lp.fShaft*q, s.tension+lp.fTension*t*q, s.uplift+t*q, s.weight, s.flags|fl|tf)
-	return nil
-}
-
 // withDepth is WithDepth after its checks: one pass down the pile. The
 // shaft of a closed interval (see depthPlan) is carried as one closed-form
 // integral from where the pile enters it, committed to the running sums
@@ -287,6 +226,8 @@ func (a *Analysis) runDepth(s *sums, k int, openFrom, z float64, c *Capacity) er
 // segment as Capacity sums it. The tip takes the quick path of tipQuick.
 func (a *Analysis) withDepth(from, step, to float64, n int, dst []Capacity) ([]Capacity, error) {
 	head := float64(a.pile.HeadDepth)
+	// At most n+1 rows: one allocation, not a doubling per row.
+	dst = slices.Grow(dst, n+1)
 	var s sums // committed: everything above prev, except the open interval
 	open, openFrom := -1, 0.0
 	prev := head
@@ -302,16 +243,21 @@ func (a *Analysis) withDepth(from, step, to float64, n int, dst []Capacity) ([]C
 		z = min(z, to)
 		// The tight loop: z inside the open interval, which is a run
 		// interval, with no λ layer above.
-		if open >= 0 && z > prev && z < a.iv[open].bot && a.dp[open].run && s.lamLen == 0 {
-			s.weight += a.pileWeight(prev, z)
-			prev = z
-			dst = append(dst, Capacity{})
-			if err := a.runDepth(&s, open, openFrom, z, &dst[len(dst)-1]); err != nil {
-				return dst[:len(dst)-1], err
+		if open >= 0 && i < n && z > prev && z < a.iv[open].bot && a.dp[open].run && s.lamLen == 0 {
+			var err error
+			if a.dp[open].fast {
+				i, prev, dst = a.spanFast(&s, open, openFrom, prev, from, step, to, i, n, dst)
+			} else {
+				i, prev, dst, err = a.runSpan(&s, open, openFrom, prev, from, step, to, i, n, dst)
 			}
+			if err != nil {
+				return dst, err
+			}
+			i-- // the loop's increment brings i back to the first depth not taken
 			continue
 		}
 		// Intervals between prev and z.
+		handover := false
 		for ; k < len(a.iv) && a.iv[k].top < z; k++ {
 			iv := &a.iv[k]
 			top, bot := iv.top, iv.bot
@@ -330,6 +276,13 @@ func (a *Analysis) withDepth(from, step, to float64, n int, dst []Capacity) ([]C
 			if a.dp[k].closed {
 				if open != k {
 					open, openFrom = k, top
+				}
+				if bot < iv.bot && a.dp[k].fast && s.lamLen == 0 && i < n {
+					// z lies inside a fast interval the pile has just
+					// entered: the tight loop takes it from its top, the
+					// pile's weight too (the same product as pileWeight).
+					handover, prev = true, top
+					break
 				}
 				s.weight += a.pileWeight(top, bot)
 				if bot < iv.bot {
@@ -351,6 +304,11 @@ func (a *Analysis) withDepth(from, step, to float64, n int, dst []Capacity) ([]C
 			k = len(a.iv) - 1
 		}
 		s.k = k
+		if handover {
+			i, prev, dst = a.spanFast(&s, open, openFrom, prev, from, step, to, i, n, dst)
+			i--
+			continue
+		}
 		prev = z
 		dst = append(dst, Capacity{})
 		c := &dst[len(dst)-1]

@@ -19,7 +19,11 @@
 // relative tolerance QuadratureTolerance. Capacity, CapacityAt and WithDepth
 // allocate nothing; WithDepth makes one pass down the pile with running
 // sums. Breakdown returns the same capacity with a row per shaft segment
-// and a tip block, the warnings and the sources.
+// and a tip block, the warnings and the sources. For comparing methods,
+// CapacityWithTips (several sets of tip methods) and BreakdownSharing (a
+// breakdown that takes the segments it shares from another analysis'
+// ShaftPass) give what separate analyses give, to the bit, while
+// integrating a shaft they share once.
 //
 // # Defaults a reviewer sees (each default, its value, its source, when it applies)
 //

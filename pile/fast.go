@@ -2,6 +2,7 @@ package pile
 
 import (
 	"math"
+	"slices"
 
 	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/shaft"
@@ -87,7 +88,7 @@ func (a *Analysis) tipInterval(z float64, hint int) int {
 
 // buildIntervals fills a.iv from a.splits.
 func (a *Analysis) buildIntervals() error {
-	a.iv = a.iv[:0]
+	a.iv = slices.Grow(a.iv[:0], len(a.splits))
 	for k := 0; k+1 < len(a.splits); k++ {
 		top, bot := a.splits[k], a.splits[k+1]
 		li, err := a.prof.LayerAt(units.Length(top))

@@ -524,7 +524,7 @@ func sortUnique(x []float64) []float64 {
 func (a *Analysis) plan(i int) (layerPlan, error) {
 	l := a.prof.Layer(i)
 	m := a.methods
-	path := fmt.Sprintf("layers[%d]", i)
+	path := func() string { return fmt.Sprintf("layers[%d]", i) } // for an error only
 	lp := layerPlan{layer: l}
 	// Soil factors (EN 1997-1 M2): tanφ′d = tanφ′/γφ, c′d = c′/γc, sud = su/γcu.
 	lp.phi = units.Atan(l.Phi.Tan() / a.cs.TanPhi)
@@ -574,19 +574,19 @@ func (a *Analysis) plan(i int) (layerPlan, error) {
 		lp.shaft = over.Shaft
 	case over.Lambda || (!drained && m.UndrainedLambda):
 		if drained {
-			return lp, pathErrorf(path+".shaft", "layer %q: the λ method applies to undrained layers only", l.Name)
+			return lp, pathErrorf(path()+".shaft", "layer %q: the λ method applies to undrained layers only", l.Name)
 		}
 		lp.lambda = true
 		lp.lamVal = over.LambdaValue
 		if over.LambdaValue != 0 && !(over.LambdaValue > 0 && over.LambdaValue <= 1) {
-			return lp, pathErrorf(path+".shaft.lambda", "layer %q: %g is outside (0, 1]", l.Name, over.LambdaValue)
+			return lp, pathErrorf(path()+".shaft.lambda", "layer %q: %g is outside (0, 1]", l.Name, over.LambdaValue)
 		}
 	case drained && m.ShaftDrained != nil:
 		lp.shaft = m.ShaftDrained
 	case drained:
 		k, err := shaft.KOverK0For(a.pile.Installation)
 		if err != nil {
-			return lp, pathErrorf(path+".shaft", "layer %q: %w", l.Name, err)
+			return lp, pathErrorf(path()+".shaft", "layer %q: %w", l.Name, err)
 		}
 		surf := a.pile.Surface
 		if surf == 0 {
@@ -594,7 +594,7 @@ func (a *Analysis) plan(i int) (layerPlan, error) {
 		}
 		d, err := shaft.DeltaOverPhiFor(surf)
 		if err != nil {
-			return lp, pathErrorf(path+".shaft", "layer %q: %w", l.Name, err)
+			return lp, pathErrorf(path()+".shaft", "layer %q: %w", l.Name, err)
 		}
 		lp.shaft = shaft.Beta{K: k, Delta: d}
 	case m.ShaftUndrained != nil:

@@ -1,0 +1,151 @@
+package pile
+
+import (
+	"fmt"
+	"reflect"
+	"testing"
+
+	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/profile"
+	"github.com/qultgeo/qult/shaft"
+	"pgregory.net/rapid"
+)
+
+// TestPropCapacityWithTipsMatchesNewAnalysis: CapacityWithTips gives, for
+// every set of tip methods, exactly what the general path gives (an
+// analysis built whole by NewAnalysis with those tip methods, then
+// Capacity): every field to the bit, and the same error. The expected
+// values come from that general path, not from a published source; the
+// scenarios are drawAnalysis's (our own).
+func TestPropCapacityWithTipsMatchesNewAnalysis(t *testing.T) {
+	var drained, undrained []bearing.Tip
+	for _, d := range bearing.Methods() {
+		req := false
+		for _, p := range d.Params {
+			req = req || p.Required
+		}
+		if req {
+			continue
+		}
+		m, err := d.New(nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if d.Drainage == bearing.DrainedLayers {
+			drained = append(drained, m)
+		} else {
+			undrained = append(undrained, m)
+		}
+	}
+	rapid.Check(t, func(rt *rapid.T) {
+		a, _ := drawAnalysis(rt)
+		nsets := rapid.IntRange(1, 4).Draw(rt, "sets")
+		sets := make([][]bearing.Tip, nsets)
+		for j := range sets {
+			n := rapid.IntRange(0, a.prof.NumLayers()).Draw(rt, fmt.Sprintf("set %d length", j))
+			for i := range n {
+				var m bearing.Tip
+				pool := undrained
+				if a.prof.Layer(i).Drainage == profile.Drained {
+					pool = drained
+				}
+				if k := rapid.IntRange(-1, len(pool)-1).Draw(rt, fmt.Sprintf("set %d layer %d", j, i)); k >= 0 {
+					m = pool[k]
+				}
+				sets[j] = append(sets[j], m)
+			}
+		}
+		got, gerrs := a.CapacityWithTips(sets)
+		for j, set := range sets {
+			m := a.methods
+			m.Layers = make([]LayerMethods, max(len(a.methods.Layers), len(set)))
+			copy(m.Layers, a.methods.Layers)
+			for i, tp := range set {
+				if tp != nil {
+					m.Layers[i].Tip = tp
+				}
+			}
+			var opt *Options
+			if a.useCase {
+				cs := a.cs
+				opt = &Options{Case: &cs}
+			}
+			var want Capacity
+			b, werr := NewAnalysis(a.prof, a.pile, m, opt)
+			if werr == nil {
+				want, werr = b.Capacity()
+			}
+			if (werr == nil) != (gerrs[j] == nil) || (werr != nil && werr.Error() != gerrs[j].Error()) {
+				rt.Fatalf("set %d: error %v, whole analysis %v", j, gerrs[j], werr)
+			}
+			if got[j] != want {
+				rt.Fatalf("set %d: got %+v, whole analysis %+v", j, got[j], want)
+			}
+		}
+	})
+}
+
+// TestPropBreakdownSharingMatchesBreakdown: the breakdown of an analysis
+// that takes the segments it shares from another analysis' shaft pass is
+// exactly its own breakdown (every row, the tip block, the sources and
+// warnings), for analyses that differ in the shaft methods of some
+// layers. The expected values come from Breakdown itself, not from a
+// published source; the scenarios are drawAnalysis's (our own). (It
+// leaves out the sources and warnings, which Breakdown's own tests check.)
+func TestPropBreakdownSharingMatchesBreakdown(t *testing.T) {
+	drained := []func() LayerMethods{
+		func() LayerMethods { return LayerMethods{Shaft: shaft.BetaGiven{Beta: 0.4}} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.Burland{}} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.DrilledSandK0{}} },
+		func() LayerMethods { return LayerMethods{NoShaft: true} },
+	}
+	undrained := []func() LayerMethods{
+		func() LayerMethods { return LayerMethods{Shaft: shaft.AlphaGiven{Alpha: 0.5}} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.AlphaAPI{}} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.AlphaChart{}} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.AlphaDrilled{}} },
+		func() LayerMethods { return LayerMethods{Lambda: true} },
+	}
+	rapid.Check(t, func(rt *rapid.T) {
+		a, _ := drawAnalysis(rt)
+		pass, err := a.ShaftPass()
+		if err != nil {
+			rt.Skip(err)
+		}
+		m := a.methods
+		n := a.prof.NumLayers()
+		m.Layers = make([]LayerMethods, n)
+		copy(m.Layers, a.methods.Layers)
+		same := make([]bool, n)
+		for i := range n {
+			if same[i] = rapid.Bool().Draw(rt, fmt.Sprintf("same %d", i)); same[i] {
+				continue
+			}
+			pool := undrained
+			if a.prof.Layer(i).Drainage == profile.Drained {
+				pool = drained
+			}
+			lm := pool[rapid.IntRange(0, len(pool)-1).Draw(rt, fmt.Sprintf("method %d", i))]()
+			lm.Tip = m.Layers[i].Tip
+			m.Layers[i] = lm
+		}
+		var opt *Options
+		if a.useCase {
+			cs := a.cs
+			opt = &Options{Case: &cs}
+		}
+		b, err := NewAnalysis(a.prof, a.pile, m, opt)
+		if err != nil {
+			rt.Skip(err)
+		}
+		want, werr := b.Breakdown()
+		want.Sources, want.Warnings = nil, nil // BreakdownSharing leaves them out
+		got, gerr := b.BreakdownSharing(pass, same)
+		if (werr == nil) != (gerr == nil) || (werr != nil && werr.Error() != gerr.Error()) {
+			rt.Fatalf("error %v, Breakdown %v", gerr, werr)
+		}
+		if !reflect.DeepEqual(got, want) {
+			rt.Fatalf("got %+v\nwant %+v", got, want)
+		}
+	})
+}
