@@ -226,3 +226,20 @@ func TestForBasis(t *testing.T) {
 		}
 	}
 }
+
+// TestSteelPileSquashUSACE: the yield load Fy·As of an H bearing pile (the
+// nominal resistance of AASHTO 6.9.4.1 with λ = 0) against a printed pile
+// design example.
+//
+// "Design example: driven piles", step (2) Structural capacity, as
+// reproduced at buildingconstructioncivil.blogspot.com (2012/11,
+// design-example-driven-piles; the example of a U.S. Army design manual
+// for deep foundations, whose Table 1-3 lists the H-piles from AISC 1969):
+// an HP 14×73 pile of A36 steel, Ay = 21.4 in², "the unfactored structural
+// capacity Qcap is fy·Ay = 36 × 21.4 = 770.4 kips". Printed to 0.1 kip.
+func TestSteelPileSquashUSACE(t *testing.T) {
+	got := squash(36*units.KSI, units.Area(21.4)*units.SquareInch).Kips()
+	if math.Abs(got-770.4) > 0.05 {
+		t.Errorf("Fy·As = %.4g kips, want 770.4 kips (HP 14×73, A36)", got)
+	}
+}
