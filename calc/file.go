@@ -36,6 +36,9 @@ type File struct {
 	LoadTest   *LoadTest   `yaml:"load_test,omitempty" json:"load_test,omitempty" doc:"A static compression load test on the pile, as points of head load and head settlement, read by the chosen criteria."`
 	// Reliability asks for the probabilistic capacity (Monte Carlo, FOSM).
 	Reliability *Reliability `yaml:"reliability,omitempty" json:"reliability,omitempty" doc:"Probabilistic capacity: uncertain parameters with their distributions and correlations, for Monte Carlo simulation and FOSM."`
+	// Downdrag lists the loads placed after the pile is installed and asks
+	// for the neutral plane and the drag load (calc/downdrag.go).
+	Downdrag *Downdrag `yaml:"downdrag,omitempty" json:"downdrag,omitempty" doc:"Loads placed after the pile is installed (fill, surcharge, lowered water table) and the ground settlement they cause: the neutral plane, drag load and largest axial force by the unified method."`
 
 	// lines maps each field path read from the file to its line.
 	lines map[string]int

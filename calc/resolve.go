@@ -38,6 +38,7 @@ type Inputs struct {
 	LoadTest *LoadTestInputs
 	// reliability is the reliability section; nil when the file has none.
 	reliability *reliabilityInputs
+	downdrag    *downdragInputs // the downdrag section; nil without one
 }
 
 // resolver turns Values into quantities, recording problems.
@@ -177,6 +178,7 @@ func Resolve(f *File) (*Inputs, error) {
 	r.search(f, in)
 	r.settlement(f, in)
 	r.reliabilitySection(f, in)
+	r.downdrag(f, in)
 	if len(r.probs) > 0 {
 		return in, r.probs
 	}

@@ -65,6 +65,9 @@ type Result struct {
 	// Reliability is the probabilistic capacity (nil without a
 	// reliability section).
 	Reliability *ReliabilityResult
+	// Downdrag is the neutral plane, drag load and largest axial force
+	// (nil without a downdrag section).
+	Downdrag *DowndragResult
 
 	// Compared is the shaft and tip resistance of the same pile by every
 	// applicable method of the catalogues (nil when it could not be run).

@@ -157,6 +157,12 @@ func run(f *File, o runOptions) (*Result, error) {
 	if err := runReliability(f, in, res); err != nil {
 		return nil, err
 	}
+	drefs, err := runDowndrag(f, in, prof, res)
+	if err != nil {
+		return nil, err
+	}
+	srefs = append(srefs, drefs...)
+	res.Warnings = append(res.Warnings, downdragWarnings(f, in)...)
 	res.Warnings = append(res.Warnings, warnings(res)...)
 	res.Warnings = append(res.Warnings, settleWarnings(res)...)
 	var refs []cite.Source

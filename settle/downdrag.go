@@ -311,7 +311,8 @@ func (d *Downdrag) depthOf(c float64) float64 {
 // the whole shaft's resistance and the tip force.
 type ddState struct {
 	np, total, tip float64
-	all            bool // the tip carries all that arrives
+	cnp            float64 // C(NP), the shaft force from the head to NP
+	all            bool    // the tip carries all that arrives
 }
 
 func (d *Downdrag) neutral(rt float64) ddState {
@@ -319,17 +320,24 @@ func (d *Downdrag) neutral(rt float64) ddState {
 	// The tip carries at most what arrives at it: the neutral plane is
 	// then at the tip.
 	if rt >= float64(d.Load)+total {
-		return ddState{np: d.depthOf(total), total: total, tip: float64(d.Load) + total, all: true}
+		return ddState{np: d.depthOf(total), total: total, tip: float64(d.Load) + total, cnp: total, all: true}
 	}
 	// Qd + C(z) = Rt + (total − C(z))  ⇒  C(z) = (Rt + total − Qd)/2.
-	target := (rt + total - float64(d.Load)) / 2
-	return ddState{np: d.depthOf(min(max(target, 0), total)), total: total, tip: rt}
+	target := min(max((rt+total-float64(d.Load))/2, 0), total)
+	return ddState{np: d.depthOf(target), total: total, tip: rt, cnp: target}
 }
 
-// force returns the axial force at z for state s.
+// force returns the axial force at z for state s: down from the head,
+// Qd + C(z), and up, the force below the neutral plane when the shaft
+// resistance there is mobilised from the neutral plane down,
+//
+//	Q(z) = max(Qd + 2·C(NP) − C(z), 0)
+//
+// which is Rt + Rs,total − C(z) when the neutral plane is the force
+// equilibrium with tip force Rt.
 func (d *Downdrag) force(s ddState, z float64) (down, up float64) {
 	c := d.cumulative(z)
-	return float64(d.Load) + c, s.tip + s.total - c
+	return float64(d.Load) + c, max(float64(d.Load)+2*s.cnp-c, 0)
 }
 
 // shortening returns ∫Q/EA dz from a to b (a ≤ b), Q being the force that
@@ -496,7 +504,13 @@ func (d *Downdrag) undraggedShortening(a, b float64) float64 {
 //	g(Rt) = δt(Rt) + ∫NP..tip Q/EA dz − sg(NP)
 //
 // which rises with Rt (a larger tip force moves the neutral plane down,
-// where the ground settles less, and needs more toe movement).
+// where the ground settles less, and needs more toe movement). When even
+// with no tip force the pile would settle more than the ground at the
+// equilibrium depth (g(0) > 0: the ground there settles less than the
+// pile shortens), the neutral plane is where the ground and the pile
+// settle alike above that depth, the shaft below it is only partly
+// mobilised (from the neutral plane down) and the tip carries what
+// arrives, if anything (see partial).
 func (d *Downdrag) compatible(capacity float64) ddState {
 	tipZ := float64(d.Rows[len(d.Rows)-1].Bottom)
 	g := func(rt float64) (float64, ddState) {
@@ -505,7 +519,10 @@ func (d *Downdrag) compatible(capacity float64) ddState {
 	}
 	lo, hi := 0.0, capacity
 	glo, slo := g(lo)
-	if glo >= 0 || capacity <= 0 {
+	if glo > 0 {
+		return d.partial(slo.np)
+	}
+	if glo == 0 || capacity <= 0 {
 		return slo
 	}
 	ghi, shi := g(hi)
@@ -525,6 +542,48 @@ func (d *Downdrag) compatible(capacity float64) ddState {
 		}
 	}
 	_, s := g((lo + hi) / 2)
+	return s
+}
+
+// at returns the state with the neutral plane at z and the shaft below
+// mobilised from it down (the tip carrying what arrives).
+func (d *Downdrag) at(z, total float64) ddState {
+	c := d.cumulative(z)
+	return ddState{np: z, total: total, cnp: c, tip: max(float64(d.Load)+2*c-total, 0)}
+}
+
+// partial finds, above the equilibrium depth zeq, the depth where the pile
+// settles as the ground does, by bisection on
+//
+//	h(z) = δt + ∫z..tip Q/EA dz − sg(z)
+//
+// with the force below z falling by the full shaft resistance from z
+// down. h(zeq) > 0; where h(head) ≥ 0 too, the ground settles less than
+// the pile everywhere and the neutral plane is the head (no drag).
+func (d *Downdrag) partial(zeq float64) ddState {
+	head, tipZ := float64(d.Rows[0].Top), float64(d.Rows[len(d.Rows)-1].Bottom)
+	total := d.cumulative(tipZ)
+	h := func(z float64) (float64, ddState) {
+		s := d.at(z, total)
+		return d.tipMovement(s.tip) + d.shortening(s, z, tipZ) - groundAt(d.Ground, z), s
+	}
+	if hh, s := h(head); hh >= 0 {
+		return s
+	}
+	lo, hi := head, zeq
+	for range 200 {
+		mid := (lo + hi) / 2
+		hm, _ := h(mid)
+		if hm < 0 {
+			lo = mid
+		} else {
+			hi = mid
+		}
+		if hi-lo <= 1e-12*max(1, tipZ) {
+			break
+		}
+	}
+	_, s := h((lo + hi) / 2)
 	return s
 }
 
