@@ -6,7 +6,7 @@ var (
 	// Fellenius2004 is the unified design method: force equilibrium at the
 	// neutral plane and settlement compatibility there.
 	Fellenius2004 = Source{Key: "fellenius2004", Authors: "Fellenius, B.H.", Year: 2004,
-		Title: "Unified design of piled foundations with emphasis on settlement analysis",
+		Title:       "Unified design of piled foundations with emphasis on settlement analysis",
 		Publication: "Current Practice and Future Trends in Deep Foundations, ASCE Geotechnical Special Publication 125, 253-275"}
 	// DasNSF is Das's section on negative skin friction, read in a stored
 	// excerpt of the chapter on pile foundations: §11.23, p. 651-652,
