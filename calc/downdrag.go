@@ -279,7 +279,7 @@ func runDowndrag(f *File, in *Inputs, prof *profile.Profile, res *Result) ([]cit
 	if di.hasTip {
 		out.TipFrom, out.TipCurve = "given", ""
 		if c := float64(b.Tip.Qp) * float64(b.Tip.Area); float64(di.tipForce) > c {
-			return nil, prob(pre+".tip_force", "%v is above the tip resistance Qp·Ab = %v", di.tipForce, units.Force(c))
+			return nil, prob(pre+".tip_force", "%.1f kN is above the tip resistance Qp·Ab = %.1f kN", di.tipForce.KN(), c/1e3)
 		}
 	}
 	out.DowndragResult, err = dd.Solve()

@@ -171,6 +171,18 @@ var badCases = []badCase{
 	{file: "316-reliability-no-parameters", want: []string{"reliability.parameters (line 28)", "at least one"}},
 	{file: "317-reliability-same-value-twice", want: []string{"reliability.parameters[1].key (line 30)", "same value"}},
 	{file: "318-unknown-soil", want: []string{"ground.layers[0].soil (line 7)", "want one of gravel, sand, silt, clay, peat, fill"}},
+	{file: "400-downdrag-depth-repeated", want: []string{"downdrag.ground_settlement[2].depth (line 32)", "function of depth"}},
+	{file: "401-downdrag-depths-not-increasing", want: []string{"downdrag.ground_settlement[2].depth (line 32)", "depths must increase"}},
+	{file: "402-downdrag-fill-negative-thickness", want: []string{"downdrag.fill.thickness (line 28)", "outside 0 to 100 m"}},
+	{file: "403-downdrag-negative-settlement", want: []string{"downdrag.ground_settlement[1].settlement (line 31)", "outside 0 to"}},
+	{file: "404-downdrag-water-raised", want: []string{"downdrag.water_depth_after (line 28)", "above the water table"}},
+	{file: "405-downdrag-nothing-after", want: []string{"downdrag (line 28)", "nothing placed after installation"}},
+	{file: "406-downdrag-no-settlement-profile", want: []string{"downdrag.ground_settlement (line 28)", "not given"}},
+	{file: "407-downdrag-tip-force-above-capacity", want: []string{"downdrag.tip_force (line 29)", "above the tip resistance"}},
+	{file: "408-downdrag-fill-without-unit-weight", want: []string{"downdrag.fill (line 28)", "thickness and unit_weight"}},
+	{file: "409-downdrag-no-pile-modulus", want: []string{"pile.youngs_modulus", "downdrag"}},
+	{file: "410-downdrag-unknown-key", want: []string{"downdrag.settlment (line 29)", "unknown key"}},
+	{file: "411-downdrag-point-without-settlement", want: []string{"downdrag.ground_settlement[1] (line 31)", "depth and settlement"}},
 }
 
 const badTimeout = 5 * time.Second
