@@ -367,3 +367,8 @@ func downdragWarnings(f *File, in *Inputs) []string {
 	}
 	return nil
 }
+
+// DowndragPass reports whether the downdrag check passes: true without a
+// downdrag section. `qult check` and batch count a failure as a failed
+// design.
+func (r *Result) DowndragPass() bool { return r.Downdrag == nil || r.Downdrag.Pass }

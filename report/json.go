@@ -91,6 +91,7 @@ type jResult struct {
 	Settle    *jSettle     `json:"settlement,omitempty"`
 	LoadTest  *jLoadTest   `json:"load_test,omitempty"`
 	Reliab    *jReliab     `json:"reliability,omitempty"`
+	Downdrag  *jDowndrag   `json:"downdrag,omitempty"`
 	Warnings  []string     `json:"warnings"`
 	Defaults  []defaultRow `json:"defaults"`
 	Sources   []jSource    `json:"sources"`
@@ -485,6 +486,7 @@ func toJSON(r *calc.Result, o Options) *jResult {
 	}
 	j.Settle, j.LoadTest = settleJSON(r, c), loadTestJSON(r, c)
 	j.Reliab = reliabilityJSON(r, c)
+	j.Downdrag = downdragJSON(r, c)
 	return j
 }
 

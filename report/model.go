@@ -108,6 +108,7 @@ func build(r *calc.Result, o Options) *doc {
 		add(secTotals(r, c))
 		add(secDesign(r, c))
 		add(secServiceability(r, c))
+		add(secDowndrag(r, c))
 	case ViewCapacity:
 		add(secShaft(r, c))
 		add(secTip(r, c))
@@ -135,6 +136,7 @@ func build(r *calc.Result, o Options) *doc {
 		add(secWithDepth(r, c))
 		add(secSettlement(r, c))
 		add(secLoadTest(r, c))
+		add(secDowndrag(r, c))
 		add(secReliability(r, c))
 		add(secDefaults(r, c))
 	case ViewReliability:
@@ -233,6 +235,9 @@ func secSummary(r *calc.Result, c conv) section {
 			v += fmt.Sprintf(": %s at %s, no allowable given (%s)", c.sms(s.Settlement), c.fs(s.Load), s.Method)
 		}
 		it = append(it, item{"Serviceability", txt(v), ""})
+	}
+	if d := r.Downdrag; d != nil {
+		it = append(it, item{"Downdrag", txt(downdragVerdict(d, c)), ""})
 	}
 	n := len(allWarnings(r, c))
 	w := "none"

@@ -174,7 +174,7 @@ func batch(in io.Reader, out io.Writer, s batchSettings) (bad, fail int, err err
 		switch r := it.Result; {
 		case it.Err != nil:
 			bad++
-		case (r.Design != nil && !r.Design.Pass) || !r.ServiceabilityPass():
+		case (r.Design != nil && !r.Design.Pass) || !r.ServiceabilityPass() || !r.DowndragPass():
 			fail++
 		}
 		_, err := out.Write(it.Out)

@@ -118,7 +118,7 @@ func (c *cmd) calcVerb(args []string, view report.View) int {
 			c.errorf("%s: loads: not given; %s needs the characteristic loads (compression, tension)", displayName(name), c.verb)
 			return exitUsage
 		}
-		if view == viewCheck && (!res.Design.Pass || !res.ServiceabilityPass()) {
+		if view == viewCheck && (!res.Design.Pass || !res.ServiceabilityPass() || !res.DowndragPass()) {
 			code = exitFail
 		}
 		if view == viewLength && (res.Length == nil || !res.Length.Found) {
