@@ -114,6 +114,15 @@ type Layer struct {
 	RigidityIndex    Value `yaml:"rigidity_index,omitempty" json:"rigidity_index,omitempty" q:"number,0,1000000000" doc:"Rigidity index Ir (for Vesic's tip)."`
 	VolumetricStrain Value `yaml:"volumetric_strain,omitempty" json:"volumetric_strain,omitempty" q:"number,0,0.5" doc:"Vesic's average volumetric strain Δ in the plastic zone at the tip; absent: Vesic's correlation with φ′ and q′."`
 
+	// Compressibility, for one-dimensional consolidation (ground
+	// settlement under fills and drawdown, group settlement): Cc and Cr
+	// with e0 and σ′p, or the constrained modulus M = 1/mv.
+	CompressionIndex       Value `yaml:"compression_index,omitempty" json:"compression_index,omitempty" q:"number,0,10" doc:"Compression index Cc (virgin compression, per log cycle of σ′v)."`
+	RecompressionIndex     Value `yaml:"recompression_index,omitempty" json:"recompression_index,omitempty" q:"number,0,10" doc:"Recompression (swelling) index Cr, used below σ′p and on unloading."`
+	InitialVoidRatio       Value `yaml:"initial_void_ratio,omitempty" json:"initial_void_ratio,omitempty" q:"number,0,15" doc:"Initial void ratio e0 for consolidation; default the layer's void_ratio."`
+	PreconsolidationStress Value `yaml:"preconsolidation_stress,omitempty" json:"preconsolidation_stress,omitempty" q:"stress,0," doc:"Preconsolidation stress σ′p; absent: OCR·σ′v0 where ocr is given, else σ′v0 (normally consolidated)."`
+	ConstrainedModulus     Value `yaml:"constrained_modulus,omitempty" json:"constrained_modulus,omitempty" q:"stress,0," doc:"Constrained (oedometer) modulus M = 1/mv, instead of the compression indices."`
+
 	// Shaft and Tip override the methods for this layer.
 	Shaft *ShaftChoice `yaml:"shaft,omitempty" json:"shaft,omitempty"`
 	Tip   *TipChoice   `yaml:"tip,omitempty" json:"tip,omitempty"`

@@ -276,6 +276,11 @@ func (r *resolver) groundSpec(g *Ground, pre string, sys units.System) profile.S
 		ls.Nu = r.num(l.PoissonsRatio, path+".poissons_ratio", 0, 1e6)
 		ls.Ir = r.num(l.RigidityIndex, path+".rigidity_index", 0, 1e9)
 		ls.Delta = r.num(l.VolumetricStrain, path+".volumetric_strain", 0, 0.5)
+		ls.Cc = r.num(l.CompressionIndex, path+".compression_index", 0, 10)
+		ls.Cr = r.num(l.RecompressionIndex, path+".recompression_index", 0, 10)
+		ls.E0 = r.num(l.InitialVoidRatio, path+".initial_void_ratio", 0, 15)
+		ls.Pc = r.stress(l.PreconsolidationStress, path+".preconsolidation_stress")
+		ls.M = r.stress(l.ConstrainedModulus, path+".constrained_modulus")
 		// An explicit zero is a value, not "not given": where the library
 		// reads zero as absent, a zero given in the file is refused; where
 		// zero is a real state (a dry soil), it is passed on as one.
@@ -291,6 +296,9 @@ func (r *resolver) groundSpec(g *Ground, pre string, sys units.System) profile.S
 			{"youngs_modulus", l.YoungsModulus, float64(ls.E)}, {"shear_modulus", l.ShearModulus, float64(ls.G)},
 			{"poissons_ratio", l.PoissonsRatio, ls.Nu}, {"rigidity_index", l.RigidityIndex, ls.Ir},
 			{"volumetric_strain", l.VolumetricStrain, ls.Delta},
+			{"compression_index", l.CompressionIndex, ls.Cc}, {"recompression_index", l.RecompressionIndex, ls.Cr},
+			{"initial_void_ratio", l.InitialVoidRatio, ls.E0}, {"preconsolidation_stress", l.PreconsolidationStress, float64(ls.Pc)},
+			{"constrained_modulus", l.ConstrainedModulus, float64(ls.M)},
 		} {
 			if z.v.IsSet() && z.x == 0 && zeroValue(z.v) {
 				r.add(path+"."+z.key, z.v.Line, "%q: zero is not an accepted value here (it must be above 0); leave the key out if it is not known", z.v.Raw)

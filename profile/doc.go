@@ -132,4 +132,19 @@
 //   - Validation reports every problem it finds, joined with errors.Join,
 //     each naming its field path, such as
 //     "layers[2].thickness: -1 m is outside (0, ∞)".
+//
+// # Consolidation
+//
+// A layer may carry compressibility: the compression and recompression
+// indices Cc and Cr with the initial void ratio e0 and the
+// preconsolidation stress σ′p (given, or OCR·σ′v0, or σ′v0 for a normally
+// consolidated layer), or the constrained modulus M = 1/mv.
+// Layer.ConsolidationStrain gives the one-dimensional strain for a change
+// of vertical effective stress; Profile.Consolidation integrates it over
+// depth for a stress change with depth (a fill, a surcharge, a lowered
+// water table, a load spread below an equivalent raft), and
+// Profile.GroundSettlement gives the settlement of the ground at a list of
+// depths (the compression of everything below each). Layers without
+// compressibility count as incompressible and are listed as such; the
+// bottom of the profile is taken as an incompressible base.
 package profile

@@ -342,6 +342,7 @@ func (p *Profile) resolveLayer(i int, ls LayerSpec, geometryOK bool, c *collecto
 	}
 	l.OCR, l.Dr, l.N60, l.E, l.G, l.Nu, l.Ir = ls.OCR, ls.Dr, ls.N60, ls.E, ls.G, ls.Nu, ls.Ir
 	l.Delta = ls.Delta
+	p.resolveCompressibility(path, l, ls, c)
 
 	p.resolveWeights(path, l, ls, geometryOK, c)
 }

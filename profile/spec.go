@@ -126,6 +126,14 @@ type LayerSpec struct {
 	// Delta is Vesic's (1977) average volumetric strain Δ in the plastic
 	// zone around a pile tip, (0, 0.5]; zero means not given.
 	Delta float64
+
+	// Compressibility for one-dimensional consolidation (see
+	// Layer.ConsolidationStrain); zero means not given. Give Cc (with Cr
+	// where σ′p exceeds σ′v0) and e0, or the constrained modulus M, not both.
+	Cc, Cr float64      // compression and recompression indices, (0, 10]
+	E0     float64      // initial void ratio, (0, 15]; defaults to VoidRatio
+	Pc     units.Stress // preconsolidation stress σ′p, > 0; else OCR·σ′v0, else σ′v0
+	M      units.Stress // constrained (oedometer) modulus 1/mv, > 0
 }
 
 // Basis records how a layer's unit weights were obtained.
@@ -191,6 +199,11 @@ type Layer struct {
 	E, G         units.Stress
 	Nu, Ir       float64
 	Delta        float64 // Vesic's volumetric strain Δ; 0 when not given
+	// Compressibility (zero when not given): Cc, Cr and e0 with the
+	// preconsolidation stress Pc (0: from OCR, else normally
+	// consolidated), or the constrained modulus M.
+	Cc, Cr, E0 float64
+	Pc, M      units.Stress
 }
 
 // Thickness returns Bottom − Top.

@@ -32,11 +32,12 @@ func init() {
 	runners = map[string]runner{
 		"units.Parse": runParse,
 
-		"phase.Solve":                     runPhaseSolve,
-		"profile.Profile.StressesAt":      runStresses("all"),
-		"profile.Profile.EffectiveStress": runStresses("effective"),
-		"profile.Profile.TotalStress":     runStresses("total"),
-		"profile.Profile.PorePressure":    runStresses("pore"),
+		"phase.Solve":                       runPhaseSolve,
+		"profile.Profile.StressesAt":        runStresses("all"),
+		"profile.Profile.EffectiveStress":   runStresses("effective"),
+		"profile.Profile.TotalStress":       runStresses("total"),
+		"profile.Profile.PorePressure":      runStresses("pore"),
+		"profile.Layer.ConsolidationStrain": runConsolidationStrain,
 
 		"bearing.PrandtlNq":          runAngleFactor(bearing.PrandtlNq),
 		"bearing.PrandtlNc":          runAngleFactor(bearing.PrandtlNc),
@@ -255,6 +256,21 @@ func runStresses(which string) runner {
 		st, err := p.StressesAt(z)
 		return values{"total": stress(st.Total), "pore": stress(st.Pore), "effective": stress(st.Effective)}, err
 	}
+}
+
+// runConsolidationStrain gives the settlement of a layer of thickness h
+// under a uniform change of effective stress, ε·h.
+func runConsolidationStrain(a *args) (values, error) {
+	l := profile.Layer{Cc: a.optNum("cc", 0), Cr: a.optNum("cr", 0), E0: a.optNum("e0", 0),
+		Pc: units.Stress(a.optQty("pc", units.DimStress)), M: units.Stress(a.optQty("m", units.DimStress))}
+	s0 := units.Stress(a.qty("s0", units.DimStress))
+	ds := units.Stress(a.qty("ds", units.DimStress))
+	h := a.qty("h", units.DimLength)
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	eps, err := l.ConsolidationStrain(s0, ds)
+	return values{"settlement": units.Quantity{Value: eps * h, Dim: units.DimLength}}, err
 }
 
 // ---- bearing ----
