@@ -172,8 +172,14 @@ type DowndragResult struct {
 	Surcharge       units.Stress
 	WaterDepthAfter units.Length
 	HasWater        bool
-	// GroundFrom says how the ground settlement was found: "points".
-	GroundFrom string
+	// GroundFrom says how the ground settlement was found: "points" (given)
+	// or "consolidation" (the layers' one-dimensional consolidation under
+	// the change of σ′v from the ground before the loads to the ground
+	// after them); Compression is then each layer's share of the surface
+	// settlement, and GroundSurface the surface settlement.
+	GroundFrom    string
+	Compression   []profile.LayerCompression
+	GroundSurface units.Length
 	// TipFrom: "given" or "compatibility" (q-z curve TipCurve).
 	TipFrom  string
 	TipCurve string
@@ -260,10 +266,16 @@ func runDowndrag(f *File, in *Inputs, prof *profile.Profile, res *Result) ([]cit
 	if pr != nil {
 		return nil, Problems{*pr}
 	}
-	if len(di.ground) == 0 {
-		return nil, prob(pre+".ground_settlement", "not given; give the long-term ground settlement with depth as points (depth, settlement)")
-	}
+	ground := di.ground
 	out.GroundFrom = "points"
+	if len(ground) == 0 {
+		var err error
+		ground, err = consolidate(prof, after, out)
+		if err != nil {
+			return nil, prob(pre+".ground_settlement", "%v", err)
+		}
+		out.GroundFrom = "consolidation"
+	}
 	tip := settle.APITip()
 	if in.Settle != nil && in.Settle.QZ != nil {
 		tip = *in.Settle.QZ
@@ -273,7 +285,7 @@ func runDowndrag(f *File, in *Inputs, prof *profile.Profile, res *Result) ([]cit
 		return nil, prob(pre, "%v", err)
 	}
 	dd := settle.Downdrag{Rows: rows, Load: qd, EA: ea, Diameter: in.Pile.Section.Size(),
-		Tip: settle.TipSpring{Area: b.Tip.Area, Qp: b.Tip.Qp, Curve: tip}, Ground: di.ground,
+		Tip: settle.TipSpring{Area: b.Tip.Area, Qp: b.Tip.Qp, Curve: tip}, Ground: ground,
 		TipGiven: di.hasTip, TipForce: di.tipForce}
 	out.TipFrom, out.TipCurve = "compatibility", tip.ID()
 	if di.hasTip {
@@ -303,6 +315,55 @@ func runDowndrag(f *File, in *Inputs, prof *profile.Profile, res *Result) ([]cit
 	}
 	res.Downdrag = out
 	return out.Refs, nil
+}
+
+// consolidationStep is the spacing of the depths at which the ground
+// settlement is computed by consolidation (besides the profile's breaks).
+const consolidationStep = 0.25 * units.Metre
+
+// consolidate computes the ground settlement with depth by the layers'
+// one-dimensional consolidation under Δσ′v(z) = σ′v,after(z) − σ′v,before(z),
+// at the profile's breaks and every consolidationStep.
+func consolidate(before, after *profile.Profile, out *DowndragResult) ([]settle.SettlementPoint, error) {
+	some := false
+	for _, l := range before.Layers() {
+		if l.Compressibility() != profile.Incompressible {
+			some = true
+		}
+	}
+	if !some {
+		return nil, errors.New("not given, and no layer gives its compressibility (compression_index with initial_void_ratio or void_ratio, or the constrained modulus); give the ground settlement as points or the layers' compressibility")
+	}
+	ds := func(z units.Length) units.Stress {
+		s1, err1 := after.EffectiveStress(z)
+		s0, err0 := before.EffectiveStress(z)
+		if err1 != nil || err0 != nil {
+			return 0
+		}
+		return s1 - s0
+	}
+	bottom := before.Depth()
+	zs := slices.Clone(before.Breaks())
+	for z := units.Length(0); z < bottom; z += consolidationStep {
+		zs = append(zs, z)
+	}
+	zs = append(zs, bottom)
+	slices.Sort(zs)
+	zs = slices.Compact(zs)
+	s, err := before.GroundSettlement(zs, ds, nil)
+	if err != nil {
+		return nil, err
+	}
+	total, parts, err := before.Consolidation(0, bottom, ds)
+	if err != nil {
+		return nil, err
+	}
+	out.Compression, out.GroundSurface = parts, total
+	pts := make([]settle.SettlementPoint, len(zs))
+	for i := range zs {
+		pts[i] = settle.SettlementPoint{Depth: zs[i], Settlement: s[i]}
+	}
+	return pts, nil
 }
 
 // downdragCases checks each design case of the basis with the drag load:

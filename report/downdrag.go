@@ -58,7 +58,7 @@ func secDowndrag(r *calc.Result, c conv) section {
 		{"Added stress on the ground (fill + surcharge)", num(c.S(d.Surcharge)), c.uS()},
 		{"Sustained load Qd", num(c.F(d.Load)), c.uF()},
 		{"Taken from", txt(d.LoadFrom), ""},
-		{"Ground settlement with depth", txt(groundFrom(d)), ""},
+		{"Ground settlement with depth", txt(groundFrom(d, c)), ""},
 		{"Neutral plane (depth)", num(c.L(d.NeutralPlane)), c.uL()},
 		{"Drag load Qn (negative skin friction to the neutral plane)", num(c.F(d.DragLoad)), c.uF()},
 		{"Largest axial force Qd + Qn (at the neutral plane)", num(c.F(d.MaxForce)), c.uF()},
@@ -272,9 +272,9 @@ func downdragJSON(r *calc.Result, c jconv) *jDowndrag {
 	return j
 }
 
-func groundFrom(d *calc.DowndragResult) string {
+func groundFrom(d *calc.DowndragResult, c conv) string {
 	if d.GroundFrom == "points" {
 		return "given as points (downdrag.ground_settlement)"
 	}
-	return d.GroundFrom
+	return "one-dimensional consolidation of the layers under the change of σ′v (surface settlement " + c.sms(d.GroundSurface) + ")"
 }

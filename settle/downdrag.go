@@ -587,16 +587,27 @@ func (d *Downdrag) partial(zeq float64) ddState {
 	return s
 }
 
-// points lists the force and settlement at the row ends and the neutral
-// plane.
+// PointSpacing is the largest spacing of DowndragResult.Points within a
+// row: 1 m.
+const PointSpacing = 1.0
+
+// points lists the force and settlement at the row ends, the neutral
+// plane and between, at most PointSpacing apart.
 func (d *Downdrag) points(s ddState, res DowndragResult) []ForcePoint {
 	zs := []float64{float64(d.Rows[0].Top)}
 	for _, r := range d.Rows {
-		b := float64(r.Bottom)
-		if s.np > zs[len(zs)-1] && s.np < b {
-			zs = append(zs, s.np)
+		t, b := float64(r.Top), float64(r.Bottom)
+		n := max(1, int(math.Ceil((b-t)/PointSpacing-1e-9)))
+		for k := 1; k <= n; k++ {
+			z := t + (b-t)*float64(k)/float64(n)
+			if k == n {
+				z = b
+			}
+			if s.np > zs[len(zs)-1] && s.np < z {
+				zs = append(zs, s.np)
+			}
+			zs = append(zs, z)
 		}
-		zs = append(zs, b)
 	}
 	tipZ := zs[len(zs)-1]
 	out := make([]ForcePoint, 0, len(zs))
