@@ -191,6 +191,11 @@ type DowndragResult struct {
 	Cases []DowndragCase
 	Pass  bool
 	Refs  []cite.Ref
+	// LengthFound, Length and TipDepth: the shortest pile, on the grid of
+	// the required-length search from the ordinary required length down,
+	// that passes the downdrag check too (with a design basis and loads).
+	LengthFound      bool
+	Length, TipDepth units.Length
 }
 
 // DowndragCase is one design case with the drag load: the design action
@@ -244,15 +249,6 @@ func runDowndrag(f *File, in *Inputs, prof *profile.Profile, res *Result) ([]cit
 		}
 		return nil, translate(f, err)
 	}
-	a, err := pile.NewAnalysis(after, in.Pile, in.Methods, nil)
-	if err != nil {
-		return nil, translate(f, err)
-	}
-	b, err := a.Breakdown()
-	if err != nil {
-		return nil, translate(f, err)
-	}
-	out.Rows = b.Rows
 	// The sustained load.
 	qd, from := di.load, pre+".load"
 	if !di.hasLoad {
@@ -280,40 +276,78 @@ func runDowndrag(f *File, in *Inputs, prof *profile.Profile, res *Result) ([]cit
 	if in.Settle != nil && in.Settle.QZ != nil {
 		tip = *in.Settle.QZ
 	}
-	rows, err := settle.RowsFromBreakdown(b)
-	if err != nil {
-		return nil, prob(pre, "%v", err)
-	}
-	dd := settle.Downdrag{Rows: rows, Load: qd, EA: ea, Diameter: in.Pile.Section.Size(),
-		Tip: settle.TipSpring{Area: b.Tip.Area, Qp: b.Tip.Qp, Curve: tip}, Ground: ground,
-		TipGiven: di.hasTip, TipForce: di.tipForce}
 	out.TipFrom, out.TipCurve = "compatibility", tip.ID()
 	if di.hasTip {
 		out.TipFrom, out.TipCurve = "given", ""
-		if c := float64(b.Tip.Qp) * float64(b.Tip.Area); float64(di.tipForce) > c {
-			return nil, prob(pre+".tip_force", "%.1f kN is above the tip resistance Qp·Ab = %.1f kN", di.tipForce.KN(), c/1e3)
-		}
 	}
-	out.DowndragResult, err = dd.Solve()
-	if err != nil {
-		path, msg := splitPath(err.Error())
-		return nil, prob(pre+"."+path, "%s", msg)
-	}
-	out.Refs = append(dd.Refs(), cite.Ref{Source: cite.DasNSF, Where: "Eq. 11.125: fn = K′σ′o tan δ′"})
-	if in.Basis != nil {
-		cs, err := downdragCases(f, in, after, out, di)
+	// solve runs the unified method and the design cases for pile p.
+	solve := func(p pile.Pile, r *DowndragResult) error {
+		a, err := pile.NewAnalysis(after, p, in.Methods, nil)
 		if err != nil {
-			return nil, err
+			return translate(f, err)
 		}
-		out.Cases = cs
-		for _, c := range cs {
-			out.Pass = out.Pass && c.Pass
+		b, err := a.Breakdown()
+		if err != nil {
+			return translate(f, err)
 		}
+		r.Rows = b.Rows
+		rows, err := settle.RowsFromBreakdown(b)
+		if err != nil {
+			return prob(pre, "%v", err)
+		}
+		dd := settle.Downdrag{Rows: rows, Load: qd, EA: ea, Diameter: p.Section.Size(),
+			Tip: settle.TipSpring{Area: b.Tip.Area, Qp: b.Tip.Qp, Curve: tip}, Ground: ground,
+			TipGiven: di.hasTip, TipForce: di.tipForce}
+		if di.hasTip {
+			if c := float64(b.Tip.Qp) * float64(b.Tip.Area); float64(di.tipForce) > c {
+				return prob(pre+".tip_force", "%.1f kN is above the tip resistance Qp·Ab = %.1f kN", di.tipForce.KN(), c/1e3)
+			}
+		}
+		r.DowndragResult, err = dd.Solve()
+		if err != nil {
+			path, msg := splitPath(err.Error())
+			return prob(pre+"."+path, "%s", msg)
+		}
+		r.Refs = append(dd.Refs(), cite.Ref{Source: cite.DasNSF, Where: "Eq. 11.125: fn = K′σ′o tan δ′"})
+		r.Pass = !r.NoEquilibrium
+		if in.Basis != nil {
+			cs, err := downdragCases(f, in, after, p, r, di)
+			if err != nil {
+				return err
+			}
+			r.Cases = cs
+			for _, c := range cs {
+				r.Pass = r.Pass && c.Pass
+			}
+		}
+		return nil
 	}
-	if out.NoEquilibrium {
-		out.Pass = false
+	if err := solve(in.Pile, out); err != nil {
+		return nil, err
 	}
 	res.Downdrag = out
+	// The shortest pile that passes the ordinary check and the downdrag
+	// check: from the ordinary required length down the same grid.
+	if l := res.Length; l != nil && l.Found && in.Basis != nil && l.Step > 0 {
+		for tipZ := l.TipDepth; tipZ <= l.MaxTip+1e-9; tipZ += l.Step {
+			p := in.Pile
+			p.Length = tipZ - p.HeadDepth
+			var r DowndragResult
+			if err := solve(p, &r); err != nil {
+				res.Warnings = append(res.Warnings, fmt.Sprintf("the required length with downdrag was not found: at a tip of %v: %v", tipZ, err))
+				break
+			}
+			if r.Pass {
+				out.LengthFound, out.Length, out.TipDepth = true, p.Length, tipZ
+				break
+			}
+		}
+		if !out.LengthFound {
+			res.Warnings = append(res.Warnings, "no pile within the search passes the downdrag check: the required length of the ordinary check does not hold with the drag load")
+		} else if out.Length > l.Length {
+			res.Warnings = append(res.Warnings, fmt.Sprintf("with the drag load the pile must be %v long (tip at %v), longer than the %v of the ordinary check", out.Length, out.TipDepth, l.Length))
+		}
+	}
 	return out.Refs, nil
 }
 
@@ -370,19 +404,19 @@ func consolidate(before, after *profile.Profile, out *DowndragResult) ([]settle.
 // the design resistance is that of the pile with no shaft resistance
 // above the neutral plane (the case's own multipliers and soil factors),
 // the action the factored head load plus the factored drag load.
-func downdragCases(f *File, in *Inputs, after *profile.Profile, out *DowndragResult, di *downdragInputs) ([]DowndragCase, error) {
-	cases, err := in.Basis.Cases(in.Pile.Installation)
+func downdragCases(f *File, in *Inputs, after *profile.Profile, p pile.Pile, out *DowndragResult, di *downdragInputs) ([]DowndragCase, error) {
+	cases, err := in.Basis.Cases(p.Installation)
 	if err != nil {
 		return nil, translate(f, err)
 	}
 	m := in.Methods
-	head := in.Pile.HeadDepth
+	head := p.HeadDepth
 	if out.NeutralPlane > head {
 		m.NoShaft = append(slices.Clone(m.NoShaft), pile.Zone{Top: head, Bottom: out.NeutralPlane})
 	}
 	var cs []DowndragCase
 	for _, c := range cases {
-		a, err := pile.NewAnalysis(after, in.Pile, m, &pile.Options{Case: &c})
+		a, err := pile.NewAnalysis(after, p, m, &pile.Options{Case: &c})
 		if err != nil {
 			return nil, translate(f, err)
 		}
@@ -396,7 +430,7 @@ func downdragCases(f *File, in *Inputs, after *profile.Profile, out *DowndragRes
 			dc.DragFactor, dc.DragFactorFrom = di.factor, "downdrag.drag_load_factor"
 		case in.Basis.ID() == "safety-factor" || in.Basis.ID() == "en1997":
 			dc.DragFactor, dc.DragFactorFrom = c.Permanent, "the factor on permanent actions (the drag load is a permanent action, EN 1997-1 7.3.2.2)"
-		case !in.Pile.Installation.Driven():
+		case !p.Installation.Driven():
 			dc.DragFactor, dc.DragFactorFrom = aashtoDDDrilled, "AASHTO LRFD Table 3.4.1-2, DD maximum for drilled shafts (from memory)"
 		default:
 			dc.DragFactor, dc.DragFactorFrom = aashtoDDDriven, "AASHTO LRFD Table 3.4.1-2, DD maximum for piles, α method (from memory)"

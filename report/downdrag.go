@@ -75,6 +75,12 @@ func secDowndrag(r *calc.Result, c conv) section {
 		{"Head settlement (pile's own + shortening above the neutral plane)", num(c.sm(d.HeadSettlement)), c.uSm()},
 		{"Downdrag check", txt(downdragVerdict(d, c)), ""},
 	}
+	switch {
+	case d.LengthFound:
+		it = append(it, item{"Required length with the drag load", txt(fmt.Sprintf("%s (tip at %s)", c.ls(d.Length), c.ls(d.TipDepth))), ""})
+	case r.Length != nil && r.Length.Found && len(d.Cases) > 0:
+		it = append(it, item{"Required length with the drag load", txt("none within the search"), ""})
+	}
 	var notes []string
 	if d.TipFull {
 		notes = append(notes, "The tip is fully mobilised: the ground drags the pile further than the q-z curve's full mobilisation (the toe penetrates; settlement governs).")
@@ -221,8 +227,15 @@ type jDowndrag struct {
 	AllToTip        bool             `json:"all_to_tip"`
 	NoEquilibrium   bool             `json:"no_equilibrium"`
 	Pass            bool             `json:"pass"`
+	RequiredLength  *jDowndragLength `json:"required_length"`
 	Points          []jDowndragPoint `json:"with_depth"`
 	Cases           []jDowndragCase  `json:"cases"`
+}
+
+type jDowndragLength struct {
+	Found    bool `json:"found"`
+	Length   *qty `json:"length"`
+	TipDepth *qty `json:"tip_depth"`
 }
 
 type jDowndragPoint struct {
@@ -259,6 +272,13 @@ func downdragJSON(r *calc.Result, c jconv) *jDowndrag {
 		PileAtNP: sm(d.PileAtNP), Mismatch: sm(d.Mismatch), HeadSettlement: sm(d.HeadSettlement),
 		Dragged: d.Dragged, TipFull: d.TipFull, AllToTip: d.AllToTip, NoEquilibrium: d.NoEquilibrium, Pass: d.Pass,
 		Points: []jDowndragPoint{}, Cases: []jDowndragCase{}}
+	if r.Length != nil && r.Length.Found && len(d.Cases) > 0 {
+		j.RequiredLength = &jDowndragLength{Found: d.LengthFound}
+		if d.LengthFound {
+			l, t := c.L(d.Length), c.L(d.TipDepth)
+			j.RequiredLength.Length, j.RequiredLength.TipDepth = &l, &t
+		}
+	}
 	if d.HasWater {
 		q := c.L(d.WaterDepthAfter)
 		j.WaterDepthAfter = &q
