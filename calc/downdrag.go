@@ -316,6 +316,13 @@ func runDowndrag(f *File, in *Inputs, prof *profile.Profile, res *Result) ([]cit
 				return err
 			}
 			r.Cases = cs
+			r.Refs = append(r.Refs, cite.Ref{Source: cite.TanFellenius2016, Where: "the code treatment: the drag force as a load, no shaft resistance above the neutral plane"})
+			switch id := in.Basis.ID(); {
+			case id == "en1997":
+				r.Refs = append(r.Refs, cite.Ref{Source: cite.EN1997, Where: "7.3.2.2: downdrag as a permanent action"})
+			case id != "safety-factor" && !di.hasFactor:
+				r.Refs = append(r.Refs, cite.Ref{Source: cite.AASHTO2020, Where: "Table 3.4.1-2: load factor on downdrag DD (from memory)"})
+			}
 			for _, c := range cs {
 				r.Pass = r.Pass && c.Pass
 			}

@@ -41,7 +41,7 @@ func TestCatalogueKeysUnique(t *testing.T) {
 		Janbu1976, Skempton1951, API2011, ONeillReese1999, Brown2010, Hannigan2016, Jaky1944,
 		MayneKulhawy1982, Kulhawy1984, Burland1973, Tomlinson1957, VijayvergiyaFocht1972,
 		TomlinsonWoodward2008, EN1997, AASHTO2020, Brown2018, BondHarris2008,
-		Fellenius2004, DasNSF, Bowles1982}
+		Fellenius2004, DasNSF, Bowles1982, TanFellenius2016}
 	seen := map[string]bool{}
 	for _, s := range all {
 		if s.Key == "" || s.Authors == "" || s.Year == 0 || s.Title == "" {

@@ -14,6 +14,12 @@ var (
 	// The edition is the one whose §11.23 begins on p. 651.
 	DasNSF = Source{Key: "das-pfe-nsf", Authors: "Das, B.M.", Year: 2007,
 		Title: "Principles of Foundation Engineering, §11.23 Negative skin friction", Publication: "6th ed., Thomson, Toronto (edition from memory; the stored excerpt shows §11.23 on p. 651-652)"}
+	// TanFellenius2016 compares the code treatment of the drag force (a
+	// load factored up, no shaft resistance above the neutral plane, the
+	// positive shaft resistance below factored down: Singapore CP4, BS 8004,
+	// EN 1997-1) with the unified method (abstract read).
+	TanFellenius2016 = Source{Key: "tan-fellenius2016", Authors: "Tan, S.A., Fellenius, B.H.", Year: 2016,
+		Title: "Negative skin friction pile concepts with soil-structure interaction", Publication: "Geotechnical Research 3(4), 137-147"}
 	// Bowles1982 is the neutral depth of a friction pile under a granular
 	// fill over consolidating clay, as quoted with Das's equations in
 	// course notes (QUT ENB371, week 12 practice questions, Appendix A).
