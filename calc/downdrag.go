@@ -168,8 +168,12 @@ type DowndragResult struct {
 	// LoadFrom names where the sustained load came from.
 	LoadFrom string
 	// Surcharge is the stress the fill and the surcharge add on the
-	// ground; WaterDepthAfter the water table after (HasWater).
+	// ground; FillThickness, FillUnitWeight and SurchargeAfter its parts
+	// as given; WaterDepthAfter the water table after (HasWater).
 	Surcharge       units.Stress
+	FillThickness   units.Length
+	FillUnitWeight  units.UnitWeight
+	SurchargeAfter  units.Stress
 	WaterDepthAfter units.Length
 	HasWater        bool
 	// GroundFrom says how the ground settlement was found: "points" (given)
@@ -224,7 +228,8 @@ func runDowndrag(f *File, in *Inputs, prof *profile.Profile, res *Result) ([]cit
 	prob := func(path, format string, args ...any) error {
 		return Problems{{Path: path, Line: lineOf(f, path), Msg: fmt.Sprintf(format, args...)}}
 	}
-	out := &DowndragResult{Surcharge: units.Stress(float64(di.fillT)*float64(di.fillW)) + di.surcharge, Pass: true}
+	out := &DowndragResult{Surcharge: units.Stress(float64(di.fillT)*float64(di.fillW)) + di.surcharge, Pass: true,
+		FillThickness: di.fillT, FillUnitWeight: di.fillW, SurchargeAfter: di.surcharge}
 	// The ground after the loads.
 	spec := in.Ground
 	spec.Surcharge += out.Surcharge

@@ -37,17 +37,14 @@ func secDowndrag(r *calc.Result, c conv) section {
 		return section{}
 	}
 	var after []string
-	if in := r.Input; in != nil && in.Downdrag != nil {
-		dd := in.Downdrag
-		if dd.Fill != nil {
-			after = append(after, fmt.Sprintf("fill %s of %s", dd.Fill.Thickness.Raw, dd.Fill.UnitWeight.Raw))
-		}
-		if dd.Surcharge.IsSet() {
-			after = append(after, "surcharge "+dd.Surcharge.Raw)
-		}
-		if dd.WaterDepthAfter.IsSet() {
-			after = append(after, "water table lowered to "+dd.WaterDepthAfter.Raw)
-		}
+	if d.FillThickness > 0 {
+		after = append(after, fmt.Sprintf("fill %s of %s %s", c.ls(d.FillThickness), fmtNum(c.G(d.FillUnitWeight), sig), c.uG()))
+	}
+	if d.SurchargeAfter > 0 {
+		after = append(after, fmt.Sprintf("surcharge %s %s", fmtNum(c.S(d.SurchargeAfter), sig), c.uS()))
+	}
+	if d.HasWater {
+		after = append(after, "water table lowered to "+c.ls(d.WaterDepthAfter))
 	}
 	placed := "nothing but the ground settlement given"
 	if len(after) > 0 {
