@@ -355,15 +355,22 @@ func (d *Downdrag) shortening(s ddState, a, b float64) float64 {
 			}
 		}
 	}
-	if s.np > a && s.np < b {
-		// keep the cuts sorted
-		k := len(cuts)
-		for k > 0 && cuts[k-1] > s.np {
+	insert := func(z float64) {
+		if !(z > a && z < b) {
+			return
+		}
+		k := len(cuts) // keep the cuts sorted
+		for k > 0 && cuts[k-1] > z {
 			k--
 		}
-		if cuts[k-1] != s.np {
-			cuts = append(cuts[:k], append([]float64{s.np}, cuts[k:]...)...)
+		if cuts[k-1] != z {
+			cuts = append(cuts[:k], append([]float64{z}, cuts[k:]...)...)
 		}
+	}
+	insert(s.np)
+	// Where the force below the neutral plane falls to zero it has a kink.
+	if zero := float64(d.Load) + 2*s.cnp; zero < s.total {
+		insert(d.depthOf(zero))
 	}
 	cuts = append(cuts, b)
 	var sum float64
@@ -477,25 +484,11 @@ func (d Downdrag) Solve() (DowndragResult, error) {
 // friction: Q falls from Qd at the head by the shaft resistance mobilised
 // from the head down, to max(Qd − Rs, 0) at the tip (all the shaft
 // resistance above a depth taken as mobilised: the upper bound of the
-// shortening for the head load).
+// shortening for the head load). It is the shortening with the neutral
+// plane at the head.
 func (d *Downdrag) undraggedShortening(a, b float64) float64 {
-	q := func(z float64) float64 { return max(float64(d.Load)-d.cumulative(z), 0) }
-	var sum float64
-	for _, r := range d.Rows {
-		z0, z1 := max(float64(r.Top), a), min(float64(r.Bottom), b)
-		if z1 <= z0 {
-			continue
-		}
-		// Q is piecewise quadratic; a kink where it reaches zero makes
-		// Simpson's rule approximate there, so split each piece in 8.
-		const n = 8
-		h := (z1 - z0) / n
-		for k := range n {
-			x0 := z0 + float64(k)*h
-			sum += h / 6 * (q(x0) + 4*q(x0+h/2) + q(x0+h))
-		}
-	}
-	return sum / float64(d.EA)
+	total := d.cumulative(float64(d.Rows[len(d.Rows)-1].Bottom))
+	return d.shortening(ddState{np: float64(d.Rows[0].Top), total: total}, a, b)
 }
 
 // compatible finds the mobilised tip force at which the pile settles with
@@ -588,8 +581,11 @@ func (d *Downdrag) partial(zeq float64) ddState {
 }
 
 // PointSpacing is the largest spacing of DowndragResult.Points within a
-// row: 1 m.
-const PointSpacing = 1.0
+// row: 1 m, but at most maxPointsPerRow points in a row.
+const (
+	PointSpacing    = 1.0
+	maxPointsPerRow = 200
+)
 
 // points lists the force and settlement at the row ends, the neutral
 // plane and between, at most PointSpacing apart.
@@ -597,7 +593,7 @@ func (d *Downdrag) points(s ddState, res DowndragResult) []ForcePoint {
 	zs := []float64{float64(d.Rows[0].Top)}
 	for _, r := range d.Rows {
 		t, b := float64(r.Top), float64(r.Bottom)
-		n := max(1, int(math.Ceil((b-t)/PointSpacing-1e-9)))
+		n := int(min(max(1, math.Ceil((b-t)/PointSpacing-1e-9)), maxPointsPerRow))
 		for k := 1; k <= n; k++ {
 			z := t + (b-t)*float64(k)/float64(n)
 			if k == n {

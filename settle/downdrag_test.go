@@ -223,6 +223,16 @@ func TestDowndragShortening(t *testing.T) {
 	if want := (qd*np + p*fs*np*np/2) / ea; rel(float64(res.ShorteningAbove), want) > 1e-12 {
 		t.Errorf("shortening above NP %.6g m, want %.6g m", float64(res.ShorteningAbove), want)
 	}
+	// Without ground settlement the head load is shed from the head down:
+	// Q = Qd − p·fs·z to z0 = Qd/(p·fs), so ∫Q/EA = Qd²/(2·p·fs·EA).
+	dd.Ground = nil
+	res, err = dd.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if want := qd * qd / (2 * p * fs * ea); rel(float64(res.ShorteningAbove), want) > 1e-12 {
+		t.Errorf("no settlement: shortening %.6g m, want %.6g m", float64(res.ShorteningAbove), want)
+	}
 }
 
 func TestDowndragBadInput(t *testing.T) {
@@ -378,4 +388,76 @@ func TestPropMaxForceAtNeutralPlane(t *testing.T) {
 			r.Fatalf("compatibility: mismatch %v m", res.Mismatch)
 		}
 	})
+}
+
+// TestDowndragPartialOracle: where the ground settles less at the
+// equilibrium depth than the pile shortens, the neutral plane is where the
+// pile and the ground settle alike, the force below it falling by the
+// full shaft resistance from it down. An oracle kept here: a scan of depths
+// for the change of sign of (∫Q/EA by the midpoint rule) − sg(z), with
+// C(z) = p·∫fs by the same midpoint rule, refined by bisection.
+func TestDowndragPartialOracle(t *testing.T) {
+	d := 0.4
+	p := math.Pi * d
+	ea := 30e9 * math.Pi / 4 * d * d
+	qd := 600e3
+	type row struct{ t, b, f0, f1 float64 }
+	rows := []row{{0, 12, 10e3, 25e3}, {12, 24, 40e3, 80e3}}
+	fs := func(z float64) float64 {
+		for _, r := range rows {
+			if z <= r.b {
+				return r.f0 + (r.f1-r.f0)*(z-r.t)/(r.b-r.t)
+			}
+		}
+		return 0
+	}
+	const n = 4000
+	c := func(z float64) float64 { // p·∫0..z fs by the midpoint rule
+		h, s := z/n, 0.0
+		for i := range n {
+			s += fs((float64(i) + 0.5) * h)
+		}
+		return p * s * h
+	}
+	sg := func(z float64) float64 { return max(0.15*(1-z/12), 0) }
+	h := func(z float64) float64 {
+		qm, cz := qd+c(z), c(z)
+		const m = 400
+		dz, s := (24-z)/m, 0.0
+		for i := range m {
+			a := z + (float64(i)+0.5)*dz
+			s += max(qm-(c(a)-cz), 0) * dz
+		}
+		return s/ea - sg(z)
+	}
+	lo, hi := 0.0, 12.0
+	for range 40 {
+		mid := (lo + hi) / 2
+		if h(mid) < 0 {
+			lo = mid
+		} else {
+			hi = mid
+		}
+	}
+	zOracle := (lo + hi) / 2
+	dd := Downdrag{
+		Rows: []ShaftRow{{Top: 0, Bottom: 12, Perimeter: units.Length(p), FsTop: 10e3, FsBottom: 25e3},
+			{Top: 12, Bottom: 24, Perimeter: units.Length(p), FsTop: 40e3, FsBottom: 80e3}},
+		Load: units.Force(qd), EA: units.Force(ea), Diameter: units.Length(d),
+		Tip:    TipSpring{Area: units.Circle(units.Length(d)), Qp: 6e6, Curve: APITip()},
+		Ground: []SettlementPoint{{0, 0.15}, {12, 0}},
+	}
+	res, err := dd.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if math.Abs(float64(res.NeutralPlane)-zOracle) > 1e-3 {
+		t.Errorf("neutral plane %.5f m, oracle %.5f m", float64(res.NeutralPlane), zOracle)
+	}
+	if want := c(zOracle); math.Abs(float64(res.DragLoad)-want) > 1e-3*want {
+		t.Errorf("drag load %.4g N, oracle %.4g N", float64(res.DragLoad), want)
+	}
+	if res.TipForce != 0 {
+		t.Errorf("tip force %v, want 0 (the force is shed before the tip)", res.TipForce)
+	}
 }
