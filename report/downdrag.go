@@ -295,3 +295,21 @@ func groundFrom(d *calc.DowndragResult, c conv) string {
 	}
 	return "one-dimensional consolidation of the layers under the change of σ′v (surface settlement " + c.sms(d.GroundSurface) + ")"
 }
+
+// secDowndragLength is the required length with the drag load, for the
+// length view.
+func secDowndragLength(r *calc.Result, c conv) section {
+	d := r.Downdrag
+	if d == nil || r.Length == nil || !r.Length.Found || len(d.Cases) == 0 {
+		return section{}
+	}
+	v := "none within the search: no pile passes the downdrag check"
+	if d.LengthFound {
+		v = fmt.Sprintf("%s (tip at %s)", c.ls(d.Length), c.ls(d.TipDepth))
+	}
+	return section{heading: "Required length with the drag load", blocks: []block{{items: []item{
+		{"Required length (ordinary check)", txt(c.ls(r.Length.Length)), ""},
+		{"Required length with the drag load", txt(v), ""},
+		{"Neutral plane of the pile as given", txt(c.ls(d.NeutralPlane)), ""},
+	}}, {para: "The shortest pile on the grid of the search, from the ordinary required length down, that also passes the downdrag check: Ed = γG·G + γQ·Q + γDD·Qn against the design resistance with no shaft resistance above the neutral plane."}}}
+}

@@ -117,6 +117,7 @@ func build(r *calc.Result, o Options) *doc {
 		add(secDefaults(r, c))
 	case ViewLength:
 		add(secLength(r, c))
+		add(secDowndragLength(r, c))
 		add(secWithDepth(r, c))
 	case ViewReport:
 		// The summary a reviewer reads first, then the warnings, then the

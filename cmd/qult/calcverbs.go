@@ -121,7 +121,7 @@ func (c *cmd) calcVerb(args []string, view report.View) int {
 		if view == viewCheck && (!res.Design.Pass || !res.ServiceabilityPass() || !res.DowndragPass()) {
 			code = exitFail
 		}
-		if view == viewLength && (res.Length == nil || !res.Length.Found) {
+		if view == viewLength && (res.Length == nil || !res.Length.Found || res.Downdrag != nil && len(res.Downdrag.Cases) > 0 && !res.Downdrag.LengthFound) {
 			code = exitFail
 		}
 	case viewSettle:
