@@ -160,15 +160,25 @@ func downdragFigures(s *section, r *calc.Result, c conv) error {
 		return nil
 	}
 	var down, up, force, ground, pileS plotter.XYs
+	// The two curves are drawn out to 1.5 times the larger of the largest
+	// axial force and the force from the tip at the head, so that the
+	// crossing stays readable.
+	xcap := 1.5 * max(c.F(d.MaxForce), c.F(d.Points[0].Up))
 	xmax, smax := 0.0, 0.0
 	for _, p := range d.Points {
 		z := -c.L(p.Depth)
-		down = append(down, plotter.XY{X: c.F(p.Down), Y: z})
-		up = append(up, plotter.XY{X: c.F(p.Up), Y: z})
+		if x := c.F(p.Down); x <= xcap {
+			down = append(down, plotter.XY{X: x, Y: z})
+			xmax = max(xmax, x)
+		}
+		if x := c.F(p.Up); x <= xcap {
+			up = append(up, plotter.XY{X: x, Y: z})
+			xmax = max(xmax, x)
+		}
 		force = append(force, plotter.XY{X: c.F(p.Force), Y: z})
 		ground = append(ground, plotter.XY{X: c.sm(p.Ground), Y: z})
 		pileS = append(pileS, plotter.XY{X: c.sm(p.Pile), Y: z})
-		xmax = max(xmax, c.F(p.Down), c.F(p.Up))
+		xmax = max(xmax, c.F(p.Force))
 		smax = max(smax, c.sm(p.Ground), c.sm(p.Pile))
 	}
 	dash := []vg.Length{vg.Points(6), vg.Points(3)}
