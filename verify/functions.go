@@ -881,7 +881,8 @@ func runAASHTO(preset func() pile.LRFD, inst pile.Installation) runner {
 // uniform unit shaft resistance fs. The tip force is given (tip_force,
 // default 0) and the ground settles (a profile falling from 0.1 m at the
 // head to 0 at the tip), so that the neutral plane is the force
-// equilibrium.
+// equilibrium; or, with tip_capacity, the tip force is found by settlement
+// compatibility on a rigid pile (see below).
 func runDowndrag(a *args) (values, error) {
 	L := a.qty("length", units.DimLength)
 	d := a.qty("diameter", units.DimLength)
@@ -904,6 +905,20 @@ func runDowndrag(a *args) (values, error) {
 		dd.Rows = []settle.ShaftRow{{Top: 0, Bottom: units.Length(hf), Perimeter: units.Length(p)},
 			{Top: units.Length(hf), Bottom: units.Length(L), Perimeter: units.Length(p), FsTop: fn(0), FsBottom: fn(L - hf)}}
 	}
+	if a.has("tip_capacity") {
+		// Settlement compatibility on a rigid pile: a linear q-z curve to
+		// full mobilisation at qz_full, the ground settling linearly from
+		// ground_settlement_head at the head to 0 at ground_settlement_depth.
+		zf := a.qty("qz_full", units.DimLength)
+		curve, err := settle.Points([]float64{0, zf}, []float64{0, 1}, false)
+		if err != nil {
+			return nil, err
+		}
+		dd.TipGiven, dd.EA = false, 1e18
+		dd.Tip = settle.TipSpring{Area: 1, Qp: units.Stress(a.qty("tip_capacity", units.DimForce)), Curve: curve}
+		dd.Ground = []settle.SettlementPoint{{Depth: 0, Settlement: units.Length(a.qty("ground_settlement_head", units.DimLength))},
+			{Depth: units.Length(a.qty("ground_settlement_depth", units.DimLength)), Settlement: 0}}
+	}
 	if err := a.done(); err != nil {
 		return nil, err
 	}
@@ -912,5 +927,6 @@ func runDowndrag(a *args) (values, error) {
 		return nil, err
 	}
 	return values{"neutral_plane": length(r.NeutralPlane), "neutral_depth_below_fill": length(r.NeutralPlane - units.Length(hf)),
-		"drag_load": force(r.DragLoad), "max_force": force(r.MaxForce)}, nil
+		"drag_load": force(r.DragLoad), "max_force": force(r.MaxForce), "tip_force": force(r.TipForce),
+		"ground_settlement_at_np": length(r.GroundAtNP)}, nil
 }
