@@ -183,6 +183,8 @@ var badCases = []badCase{
 	{file: "409-downdrag-no-pile-modulus", want: []string{"pile.youngs_modulus", "downdrag"}},
 	{file: "410-downdrag-unknown-key", want: []string{"downdrag.settlment (line 29)", "unknown key"}},
 	{file: "411-downdrag-point-without-settlement", want: []string{"downdrag.ground_settlement[1] (line 31)", "depth and settlement"}},
+	{file: "412-downdrag-negative-depth", want: []string{"downdrag.ground_settlement[0].depth (line 30)", "outside 0 to"}},
+	{file: "413-downdrag-drag-factor-out-of-range", want: []string{"downdrag.drag_load_factor (line 29)", "outside 0 to 10"}},
 }
 
 const badTimeout = 5 * time.Second
