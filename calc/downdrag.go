@@ -46,7 +46,7 @@ type Downdrag struct {
 	WaterDepthAfter  Value                   `yaml:"water_depth_after,omitempty" json:"water_depth_after,omitempty" q:"length,0," doc:"Depth of the water table after a lowering that follows installation; at or below ground.water_depth."`
 	GroundSettlement []GroundSettlementPoint `yaml:"ground_settlement,omitempty" json:"ground_settlement,omitempty" doc:"Long-term ground settlement with depth, as points with depths increasing (linear between them, constant beyond the ends): give a point of zero settlement at the bottom of the compressible layers."`
 	TipForce         Value                   `yaml:"tip_force,omitempty" json:"tip_force,omitempty" q:"force,0," doc:"Mobilised tip resistance Rt,mob, given; absent: found so that the pile settles with the ground at the neutral plane (q-z curve of settlement.q_z, or the API curve)."`
-	DragLoadFactor   Value                   `yaml:"drag_load_factor,omitempty" json:"drag_load_factor,omitempty" q:"number,0,10" doc:"Load factor on the drag load in the design check; absent: lrfd 1.4 for driven piles, 1.25 for bored piles (AASHTO LRFD Table 3.4.1-2, DD maximum, from memory), en1997 and safety-factor the factor on permanent actions."`
+	DragLoadFactor   Value                   `yaml:"drag_load_factor,omitempty" json:"drag_load_factor,omitempty" q:"number,0,10" doc:"Load factor on the drag load in the design check; absent: lrfd 1.4 for driven piles (1.05 where the negative skin friction is by the λ method alone), 1.25 for bored piles (AASHTO LRFD Table 3.4.1-2, DD maximum, from memory), en1997 and safety-factor the factor on permanent actions."`
 }
 
 // Fill is a fill placed after installation.
@@ -80,12 +80,30 @@ type downdragInputs struct {
 // The AASHTO LRFD load factors on downdrag DD (Table 3.4.1-2, maximum
 // values, from memory: the table was not read here): 1.4 for piles by the
 // α (Tomlinson) method, 1.05 for piles by the λ method, 1.25 for drilled
-// shafts (O'Neill & Reese 1999). qult takes 1.4 for every driven pile
-// (the largest) and 1.25 for bored piles.
+// shafts (O'Neill & Reese 1999). qult takes 1.25 for bored piles, 1.05
+// for driven piles whose negative skin friction comes from the λ method
+// alone, and 1.4 (the largest) for every other driven pile.
 const (
 	aashtoDDDriven  = 1.4
+	aashtoDDLambda  = 1.05
 	aashtoDDDrilled = 1.25
 )
+
+// lambdaAbove reports whether every shaft row with friction above the
+// neutral plane uses the λ method (and there is at least one).
+func lambdaAbove(out *DowndragResult) bool {
+	n := 0
+	for _, r := range out.Rows {
+		if r.Top >= out.NeutralPlane || r.Force == 0 {
+			continue
+		}
+		if r.Method != "lambda" {
+			return false
+		}
+		n++
+	}
+	return n > 0
+}
 
 func (r *resolver) downdrag(f *File, in *Inputs) {
 	d := f.Downdrag
@@ -444,6 +462,8 @@ func downdragCases(f *File, in *Inputs, after *profile.Profile, p pile.Pile, out
 			dc.DragFactor, dc.DragFactorFrom = c.Permanent, "the factor on permanent actions (the drag load is a permanent action, EN 1997-1 7.3.2.2)"
 		case !p.Installation.Driven():
 			dc.DragFactor, dc.DragFactorFrom = aashtoDDDrilled, "AASHTO LRFD Table 3.4.1-2, DD maximum for drilled shafts (from memory)"
+		case lambdaAbove(out):
+			dc.DragFactor, dc.DragFactorFrom = aashtoDDLambda, "AASHTO LRFD Table 3.4.1-2, DD maximum for piles, λ method (from memory)"
 		default:
 			dc.DragFactor, dc.DragFactorFrom = aashtoDDDriven, "AASHTO LRFD Table 3.4.1-2, DD maximum for piles, α method (from memory)"
 		}

@@ -134,3 +134,30 @@ func TestSurchargeTimingWarning(t *testing.T) {
 		}
 	}
 }
+
+// TestDowndragLoadFactorByMethod: under lrfd the drag load factor follows
+// the installation and the shaft method above the neutral plane (the
+// AASHTO LRFD Table 3.4.1-2 values as qult takes them, from memory: 1.4
+// α method, 1.05 λ method, 1.25 drilled shafts); a given factor wins.
+func TestDowndragLoadFactorByMethod(t *testing.T) {
+	lrfd := "design: {basis: lrfd, tip: {nc9: 0.4}, shaft: {alpha-given: 0.35, lambda: 0.35}, uplift: {alpha-given: 0.25, lambda: 0.25}, permanent: 1.25, variable: 1.75}"
+	base := strings.Replace(downdragFile, "design: {basis: safety-factor, factor: 2.5}", lrfd, 1)
+	lambda := strings.Replace(strings.Replace(base, "      shaft: {method: alpha-given, alpha: 0.5}\n", "", 1), "methods: {tip_undrained: nc9}", "methods: {tip_undrained: nc9, shaft_undrained: lambda}", 1)
+	for _, c := range []struct {
+		name, src string
+		want      float64
+	}{
+		{"driven, α", base, 1.4},
+		{"bored, α", strings.Replace(base, "installation: driven-high", "installation: bored", 1), 1.25},
+		{"driven, λ", lambda, 1.05},
+		{"given", strings.Replace(base, "  tip_force: 50 kN\n", "  tip_force: 50 kN\n  drag_load_factor: 1.1\n", 1), 1.1},
+	} {
+		r, err := Parse([]byte(c.src))
+		if err != nil {
+			t.Fatalf("%s: %v", c.name, err)
+		}
+		if cs := r.Downdrag.Cases; len(cs) != 1 || cs[0].DragFactor != c.want {
+			t.Errorf("%s: drag load factor %v, want %v", c.name, cs, c.want)
+		}
+	}
+}
