@@ -157,8 +157,7 @@ func (Downdrag) Equation() string {
 
 // Refs returns the sources of the method.
 func (Downdrag) Refs() []cite.Ref {
-	return []cite.Ref{{Source: cite.Fellenius2004, Where: "the unified design method: neutral plane by force equilibrium, settlement at the neutral plane"},
-		{Source: cite.FelleniusBasics, Where: "negative skin friction, drag load and downdrag"}}
+	return []cite.Ref{{Source: cite.Fellenius2004, Where: "the unified design method: neutral plane by force equilibrium, settlement at the neutral plane"}}
 }
 
 func (d *Downdrag) check() error {
