@@ -36,5 +36,5 @@ func ExampleRunBatch() {
 	}
 	// Output:
 	// line 1 (B-12): Rc 1504 kN
-	// line 3 (B-13): lenght (line 1): unknown key "lenght"; accepted here: candidates, date, design, engineer, ground, group, id, load_test, loads, methods, pile, project, qult, reliability, revision, search, settlement, title, units
+	// line 3 (B-13): lenght (line 1): unknown key "lenght"; accepted here: candidates, date, design, downdrag, engineer, ground, group, id, load_test, loads, methods, pile, project, qult, reliability, revision, search, settlement, title, units
 }

@@ -10,10 +10,15 @@
 // counted in the file's unit system, SI or US) and library inputs; Run
 // builds the profile, the analysis, capacity with depth, the design check
 // and the required length, and, with a reliability section, the Monte
-// Carlo and FOSM estimates of package reliability (Result.Reliability),
-// and, with a candidates section, the candidate piles compared, each with
-// its shortest passing length, its section's strength (package
-// structural), quantities and cost (Result.Candidates).
+// Carlo and FOSM estimates of package reliability (Result.Reliability);
+// with a candidates section, the candidate piles compared, each with its
+// shortest passing length, its section's strength (package structural),
+// quantities and cost (Result.Candidates); with a downdrag section (what is placed after the pile is installed),
+// the neutral plane, drag load and largest axial force by the unified
+// method of package settle in the ground after the loads, the design check
+// with the drag load and the required length with it (Result.Downdrag;
+// see Downdrag for the choices made). A ground.surcharge is in place before
+// installation, and a warning says so when there is no downdrag section.
 // Parse is Decode and Run in one call. Problems
 // keep the library errors behind them (errors.Is and errors.As reach a
 // *units.ParseError, a *profile.FieldError, a *pile.PathError, …).

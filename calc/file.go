@@ -40,6 +40,9 @@ type File struct {
 	Group *Group `yaml:"group,omitempty" json:"group,omitempty" doc:"A group of the file's piles under a rigid cap: layout, efficiency, block failure, uplift and settlement."`
 	// Candidates lists pile types to compare (qult choose).
 	Candidates *Candidates `yaml:"candidates,omitempty" json:"candidates,omitempty" doc:"Pile types to compare: sections, installations and materials, with unit costs; each gets its shortest passing length, quantities and cost."`
+	// Downdrag lists the loads placed after the pile is installed and asks
+	// for the neutral plane and the drag load (calc/downdrag.go).
+	Downdrag *Downdrag `yaml:"downdrag,omitempty" json:"downdrag,omitempty" doc:"Loads placed after the pile is installed (fill, surcharge, lowered water table) and the ground settlement they cause: the neutral plane, drag load and largest axial force by the unified method."`
 
 	// lines maps each field path read from the file to its line.
 	lines map[string]int
@@ -52,7 +55,7 @@ type Ground struct {
 	// omitting it) is a dry site.
 	WaterDepth      Value       `yaml:"water_depth,omitempty" json:"water_depth,omitempty" q:"length-or-none" doc:"Depth of the water table below ground level; negative for free water above the ground; \"none\" for a dry site."`
 	WaterUnitWeight Value       `yaml:"water_unit_weight,omitempty" json:"water_unit_weight,omitempty" q:"unitweight,0," doc:"Unit weight of water; default 9.81 kN/m3 (SI) or 62.4 pcf (US)."`
-	Surcharge       Value       `yaml:"surcharge,omitempty" json:"surcharge,omitempty" q:"stress,0," doc:"Uniform surcharge on the ground surface."`
+	Surcharge       Value       `yaml:"surcharge,omitempty" json:"surcharge,omitempty" q:"stress,0," doc:"Uniform surcharge on the ground surface, in place before the pile is installed (it raises σ′v and the shaft resistance); one placed after installation goes under downdrag."`
 	PorePressures   []PorePoint `yaml:"pore_pressures,omitempty" json:"pore_pressures,omitempty"`
 	// ExcavationDepth and Scour lower the ground to the design ground
 	// line; the soil above it gives no shaft or tip resistance and its

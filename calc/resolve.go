@@ -42,6 +42,7 @@ type Inputs struct {
 	group *groupInputs
 	// candidates is the candidates section; nil when the file has none.
 	candidates *candidatesInputs
+	downdrag    *downdragInputs // the downdrag section; nil without one
 }
 
 // resolver turns Values into quantities, recording problems.
@@ -183,6 +184,7 @@ func Resolve(f *File) (*Inputs, error) {
 	r.reliabilitySection(f, in)
 	r.groupSection(f, in)
 	r.candidatesSection(f, in)
+	r.downdrag(f, in)
 	if len(r.probs) > 0 {
 		return in, r.probs
 	}

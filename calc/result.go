@@ -74,6 +74,9 @@ type Result struct {
 	// Sounding is the cone sounding the ground names, interpreted (nil
 	// without ground.sounding).
 	Sounding *SoundingResult
+	// Downdrag is the neutral plane, drag load and largest axial force
+	// (nil without a downdrag section).
+	Downdrag *DowndragResult
 
 	// Compared is the shaft and tip resistance of the same pile by every
 	// applicable method of the catalogues (nil when it could not be run).

@@ -149,6 +149,11 @@ func run(f *File, o runOptions) (*Result, error) {
 	if err := runReliability(f, in, res); err != nil {
 		return nil, err
 	}
+	drefs, err := runDowndrag(f, in, prof, res)
+	if err != nil {
+		return nil, err
+	}
+	srefs = append(srefs, drefs...)
 	if err := runGroup(f, in, prof, res); err != nil {
 		return nil, err
 	}
@@ -159,6 +164,7 @@ func run(f *File, o runOptions) (*Result, error) {
 	if err := runSounding(f, in, prof, res, o.readFile); err != nil {
 		return nil, err
 	}
+	res.Warnings = append(res.Warnings, downdragWarnings(f, in)...)
 	res.Warnings = append(res.Warnings, warnings(res)...)
 	res.Warnings = append(res.Warnings, settleWarnings(res)...)
 	var refs []cite.Source

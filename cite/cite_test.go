@@ -40,7 +40,8 @@ func TestCatalogueKeysUnique(t *testing.T) {
 	all := []Source{NIST2008, Das2019, DasGeo, Craig2012, Meyerhof1976, Vesic1977, Berezantzev1961,
 		Janbu1976, Skempton1951, API2011, ONeillReese1999, Brown2010, Hannigan2016, Jaky1944,
 		MayneKulhawy1982, Kulhawy1984, Burland1973, Tomlinson1957, VijayvergiyaFocht1972,
-		TomlinsonWoodward2008, EN1997, AASHTO2020, Brown2018, BondHarris2008}
+		TomlinsonWoodward2008, EN1997, AASHTO2020, Brown2018, BondHarris2008,
+		Fellenius2004, DasNSF, Bowles1982, TanFellenius2016}
 	seen := map[string]bool{}
 	for _, s := range all {
 		if s.Key == "" || s.Authors == "" || s.Year == 0 || s.Title == "" {

@@ -162,6 +162,9 @@ func addFigures(d *doc, r *calc.Result, o Options) error {
 		if err := candidatesFigures(s, r, c); err != nil {
 			return err
 		}
+		if err := downdragFigures(s, r, c); err != nil {
+			return err
+		}
 	}
 	return nil
 }

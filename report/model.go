@@ -109,6 +109,7 @@ func build(r *calc.Result, o Options) *doc {
 		add(secDesign(r, c))
 		add(secServiceability(r, c))
 		add(secGroup(r, c))
+		add(secDowndrag(r, c))
 	case ViewCapacity:
 		add(secShaft(r, c))
 		add(secTip(r, c))
@@ -117,6 +118,7 @@ func build(r *calc.Result, o Options) *doc {
 		add(secDefaults(r, c))
 	case ViewLength:
 		add(secLength(r, c))
+		add(secDowndragLength(r, c))
 		add(secWithDepth(r, c))
 	case ViewReport:
 		// The summary a reviewer reads first, then the warnings, then the
@@ -136,6 +138,7 @@ func build(r *calc.Result, o Options) *doc {
 		add(secWithDepth(r, c))
 		add(secSettlement(r, c))
 		add(secLoadTest(r, c))
+		add(secDowndrag(r, c))
 		add(secReliability(r, c))
 		add(secGroup(r, c))
 		add(secCandidates(r, c))
@@ -242,6 +245,9 @@ func secSummary(r *calc.Result, c conv) section {
 	}
 	if g := r.Group; g != nil {
 		it = append(it, item{"Pile group", txt(groupSummary(g, c)), ""})
+	}
+	if d := r.Downdrag; d != nil {
+		it = append(it, item{"Downdrag", txt(downdragVerdict(d, c)), ""})
 	}
 	n := len(allWarnings(r, c))
 	w := "none"

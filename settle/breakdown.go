@@ -77,3 +77,20 @@ func FromBreakdown(b pile.Breakdown, diameter units.Length, ea units.Force, shaf
 	}
 	return m, nil
 }
+
+// RowsFromBreakdown returns the shaft of a pile analysis as rows for the
+// unified method (Downdrag): each breakdown row with its perimeter and fs
+// linear between its end values, scaled as in FromBreakdown so that the
+// row's force is the analysis' own; lengths without friction between rows
+// are rows with fs zero.
+func RowsFromBreakdown(b pile.Breakdown) ([]ShaftRow, error) {
+	m, err := FromBreakdown(b, 1, 1, func(pile.Row) Curve { return APISand() }, APITip())
+	if err != nil {
+		return nil, err
+	}
+	rows := make([]ShaftRow, len(m.Segments))
+	for i, s := range m.Segments {
+		rows[i] = ShaftRow{Top: s.Top, Bottom: s.Bottom, Perimeter: s.Perimeter, FsTop: s.FsTop, FsBottom: s.FsBottom}
+	}
+	return rows, nil
+}

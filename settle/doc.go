@@ -1,7 +1,8 @@
 // Package settle estimates the settlement of a single axially loaded pile
 // and reads static load tests: Vesic's three-component method, Randolph &
 // Wroth's closed-form head stiffness, load transfer on t-z and q-z
-// springs, and four criteria of load-test interpretation.
+// springs, four criteria of load-test interpretation, and downdrag by the
+// unified method (the neutral plane).
 //
 // Units are SI throughout (the units types): metres, newtons, pascals.
 // Depths are measured down from ground level. Compression and settlement
@@ -82,6 +83,34 @@
 // FromBreakdown builds a Model from a pile analysis (package pile), so the
 // ultimate values, with their defaults, limits and factors, come from it;
 // at full mobilisation the model carries the analysis' Qs + Qp exactly.
+//
+// # Downdrag and the neutral plane (Fellenius 2004)
+//
+// Downdrag.Solve takes the shaft as rows of unit shaft resistance fs
+// (ShaftRow; RowsFromBreakdown from a pile analysis), the sustained load
+// Qd, the tip (area, qp, q-z curve) and the ground settlement with depth
+// (SettlementPoint: depths increasing, linear between them). The same fs
+// acts downward above the neutral plane and upward below it:
+//
+//	from the head   Q(z) = Qd + ∫head..z p·fs dz
+//	from the tip    Q(z) = Rt,mob + ∫z..tip p·fs dz
+//	neutral plane   where they meet; drag load Qn = ∫head..NP p·fs dz
+//	largest force   Qd + Qn, at the neutral plane
+//
+// The rows are integrated in closed form (fs linear in a row), so the
+// neutral plane is the root of a quadratic. The mobilised tip resistance
+// Rt,mob is given, or found by bisection so that the pile settles with
+// the ground at the neutral plane: toe movement on the q-z curve plus the
+// pile's shortening ∫Q/EA below the neutral plane equals the ground
+// settlement there. Where even with no tip force the pile would settle
+// more than the ground at the equilibrium depth, the neutral plane is
+// where the two settle alike, higher up, the shaft below it only partly
+// mobilised. With no ground settlement there is no negative skin
+// friction and the check is the ordinary one (DowndragResult.Carries:
+// Qd + Qn ≤ Rs below NP + Rt). DowndragResult carries NeutralPlane,
+// DragLoad, MaxForce, the settlements and the forces with depth. Choices:
+// a sharp change of sign at the neutral plane (no transition zone: the
+// largest drag load), the pile's weight left out.
 //
 // # Static load tests
 //

@@ -76,3 +76,33 @@ func ExampleDavisson() {
 	// chin-kondner       2097 kN
 	// brinch-hansen-80   1871 kN
 }
+
+// A driven pile 24 m long through 12 m of settling clay into sand, with
+// the tip force found by settlement compatibility on the API q-z curve.
+// A scenario of our own; the numbers agree with the brute-force oracle of
+// TestDowndragPartialOracle.
+func ExampleDowndrag() {
+	d := 0.4
+	p := units.Length(math.Pi * d)
+	dd := settle.Downdrag{
+		Rows: []settle.ShaftRow{
+			{Top: 0, Bottom: 12, Perimeter: p, FsTop: 10e3, FsBottom: 25e3},  // clay
+			{Top: 12, Bottom: 24, Perimeter: p, FsTop: 40e3, FsBottom: 80e3}, // sand
+		},
+		Load:     600 * units.Kilonewton,
+		EA:       units.Force(30e9 * math.Pi / 4 * d * d),
+		Diameter: units.Length(d),
+		Tip:      settle.TipSpring{Area: units.Circle(units.Length(d)), Qp: 6e6, Curve: settle.APITip()},
+		Ground:   []settle.SettlementPoint{{Depth: 0, Settlement: 0.15}, {Depth: 12, Settlement: 0}},
+	}
+	r, err := dd.Solve()
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Printf("neutral plane %.2f m, drag load %.0f kN, largest force %.0f kN\n", float64(r.NeutralPlane), r.DragLoad.KN(), r.MaxForce.KN())
+	fmt.Printf("tip force %.0f kN of %.0f kN; pile settles %.1f mm at the neutral plane\n", r.TipForce.KN(), r.TipCapacity.KN(), r.GroundAtNP.Millimetres())
+	// Output:
+	// neutral plane 11.88 m, drag load 260 kN, largest force 860 kN
+	// tip force 0 kN of 754 kN; pile settles 1.5 mm at the neutral plane
+}

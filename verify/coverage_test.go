@@ -133,6 +133,8 @@ var reasons = map[string]string{
 	"settle.APITip":                         "API RP 2GEO Q-z curve, from memory; not read",
 	"settle.Points":                         "a curve given by the engineer",
 	"settle.FromBreakdown":                  "builds a load-transfer model from a capacity breakdown; no published load-transfer example read",
+	"settle.RowsFromBreakdown":              "the shaft of a capacity breakdown as rows for the unified method (the same scaling as settle.FromBreakdown)",
+	"settle.ShaftRow.Total":                 "p·∫fs over a row with fs linear, a trapezoid; checked in closed form through settle.Downdrag.Solve",
 	"settle.NewSolver":                      "load-transfer (t-z) solver; no published load-transfer example read; checked against closed forms (rigid pile, linear springs) and by properties",
 	"settle.Solver.Run":                     "load-transfer (t-z) solver; no published load-transfer example read; checked against closed forms and by properties",
 	"settle.Solver.RunDisplacements":        "load-transfer (t-z) solver; no published load-transfer example read; checked against closed forms and by properties",

@@ -112,6 +112,7 @@ func init() {
 		"settle.Iws":                 runIws,
 		"settle.Vesic.Settlement":    runVesicSettlement,
 		"settle.RandolphWroth.Solve": runRandolphWroth,
+		"settle.Downdrag.Solve":      runDowndrag,
 	}
 	addInsituRunners(runners)
 }
@@ -921,4 +922,61 @@ func runAASHTO(preset func() pile.LRFD, inst pile.Installation) runner {
 		}
 		return nil, fmt.Errorf("no %s factor for %s (with %q) in %s layers", kind, method, with, cls)
 	}
+}
+
+// runDowndrag runs the unified method on one of two shafts: Das's granular
+// fill over clay (fill_height, fill_unit_weight, saturated_unit_weight,
+// friction_angle, delta_ratio: no friction in the fill, fn = K′·tan δ′·
+// (γf·Hf + γ′z) in the clay, K′ = 1 − sin φ′, γw = 9.81 kN/m³), or a
+// uniform unit shaft resistance fs. The tip force is given (tip_force,
+// default 0) and the ground settles (a profile falling from 0.1 m at the
+// head to 0 at the tip), so that the neutral plane is the force
+// equilibrium; or, with tip_capacity, the tip force is found by settlement
+// compatibility on a rigid pile (see below).
+func runDowndrag(a *args) (values, error) {
+	L := a.qty("length", units.DimLength)
+	d := a.qty("diameter", units.DimLength)
+	p := math.Pi * d
+	dd := settle.Downdrag{Load: units.Force(a.optQty("load", units.DimForce)), EA: 1e12, TipGiven: true,
+		TipForce: units.Force(a.optQty("tip_force", units.DimForce)),
+		Tip:      settle.TipSpring{Area: 1, Qp: 1e12},
+		Ground:   []settle.SettlementPoint{{Depth: 0, Settlement: 0.1}, {Depth: units.Length(L), Settlement: 0}}}
+	var hf float64
+	if a.has("fs") {
+		fs := units.Stress(a.qty("fs", units.DimStress))
+		dd.Rows = []settle.ShaftRow{{Top: 0, Bottom: units.Length(L), Perimeter: units.Length(p), FsTop: fs, FsBottom: fs}}
+	} else {
+		hf = a.qty("fill_height", units.DimLength)
+		gf := a.qty("fill_unit_weight", units.DimUnitWeight)
+		gp := a.qty("saturated_unit_weight", units.DimUnitWeight) - 9.81e3
+		phi := a.qty("friction_angle", units.DimAngle)
+		k, t := 1-math.Sin(phi), math.Tan(a.num("delta_ratio")*phi)
+		fn := func(z float64) units.Stress { return units.Stress(k * t * (gf*hf + gp*z)) }
+		dd.Rows = []settle.ShaftRow{{Top: 0, Bottom: units.Length(hf), Perimeter: units.Length(p)},
+			{Top: units.Length(hf), Bottom: units.Length(L), Perimeter: units.Length(p), FsTop: fn(0), FsBottom: fn(L - hf)}}
+	}
+	if a.has("tip_capacity") {
+		// Settlement compatibility on a rigid pile: a linear q-z curve to
+		// full mobilisation at qz_full, the ground settling linearly from
+		// ground_settlement_head at the head to 0 at ground_settlement_depth.
+		zf := a.qty("qz_full", units.DimLength)
+		curve, err := settle.Points([]float64{0, zf}, []float64{0, 1}, false)
+		if err != nil {
+			return nil, err
+		}
+		dd.TipGiven, dd.EA = false, 1e18
+		dd.Tip = settle.TipSpring{Area: 1, Qp: units.Stress(a.qty("tip_capacity", units.DimForce)), Curve: curve}
+		dd.Ground = []settle.SettlementPoint{{Depth: 0, Settlement: units.Length(a.qty("ground_settlement_head", units.DimLength))},
+			{Depth: units.Length(a.qty("ground_settlement_depth", units.DimLength)), Settlement: 0}}
+	}
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	r, err := dd.Solve()
+	if err != nil {
+		return nil, err
+	}
+	return values{"neutral_plane": length(r.NeutralPlane), "neutral_depth_below_fill": length(r.NeutralPlane - units.Length(hf)),
+		"drag_load": force(r.DragLoad), "max_force": force(r.MaxForce), "tip_force": force(r.TipForce),
+		"ground_settlement_at_np": length(r.GroundAtNP)}, nil
 }

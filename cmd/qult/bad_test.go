@@ -199,6 +199,20 @@ var badCases = []badCase{
 	{file: "554-sounding-ags-which-location", want: []string{"ground.sounding", "(line 17)"}},
 	{file: "555-sounding-csv-depth-order", want: []string{"ground.sounding.file (line 17)"}},
 	{file: "556-sounding-without-file", want: []string{"ground.sounding.file (line 17)", "missing"}},
+	{file: "400-downdrag-depth-repeated", want: []string{"downdrag.ground_settlement[2].depth (line 32)", "function of depth"}},
+	{file: "401-downdrag-depths-not-increasing", want: []string{"downdrag.ground_settlement[2].depth (line 32)", "depths must increase"}},
+	{file: "402-downdrag-fill-negative-thickness", want: []string{"downdrag.fill.thickness (line 28)", "outside 0 to 100 m"}},
+	{file: "403-downdrag-negative-settlement", want: []string{"downdrag.ground_settlement[1].settlement (line 31)", "outside 0 to"}},
+	{file: "404-downdrag-water-raised", want: []string{"downdrag.water_depth_after (line 28)", "above the water table"}},
+	{file: "405-downdrag-nothing-after", want: []string{"downdrag (line 28)", "nothing placed after installation"}},
+	{file: "406-downdrag-no-settlement-profile", want: []string{"downdrag.ground_settlement (line 28)", "not given"}},
+	{file: "407-downdrag-tip-force-above-capacity", want: []string{"downdrag.tip_force (line 29)", "above the tip resistance"}},
+	{file: "408-downdrag-fill-without-unit-weight", want: []string{"downdrag.fill (line 28)", "thickness and unit_weight"}},
+	{file: "409-downdrag-no-pile-modulus", want: []string{"pile.youngs_modulus", "downdrag"}},
+	{file: "410-downdrag-unknown-key", want: []string{"downdrag.settlment (line 29)", "unknown key"}},
+	{file: "411-downdrag-point-without-settlement", want: []string{"downdrag.ground_settlement[1] (line 31)", "depth and settlement"}},
+	{file: "412-downdrag-negative-depth", want: []string{"downdrag.ground_settlement[0].depth (line 30)", "outside 0 to"}},
+	{file: "413-downdrag-drag-factor-out-of-range", want: []string{"downdrag.drag_load_factor (line 29)", "outside 0 to 10"}},
 }
 
 const badTimeout = 5 * time.Second

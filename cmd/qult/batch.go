@@ -174,7 +174,7 @@ func batch(in io.Reader, out io.Writer, s batchSettings) (bad, fail int, err err
 		switch r := it.Result; {
 		case it.Err != nil:
 			bad++
-		case (r.Design != nil && !r.Design.Pass) || !r.ServiceabilityPass() || (r.Group != nil && !r.Group.Pass):
+		case (r.Design != nil && !r.Design.Pass) || !r.ServiceabilityPass() || !r.DowndragPass() || (r.Group != nil && !r.Group.Pass):
 			fail++
 		}
 		_, err := out.Write(it.Out)

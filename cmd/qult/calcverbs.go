@@ -118,10 +118,10 @@ func (c *cmd) calcVerb(args []string, view report.View) int {
 			c.errorf("%s: loads: not given; %s needs the characteristic loads (compression, tension)", displayName(name), c.verb)
 			return exitUsage
 		}
-		if view == viewCheck && (!res.Design.Pass || !res.ServiceabilityPass() || res.Group != nil && !res.Group.Pass) {
+		if view == viewCheck && (!res.Design.Pass || !res.ServiceabilityPass() || !res.DowndragPass() || res.Group != nil && !res.Group.Pass) {
 			code = exitFail
 		}
-		if view == viewLength && (res.Length == nil || !res.Length.Found) {
+		if view == viewLength && (res.Length == nil || !res.Length.Found || res.Downdrag != nil && len(res.Downdrag.Cases) > 0 && !res.Downdrag.LengthFound) {
 			code = exitFail
 		}
 	case viewSettle:
