@@ -42,7 +42,7 @@ type Inputs struct {
 	group *groupInputs
 	// candidates is the candidates section; nil when the file has none.
 	candidates *candidatesInputs
-	downdrag    *downdragInputs // the downdrag section; nil without one
+	downdrag   *downdragInputs // the downdrag section; nil without one
 }
 
 // resolver turns Values into quantities, recording problems.
