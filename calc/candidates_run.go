@@ -85,6 +85,14 @@ type CandidateResult struct {
 	HasSettlement bool
 	Settlement    units.Length
 	SettlementUse float64
+	// With a downdrag section (HasDowndrag): the neutral plane and the drag
+	// load of the candidate at its length, and the largest design axial
+	// force with the drag load, γG·Qd + γDD·Qn over the basis's cases,
+	// which the section's check then reads (Structural.Ed).
+	HasDowndrag  bool
+	NeutralPlane units.Length
+	DragLoad     units.Force
+	DowndragEd   units.Force
 	// Why says why a candidate that does not pass fails, and how close it
 	// came.
 	Why string
@@ -107,9 +115,9 @@ type CandidateResult struct {
 // weight adds to it.
 //
 // With downdrag the largest force is at the neutral plane: the head load
-// plus the drag load. When a downdrag result is available, add its drag
-// load here, factored as the basis factors permanent loads, and every
-// structural check reads it.
+// plus the drag load. runCandidate then takes the larger of this and the
+// downdrag cases' structural force γG·Qd + γDD·Qn of the candidate at its
+// length (see DowndragCase.StructuralEd).
 func largestAxialForce(cases []pile.Case, l pile.Loads) units.Force {
 	var ed units.Force
 	for _, cs := range cases {
@@ -307,6 +315,12 @@ func runCandidate(f *File, in *Inputs, prof *profile.Profile, c *candidateInput,
 		}
 		use = max(use, su)
 	}
+	if di := in.downdrag; di != nil && di.solve != nil {
+		ok, ps := candidateDowndrag(f, di, c, r, ed, &out, &tip, &use, &governs, step, maxTip)
+		if len(ps) > 0 || !ok {
+			return out, ps
+		}
+	}
 	out.Pass, out.TipDepth, out.Length, out.Governs, out.Use = true, tip, tip-c.pile.HeadDepth, governs, use
 	out.Concrete = units.Volume(float64(c.member.ConcreteArea()) * float64(out.Length))
 	out.SteelMass = float64(c.member.SteelArea()) * float64(out.Length) * SteelDensity
@@ -423,4 +437,74 @@ func candidateRefs(in *Inputs) []cite.Ref {
 		return r.Refs()
 	}
 	return nil
+}
+
+// candidateDowndrag walks the candidate down the search grid from tip
+// until a length passes the downdrag check (the design cases with the drag
+// load and no shaft resistance above the neutral plane) and the section
+// carries the largest axial force with the drag load. It updates the tip,
+// the utilisation and what governs, and records the neutral plane and the
+// drag load at that length. ok is false when no length within the search
+// passes; out then says why.
+func candidateDowndrag(f *File, di *downdragInputs, c *candidateInput, rs structural.Resistance, ed units.Force,
+	out *CandidateResult, tip *units.Length, use *float64, governs *string, step, maxTip units.Length) (bool, Problems) {
+	ea, pr := pileEA(f, c.pile, "the neutral plane (downdrag) of "+c.name)
+	if pr != nil {
+		return false, Problems{*pr}
+	}
+	out.HasDowndrag = true
+	var last DowndragResult
+	var lastEd units.Force
+	for t := *tip; t <= maxTip+1e-9; t += step {
+		p := c.pile
+		p.Length = t - p.HeadDepth
+		var r DowndragResult
+		if err := di.solve(p, ea, &r); err != nil {
+			var ps Problems
+			if errors.As(err, &ps) {
+				for i := range ps {
+					ps[i].Msg = c.name + " (" + c.path + "): " + ps[i].Msg
+				}
+				return false, ps
+			}
+			return false, Problems{{Path: c.path, Line: lineOf(f, c.path), Msg: c.name + ": " + err.Error(), Err: err}}
+		}
+		edDD := ed
+		for _, cs := range r.Cases {
+			edDD = max(edDD, cs.StructuralEd)
+		}
+		last, lastEd = r, edDD
+		st := structural.Verify(rs, edDD)
+		if !r.Pass || !st.Pass {
+			continue
+		}
+		out.NeutralPlane, out.DragLoad, out.DowndragEd, out.Structural = r.NeutralPlane, r.DragLoad, edDD, st
+		var geo float64
+		for _, cs := range r.Cases {
+			geo = max(geo, cs.Use)
+		}
+		if t > *tip {
+			*tip, *governs = t, "downdrag"
+		}
+		*use = max(*use, geo, st.Use)
+		return true, nil
+	}
+	out.NeutralPlane, out.DragLoad, out.DowndragEd = last.NeutralPlane, last.DragLoad, lastEd
+	out.Structural = structural.Verify(rs, lastEd)
+	out.Governs, out.Use = "downdrag", out.Structural.Use
+	switch {
+	case !out.Structural.Pass && last.Pass:
+		out.Governs = "structure"
+		out.Why = fmt.Sprintf("no length within the search carries the drag load: at the tip of %.4g m the largest axial force with the drag load, %.4g kN, exceeds the section's resistance %.4g kN",
+			maxTip.Metres(), lastEd.KN(), rs.Design.KN())
+	default:
+		var u float64
+		for _, cs := range last.Cases {
+			u = max(u, cs.Use)
+		}
+		out.Use = u
+		out.Why = fmt.Sprintf("no length within the search passes the downdrag check (the drag load as a load, no shaft resistance above the neutral plane): the utilisation at the tip of %.4g m is %.3g",
+			maxTip.Metres(), u)
+	}
+	return false, nil
 }

@@ -75,6 +75,11 @@ type downdragInputs struct {
 	factor              float64
 	hasFactor           bool
 	loadLine, waterLine int
+	// solve runs the unified method and the design cases for another pile
+	// of axial stiffness ea in the same ground after the loads (set by
+	// runDowndrag; the candidates use it). It only reads what it shares,
+	// so candidates may call it at once.
+	solve func(p pile.Pile, ea units.Force, r *DowndragResult) error
 }
 
 // The AASHTO LRFD load factors on downdrag DD (Table 3.4.1-2, maximum
@@ -304,7 +309,7 @@ func runDowndrag(f *File, in *Inputs, prof *profile.Profile, res *Result) ([]cit
 		out.TipFrom, out.TipCurve = "given", ""
 	}
 	// solve runs the unified method and the design cases for pile p.
-	solve := func(p pile.Pile, r *DowndragResult) error {
+	solveEA := func(p pile.Pile, ea units.Force, r *DowndragResult) error {
 		a, err := pile.NewAnalysis(after, p, in.Methods, nil)
 		if err != nil {
 			return translate(f, err)
@@ -352,6 +357,8 @@ func runDowndrag(f *File, in *Inputs, prof *profile.Profile, res *Result) ([]cit
 		}
 		return nil
 	}
+	di.solve = solveEA
+	solve := func(p pile.Pile, r *DowndragResult) error { return solveEA(p, ea, r) }
 	if err := solve(in.Pile, out); err != nil {
 		return nil, err
 	}

@@ -69,6 +69,21 @@ func secCandidates(r *calc.Result, c conv) section {
 	if k.Settlement {
 		its = append(its, item{"Settlement", txt("checked at the serviceability load against the allowable settlement"), ""})
 	}
+	var drag []string
+	for i := range k.Rows {
+		if x := &k.Rows[i]; x.HasDowndrag {
+			drag = append(drag, fmt.Sprintf("%s: neutral plane at %s, drag load Qn = %s %s, largest design axial force with it %s %s",
+				x.Name, c.ls(x.NeutralPlane), fmtNum(c.F(x.DragLoad), sig), c.uF(), fmtNum(c.F(x.DowndragEd), sig), c.uF()))
+		}
+	}
+	if len(drag) > 0 {
+		for i := range its {
+			if strings.HasPrefix(its[i].label, "Largest axial force") {
+				its[i].label = "Largest axial force at the head Ed (before the drag load)"
+			}
+		}
+		its = append(its, item{"Downdrag", txt("each candidate is checked at its length with the drag load (the downdrag section): the design cases without shaft resistance above the neutral plane, and its section against γG·Qd + γDD·Qn where that exceeds the Ed above"), ""})
+	}
 	_, mu := c.steelMass(0)
 	cost := "Cost"
 	if k.Currency != "" {
@@ -105,6 +120,9 @@ func secCandidates(r *calc.Result, c conv) section {
 			length, txt(x.Governs), useCell(x.Use), useCell(x.Structural.Use), settle, conc, steel, money, txt(verdict)})
 	}
 	blocks := []block{{items: its}, {tbl: t}}
+	if len(drag) > 0 {
+		blocks = append(blocks, block{para: "Downdrag at each candidate's length (the last length tried where none passes):"}, block{list: drag})
+	}
 	if len(why) > 0 {
 		blocks = append(blocks, block{para: "Candidates that do not pass, and how near they came:"}, block{list: why})
 	}
@@ -225,6 +243,9 @@ type jCandidate struct {
 	Structural    jStructural `json:"structural"`
 	Settlement    *qty        `json:"settlement"`
 	SettlementUse *jnum       `json:"settlement_utilisation"`
+	NeutralPlane  *qty        `json:"neutral_plane,omitempty"`
+	DragLoad      *qty        `json:"drag_load,omitempty"`
+	DowndragEd    *qty        `json:"largest_axial_force_with_drag,omitempty"`
 	Concrete      *qty        `json:"concrete_volume"`
 	SteelMass     *jnum       `json:"steel_mass_kg"`
 	Cost          *jnum       `json:"cost"`
@@ -277,6 +298,10 @@ func candidatesJSON(r *calc.Result, c jconv) *jCandidates {
 			s := c.L(x.Settlement)
 			u := capUse(x.SettlementUse)
 			jc.Settlement, jc.SettlementUse = &s, &u
+		}
+		if x.HasDowndrag {
+			np, qn, ed := c.L(x.NeutralPlane), c.F(x.DragLoad), c.F(x.DowndragEd)
+			jc.NeutralPlane, jc.DragLoad, jc.DowndragEd = &np, &qn, &ed
 		}
 		j.Rows = append(j.Rows, jc)
 	}
