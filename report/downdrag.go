@@ -184,12 +184,14 @@ func downdragFigures(s *section, r *calc.Result, c conv) error {
 	dash := []vg.Length{vg.Points(6), vg.Points(3)}
 	np := -c.L(d.NeutralPlane)
 	npLabel := "neutral plane " + c.ls(d.NeutralPlane)
-	g, err := svgPlot("Axial force with depth", "axial force ("+c.uF()+")", "depth ("+c.uL()+")", []series{
+	// The curves fill the top of the plot (the force from the tip is
+	// largest there): the legend goes to the bottom right.
+	g, err := svgPlotLegend("Axial force with depth", "axial force ("+c.uF()+")", "depth ("+c.uL()+")", []series{
 		{"from the head: Qd + negative skin friction", down, blue, dash, false},
 		{"from the tip: Rt,mob + shaft resistance below", up, red, dash, false},
 		{"axial force", force, black, nil, false},
 		{npLabel, plotter.XYs{{X: 0, Y: np}, {X: xmax, Y: np}}, green, []vg.Length{vg.Points(2), vg.Points(2)}, false},
-	})
+	}, false)
 	if err != nil {
 		return err
 	}

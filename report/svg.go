@@ -135,8 +135,15 @@ func (f figure) png(dpi int) ([]byte, error) {
 	return buf.Bytes(), nil
 }
 
-// svgPlot draws series against depth (downwards) as a figure.
+// svgPlot draws series against depth (downwards) as a figure, with the
+// legend at the top right.
 func svgPlot(title, xlabel, ylabel string, ss []series) (figure, error) {
+	return svgPlotLegend(title, xlabel, ylabel, ss, true)
+}
+
+// svgPlotLegend is svgPlot with the legend at the top right (top) or the
+// bottom right, for curves that fill the top of the plot.
+func svgPlotLegend(title, xlabel, ylabel string, ss []series, top bool) (figure, error) {
 	p := plot.New()
 	sansPlot(p)
 	p.Title.Text = title
@@ -144,7 +151,7 @@ func svgPlot(title, xlabel, ylabel string, ss []series) (figure, error) {
 	p.Y.Label.Text = ylabel
 	p.Y.Tick.Marker = depthTicks
 	p.X.Tick.Marker = valueTicks
-	p.Legend.Top = true
+	p.Legend.Top = top
 	p.Legend.Left = false
 	p.X.Min = 0
 	p.Add(plotter.NewGrid())
