@@ -1,6 +1,8 @@
 package calc
 
 import (
+	"sync"
+
 	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/pile"
 	"github.com/qultgeo/qult/profile"
@@ -63,6 +65,14 @@ func (g CompareGroup) Spread() (lo, hi units.Force, n int) {
 	return lo, hi, n
 }
 
+// shaftCatalogue and tipCatalogue are the method tables, copied once: the
+// comparison only reads them (shaft.Methods and bearing.Methods copy the
+// table at every call).
+var (
+	shaftCatalogue = sync.OnceValue(shaft.Methods)
+	tipCatalogue   = sync.OnceValue(bearing.Methods)
+)
+
 // compare computes the Comparison of pile p in prof with the file's
 // methods m; b is the file's own breakdown (for the methods chosen).
 func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdown) *Comparison {
@@ -121,7 +131,7 @@ func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdow
 				chosen = "-" // mixed: no single method is marked
 			}
 		}
-		for _, d := range shaft.Methods() {
+		for _, d := range shaftCatalogue() {
 			if !shaftApplies(d, cls) {
 				continue
 			}
@@ -168,7 +178,7 @@ func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdow
 		var ds []bearing.Descriptor
 		var sets [][]bearing.Tip
 		var newErrs []error
-		for _, d := range bearing.Methods() {
+		for _, d := range tipCatalogue() {
 			if string(d.Drainage) != cls.String() || requiresKey(d.Params) {
 				continue
 			}
