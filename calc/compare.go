@@ -74,8 +74,10 @@ var (
 )
 
 // compare computes the Comparison of pile p in prof with the file's
-// methods m; b is the file's own breakdown (for the methods chosen).
-func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdown) *Comparison {
+// methods m; b is the file's own breakdown (for the methods chosen) and
+// base, when not nil, the analysis it came from (pile.NewAnalysis(prof,
+// p, m, nil)), which compare then does not build again.
+func compare(base *pile.Analysis, prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdown) *Comparison {
 	layers := prof.Layers()
 	embedded := map[int]bool{}
 	for _, r := range b.Rows {
@@ -100,7 +102,10 @@ func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdow
 	// The file's own analysis and its shaft, segment by segment: a method
 	// compared in the layers of one class leaves the other layers' shaft
 	// as it is, and their segments are taken from here (to the bit).
-	base, baseErr := pile.NewAnalysis(prof, p, m, nil)
+	var baseErr error
+	if base == nil {
+		base, baseErr = pile.NewAnalysis(prof, p, m, nil)
+	}
 	var pass *pile.ShaftPass
 	if baseErr == nil {
 		pass, _ = base.ShaftPass() // on an error, every breakdown integrates its own shaft

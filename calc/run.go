@@ -79,7 +79,7 @@ func run(f *File, o runOptions) (*Result, error) {
 	}
 	res.Methods = layerMethods(prof, res.Breakdown)
 	if !o.lean {
-		res.Compared = compare(prof, in.Pile, in.Methods, res.Breakdown)
+		res.Compared = compare(a, prof, in.Pile, in.Methods, res.Breakdown)
 	}
 	// Capacity with depth: from one step below the head to the search
 	// depth (default: the bottom of the profile).
