@@ -1,6 +1,8 @@
 package calc
 
 import (
+	"sync"
+
 	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/pile"
 	"github.com/qultgeo/qult/profile"
@@ -63,9 +65,19 @@ func (g CompareGroup) Spread() (lo, hi units.Force, n int) {
 	return lo, hi, n
 }
 
+// shaftCatalogue and tipCatalogue are the method tables, copied once: the
+// comparison only reads them (shaft.Methods and bearing.Methods copy the
+// table at every call).
+var (
+	shaftCatalogue = sync.OnceValue(shaft.Methods)
+	tipCatalogue   = sync.OnceValue(bearing.Methods)
+)
+
 // compare computes the Comparison of pile p in prof with the file's
-// methods m; b is the file's own breakdown (for the methods chosen).
-func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdown) *Comparison {
+// methods m; b is the file's own breakdown (for the methods chosen) and
+// base, when not nil, the analysis it came from (pile.NewAnalysis(prof,
+// p, m, nil)), which compare then does not build again.
+func compare(base *pile.Analysis, prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdown) *Comparison {
 	layers := prof.Layers()
 	embedded := map[int]bool{}
 	for _, r := range b.Rows {
@@ -90,7 +102,10 @@ func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdow
 	// The file's own analysis and its shaft, segment by segment: a method
 	// compared in the layers of one class leaves the other layers' shaft
 	// as it is, and their segments are taken from here (to the bit).
-	base, baseErr := pile.NewAnalysis(prof, p, m, nil)
+	var baseErr error
+	if base == nil {
+		base, baseErr = pile.NewAnalysis(prof, p, m, nil)
+	}
 	var pass *pile.ShaftPass
 	if baseErr == nil {
 		pass, _ = base.ShaftPass() // on an error, every breakdown integrates its own shaft
@@ -121,7 +136,7 @@ func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdow
 				chosen = "-" // mixed: no single method is marked
 			}
 		}
-		for _, d := range shaft.Methods() {
+		for _, d := range shaftCatalogue() {
 			if !shaftApplies(d, cls) {
 				continue
 			}
@@ -168,7 +183,7 @@ func compare(prof *profile.Profile, p pile.Pile, m pile.Methods, b pile.Breakdow
 		var ds []bearing.Descriptor
 		var sets [][]bearing.Tip
 		var newErrs []error
-		for _, d := range bearing.Methods() {
+		for _, d := range tipCatalogue() {
 			if string(d.Drainage) != cls.String() || requiresKey(d.Params) {
 				continue
 			}

@@ -79,7 +79,7 @@ func run(f *File, o runOptions) (*Result, error) {
 	}
 	res.Methods = layerMethods(prof, res.Breakdown)
 	if !o.lean {
-		res.Compared = compare(prof, in.Pile, in.Methods, res.Breakdown)
+		res.Compared = compare(a, prof, in.Pile, in.Methods, res.Breakdown)
 	}
 	// Capacity with depth: from one step below the head to the search
 	// depth (default: the bottom of the profile).
@@ -122,23 +122,33 @@ func run(f *File, o runOptions) (*Result, error) {
 				return nil, err
 			}
 		}
-		cases, _ := in.Basis.Cases(in.Pile.Installation)
-		if len(res.WithDepth) > 0 && d.Governing < len(cases) {
-			cs := cases[d.Governing]
-			if a2, err := pile.NewAnalysis(prof, deep, in.Methods, &pile.Options{Case: &cs}); err == nil {
-				if rows, err := a2.WithDepth(pile.DepthGrid{From: in.Pile.HeadDepth + step, To: maxTip, Step: step}, nil); err == nil {
-					for _, c := range rows {
-						res.DesignWithDepth = append(res.DesignWithDepth, c.DesignCompression)
-					}
-				}
-			}
-		}
+		// The search for the length runs each case's capacity with depth
+		// on the same grid: the governing case's rows are the design
+		// capacity with depth, not computed twice.
+		var caseRows [][]pile.Capacity
 		if in.HasLoad {
-			l, err := pile.RequiredLength(prof, in.Pile, in.Methods, in.Basis, in.Loads, pile.Search{Step: step, MaxTip: maxTip})
+			l, rows, err := pile.RequiredLengthWithDepth(prof, in.Pile, in.Methods, in.Basis, in.Loads, pile.Search{Step: step, MaxTip: maxTip})
 			if err != nil {
 				res.Warnings = append(res.Warnings, "required length not found: "+err.Error())
 			} else {
-				res.Length = &l
+				res.Length, caseRows = &l, rows
+			}
+		}
+		cases, _ := in.Basis.Cases(in.Pile.Installation)
+		if len(res.WithDepth) > 0 && d.Governing < len(cases) {
+			rows := []pile.Capacity(nil)
+			if d.Governing < len(caseRows) {
+				rows = caseRows[d.Governing]
+			} else {
+				cs := cases[d.Governing]
+				if a2, err := pile.NewAnalysis(prof, deep, in.Methods, &pile.Options{Case: &cs}); err == nil {
+					if r, err := a2.WithDepth(pile.DepthGrid{From: in.Pile.HeadDepth + step, To: maxTip, Step: step}, nil); err == nil {
+						rows = r
+					}
+				}
+			}
+			for _, c := range rows {
+				res.DesignWithDepth = append(res.DesignWithDepth, c.DesignCompression)
 			}
 		}
 	}

@@ -139,8 +139,10 @@ func (a *Analysis) breakdown(from *reuse) (Breakdown, error) {
 	var all sums
 	var refs []cite.Ref
 	seen := map[string]bool{}
+	// BreakdownSharing leaves the sources out: no list is built for it.
+	share := from != nil
 	addRefs := func(id string, r []cite.Ref) {
-		if !seen[id] {
+		if !share && !seen[id] {
 			seen[id] = true
 			refs = append(refs, r...)
 		}
@@ -182,7 +184,7 @@ func (a *Analysis) breakdown(from *reuse) (Breakdown, error) {
 			row.Method, row.Equation = "none", "fs = 0"
 		case lp.lambda:
 			row.Method, row.Equation = lambdaID, a.lambda.Equation()
-			if !seen[lambdaID] {
+			if !share && !seen[lambdaID] {
 				addRefs(lambdaID, a.lambda.Refs())
 			}
 			all.lamSig += s.lamSig
@@ -190,7 +192,7 @@ func (a *Analysis) breakdown(from *reuse) (Breakdown, error) {
 			all.lamLen += s.lamLen
 		default:
 			row.Method, row.Equation = lp.shaft.ID(), lp.shaft.Equation()
-			if !seen[row.Method] { // Refs builds its list: only once per method
+			if !share && !seen[row.Method] { // Refs builds its list: only once per method
 				addRefs(row.Method, lp.shaft.Refs())
 			}
 			for j, z := range endPoints(top, bot) {
@@ -283,15 +285,17 @@ func (a *Analysis) breakdown(from *reuse) (Breakdown, error) {
 		addRefs("drilled-zones", []cite.Ref{{Source: cite.ONeillReese1999, Where: "α method: top 1.5 m and bottom diameter excluded"},
 			{Source: cite.Brown2010, Where: "ch. 13, side resistance in cohesive soil"}})
 	}
-	addRefs(lp.tip.ID(), lp.tip.Refs())
-	if a.zc > 0 {
+	if !share {
+		addRefs(lp.tip.ID(), lp.tip.Refs())
+	}
+	if a.zc > 0 && !share {
 		addRefs("critical-depth", (shaft.CriticalDepth{}).Refs())
 	}
 	if tr.flags&LayeredTip != 0 {
 		addRefs("layered-tip", []cite.Ref{{Source: cite.Meyerhof1976, Where: "tip in a stronger layer below a weaker one"}})
 	}
 	addRefs("tension-"+a.tension.Name, a.tension.Refs)
-	if from == nil { // BreakdownSharing leaves them out
+	if !share { // BreakdownSharing leaves them out
 		b.Sources = cite.Collect(refs...)
 		b.Warnings = c.Flags.Messages()
 	}

@@ -190,8 +190,26 @@ const DefaultSearchStep = 0.5 * units.Metre
 // and says, in NotFound and the Best fields, how near it came. An error
 // means the inputs are wrong (a *PathError names the field).
 func RequiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, s Search) (LengthResult, error) {
+	out, _, err := RequiredLengthWithDepth(prof, p, m, b, l, s)
+	return out, err
+}
+
+// RequiredLengthWithDepth is RequiredLength that also returns the rows it
+// searched: for each case of b.Cases(p.Installation), in order, the
+// capacity with depth on the search grid, as Analysis.WithDepth gives it
+// for the pile extended to s.MaxTip analysed with Options{Case: &case}
+// (same values to the bit). The rows are nil when err is not.
+func RequiredLengthWithDepth(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, s Search) (LengthResult, [][]Capacity, error) {
+	out, rows, err := requiredLength(prof, p, m, b, l, s)
+	if err != nil {
+		return out, nil, err
+	}
+	return out, rows, nil
+}
+
+func requiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, s Search) (LengthResult, [][]Capacity, error) {
 	if prof == nil {
-		return LengthResult{}, errors.New("design: no ground profile given")
+		return LengthResult{}, nil, errors.New("design: no ground profile given")
 	}
 	step, maxTip := s.Step, s.MaxTip
 	if step == 0 {
@@ -201,26 +219,26 @@ func RequiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, 
 		maxTip = prof.Depth()
 	}
 	if b == nil {
-		return LengthResult{}, errors.New("design: no design basis given")
+		return LengthResult{}, nil, errors.New("design: no design basis given")
 	}
 	if err := l.Validate("loads"); err != nil {
-		return LengthResult{}, err
+		return LengthResult{}, nil, err
 	}
 	if !(step > 0) || math.IsInf(float64(step), 0) {
-		return LengthResult{}, pathErrorf("search.step", "%v is outside (0, ∞) m", step)
+		return LengthResult{}, nil, pathErrorf("search.step", "%v is outside (0, ∞) m", step)
 	}
 	if maxTip > prof.Depth() || maxTip <= p.HeadDepth {
-		return LengthResult{}, pathErrorf("search.max_tip", "%v: want below the head (%v) and within the profile (to %v)", maxTip, p.HeadDepth, prof.Depth())
+		return LengthResult{}, nil, pathErrorf("search.max_tip", "%v: want below the head (%v) and within the profile (to %v)", maxTip, p.HeadDepth, prof.Depth())
 	}
 	if n := float64((maxTip - p.HeadDepth) / step); n > 1e6 {
-		return LengthResult{}, pathErrorf("search.step", "%v gives %.3g candidate depths; at most 1e6", step, n)
+		return LengthResult{}, nil, pathErrorf("search.step", "%v gives %.3g candidate depths; at most 1e6", step, n)
 	}
 	if p.HeadDepth+step > maxTip {
-		return LengthResult{}, pathErrorf("search.step", "%v is longer than the search range from the head (%v) to max_tip (%v)", step, p.HeadDepth, maxTip)
+		return LengthResult{}, nil, pathErrorf("search.step", "%v is longer than the search range from the head (%v) to max_tip (%v)", step, p.HeadDepth, maxTip)
 	}
 	cases, err := b.Cases(p.Installation)
 	if err != nil {
-		return LengthResult{}, err
+		return LengthResult{}, nil, err
 	}
 	q := p
 	q.Length = maxTip - p.HeadDepth
@@ -229,11 +247,11 @@ func RequiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, 
 		cs := cases[i]
 		a, err := NewAnalysis(prof, q, m, &Options{Case: &cs})
 		if err != nil {
-			return LengthResult{}, fmt.Errorf("design case %s: %w", cs.Name, err)
+			return LengthResult{}, nil, fmt.Errorf("design case %s: %w", cs.Name, err)
 		}
 		r, err := a.checkedWithDepth(p.HeadDepth+step, maxTip, step, nil)
 		if err != nil {
-			return LengthResult{}, fmt.Errorf("design case %s: %w", cs.Name, err)
+			return LengthResult{}, nil, fmt.Errorf("design case %s: %w", cs.Name, err)
 		}
 		rows = append(rows, r)
 	}
@@ -294,7 +312,7 @@ func RequiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, 
 	if !out.Found {
 		out.Warnings = append(out.Warnings, out.NotFound())
 	}
-	return out, nil
+	return out, rows, nil
 }
 
 // DepthGrid is the set of tip depths of Analysis.WithDepth: From, From +

@@ -203,8 +203,8 @@ func (f *EN7Factors) Validate(path string) error {
 			v    *[4]float64
 		}{{"gamma_b", &s.r.Base}, {"gamma_s", &s.r.Shaft}, {"gamma_t", &s.r.Total}, {"gamma_st", &s.r.Tension}} {
 			for i, v := range g.v {
-				if err := ge1(fmt.Sprintf("%s.%s.R%d", s.name, g.name, i+1), v); err != nil {
-					return err
+				if !(v >= 1) || math.IsInf(v, 0) { // ge1's test: the name is built only for the error
+					return ge1(fmt.Sprintf("%s.%s.R%d", s.name, g.name, i+1), v)
 				}
 			}
 		}

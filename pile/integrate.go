@@ -180,16 +180,36 @@ func (a *Analysis) quad(lp *layerPlan, z0, z1, s0, s1 float64, depth int) (float
 	mid := (z0 + z1) / 2
 	var k7, g3 float64
 	var fl Flags
+	_, api := lp.shaft.(shaft.AlphaAPI)
 	for i, x := range gkNodes {
 		z := mid + h*x
 		s := s0 + (s1-s0)*(z-z0)/(z1-z0)
-		r, err := lp.shaft.Unit(a.point(lp, units.Length(z), units.Stress(s)))
-		if err != nil {
-			return 0, 0, err
+		var fs float64
+		if su := float64(lp.suAt(units.Length(z))); api && su > 0 && su <= 4.9e6 && s > 0 && s <= 19e6 {
+			// shaft.AlphaAPI.Unit's arithmetic, written out: no interface
+			// call, no Point, no range check (su and σ′v are well inside
+			// its ranges here; elsewhere the method itself decides).
+			psi := su / s
+			var al float64
+			if psi <= 1 {
+				al = 0.5 / math.Sqrt(psi)
+			} else {
+				al = 0.5 / math.Sqrt(math.Sqrt(psi))
+			}
+			if al > 1 {
+				al, fl = 1, fl|BoundApplied
+			}
+			fs = al * su
+		} else {
+			r, err := lp.shaft.Unit(a.point(lp, units.Length(z), units.Stress(s)))
+			if err != nil {
+				return 0, 0, err
+			}
+			fl |= shaftFlags(r.Flags)
+			fs = float64(r.Fs)
 		}
-		fl |= shaftFlags(r.Flags)
-		k7 += gkK[i] * float64(r.Fs)
-		g3 += gkG[i] * float64(r.Fs)
+		k7 += gkK[i] * fs
+		g3 += gkG[i] * fs
 	}
 	k7 *= h
 	g3 *= h

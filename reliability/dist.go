@@ -157,7 +157,14 @@ type marginal struct {
 	pa, dp     float64 // truncated normal: Φ(a) and Φ(b) − Φ(a)
 	mean, sd   float64 // moments of the variable
 	degenerate bool    // σ = 0: always mean
+	direct     int     // directNormal, directLogNormal: transform maps z itself; 0: through fromNormal
 }
+
+// The marginals transform maps without calling fromNormal.
+const (
+	directNormal = iota + 1
+	directLogNormal
+)
 
 func newMarginal(d Distribution) marginal {
 	m := marginal{kind: d.Kind, mu: d.Mean, sigma: d.SD, lo: d.Lower, hi: d.Upper}
@@ -174,6 +181,13 @@ func newMarginal(d Distribution) marginal {
 		}
 	}
 	m.degenerate = d.Kind != Uniform && d.SD == 0
+	switch {
+	case m.degenerate:
+	case d.Kind == Normal:
+		m.direct = directNormal
+	case d.Kind == LogNormal:
+		m.direct = directLogNormal
+	}
 	return m
 }
 

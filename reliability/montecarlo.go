@@ -243,9 +243,36 @@ func summarise(r []float64, load float64, bins int) Summary {
 	if n > 1 {
 		sd = math.Sqrt(ss / float64(n-1))
 	}
-	sortFloats(r)
-	out := Summary{Mean: mean, SD: sd, Min: r[0], Max: r[n-1],
-		P5: quantile(r, 0.05), P50: quantile(r, 0.5), P95: quantile(r, 0.95),
+	// The least and greatest value, and the order statistics the
+	// quantiles read: from buckets where that is quicker than sorting.
+	lo, hi := r[0], r[0]
+	if n >= 4096 {
+		klo, khi := floatKey(r[0]), floatKey(r[0])
+		for _, v := range r {
+			k := floatKey(v)
+			klo, khi = min(klo, k), max(khi, k)
+		}
+		lo, hi = keyFloat(klo), keyFloat(khi)
+	}
+	var ranks []int
+	for _, p := range summaryProbs() {
+		h := float64(n-1) * p
+		if k := int(h); k >= n-1 {
+			ranks = append(ranks, n-1)
+		} else {
+			ranks = append(ranks, k, k+1)
+		}
+	}
+	at := func(k int) float64 { return r[k] }
+	if vals, ok := orderStatsIf(r, lo, hi, ranks); ok {
+		at = func(k int) float64 { return vals[k] }
+	} else {
+		sortFloats(r)
+		lo, hi = r[0], r[n-1]
+	}
+	q := func(p float64) float64 { return quantileAt(n, at, p) }
+	out := Summary{Mean: mean, SD: sd, Min: lo, Max: hi,
+		P5: q(0.05), P50: q(0.5), P95: q(0.95),
 		SEMean: sd / math.Sqrt(float64(n))}
 	if n > 1 {
 		out.SESD = sd / math.Sqrt(2*float64(n-1))
@@ -266,9 +293,8 @@ func summarise(r []float64, load float64, bins int) Summary {
 	}
 	for k := 0; k <= 100; k++ {
 		pk := float64(k) / 100
-		out.CDF = append(out.CDF, Quantile{P: pk, Value: quantile(r, pk)})
+		out.CDF = append(out.CDF, Quantile{P: pk, Value: q(pk)})
 	}
-	lo, hi := r[0], r[n-1]
 	if hi == lo {
 		out.Histogram = []Bin{{From: lo, To: hi, Count: n}}
 		return out
@@ -343,14 +369,38 @@ func sortFloats(r []float64) {
 // quantiles in statistical packages, Am. Stat. 50(4), definition 7, from
 // memory; NumPy's default).
 func quantile(r []float64, p float64) float64 {
-	h := float64(len(r)-1) * p
+	return quantileAt(len(r), func(k int) float64 { return r[k] }, p)
+}
+
+// quantileAt is quantile with the n sorted values read through at.
+func quantileAt(n int, at func(int) float64, p float64) float64 {
+	h := float64(n-1) * p
 	k := int(h)
-	if k >= len(r)-1 {
-		return r[len(r)-1]
+	if k >= n-1 {
+		return at(n - 1)
 	}
 	f := h - float64(k)
 	if f == 0 {
-		return r[k]
+		return at(k)
 	}
-	return r[k] + f*(r[k+1]-r[k])
+	return at(k) + f*(at(k+1)-at(k))
+}
+
+// summaryProbs are the probabilities at which summarise reads quantiles:
+// 0.05, 0.5, 0.95 and 0, 0.01, …, 1.
+func summaryProbs() []float64 {
+	ps := []float64{0.05, 0.5, 0.95}
+	for k := 0; k <= 100; k++ {
+		ps = append(ps, float64(k)/100)
+	}
+	return ps
+}
+
+// orderStatsIf is orderStats for at least 4096 samples not all equal;
+// below that, or where they are, sorting is as quick (ok false).
+func orderStatsIf(r []float64, lo, hi float64, ranks []int) (map[int]float64, bool) {
+	if len(r) < 4096 || !(lo < hi) {
+		return nil, false
+	}
+	return orderStats(r, lo, hi, ranks)
 }

@@ -126,6 +126,22 @@ func (p *Problem) prepare() (*prepared, error) {
 // not allocate.
 func (p *prepared) transform(u, x []float64) {
 	n := p.n
+	if p.chol == nil {
+		// Independent parameters: the normal and the lognormal written
+		// out here as fromNormal computes them (no call per parameter).
+		for i, z := range u[:n] {
+			m := &p.m[i]
+			switch m.direct {
+			case directNormal:
+				x[i] = m.mu + m.sigma*z
+			case directLogNormal:
+				x[i] = math.Exp(m.mu + m.sigma*z)
+			default:
+				x[i] = m.fromNormal(z)
+			}
+		}
+		return
+	}
 	for i := range n {
 		z := u[i]
 		if p.chol != nil {

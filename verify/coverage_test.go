@@ -115,6 +115,7 @@ var reasons = map[string]string{
 	"pile.Design.MaxUse":                    "the largest of the utilisations pile.Check computes (checked there)",
 	"pile.TensionFactor.For":                "returns the factor given for the drainage class",
 	"pile.RequiredLength":                   "no published example searches for a length on a grid; checked in closed form and by properties (the length found passes, one step shorter fails)",
+	"pile.RequiredLengthWithDepth":          "RequiredLength with the rows it searched; the rows are checked to the bit against Analysis.WithDepth per case (TestRequiredLengthWithDepthRows)",
 	"pile.LRFD.Cases":                       "applies a table and factor maps; the presets' factors are checked through the pile.AASHTODrivenPiles and pile.AASHTODrilledShafts cases, their use through pile.Check on GEC 10 Pier 2",
 	"pile.SafetyFactor.Cases":               "Rd = Rb/Fb + Rs/Fs, closed form; no published worked example read",
 	"pile.PresetMethods.Fill":               "chooses methods, no number",
