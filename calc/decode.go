@@ -112,14 +112,40 @@ func decode(data []byte, fast bool) (*File, error) {
 	if root.Kind != yaml.MappingNode {
 		return nil, Problems{{Line: root.Line, Msg: "the top level must be a mapping of keys (title, ground, pile, …)"}}
 	}
-	d := decoder{lines: map[string]int{}}
+	var d decoder
 	var f File
 	d.value(root, reflect.ValueOf(&f).Elem(), "", 0)
 	if len(d.probs) > 0 {
 		return nil, d.probs
 	}
-	f.lines = d.lines
+	f.lines = &pathLines{root: root}
 	return &f, nil
+}
+
+// pathLines is the line of every field path of a decoded file. Only
+// problems read it, so it is built on first use, by walking the node tree
+// again exactly as decode walked it, recording each path's line: a
+// decoder without problems on the first walk has none on the second.
+type pathLines struct {
+	once sync.Once
+	root *yaml.Node
+	m    map[string]int
+}
+
+// lineMap returns the line of every field path read from the file (nil
+// for a File that was not decoded).
+func (f *File) lineMap() map[string]int {
+	if f == nil || f.lines == nil {
+		return nil
+	}
+	pl := f.lines
+	pl.once.Do(func() {
+		d := decoder{lines: map[string]int{}}
+		var g File
+		d.value(pl.root, reflect.ValueOf(&g).Elem(), "", 0)
+		pl.m, pl.root = d.lines, nil
+	})
+	return pl.m
 }
 
 // yamlTree parses data with the YAML parser and returns the root node of
@@ -390,7 +416,30 @@ func (d *decoder) mapping(n *yaml.Node, v reflect.Value, path string, depth int)
 	}
 	si := infoOf(v.Type())
 	fields, inline := si.fields, si.inline
-	seen := make(map[string]bool, len(n.Content)/2)
+	// The keys taken so far: for a mapping of a few keys (every mapping of
+	// a calc file in practice) an earlier key node of the same text is
+	// found by scanning back, which allocates nothing; a key is taken
+	// (below) whatever its position once its text is, so an earlier
+	// scalar key of the same text was taken. Long mappings use a set.
+	var seenSet map[string]bool
+	if len(n.Content) > 2*seenScan {
+		seenSet = make(map[string]bool, len(n.Content)/2)
+	}
+	seen := func(i int, key string) bool {
+		if seenSet != nil {
+			if seenSet[key] {
+				return true
+			}
+			seenSet[key] = true
+			return false
+		}
+		for j := 0; j < i; j += 2 {
+			if kj := n.Content[j]; kj.Kind == yaml.ScalarNode && kj.Value == key {
+				return true
+			}
+		}
+		return false
+	}
 	for i := 0; i+1 < len(n.Content); i += 2 {
 		k, c := n.Content[i], n.Content[i+1]
 		if k.Kind != yaml.ScalarNode {
@@ -404,11 +453,10 @@ func (d *decoder) mapping(n *yaml.Node, v reflect.Value, path string, depth int)
 		p := join(path, k.Value)
 		fi, ok := fields[k.Value]
 		if !ok && inline >= 0 {
-			if seen[k.Value] {
+			if seen(i, k.Value) {
 				d.add(p, k.Line, "given twice")
 				continue
 			}
-			seen[k.Value] = true
 			m := v.Field(inline)
 			if m.IsNil() {
 				m.Set(reflect.MakeMap(m.Type()))
@@ -426,14 +474,17 @@ func (d *decoder) mapping(n *yaml.Node, v reflect.Value, path string, depth int)
 			d.add(p, k.Line, "unknown key %q; accepted here: %s", k.Value, si.names)
 			continue
 		}
-		if seen[k.Value] {
+		if seen(i, k.Value) {
 			d.add(p, k.Line, "given twice")
 			continue
 		}
-		seen[k.Value] = true
 		d.value(c, v.Field(fi), p, depth+1)
 	}
 }
+
+// seenScan is the number of keys up to which mapping finds a key given
+// twice by scanning the keys before it rather than with a set.
+const seenScan = 32
 
 // structInfo is what mapping needs of a struct type: its keys by their
 // yaml tags, and the map field that takes every other key.

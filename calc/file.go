@@ -44,8 +44,9 @@ type File struct {
 	// for the neutral plane and the drag load (calc/downdrag.go).
 	Downdrag *Downdrag `yaml:"downdrag,omitempty" json:"downdrag,omitempty" doc:"Loads placed after the pile is installed (fill, surcharge, lowered water table) and the ground settlement they cause: the neutral plane, drag load and largest axial force by the unified method."`
 
-	// lines maps each field path read from the file to its line.
-	lines map[string]int
+	// lines maps each field path read from the file to its line, built
+	// on first use (see pathLines).
+	lines *pathLines
 }
 
 // Ground is the borehole: groundwater and layers from the surface down.

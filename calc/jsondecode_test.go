@@ -27,6 +27,16 @@ func sameOnBothPaths(t *testing.T, name string, data []byte) bool {
 	if !reflect.DeepEqual(ej, ey) {
 		t.Errorf("%s: problems differ\n JSON path: %v\n YAML path: %v", name, ej, ey)
 	}
+	if lj, ly := fj.lineMap(), fy.lineMap(); !reflect.DeepEqual(lj, ly) {
+		t.Errorf("%s: lines of the keys differ\n JSON path: %v\n YAML path: %v", name, lj, ly)
+	}
+	if fj != nil && fy != nil {
+		// The lines are compared above; the node trees they are built
+		// from may differ in what no line reads (scalar styles).
+		cj, cy := *fj, *fy
+		cj.lines, cy.lines = nil, nil
+		fj, fy = &cj, &cy
+	}
 	if !reflect.DeepEqual(fj, fy) {
 		t.Errorf("%s: decoded files differ\n JSON path: %+v\n YAML path: %+v", name, fj, fy)
 	}

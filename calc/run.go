@@ -461,11 +461,12 @@ func translate(f *File, err error) error {
 // lineOf returns the line of the field at a calc path, or of its
 // nearest parent that was read from the file; 0 when unknown.
 func lineOf(f *File, path string) int {
-	if f == nil || f.lines == nil {
+	lines := f.lineMap()
+	if lines == nil {
 		return 0
 	}
 	for path != "" {
-		if l, ok := f.lines[path]; ok {
+		if l, ok := lines[path]; ok {
 			return l
 		}
 		i := strings.LastIndexAny(path, ".[")
