@@ -143,19 +143,34 @@ func compare(base *pile.Analysis, prof *profile.Profile, p pile.Pile, m pile.Met
 			row := CompareRow{Method: d.ID, Equation: d.Equation(), Chosen: d.ID == chosen}
 			c, err := d.New(shaft.Values{Installation: p.Installation, Surface: surf})
 			if err == nil {
-				mm := withLayers(cls, func(lm *pile.LayerMethods) {
-					if lm.NoShaft {
-						return // the engineer's choice of no friction stays
-					}
-					lm.Shaft, lm.Lambda, lm.LambdaValue = nil, false, 0
-					if d.Kind == shaft.WholePile {
-						lm.Lambda = true
-					} else {
-						lm.Shaft = c.Unit
-					}
-				})
+				// Every layer of the class takes method d, but where the
+				// engineer chose no friction.
+				choice := pile.ShaftChoice{Set: true}
+				if d.Kind == shaft.WholePile {
+					choice.Lambda = true
+				} else {
+					choice.Shaft = c.Unit
+				}
 				var bd pile.Breakdown
-				if bd, err = breakdownOf(prof, p, mm, pass, same); err == nil {
+				if baseErr == nil {
+					// From the file's own analysis, which lends its tip
+					// preparation (pile.Analysis.WithShafts: the same bits).
+					set := make([]pile.ShaftChoice, len(layers))
+					for i, l := range layers {
+						if l.Drainage == cls && !(i < len(m.Layers) && m.Layers[i].NoShaft) {
+							set[i] = choice
+						}
+					}
+					bd, err = breakdownFrom(base, set, pass, same)
+				} else {
+					mm := withLayers(cls, func(lm *pile.LayerMethods) {
+						if !lm.NoShaft {
+							lm.Shaft, lm.Lambda, lm.LambdaValue = choice.Shaft, choice.Lambda, choice.LambdaValue
+						}
+					})
+					bd, err = breakdownOf(prof, p, mm, pass, same)
+				}
+				if err == nil {
 					for _, r := range bd.Rows {
 						if r.Drainage == cls {
 							row.Force += r.Force
@@ -274,6 +289,16 @@ func tipCapacities(base *pile.Analysis, baseErr error, prof *profile.Profile, p 
 // same (see pile.Analysis.BreakdownSharing).
 func breakdownOf(prof *profile.Profile, p pile.Pile, m pile.Methods, pass *pile.ShaftPass, same []bool) (pile.Breakdown, error) {
 	a, err := pile.NewAnalysis(prof, p, m, nil)
+	if err != nil {
+		return pile.Breakdown{}, err
+	}
+	return a.BreakdownSharing(pass, same)
+}
+
+// breakdownFrom is breakdownOf for base's profile and pile with base's
+// methods and the layers' shaft methods of set (pile.Analysis.WithShafts).
+func breakdownFrom(base *pile.Analysis, set []pile.ShaftChoice, pass *pile.ShaftPass, same []bool) (pile.Breakdown, error) {
+	a, err := base.WithShafts(set)
 	if err != nil {
 		return pile.Breakdown{}, err
 	}

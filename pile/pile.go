@@ -379,6 +379,17 @@ func (p Pile) Validate() error {
 // NewAnalysis prepares the analysis of pile p in profile prof with methods
 // m. The pile tip must lie within the profile.
 func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analysis, error) {
+	return newAnalysis(prof, p, m, opt, nil)
+}
+
+// newAnalysis is NewAnalysis; with tips not nil (an analysis of the same
+// profile and pile, without a design case, whose methods differ from m
+// only in the layers' shaft methods: see WithShafts), it takes the layers'
+// tip models, their tips at the layers' ends and the rules of the tip zone
+// from tips instead of working them out again: they read the layers' tip
+// methods and parameters, the section and the tip options, never the
+// shaft methods.
+func newAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options, tips *Analysis) (*Analysis, error) {
 	if prof == nil {
 		return nil, errors.New("pile: NewAnalysis: nil profile")
 	}
@@ -494,6 +505,15 @@ func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analy
 		}
 	}
 	a.markRanges()
+	if tips != nil {
+		for i := range a.plans {
+			lp, tp := &a.plans[i], &tips.plans[i]
+			lp.tm, lp.qpTop, lp.qpBot, lp.errTop, lp.errBot = tp.tm, tp.qpTop, tp.qpBot, tp.errTop, tp.errBot
+			lp.baseTop, lp.baseBot, lp.effTop, lp.errEff = tp.baseTop, tp.baseBot, tp.effTop, tp.errEff
+		}
+		a.prepareDepth()
+		return a, nil
+	}
 	for i := range a.plans {
 		lp := &a.plans[i]
 		lp.tm = a.buildTipModel(lp)

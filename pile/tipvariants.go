@@ -5,6 +5,7 @@ import (
 	"fmt"
 
 	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/shaft"
 )
 
 // CapacityWithTips returns, for each set of tip methods, the capacity with
@@ -96,4 +97,38 @@ func (b *Analysis) withTips(a *Analysis, set []bearing.Tip) error {
 	}
 	b.prepareTipRules()
 	return nil
+}
+
+// ShaftChoice is a layer's shaft method as LayerMethods gives it (Shaft,
+// Lambda, LambdaValue), for WithShafts; Set false leaves the layer's own.
+type ShaftChoice struct {
+	Set         bool
+	Shaft       shaft.Unit
+	Lambda      bool
+	LambdaValue float64
+}
+
+// WithShafts returns what NewAnalysis returns for a's profile, pile and
+// design case with a's methods in which layer i takes the shaft method
+// set[i] (where set[i].Set; a longer set than the profile is an error of
+// NewAnalysis as a longer Methods.Layers is), to the bit. Without a design
+// case the new analysis takes the tip models, the tips at the layers' ends
+// and the rules of the tip zone from a: they read the layers' tip methods
+// and parameters, the section and the tip options, never the shaft
+// methods. It is the fast path of a comparison of shaft methods.
+func (a *Analysis) WithShafts(set []ShaftChoice) (*Analysis, error) {
+	m := a.methods
+	m.Layers = make([]LayerMethods, max(len(a.methods.Layers), len(set)))
+	copy(m.Layers, a.methods.Layers)
+	for i, c := range set {
+		if c.Set {
+			lm := &m.Layers[i]
+			lm.Shaft, lm.Lambda, lm.LambdaValue = c.Shaft, c.Lambda, c.LambdaValue
+		}
+	}
+	if a.useCase {
+		cs := a.cs
+		return NewAnalysis(a.prof, a.pile, m, &Options{Case: &cs})
+	}
+	return newAnalysis(a.prof, a.pile, m, nil, a)
 }

@@ -8,6 +8,7 @@ import (
 	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/profile"
 	"github.com/qultgeo/qult/shaft"
+	"github.com/qultgeo/qult/units"
 	"pgregory.net/rapid"
 )
 
@@ -146,6 +147,84 @@ func TestPropBreakdownSharingMatchesBreakdown(t *testing.T) {
 		}
 		if !reflect.DeepEqual(got, want) {
 			rt.Fatalf("got %+v\nwant %+v", got, want)
+		}
+	})
+}
+
+// TestPropWithShaftsMatchesNewAnalysis: an analysis made by WithShafts
+// (the layers' shaft methods changed) gives, to the bit, the breakdown, the capacity and the capacity with
+// depth (every field at every depth) of the analysis NewAnalysis builds
+// whole with the same methods, and the same errors. The oracle is
+// NewAnalysis itself.
+func TestPropWithShaftsMatchesNewAnalysis(t *testing.T) {
+	drained := []func() LayerMethods{
+		func() LayerMethods { return LayerMethods{Shaft: shaft.BetaGiven{Beta: 0.4}} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.Burland{}} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.DrilledSandK0{}} },
+		func() LayerMethods { return LayerMethods{} }, // the layer's default
+	}
+	undrained := []func() LayerMethods{
+		func() LayerMethods { return LayerMethods{Shaft: shaft.AlphaGiven{Alpha: 0.5}} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.AlphaAPI{}} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.AlphaChart{}} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.AlphaDrilled{}} },
+		func() LayerMethods { return LayerMethods{Lambda: true} },
+		func() LayerMethods { return LayerMethods{Lambda: true, LambdaValue: 0.3} },
+		func() LayerMethods { return LayerMethods{Shaft: shaft.AlphaGiven{Alpha: 0.3}, Lambda: true} }, // both: as NewAnalysis reads them
+	}
+	rapid.Check(t, func(rt *rapid.T) {
+		a, _ := drawAnalysis(rt)
+		m := a.methods
+		n := a.prof.NumLayers()
+		m.Layers = make([]LayerMethods, n)
+		copy(m.Layers, a.methods.Layers)
+		set := make([]ShaftChoice, rapid.IntRange(0, n).Draw(rt, "set"))
+		for i := range set {
+			if rapid.Bool().Draw(rt, fmt.Sprintf("same %d", i)) {
+				continue
+			}
+			pool := undrained
+			if a.prof.Layer(i).Drainage == profile.Drained {
+				pool = drained
+			}
+			lm := pool[rapid.IntRange(0, len(pool)-1).Draw(rt, fmt.Sprintf("method %d", i))]()
+			set[i] = ShaftChoice{Set: true, Shaft: lm.Shaft, Lambda: lm.Lambda, LambdaValue: lm.LambdaValue}
+			m.Layers[i].Shaft, m.Layers[i].Lambda, m.Layers[i].LambdaValue = lm.Shaft, lm.Lambda, lm.LambdaValue
+		}
+		var opt *Options
+		if a.useCase {
+			cs := a.cs
+			opt = &Options{Case: &cs}
+		}
+		want, werr := NewAnalysis(a.prof, a.pile, m, opt)
+		got, gerr := a.WithShafts(set)
+		sameErr := func(what string, g, w error) {
+			if (w == nil) != (g == nil) || (w != nil && w.Error() != g.Error()) {
+				rt.Fatalf("%s: error %v, NewAnalysis %v", what, g, w)
+			}
+		}
+		sameErr("WithShafts", gerr, werr)
+		if werr != nil {
+			return
+		}
+		bw, ew := want.Breakdown()
+		bg, eg := got.Breakdown()
+		sameErr("Breakdown", eg, ew)
+		if !reflect.DeepEqual(bg, bw) {
+			rt.Fatalf("breakdown\n got %+v\nwant %+v", bg, bw)
+		}
+		cw, ew := want.Capacity()
+		cg, eg := got.Capacity()
+		sameErr("Capacity", eg, ew)
+		if cg != cw {
+			rt.Fatalf("capacity\n got %+v\nwant %+v", cg, cw)
+		}
+		g := DepthGrid{Step: units.Length(rapid.Float64Range(0.1, 1).Draw(rt, "step"))}
+		rw, ew := want.WithDepth(g, nil)
+		rg, eg := got.WithDepth(g, nil)
+		sameErr("WithDepth", eg, ew)
+		if !reflect.DeepEqual(rg, rw) {
+			rt.Fatalf("capacity with depth differs")
 		}
 	})
 }
