@@ -112,7 +112,7 @@ func run(f *File, o runOptions) (*Result, error) {
 		res.WithDepth = nil
 	}
 	if in.Basis != nil {
-		d, err := pile.Check(prof, in.Pile, in.Methods, in.Basis, in.Loads)
+		d, err := a.Check(in.Basis, in.Loads) // pile.Check with a, which it would build again
 		if err != nil {
 			return nil, translate(f, err)
 		}

@@ -88,6 +88,33 @@ func Check(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads) (Design, 
 	if err != nil {
 		return Design{}, err
 	}
+	return a.check(cases, b, l)
+}
+
+// Check is Check(prof, p, m, b, l) for a's profile prof, pile p and
+// methods m, taking a as the analysis of the characteristic capacity
+// instead of building it again. a must have been built without a design
+// case (Options.Case); Check panics otherwise.
+func (a *Analysis) Check(b Basis, l Loads) (Design, error) {
+	if a.useCase {
+		panic("pile: Analysis.Check on an analysis with a design case")
+	}
+	if b == nil {
+		return Design{}, errors.New("design: no design basis given")
+	}
+	if err := l.Validate("loads"); err != nil {
+		return Design{}, err
+	}
+	cases, err := b.Cases(a.pile.Installation)
+	if err != nil {
+		return Design{}, err
+	}
+	return a.check(cases, b, l)
+}
+
+// check is Check's work from the characteristic analysis a on.
+func (a *Analysis) check(cases []Case, b Basis, l Loads) (Design, error) {
+	prof, p, m := a.prof, a.pile, a.methods
 	char, err := a.Capacity()
 	if err != nil {
 		return Design{}, err

@@ -228,3 +228,31 @@ func TestPropWithShaftsMatchesNewAnalysis(t *testing.T) {
 		}
 	})
 }
+
+// TestPropAnalysisCheckMatchesCheck: Analysis.Check on the analysis of the
+// characteristic capacity gives what Check, which builds that analysis
+// itself, gives: the same design to the bit and the same error. The
+// oracle is Check; scenarios are drawAnalysis's (our own).
+func TestPropAnalysisCheckMatchesCheck(t *testing.T) {
+	bases := []Basis{SafetyFactor{Global: 2.5}, Eurocode7{Approach: DA1, Profiles: 1}, Eurocode7{Approach: DA2, Profiles: 1}}
+	rapid.Check(t, func(rt *rapid.T) {
+		a, _ := drawAnalysis(rt)
+		if a.useCase { // the characteristic analysis has none
+			var err error
+			if a, err = NewAnalysis(a.prof, a.pile, a.methods, nil); err != nil {
+				rt.Skip(err)
+			}
+		}
+		b := bases[rapid.IntRange(0, len(bases)-1).Draw(rt, "basis")]
+		l := Loads{Compression: Action{Permanent: units.Force(rapid.Float64Range(1e4, 5e6).Draw(rt, "G"))},
+			Tension: Action{Variable: units.Force(rapid.Float64Range(0, 1e6).Draw(rt, "Q"))}}
+		want, werr := Check(a.prof, a.pile, a.methods, b, l)
+		got, gerr := a.Check(b, l)
+		if (werr == nil) != (gerr == nil) || (werr != nil && werr.Error() != gerr.Error()) {
+			rt.Fatalf("error %v, Check %v", gerr, werr)
+		}
+		if !reflect.DeepEqual(got, want) {
+			rt.Fatalf("got %+v\nwant %+v", got, want)
+		}
+	})
+}
