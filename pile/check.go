@@ -123,7 +123,7 @@ func (a *Analysis) check(cases []Case, b Basis, l Loads) (Design, error) {
 	worst := -1.0
 	for i := range cases {
 		cs := cases[i]
-		ad, err := NewAnalysis(prof, p, m, &Options{Case: &cs})
+		ad, err := newAnalysis(prof, p, m, &Options{Case: &cs}, tipsFor(a, &cs))
 		if err != nil {
 			return Design{}, fmt.Errorf("design case %s: %w", cs.Name, err)
 		}
@@ -270,11 +270,19 @@ func requiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, 
 	q := p
 	q.Length = maxTip - p.HeadDepth
 	var rows [][]Capacity
+	var first *Analysis // the first case's analysis, which lends its tip preparation (tipsFor)
 	for i := range cases {
 		cs := cases[i]
-		a, err := NewAnalysis(prof, q, m, &Options{Case: &cs})
+		var src *Analysis
+		if first != nil {
+			src = tipsFor(first, &cs)
+		}
+		a, err := newAnalysis(prof, q, m, &Options{Case: &cs}, src)
 		if err != nil {
 			return LengthResult{}, nil, fmt.Errorf("design case %s: %w", cs.Name, err)
+		}
+		if first == nil {
+			first = a
 		}
 		r, err := a.checkedWithDepth(p.HeadDepth+step, maxTip, step, nil)
 		if err != nil {
@@ -286,24 +294,37 @@ func requiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, 
 	n := len(rows[0])
 	pass := make([]bool, n)
 	use := make([]float64, n)
-	gov := make([]string, n)
+	// What governs at each depth: the case's index, 2·i for its
+	// compression and 2·i+1 for its tension (named by governs).
+	gov := make([]int, n)
+	governs := func(g int) string {
+		if g < 0 {
+			return ""
+		}
+		if g%2 == 0 {
+			return cases[g/2].Name + " compression"
+		}
+		return cases[g/2].Name + " tension"
+	}
+	best := -1
 	for j := 0; j < n; j++ {
-		ok, worst, g := true, 0.0, ""
+		ok, worst, g := true, 0.0, -1
 		for i, cs := range cases {
 			v := Verify(rows[i][j], cs, l)
-			if v.CompressionUse > worst || g == "" {
-				worst, g = v.CompressionUse, cs.Name+" compression"
+			if v.CompressionUse > worst || g < 0 {
+				worst, g = v.CompressionUse, 2*i
 			}
 			if v.TensionUse > worst {
-				worst, g = v.TensionUse, cs.Name+" tension"
+				worst, g = v.TensionUse, 2*i+1
 			}
 			ok = ok && v.Pass
 		}
 		pass[j], use[j], gov[j] = ok, worst, g
 		if worst < out.BestUse {
-			out.BestUse, out.BestTipDepth, out.BestGoverns = worst, rows[0][j].TipDepth, g
+			out.BestUse, out.BestTipDepth, best = worst, rows[0][j].TipDepth, g
 		}
 	}
+	out.BestGoverns = governs(best)
 	for j := 0; j < n; j++ {
 		if !pass[j] {
 			continue
@@ -320,7 +341,7 @@ func requiredLength(prof *profile.Profile, p Pile, m Methods, b Basis, l Loads, 
 			j--
 		}
 		t := rows[0][j].TipDepth
-		out.Found, out.TipDepth, out.Length, out.Governs, out.Use = true, t, t-p.HeadDepth, gov[j], use[j]
+		out.Found, out.TipDepth, out.Length, out.Governs, out.Use = true, t, t-p.HeadDepth, governs(gov[j]), use[j]
 	}
 	if len(out.Passing) > 1 {
 		var sb strings.Builder
@@ -389,4 +410,17 @@ func (a *Analysis) checkedWithDepth(from, to, step units.Length, dst []Capacity)
 		return dst, fmt.Errorf("pile: %d depths asked for; at most 1e6", n)
 	}
 	return a.withDepth(float64(from), float64(step), float64(to), n, dst)
+}
+
+// tipsFor returns from when an analysis with design case cs of from's
+// profile, pile and methods may take its tip preparation from it (see
+// newAnalysis): the tip models, the tips at the layers' ends and the rules
+// of the tip zone read of a design case only its soil factors (the
+// multipliers are applied after them), so when cs's equal from's, they are
+// from's to the bit. Otherwise nil.
+func tipsFor(from *Analysis, cs *Case) *Analysis {
+	if from.cs.TanPhi == cs.TanPhi && from.cs.Su == cs.Su {
+		return from
+	}
+	return nil
 }

@@ -382,13 +382,14 @@ func NewAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options) (*Analy
 	return newAnalysis(prof, p, m, opt, nil)
 }
 
-// newAnalysis is NewAnalysis; with tips not nil (an analysis of the same
-// profile and pile, without a design case, whose methods differ from m
-// only in the layers' shaft methods: see WithShafts), it takes the layers'
-// tip models, their tips at the layers' ends and the rules of the tip zone
-// from tips instead of working them out again: they read the layers' tip
-// methods and parameters, the section and the tip options, never the
-// shaft methods.
+// newAnalysis is NewAnalysis; with tips not nil it takes the layers' tip
+// models, their tips at the layers' ends and the rules of the tip zone
+// from tips instead of working them out again. These read the profile, the
+// section, the layers' tip methods and parameters after the soil factors,
+// and the tip options; never the shaft methods nor a design case's
+// multipliers. So tips must be an analysis of the same profile and pile
+// whose methods differ from m at most in the layers' shaft methods
+// (WithShafts) and whose soil factors are those of opt's case (tipsFor).
 func newAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options, tips *Analysis) (*Analysis, error) {
 	if prof == nil {
 		return nil, errors.New("pile: NewAnalysis: nil profile")

@@ -256,3 +256,69 @@ func TestPropAnalysisCheckMatchesCheck(t *testing.T) {
 		}
 	})
 }
+
+// TestPropCaseTipsMatchNewAnalysis: an analysis with a design case that
+// takes its tip preparation from another analysis of the same profile,
+// pile and methods with the same soil factors (tipsFor, as Check and the
+// search for the length do) gives, to the bit, the breakdown, capacity and
+// capacity with depth of the analysis NewAnalysis builds whole with that
+// case, and the same errors. The oracle is NewAnalysis itself; the
+// factors are drawn (not a published set).
+func TestPropCaseTipsMatchNewAnalysis(t *testing.T) {
+	drawCase := func(rt *rapid.T, name string) Case {
+		f := func(k string) float64 { return rapid.Float64Range(0.4, 1).Draw(rt, name+" "+k) }
+		soil := func(k string) float64 { return rapid.SampledFrom([]float64{1, 1.25}).Draw(rt, name+" "+k) }
+		return Case{Name: name, Tip: map[string]float64{"": f("tip")}, Shaft: map[string]float64{"": f("shaft")},
+			Tension: map[string]float64{"": f("tension")}, Permanent: 1, Variable: 1, Weight: 1,
+			TanPhi: soil("tanφ"), Su: soil("su")}
+	}
+	rapid.Check(t, func(rt *rapid.T) {
+		a, _ := drawAnalysis(rt)
+		var src *Analysis
+		if rapid.Bool().Draw(rt, "source with a case") {
+			c1 := drawCase(rt, "c1")
+			b, err := NewAnalysis(a.prof, a.pile, a.methods, &Options{Case: &c1})
+			if err != nil {
+				rt.Skip(err)
+			}
+			src = b
+		} else {
+			b, err := NewAnalysis(a.prof, a.pile, a.methods, nil)
+			if err != nil {
+				rt.Skip(err)
+			}
+			src = b
+		}
+		c2 := drawCase(rt, "c2")
+		want, werr := NewAnalysis(a.prof, a.pile, a.methods, &Options{Case: &c2})
+		got, gerr := newAnalysis(a.prof, a.pile, a.methods, &Options{Case: &c2}, tipsFor(src, &c2))
+		sameErr := func(what string, g, w error) {
+			if (w == nil) != (g == nil) || (w != nil && w.Error() != g.Error()) {
+				rt.Fatalf("%s: error %v, NewAnalysis %v", what, g, w)
+			}
+		}
+		sameErr("newAnalysis", gerr, werr)
+		if werr != nil {
+			return
+		}
+		bw, ew := want.Breakdown()
+		bg, eg := got.Breakdown()
+		sameErr("Breakdown", eg, ew)
+		if !reflect.DeepEqual(bg, bw) {
+			rt.Fatalf("breakdown\n got %+v\nwant %+v", bg, bw)
+		}
+		cw, ew := want.Capacity()
+		cg, eg := got.Capacity()
+		sameErr("Capacity", eg, ew)
+		if cg != cw {
+			rt.Fatalf("capacity\n got %+v\nwant %+v", cg, cw)
+		}
+		g := DepthGrid{Step: units.Length(rapid.Float64Range(0.1, 1).Draw(rt, "step"))}
+		rw, ew := want.WithDepth(g, nil)
+		rg, eg := got.WithDepth(g, nil)
+		sameErr("WithDepth", eg, ew)
+		if !reflect.DeepEqual(rg, rw) {
+			rt.Fatalf("capacity with depth differs")
+		}
+	})
+}
