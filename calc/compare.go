@@ -161,7 +161,11 @@ func compare(base *pile.Analysis, prof *profile.Profile, p pile.Pile, m pile.Met
 							set[i] = choice
 						}
 					}
-					bd, err = breakdownFrom(base, set, pass, same)
+					if base.HasShafts(set) {
+						bd = b // the file's own methods: its breakdown, to the bit
+					} else {
+						bd, err = breakdownFrom(base, set, pass, same)
+					}
 				} else {
 					mm := withLayers(cls, func(lm *pile.LayerMethods) {
 						if !lm.NoShaft {

@@ -3,6 +3,7 @@ package pile
 import (
 	"errors"
 	"fmt"
+	"reflect"
 
 	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/shaft"
@@ -131,4 +132,34 @@ func (a *Analysis) WithShafts(set []ShaftChoice) (*Analysis, error) {
 		return NewAnalysis(a.prof, a.pile, m, &Options{Case: &cs})
 	}
 	return newAnalysis(a.prof, a.pile, m, nil, a)
+}
+
+// HasShafts reports whether every layer that set changes (set[i].Set)
+// already has that shaft method in a: the λ method with the same value, or
+// an equal unit method (and no λ). Then WithShafts(set) builds an analysis
+// equal to a, whose breakdown is a's. A false answer may be conservative
+// (a layer's default method given by name).
+func (a *Analysis) HasShafts(set []ShaftChoice) bool {
+	if len(set) > len(a.plans) {
+		return false
+	}
+	for i, c := range set {
+		if !c.Set {
+			continue
+		}
+		lp := &a.plans[i]
+		if c.Lambda != lp.lambda || c.LambdaValue != lp.lamVal {
+			return false
+		}
+		if c.Lambda && c.Shaft == nil {
+			continue
+		}
+		if c.Shaft == nil || lp.shaft == nil {
+			return false
+		}
+		if reflect.TypeOf(c.Shaft) != reflect.TypeOf(lp.shaft) || !reflect.DeepEqual(c.Shaft, lp.shaft) {
+			return false
+		}
+	}
+	return true
 }

@@ -188,6 +188,11 @@ func TestPropWithShaftsMatchesNewAnalysis(t *testing.T) {
 				pool = drained
 			}
 			lm := pool[rapid.IntRange(0, len(pool)-1).Draw(rt, fmt.Sprintf("method %d", i))]()
+			if rapid.Bool().Draw(rt, fmt.Sprintf("own %d", i)) {
+				// The method the layer has (for HasShafts).
+				lp := &a.plans[i]
+				lm = LayerMethods{Shaft: lp.shaft, Lambda: lp.lambda, LambdaValue: lp.lamVal}
+			}
 			set[i] = ShaftChoice{Set: true, Shaft: lm.Shaft, Lambda: lm.Lambda, LambdaValue: lm.LambdaValue}
 			m.Layers[i].Shaft, m.Layers[i].Lambda, m.Layers[i].LambdaValue = lm.Shaft, lm.Lambda, lm.LambdaValue
 		}
@@ -212,6 +217,13 @@ func TestPropWithShaftsMatchesNewAnalysis(t *testing.T) {
 		sameErr("Breakdown", eg, ew)
 		if !reflect.DeepEqual(bg, bw) {
 			rt.Fatalf("breakdown\n got %+v\nwant %+v", bg, bw)
+		}
+		if a.HasShafts(set) {
+			ba, ea := a.Breakdown()
+			sameErr("HasShafts: Breakdown of a", ea, ew)
+			if !reflect.DeepEqual(ba, bw) {
+				rt.Fatalf("HasShafts, but the breakdown differs\n   a %+v\nwant %+v", ba, bw)
+			}
 		}
 		cw, ew := want.Capacity()
 		cg, eg := got.Capacity()
