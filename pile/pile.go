@@ -280,12 +280,12 @@ const lambdaID = "lambda"
 
 // layerPlan is one layer's resolved methods and parameters.
 type layerPlan struct {
-	layer   profile.Layer
-	phi     units.Angle  // φ′ after soil factors
-	c       units.Stress // c′ after soil factors
-	su0     units.Stress // su at top after soil factors
-	su1     units.Stress // su at bottom after soil factors
-	k0      float64      // (1 − sinφ′)·OCR^sinφ′ for Vesic's σ′o
+	layer   *profile.Layer // a.layers[i], shared read only
+	phi     units.Angle    // φ′ after soil factors
+	c       units.Stress   // c′ after soil factors
+	su0     units.Stress   // su at top after soil factors
+	su1     units.Stress   // su at bottom after soil factors
+	k0      float64        // (1 − sinφ′)·OCR^sinφ′ for Vesic's σ′o
 	tip     bearing.Tip
 	shaft   shaft.Unit
 	lambda  bool
@@ -330,7 +330,8 @@ type Analysis struct {
 	pile      Pile
 	methods   Methods
 	plans     []layerPlan
-	splits    []float64 // sorted depths where the shaft is split (profile breaks, zc, zones, kinks)
+	layers    []profile.Layer // prof's layers, read only (shared with the analyses made from this one)
+	splits    []float64       // sorted depths where the shaft is split (profile breaks, zc, zones, kinks)
 	iv        []interval
 	zc        float64 // critical depth, 0 for none
 	svc       float64 // σ′v at the critical depth
@@ -421,7 +422,11 @@ func newAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options, tips *A
 	a.lambda = shaft.Lambda{Extrapolate: m.Clamp, NoCap: m.NoLambdaCap}
 	a.tension = m.Tension
 	if a.tension.Name == "" && a.tension.Value == 0 && a.tension.Drained == 0 && a.tension.Undrained == 0 {
-		a.tension = DefaultTension()
+		if tips != nil {
+			a.tension = tips.tension // the same default (the methods agree), read only
+		} else {
+			a.tension = DefaultTension()
+		}
 	}
 	if err := a.tension.Validate("methods.tension_shaft_ratio"); err != nil {
 		return nil, err
@@ -460,6 +465,11 @@ func newAnalysis(prof *profile.Profile, p Pile, m Methods, opt *Options, tips *A
 		}
 	}
 	var errs []error
+	if tips != nil {
+		a.layers = tips.layers
+	} else {
+		a.layers = prof.Layers()
+	}
 	a.plans = make([]layerPlan, 0, prof.NumLayers())
 	for i := 0; i < prof.NumLayers(); i++ {
 		lp, err := a.plan(i)
@@ -543,7 +553,7 @@ func sortUnique(x []float64) []float64 {
 
 // plan resolves layer i's methods and factored parameters.
 func (a *Analysis) plan(i int) (layerPlan, error) {
-	l := a.prof.Layer(i)
+	l := &a.layers[i]
 	m := a.methods
 	path := func() string { return fmt.Sprintf("layers[%d]", i) } // for an error only
 	lp := layerPlan{layer: l}
