@@ -33,6 +33,8 @@ var reasons = map[string]string{
 	"pile.Analysis.ShaftPass":               "keeps the shaft integral of pile.Analysis.Capacity (which carries the published cases) segment by segment, for BreakdownSharing",
 	"pile.Analysis.BreakdownSharing":        "a faster path to pile.Analysis.Breakdown (which carries the published cases) for analyses that share layers; checked to the bit against Breakdown, on random profiles",
 	"pile.Analysis.CapacityWithTips":        "a faster path to pile.Analysis.Capacity (which carries the published cases) with other tip methods; checked to the bit against analyses built whole, on random profiles",
+	"pile.Analysis.WithShafts":              "a faster way to build the analysis of pile.NewAnalysis (whose capacity carries the published cases) with other shaft methods; checked to the bit against analyses built whole, on random profiles",
+	"pile.Analysis.Check":                   "pile.Check (which carries the published case) on an analysis already built; checked to the bit against pile.Check on random profiles",
 	"phase.PorosityFromVoidRatio":           "a definition, n = e/(1 + e); checked in closed form; phase.Solve carries the published cases",
 	"phase.VoidRatioFromPorosity":           "a definition, e = n/(1 − n); checked in closed form; phase.Solve carries the published cases",
 	"phase.DryUnitWeight":                   "one relation of phase.Solve (which carries the published cases); checked in closed form",
