@@ -112,6 +112,46 @@ func (r *resolver) area(v Value, path string) units.Area {
 	return units.Area(r.q(v, path, units.DimArea))
 }
 
+// The readers below take a field's path as its parent's path and its key
+// (".key"), joined only for a value that is given: most keys of a layer
+// are not, and their paths are then never needed.
+func (r *resolver) lengthAt(v Value, path, key string) units.Length {
+	if !v.IsSet() {
+		return 0
+	}
+	return r.length(v, path+key)
+}
+func (r *resolver) stressAt(v Value, path, key string) units.Stress {
+	if !v.IsSet() {
+		return 0
+	}
+	return r.stress(v, path+key)
+}
+func (r *resolver) weightAt(v Value, path, key string) units.UnitWeight {
+	if !v.IsSet() {
+		return 0
+	}
+	return r.weight(v, path+key)
+}
+func (r *resolver) angleAt(v Value, path, key string) units.Angle {
+	if !v.IsSet() {
+		return 0
+	}
+	return r.angle(v, path+key)
+}
+func (r *resolver) fractionAt(v Value, path, key string) float64 {
+	if !v.IsSet() {
+		return 0
+	}
+	return r.fraction(v, path+key)
+}
+func (r *resolver) numAt(v Value, path, key string, lo, hi float64) float64 {
+	if !v.IsSet() {
+		return 0
+	}
+	return r.num(v, path+key, lo, hi)
+}
+
 // num reads a plain number within [lo, hi]; unset gives 0.
 func (r *resolver) num(v Value, path string, lo, hi float64) float64 {
 	if !v.IsSet() {
@@ -231,9 +271,9 @@ func (r *resolver) groundSpec(g *Ground, pre string, sys units.System) profile.S
 	for i, l := range g.Layers {
 		path := fmt.Sprintf(pre+".layers[%d]", i)
 		ls := profile.LayerSpec{Name: l.Name}
-		ls.Thickness = r.length(l.Thickness, path+".thickness")
-		ls.Top = r.length(l.Top, path+".top")
-		ls.Bottom = r.length(l.Bottom, path+".bottom")
+		ls.Thickness = r.lengthAt(l.Thickness, path, ".thickness")
+		ls.Top = r.lengthAt(l.Top, path, ".top")
+		ls.Bottom = r.lengthAt(l.Bottom, path, ".bottom")
 		if !l.Thickness.IsSet() && !l.Bottom.IsSet() {
 			r.add(path+".thickness", 0, "not given; give thickness, or top and bottom")
 		}
@@ -254,39 +294,39 @@ func (r *resolver) groundSpec(g *Ground, pre string, sys units.System) profile.S
 			}
 			ls.Soil = soil
 		}
-		ls.UnitWeight = r.weight(l.UnitWeight, path+".unit_weight")
-		ls.SaturatedUnitWeight = r.weight(l.SaturatedUnitWeight, path+".saturated_unit_weight")
-		ls.DryUnitWeight = r.weight(l.DryUnitWeight, path+".dry_unit_weight")
-		ls.VoidRatio = r.num(l.VoidRatio, path+".void_ratio", 0, 20)
-		ls.WaterContent = r.fraction(l.WaterContent, path+".water_content")
-		ls.Gs = r.num(l.SpecificGravity, path+".specific_gravity", 0, 10)
-		ls.Saturation = r.fraction(l.Saturation, path+".saturation")
-		ls.Phi = r.angle(l.FrictionAngle, path+".friction_angle")
-		ls.Cohesion = r.stress(l.Cohesion, path+".cohesion")
+		ls.UnitWeight = r.weightAt(l.UnitWeight, path, ".unit_weight")
+		ls.SaturatedUnitWeight = r.weightAt(l.SaturatedUnitWeight, path, ".saturated_unit_weight")
+		ls.DryUnitWeight = r.weightAt(l.DryUnitWeight, path, ".dry_unit_weight")
+		ls.VoidRatio = r.numAt(l.VoidRatio, path, ".void_ratio", 0, 20)
+		ls.WaterContent = r.fractionAt(l.WaterContent, path, ".water_content")
+		ls.Gs = r.numAt(l.SpecificGravity, path, ".specific_gravity", 0, 10)
+		ls.Saturation = r.fractionAt(l.Saturation, path, ".saturation")
+		ls.Phi = r.angleAt(l.FrictionAngle, path, ".friction_angle")
+		ls.Cohesion = r.stressAt(l.Cohesion, path, ".cohesion")
 		if su := l.UndrainedStrength; su != nil {
 			if su.Value.IsSet() {
-				ls.Su = r.stress(su.Value, path+".undrained_strength")
+				ls.Su = r.stressAt(su.Value, path, ".undrained_strength")
 			} else {
-				ls.SuTop = r.stress(su.Top, path+".undrained_strength.top")
-				ls.SuBottom = r.stress(su.Bottom, path+".undrained_strength.bottom")
+				ls.SuTop = r.stressAt(su.Top, path, ".undrained_strength.top")
+				ls.SuBottom = r.stressAt(su.Bottom, path, ".undrained_strength.bottom")
 				if !su.Top.IsSet() || !su.Bottom.IsSet() {
 					r.add(path+".undrained_strength", 0, "give a single value, or both top and bottom")
 				}
 			}
 		}
-		ls.OCR = r.num(l.OCR, path+".ocr", 0, 1e6)
-		ls.Dr = r.fraction(l.RelativeDensity, path+".relative_density")
-		ls.N60 = r.num(l.N60, path+".n60", 0, 1e6)
-		ls.E = r.stress(l.YoungsModulus, path+".youngs_modulus")
-		ls.G = r.stress(l.ShearModulus, path+".shear_modulus")
-		ls.Nu = r.num(l.PoissonsRatio, path+".poissons_ratio", 0, 1e6)
-		ls.Ir = r.num(l.RigidityIndex, path+".rigidity_index", 0, 1e9)
-		ls.Delta = r.num(l.VolumetricStrain, path+".volumetric_strain", 0, 0.5)
-		ls.Cc = r.num(l.CompressionIndex, path+".compression_index", 0, 10)
-		ls.Cr = r.num(l.RecompressionIndex, path+".recompression_index", 0, 10)
-		ls.E0 = r.num(l.InitialVoidRatio, path+".initial_void_ratio", 0, 15)
-		ls.Pc = r.stress(l.PreconsolidationStress, path+".preconsolidation_stress")
-		ls.M = r.stress(l.ConstrainedModulus, path+".constrained_modulus")
+		ls.OCR = r.numAt(l.OCR, path, ".ocr", 0, 1e6)
+		ls.Dr = r.fractionAt(l.RelativeDensity, path, ".relative_density")
+		ls.N60 = r.numAt(l.N60, path, ".n60", 0, 1e6)
+		ls.E = r.stressAt(l.YoungsModulus, path, ".youngs_modulus")
+		ls.G = r.stressAt(l.ShearModulus, path, ".shear_modulus")
+		ls.Nu = r.numAt(l.PoissonsRatio, path, ".poissons_ratio", 0, 1e6)
+		ls.Ir = r.numAt(l.RigidityIndex, path, ".rigidity_index", 0, 1e9)
+		ls.Delta = r.numAt(l.VolumetricStrain, path, ".volumetric_strain", 0, 0.5)
+		ls.Cc = r.numAt(l.CompressionIndex, path, ".compression_index", 0, 10)
+		ls.Cr = r.numAt(l.RecompressionIndex, path, ".recompression_index", 0, 10)
+		ls.E0 = r.numAt(l.InitialVoidRatio, path, ".initial_void_ratio", 0, 15)
+		ls.Pc = r.stressAt(l.PreconsolidationStress, path, ".preconsolidation_stress")
+		ls.M = r.stressAt(l.ConstrainedModulus, path, ".constrained_modulus")
 		// An explicit zero is a value, not "not given": where the library
 		// reads zero as absent, a zero given in the file is refused; where
 		// zero is a real state (a dry soil), it is passed on as one.
