@@ -3,6 +3,7 @@ package pile
 import (
 	"math"
 	"slices"
+	"sort"
 
 	"github.com/qultgeo/qult/units"
 )
@@ -432,7 +433,107 @@ func (a *Analysis) spanTip(s *sums, k int, rows []Capacity) {
 	nearTop, nearBot := li > 0, li < len(a.plans)-1
 	layerTop, layerBot := float64(lp.layer.Top), float64(lp.layer.Bottom)
 	flags0 := s.flags | p.shaftFlags | p.tipFlags
-	for j := range rows {
+	full := func(j0, j1 int) {
+		for j := j0; j < j1; j++ {
+			c := &rows[j]
+			z := float64(c.TipDepth)
+			fl := flags0 | c.Flags
+			// The tip model.
+			sv := eE0 + eDe*(z-ivTop)
+			var qp float64
+			if fixed != 0 {
+				qp = fixed
+				if limit > 0 && qp > limit {
+					qp = limit
+					fl |= TipLimit
+				}
+			} else {
+				cv := cc
+				if useSu {
+					cv = 0
+					if tmSu {
+						// The clamp of tipQuick, with plain comparisons
+						// (z is a depth, never NaN).
+						zz := units.Length(z)
+						if zz < lTopL {
+							zz = lTopL
+						}
+						if zz > lBotL {
+							zz = lBotL
+						}
+						cv = su0
+						if suVaries {
+							cv = su0 + dsu*((float64(zz)-lTop)/lH)
+						}
+					}
+				}
+				fric := kq * sv * nq
+				qp = nc*cv + fric
+				if limit > 0 {
+					if limFric {
+						if fric > limit {
+							qp = nc*cv + limit
+							fl |= TipLimit
+						}
+					} else if qp > limit {
+						qp = limit
+						fl |= TipLimit
+					}
+				}
+			}
+			// baseRules, decided in advance.
+			if lb := z - zoneTop; lb < zoneLen {
+				switch {
+				case ramp && qp > 0:
+					if noEmbed {
+						fl |= EmbedmentOff
+					} else {
+						qp *= lb * invZone
+						fl |= EmbedmentRamp
+					}
+				case layered:
+					switch {
+					case !layeredOn:
+						if upErr || upBase < qp {
+							fl |= LayeredTipOff
+						}
+					case upBase < qp: // upErr with the rule on is not fast
+						qp = upBase + (qp-upBase)*lb*inv10d
+						fl |= LayeredTip
+					}
+				}
+			}
+			// weakRule with its one candidate, the next layer.
+			if nextTop < z+weakZone && nextEff < qp {
+				if noWeak {
+					fl |= WeakLayerOff
+				} else if v := nextEff + (qp-nextEff)*(nextTop-z)*invWeak; v < qp {
+					qp = v
+					fl |= WeakLayerReduced
+				}
+			}
+			if z-layerTop < d && nearTop || layerBot-z < d && nearBot {
+				fl |= TipNearBoundary
+			}
+			if nextTop < z+weakBelow && (nextWeaker || nextQp < qp) {
+				fl |= WeakBelow
+			}
+			c.UnitTip, c.Flags = units.Stress(qp), fl
+		}
+	}
+	// The rows from lo to hi lie where no rule of the tip zone and no
+	// flag that depends on the depth alone applies: there the tip model
+	// alone acts (the same operations). Each test is the loop's own and
+	// monotone in z, and the rows' depths increase (spanShaft keeps
+	// z > prev), so a binary search finds lo and hi exactly.
+	early := func(z float64) bool { return z-zoneTop < zoneLen || z-layerTop < d && nearTop }
+	late := func(z float64) bool {
+		return nextTop < z+weakZone || layerBot-z < d && nearBot || nextTop < z+weakBelow
+	}
+	lo := sort.Search(len(rows), func(j int) bool { return !early(float64(rows[j].TipDepth)) })
+	hi := lo + sort.Search(len(rows)-lo, func(j int) bool { return late(float64(rows[lo+j].TipDepth)) })
+	full(0, lo)
+	for j := lo; j < hi; j++ {
 		c := &rows[j]
 		z := float64(c.TipDepth)
 		fl := flags0 | c.Flags
@@ -479,45 +580,9 @@ func (a *Analysis) spanTip(s *sums, k int, rows []Capacity) {
 				}
 			}
 		}
-		// baseRules, decided in advance.
-		if lb := z - zoneTop; lb < zoneLen {
-			switch {
-			case ramp && qp > 0:
-				if noEmbed {
-					fl |= EmbedmentOff
-				} else {
-					qp *= lb * invZone
-					fl |= EmbedmentRamp
-				}
-			case layered:
-				switch {
-				case !layeredOn:
-					if upErr || upBase < qp {
-						fl |= LayeredTipOff
-					}
-				case upBase < qp: // upErr with the rule on is not fast
-					qp = upBase + (qp-upBase)*lb*inv10d
-					fl |= LayeredTip
-				}
-			}
-		}
-		// weakRule with its one candidate, the next layer.
-		if nextTop < z+weakZone && nextEff < qp {
-			if noWeak {
-				fl |= WeakLayerOff
-			} else if v := nextEff + (qp-nextEff)*(nextTop-z)*invWeak; v < qp {
-				qp = v
-				fl |= WeakLayerReduced
-			}
-		}
-		if z-layerTop < d && nearTop || layerBot-z < d && nearBot {
-			fl |= TipNearBoundary
-		}
-		if nextTop < z+weakBelow && (nextWeaker || nextQp < qp) {
-			fl |= WeakBelow
-		}
 		c.UnitTip, c.Flags = units.Stress(qp), fl
 	}
+	full(hi, len(rows))
 	a.spanAssemble(s, k, rows)
 }
 
