@@ -199,10 +199,12 @@ func compare(base *pile.Analysis, prof *profile.Profile, p pile.Pile, m pile.Met
 		// per method, computed together (pile.CapacityWithTips integrates
 		// the shaft, which they share, once; it gives what an analysis
 		// built whole with them gives).
-		var ds []bearing.Descriptor
+		var ds []*bearing.Descriptor // pointers into the table, read only
 		var sets [][]bearing.Tip
 		var newErrs []error
-		for _, d := range tipCatalogue() {
+		cat := tipCatalogue()
+		for k := range cat {
+			d := &cat[k]
 			if string(d.Drainage) != cls.String() || requiresKey(d.Params) {
 				continue
 			}
@@ -219,6 +221,9 @@ func compare(base *pile.Analysis, prof *profile.Profile, p pile.Pile, m pile.Met
 			ds, sets, newErrs = append(ds, d), append(sets, set), append(newErrs, err)
 		}
 		caps, errs := tipCapacities(base, baseErr, prof, p, m, sets)
+		if len(ds) > 0 {
+			g.Rows = make([]CompareRow, 0, len(ds))
+		}
 		for j, d := range ds {
 			row := CompareRow{Method: d.ID, Equation: d.Equation(), Chosen: d.ID == b.Tip.Method}
 			err := newErrs[j]
