@@ -172,7 +172,7 @@ func (r *resolver) candidate(f *File, in *Inputs, out *candidatesInputs, c *Cand
 			sizes = append(sizes, r.length(v, fmt.Sprintf("%s.diameters[%d]", path, j)))
 		}
 	} else if shape != 0 {
-		r.candidateSectionKeys(shape, c.Section, path)
+		r.sectionKeysAt(shape, c.Section, path+".section", lineOf(r.f, path+".section"))
 	}
 	p := pile.Pile{Section: sec, HeadDepth: in.Pile.HeadDepth, Installation: inst,
 		Modulus: in.Pile.Modulus, UnitWeight: in.Pile.UnitWeight}
@@ -256,29 +256,6 @@ func (r *resolver) candidateError(f *File, cp, path string, err error) {
 		}
 	}
 	r.add(full, lineOf(f, full), "%s", msg)
-}
-
-// candidateSectionKeys reports the keys a shape needs that are missing and
-// keys given that it does not read.
-func (r *resolver) candidateSectionKeys(shape pile.Shape, sec Section, path string) {
-	given := map[string]Value{"diameter": sec.Diameter, "width": sec.Width, "wall": sec.Wall, "depth": sec.Depth,
-		"web": sec.Web, "flange": sec.Flange, "area": sec.Area, "perimeter": sec.Perimeter}
-	used := map[string]bool{}
-	var need []string
-	for _, f := range sectionFields[shape] {
-		used[f.key] = true
-		need = append(need, f.key)
-	}
-	for _, f := range sectionFields[shape] {
-		if !given[f.key].IsSet() {
-			r.add(path+".section."+f.key, lineOf(r.f, path+".section"), "not given; shape %s needs %s (%s: %s)", shape, strings.Join(need, ", "), f.key, f.what)
-		}
-	}
-	for _, k := range []string{"diameter", "width", "wall", "depth", "web", "flange", "area", "perimeter"} {
-		if v := given[k]; v.IsSet() && !used[k] {
-			r.add(path+".section."+k, v.Line, "shape %s does not use %s; it reads %s", shape, k, strings.Join(need, ", "))
-		}
-	}
 }
 
 // material resolves a candidate's material and the structural rule of the

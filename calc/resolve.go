@@ -436,6 +436,12 @@ var sectionFields = map[pile.Shape][]struct{ key, what string }{
 // sectionKeys reports the keys a shape needs that are missing, and keys
 // given that the shape does not read (they would be ignored in silence).
 func (r *resolver) sectionKeys(shape pile.Shape, sec Section) {
+	r.sectionKeysAt(shape, sec, "pile.section", 0)
+}
+
+// sectionKeysAt is sectionKeys for the section at path; a missing key is
+// reported at line missingLine (0: looked up from the path).
+func (r *resolver) sectionKeysAt(shape pile.Shape, sec Section, path string, missingLine int) {
 	given := map[string]Value{"diameter": sec.Diameter, "width": sec.Width, "wall": sec.Wall, "depth": sec.Depth,
 		"web": sec.Web, "flange": sec.Flange, "area": sec.Area, "perimeter": sec.Perimeter}
 	used := map[string]bool{}
@@ -446,12 +452,12 @@ func (r *resolver) sectionKeys(shape pile.Shape, sec Section) {
 	}
 	for _, f := range sectionFields[shape] {
 		if !given[f.key].IsSet() {
-			r.add("pile.section."+f.key, 0, "not given; shape %s needs %s (%s: %s)", shape, strings.Join(need, ", "), f.key, f.what)
+			r.add(path+"."+f.key, missingLine, "not given; shape %s needs %s (%s: %s)", shape, strings.Join(need, ", "), f.key, f.what)
 		}
 	}
 	for _, k := range []string{"diameter", "width", "wall", "depth", "web", "flange", "area", "perimeter"} {
 		if v := given[k]; v.IsSet() && !used[k] {
-			r.add("pile.section."+k, v.Line, "shape %s does not use %s; it reads %s", shape, k, strings.Join(need, ", "))
+			r.add(path+"."+k, v.Line, "shape %s does not use %s; it reads %s", shape, k, strings.Join(need, ", "))
 		}
 	}
 }
