@@ -1,3 +1,9 @@
+// Source of the numbers in this file: the grounds, loads, sections and costs
+// are invented scenarios (drawn at random in the property tests); the
+// expected values come from the library itself run another way
+// (pile.RequiredLength for the same pile) or from the properties stated, so
+// no published value is involved.
+
 package calc
 
 import (

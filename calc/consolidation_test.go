@@ -1,3 +1,7 @@
+// Source of the numbers in this file: the keys' values are invented; the
+// test checks decoding (the values must arrive unchanged, in SI) and the
+// line of a problem, so no published value is involved.
+
 package calc
 
 import (

@@ -1,3 +1,8 @@
+// Source of the numbers in this file: the grounds and loads are drawn at
+// random; the expected values are the ordinary design check of the same file
+// (a property that holds by construction), so no published value is
+// involved.
+
 package calc
 
 // The property holds by construction (no published values): with a

@@ -1,3 +1,8 @@
+// Source of the numbers in this file: the sounding and ground are a scenario
+// of our own; the expected values are the same interpretation run through
+// package insitu directly, and the capacity with and without the sounding,
+// so no published value is involved.
+
 package calc
 
 import (

@@ -1,3 +1,8 @@
+// Source of the numbers in this file: a scenario of our own; the expected
+// output is worked by hand in the example's comment from the cited equations
+// (AASHTO practice efficiency, Terzaghi & Peck block), a closed-form check,
+// not a published value.
+
 package group_test
 
 import (

@@ -1,3 +1,8 @@
+// Source of the numbers in this file: invented layouts; the expected values
+// are the layout rules' own thresholds (one pile width; AASHTO LRFD 10.7.1.2
+// spacing and edge distances, from memory, as the package doc cites them),
+// no published worked value.
+
 package group_test
 
 import (

@@ -1,3 +1,6 @@
+// Source of the numbers in this file: a benchmark on a sounding of our own;
+// it asserts no value.
+
 package insitu
 
 import (

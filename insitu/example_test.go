@@ -1,3 +1,8 @@
+// Source of the numbers in this file: a sounding of our own; the example
+// documents the use of the package, and its output is what the
+// interpretation gives for that invented input (the reference checks against
+// published values are in the package's other tests), not a published value.
+
 package insitu_test
 
 import (

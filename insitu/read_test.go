@@ -1,3 +1,8 @@
+// Source of the numbers in this file: the test files in testdata are written
+// by us to the published AGS4 4.1.1 and GEF-CPT-Report definitions (cited in
+// ags.go and gef.go); the expected values are those files' own numbers read
+// back, so no published worked value is involved.
+
 package insitu
 
 import (

@@ -1,3 +1,7 @@
+// Source of the numbers in this file: randomly drawn soundings; the expected
+// values are the written numbers read back (a round trip), so no published
+// value is involved.
+
 package insitu
 
 import (

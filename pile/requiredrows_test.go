@@ -1,3 +1,8 @@
+// Source of the numbers in this file: the ground is the invented scenario of
+// uniformClay; the expected values are Analysis.WithDepth and RequiredLength
+// on the same pile (an oracle kept in the package), so no published value is
+// involved.
+
 package pile
 
 import (

@@ -1,3 +1,7 @@
+// Source of the numbers in this file: drawn samples of our own; the expected
+// values are the same samples sorted (the oracle sortFloats, then quantile),
+// so no published value is involved.
+
 package reliability
 
 import (

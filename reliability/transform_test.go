@@ -1,3 +1,7 @@
+// Source of the numbers in this file: parameters of our own; the expected
+// values are fromNormal's on the same inputs (the general path as the
+// oracle), so no published value is involved.
+
 package reliability
 
 import (

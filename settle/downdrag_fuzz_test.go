@@ -1,3 +1,7 @@
+// Source of the numbers in this file: fuzz inputs only; the checks are the
+// unified method's own identities (largest force = Qd + drag load, neutral
+// plane on the pile) and no NaN or Inf, so no published value is involved.
+
 package settle
 
 import (
