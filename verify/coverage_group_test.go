@@ -8,7 +8,6 @@ func init() {
 		"group.LosAngelesEfficiency":   "the Los Angeles Group-Action equation as Das & Sivakugan (2019) give it, from memory; checked in closed form by hand (group tests)",
 		"group.SeilerKeeneyEfficiency": "Seiler & Keeney's equation as Das & Sivakugan (2019) give it, from memory; checked in closed form by hand (group tests)",
 		"group.FeldEfficiency":         "Feld's rule of 1/16 per neighbour, from memory; checked by counting neighbours by hand (group tests)",
-		"group.PracticeEfficiency":     "AASHTO LRFD group efficiency values, from memory; checked by hand interpolation (group tests)",
 		"group.GroupEfficiency":        "dispatches to the efficiency equations, each checked on its own",
 		"group.MinSpacingRule":         "AASHTO LRFD minimum spacing, from memory; a rule, not a computation",
 		"group.SpreadStress":           "Q/((B + z)(L + z)), checked through group.RaftSettlement",

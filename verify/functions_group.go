@@ -16,6 +16,7 @@ func init() {
 	runners["group.BlockCapacity"] = runBlockCapacity
 	runners["group.VesicSettlement"] = runVesicGroup
 	runners["group.RaftSettlement"] = runRaft
+	runners["group.PracticeEfficiency"] = runPracticeEfficiency
 }
 
 func runConverseLabarre(a *args) (values, error) {
@@ -45,11 +46,13 @@ func runSkemptonNc(a *args) (values, error) {
 }
 
 // runBlockCapacity: a block in one undrained layer (su, saturated unit
-// weight, thickness, water at the surface).
+// weight, thickness, water at the surface), from top (default the ground
+// surface) to tip.
 func runBlockCapacity(a *args) (values, error) {
 	su := units.Stress(a.qty("su", units.DimStress))
 	g := units.UnitWeight(a.qty("unit_weight", units.DimUnitWeight))
 	h := units.Length(a.qty("thickness", units.DimLength))
+	top := units.Length(a.optQty("top", units.DimLength))
 	tip := units.Length(a.qty("tip", units.DimLength))
 	bg := units.Length(a.qty("bg", units.DimLength))
 	lg := units.Length(a.qty("lg", units.DimLength))
@@ -61,11 +64,26 @@ func runBlockCapacity(a *args) (values, error) {
 	if err != nil {
 		return nil, err
 	}
-	b, err := group.BlockCapacity(p, group.BlockInput{Tip: tip, Bg: bg, Lg: lg, Nc: nc})
+	b, err := group.BlockCapacity(p, group.BlockInput{Top: top, Tip: tip, Bg: bg, Lg: lg, Nc: nc})
 	if err != nil {
 		return nil, err
 	}
 	return values{"base": force(b.Base), "side": force(b.Side), "capacity": force(b.Capacity), "nc": num(b.Nc)}, nil
+}
+
+// runPracticeEfficiency: the group efficiency at a spacing of s_over_d
+// pile widths; undrained, cap_contact and bored as the function takes them.
+func runPracticeEfficiency(a *args) (values, error) {
+	r := a.num("s_over_d")
+	und, cc, bored := a.optBool("undrained"), a.optBool("cap_contact"), a.optBool("bored")
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	if !(r > 0) {
+		return nil, errBad("s_over_d must be positive")
+	}
+	eta, _ := group.PracticeEfficiency(r, und, cc, bored)
+	return values{"efficiency": num(eta)}, nil
 }
 
 func runVesicGroup(a *args) (values, error) {
