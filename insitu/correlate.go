@@ -169,34 +169,57 @@ type SPTFriction interface {
 	Phi(c *CorrectedSPT) (units.Angle, error)
 }
 
-// PhiN160 is Hatanaka & Uchida's (1996) friction angle of sand:
+// PhiN160 is Hatanaka & Uchida's (1996) friction angle of sand, with
+// (N1)60 first brought to the energy of the tests behind the correlation:
 //
-//	φ′ = √(20·(N1)60) + 20°,  3.5 ≤ (N1)60 ≤ 30
+//	N1 = (N1)60 · 60/ER,   φ′ = √(20·N1) + 20°,   3.5 ≤ N1 ≤ 30
 //
 // Read: the abstract of the paper (Soils and Foundations 36(4), p. 1)
 // prints φd = (20·N1)^0.5 + 20 for N1 between 3.5 and 30, N1 being the
 // measured N normalised to an effective overburden of 98 kPa by Liao &
 // Whitman's (1986) rule, from drained triaxial tests on samples taken by
-// in-situ freezing. Here (N1)60 from CorrectSPT takes the place of N1
-// (common practice). Caution: the abstract does not state the energy ratio
-// of the Japanese tests; from memory it was above 60 % (about 78 %), in
-// which case their N1 is smaller than (N1)60 for the same sand and this use
-// overstates φ′ (by about 2.5° at (N1)60 = 20); the engineer should weigh
-// this, or use a smaller (N1)60.
-type PhiN160 struct{}
+// in-situ freezing. The abstract does not state the energy ratio of those
+// (Japanese) tests. ENV 1997-3:1999, Annex D, Table D.1 (read) gives the
+// Japanese donut hammer ERr = 65 % with two turns of rope and 78 % with an
+// auto-trigger, both above the 60 % of (N1)60; N being inversely
+// proportional to ERr (5.5.2(2)P, read), the same sand gives a smaller N1
+// than (N1)60, and putting (N1)60 straight into the equation overstates φ′
+// (by about 2.5° at (N1)60 = 20 if ER = 78 %).
+//
+// ER is the energy ratio, in percent, taken for the correlation's tests.
+// Zero means 78 %, the higher Japanese value of Table D.1, which gives the
+// lower φ′ (our choice; that Hatanaka & Uchida's hammer was the
+// auto-trigger one is from memory). ER = 60 uses (N1)60 as N1 unchanged,
+// as some textbooks do. Accepted: 45 to 100 %.
+type PhiN160 struct{ ER float64 }
 
-func (PhiN160) ID() string       { return "hatanaka-uchida" }
-func (PhiN160) Equation() string { return "φ′ = √(20·(N1)60) + 20°" }
+// DefaultHatanakaER is the energy ratio PhiN160 takes when ER is zero.
+const DefaultHatanakaER = 78.0
+
+func (PhiN160) ID() string { return "hatanaka-uchida" }
+func (PhiN160) Equation() string {
+	return "φ′ = √(20·N1) + 20°, N1 = (N1)60·60/ER, ER = 78 % unless given"
+}
 func (PhiN160) Refs() []cite.Ref {
-	return []cite.Ref{{Source: cite.HatanakaUchida1996, Where: "abstract, p. 1"}}
+	return []cite.Ref{{Source: cite.HatanakaUchida1996, Where: "abstract, p. 1"},
+		{Source: cite.ENV1997Part3, Where: "Annex D, Table D.1: Japan, donut, ERr 65 % (rope) and 78 % (auto-trigger)"}}
 }
 
 // Phi returns φ′ in degrees converted to an angle.
-func (PhiN160) Phi(c *CorrectedSPT) (units.Angle, error) {
-	if !(c.N160 >= 3.5 && c.N160 <= 30) {
-		return 0, fmt.Errorf("insitu: φ′ (hatanaka-uchida) at %g m: (N1)60 = %.1f is outside 3.5 to 30", c.Test.Depth.Metres(), c.N160)
+func (h PhiN160) Phi(c *CorrectedSPT) (units.Angle, error) {
+	er := h.ER
+	if er == 0 {
+		er = DefaultHatanakaER
 	}
-	return units.Angle((math.Sqrt(20*c.N160) + 20) * float64(units.Degree)), nil
+	if !(er >= 45 && er <= 100) {
+		return 0, fmt.Errorf("insitu: hatanaka-uchida: energy ratio %g %% is outside 45 to 100 %%", er)
+	}
+	n1 := c.N160 * 60 / er
+	if !(n1 >= 3.5 && n1 <= 30) {
+		return 0, fmt.Errorf("insitu: φ′ (hatanaka-uchida) at %g m: N1 = (N1)60·60/%g = %.1f (from (N1)60 = %.1f) is outside 3.5 to 30",
+			c.Test.Depth.Metres(), er, n1, c.N160)
+	}
+	return units.Angle((math.Sqrt(20*n1) + 20) * float64(units.Degree)), nil
 }
 
 // PhiN60Stress is Kulhawy & Mayne's (1990) fit to Schmertmann's chart:

@@ -4,7 +4,8 @@
 // closed forms of equations read in a source (named beside each check: a
 // CPT interpretation summary in a site report for Ic and the zones;
 // Hatanaka & Uchida 1996, ENV 1997-3:1999, White et al. 2019 and Mayne &
-// Peuchen 2018 for the SPT and strength correlations), closed forms of
+// Peuchen 2018 for the SPT and strength correlations, ENV 1997-3 Table D.1
+// for the Japanese energy ratio), closed forms of
 // equations from memory (said so at each check), and invented soundings
 // whose answers are worked by hand.
 package insitu
@@ -273,8 +274,12 @@ func TestCorrelationsClosedForm(t *testing.T) {
 		t.Error("Nkt 40: no error")
 	}
 	c := &CorrectedSPT{N60: 20, N160: 20, SigmaVEff: 100e3}
-	if got, err := (PhiN160{}).Phi(c); err != nil || !near(float64(got)/deg, 40, 1e-12) {
+	if got, err := (PhiN160{ER: 60}).Phi(c); err != nil || !near(float64(got)/deg, 40, 1e-12) {
 		t.Errorf("PhiN160 = %v, %v; want √400 + 20 = 40°", float64(got)/deg, err)
+	}
+	// default ER 78 %: N1 = 20·60/78 = 15.3846, √307.692 + 20 = 37.541160°
+	if got, err := (PhiN160{}).Phi(c); err != nil || !near(float64(got)/deg, 37.5411603861, 1e-10) {
+		t.Errorf("PhiN160 (ER 78 %%) = %v, %v; want 37.541160°", float64(got)/deg, err)
 	}
 	// N60/(12.2 + 20.3) = 0.615385; ^0.34 = 0.847833; arctan = 40.292°
 	if got, err := (PhiN60Stress{}).Phi(c); err != nil || !near(float64(got)/deg, 40.2923482, 1e-8) {
@@ -404,20 +409,26 @@ func FuzzInterpretCPT(f *testing.F) {
 // 3.5 ≤ N1 ≤ 30 as printed in the abstract of Hatanaka, M., Uchida, A.
 // (1996), "Empirical correlation between penetration resistance and
 // internal friction angle of sandy soils", Soils and Foundations 36(4),
-// p. 1 (read). The paper prints no worked value in the abstract, so the
-// checks are the read equation in closed form at the ends of its range:
-// √70 + 20 = 28.36660°, √600 + 20 = 44.49490°; and values outside it refused.
+// p. 1 (read). The abstract prints no worked value, so the checks are the
+// read equation in closed form at the ends of its range, with ER = 60 %
+// (N1 = (N1)60): √70 + 20 = 28.36660°, √600 + 20 = 44.49490°; and, with
+// the default ER = 78 % (ENV 1997-3:1999, Annex D, Table D.1, Japan,
+// donut with auto-trigger, ERr/60 = 1.3, read), (N1)60 = 26 and 39 give
+// N1 = 20 and 30 exactly: 40° and 44.49490°.
 func TestHatanakaUchidaRead(t *testing.T) {
 	deg := float64(units.Degree)
-	for _, c := range []struct{ n1, want float64 }{{3.5, 28.366600265}, {30, 44.494897428}, {20, 40}} {
-		got, err := (PhiN160{}).Phi(&CorrectedSPT{N160: c.n1})
+	for _, c := range []struct{ er, n160, want float64 }{
+		{60, 3.5, 28.366600265}, {60, 30, 44.494897428}, {60, 20, 40},
+		{0, 26, 40}, {78, 26, 40}, {0, 39, 44.494897428},
+	} {
+		got, err := (PhiN160{ER: c.er}).Phi(&CorrectedSPT{N160: c.n160})
 		if err != nil || !near(float64(got)/deg, c.want, 1e-9) {
-			t.Errorf("PhiN160((N1)60 = %g) = %.9f°, %v; want %.9f°", c.n1, float64(got)/deg, err, c.want)
+			t.Errorf("PhiN160{ER: %g}((N1)60 = %g) = %.9f°, %v; want %.9f°", c.er, c.n160, float64(got)/deg, err, c.want)
 		}
 	}
-	for _, n1 := range []float64{3.4, 30.1} {
-		if _, err := (PhiN160{}).Phi(&CorrectedSPT{N160: n1}); err == nil {
-			t.Errorf("PhiN160((N1)60 = %g): no error outside 3.5 to 30", n1)
+	for _, c := range []struct{ er, n160 float64 }{{60, 3.4}, {60, 30.1}, {0, 4.5}, {0, 39.1}, {40, 20}, {101, 20}} {
+		if _, err := (PhiN160{ER: c.er}).Phi(&CorrectedSPT{N160: c.n160}); err == nil {
+			t.Errorf("PhiN160{ER: %g}((N1)60 = %g): no error", c.er, c.n160)
 		}
 	}
 }

@@ -116,10 +116,11 @@ func runPhiQtn(a *args) (values, error) {
 
 func runPhiN160(a *args) (values, error) {
 	c := &insitu.CorrectedSPT{N160: a.num("n160")}
+	er := a.optNum("er", 0)
 	if err := a.done(); err != nil {
 		return nil, err
 	}
-	phi, err := (insitu.PhiN160{}).Phi(c)
+	phi, err := (insitu.PhiN160{ER: er}).Phi(c)
 	return values{"phi": qv(float64(phi), units.DimAngle)}, err
 }
 
