@@ -19,6 +19,7 @@ var (
 		Title: "Standard penetration test procedures and the effects in sands of overburden pressure, relative density, particle size, ageing and overconsolidation", Publication: "Géotechnique 36(3), 425-447"}
 	LiaoWhitman1986 = Source{Key: "liao-whitman1986", Authors: "Liao, S.S.C., Whitman, R.V.", Year: 1986,
 		Title: "Overburden correction factors for SPT in sand", Publication: "J. Geotech. Eng. ASCE 112(3), 373-377"}
+	// HatanakaUchida1996: its abstract (p. 1) was read, the body not.
 	HatanakaUchida1996 = Source{Key: "hatanaka-uchida1996", Authors: "Hatanaka, M., Uchida, A.", Year: 1996,
 		Title: "Empirical correlation between penetration resistance and internal friction angle of sandy soils", Publication: "Soils and Foundations 36(4), 1-9"}
 	Stroud1974 = Source{Key: "stroud1974", Authors: "Stroud, M.A.", Year: 1974,
@@ -29,6 +30,12 @@ var (
 	// read for package insitu; its authors and title were not reached.
 	ISRNCE2012 = Source{Key: "isrn-ce-2012-346439", Authors: "ISRN Civil Engineering (authors not read)", Year: 2012,
 		Title: "Article 346439, Table 1: SPT correction factors", Publication: "ISRN Civil Engineering, Hindawi, article ID 346439"}
+	WhiteEtAl2019 = Source{Key: "white-etal2019", Authors: "White, F., Ingram, P., Nicholson, D., Stroud, M., Betru, M.", Year: 2019,
+		Title: "An update of the SPT-cu relationship proposed by M. Stroud in 1974", Publication: "Proc. XVII European Conf. on Soil Mechanics and Geotechnical Engineering (ECSMGE-2019), ISBN 978-9935-9436-1-3, doi:10.32075/17ECSMGE-2019-0500"}
+	MaynePeuchen2018 = Source{Key: "mayne-peuchen2018", Authors: "Mayne, P.W., Peuchen, J.", Year: 2018,
+		Title: "Evaluation of CPTU Nkt cone factor for undrained strength of clays", Publication: "Cone Penetration Testing 2018, CRC Press (Taylor & Francis), chapter 58, 7 pp."}
+	ENV1997Part3 = Source{Key: "env1997-3", Authors: "CEN", Year: 1999,
+		Title: "ENV 1997-3, Eurocode 7: Geotechnical design, Part 3: Design assisted by field testing", Publication: "European prestandard, CEN, Brussels"}
 	AGS4 = Source{Key: "ags4", Authors: "Association of Geotechnical and Geoenvironmental Specialists", Year: 2023,
 		Title: "AGS4 Data Format, edition 4.1.1, standard dictionary", Publication: "AGS, Bromley, UK"}
 	GEFCPT = Source{Key: "gef-cpt-report", Authors: "CUR", Year: 2006,

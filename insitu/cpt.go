@@ -141,7 +141,15 @@ func CPTInterpretationRefs() []cite.Ref {
 //	n   = 0.381·Ic + 0.05·(σ′v/pa) − 0.15,  n ≤ 1.0      (eq. 7)
 //
 // n is solved with Ic until it changes by less than 1e-9 (Robertson
-// iterates to Δn < 0.01), by a bracketed Newton iteration. Readings
+// iterates to Δn < 0.01), by a bracketed Newton iteration.
+//
+// What was read: the Ic equation and the zone boundaries as printed in the
+// CPT interpretation summary of a site report (public records copy,
+// lfweb.sjgov.org document 563124, p. 147), which also says n varies from
+// 0.5 to 1.0 and is chosen by iteration on Ic; qt, qn, Fr and Bq through
+// the consistent example values of the AGS 4.1.1 dictionary (group SCPT).
+// The equation for n (eq. 7) and the equation numbers are from memory of
+// Robertson (2009); the paper itself was not reached. Readings
 // where qn, fs or σ′v is not positive are returned with Flags set and no
 // normalised values. Rows must hold finite values at increasing depths,
 // and stresses must return finite σv ≥ 0 and u0; an error names the row

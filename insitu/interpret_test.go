@@ -1,3 +1,13 @@
+// Where the numbers of these tests come from: values printed in published
+// sources that were read (the AGS 4.1.1 dictionary's SCPT example values;
+// ISRN Civil Engineering 2012, Table 1; a published worked answer for CN),
+// closed forms of equations read in a source (named beside each check: a
+// CPT interpretation summary in a site report for Ic and the zones;
+// Hatanaka & Uchida 1996, ENV 1997-3:1999, White et al. 2019 and Mayne &
+// Peuchen 2018 for the SPT and strength correlations, ENV 1997-3 Table D.1
+// for the Japanese energy ratio), closed forms of
+// equations from memory (said so at each check), and invented soundings
+// whose answers are worked by hand.
 package insitu
 
 import (
@@ -12,8 +22,12 @@ func near(got, want, rel float64) bool {
 	return math.Abs(got-want) <= rel*math.Abs(want)
 }
 
-// TestSBTIndexClosedForm checks Ic against Robertson's (2009) eq. 6 worked
-// by hand: Ic = √((3.47 − log Qtn)² + (log Fr + 1.22)²).
+// TestSBTIndexClosedForm checks Ic in closed form, worked by hand from the
+// equation Ic = ((3.47 − log Q)² + (log Fr + 1.22)²)^0.5 as printed in the
+// CPT interpretation summary of a site report (lfweb.sjgov.org WebLink
+// document 563124, p. 147, read); that it is eq. 6 of Robertson (2009) is
+// from memory. No printed value of Ic was read, so these are closed forms,
+// not printed checks.
 func TestSBTIndexClosedForm(t *testing.T) {
 	tests := []struct{ qtn, fr, want float64 }{
 		{100, 1, 1.9103141103},    // √(1.47² + 1.22²) = √3.6493
@@ -230,7 +244,9 @@ func TestCorrectSPT(t *testing.T) {
 }
 
 // TestCorrelationsClosedForm: each correlation worked by hand from its
-// equation (the equations are from memory, see their docs).
+// equation (closed forms; each correlation's doc says whether its equation
+// was read, and where, or is from memory; the read ones have their own
+// tests below).
 func TestCorrelationsClosedForm(t *testing.T) {
 	deg := float64(units.Degree)
 	sand := &Point{Depth: 5, Qt: 10e6, SigmaVEff: 100e3, Qnet: 9.9e6, Qtn: 100, Ic: 1.9, Zone: ZoneSand}
@@ -258,8 +274,12 @@ func TestCorrelationsClosedForm(t *testing.T) {
 		t.Error("Nkt 40: no error")
 	}
 	c := &CorrectedSPT{N60: 20, N160: 20, SigmaVEff: 100e3}
-	if got, err := (PhiN160{}).Phi(c); err != nil || !near(float64(got)/deg, 40, 1e-12) {
+	if got, err := (PhiN160{ER: 60}).Phi(c); err != nil || !near(float64(got)/deg, 40, 1e-12) {
 		t.Errorf("PhiN160 = %v, %v; want √400 + 20 = 40°", float64(got)/deg, err)
+	}
+	// default ER 78 %: N1 = 20·60/78 = 15.3846, √307.692 + 20 = 37.541160°
+	if got, err := (PhiN160{}).Phi(c); err != nil || !near(float64(got)/deg, 37.5411603861, 1e-10) {
+		t.Errorf("PhiN160 (ER 78 %%) = %v, %v; want 37.541160°", float64(got)/deg, err)
 	}
 	// N60/(12.2 + 20.3) = 0.615385; ^0.34 = 0.847833; arctan = 40.292°
 	if got, err := (PhiN60Stress{}).Phi(c); err != nil || !near(float64(got)/deg, 40.2923482, 1e-8) {
@@ -383,4 +403,94 @@ func FuzzInterpretCPT(f *testing.F) {
 			}
 		}
 	})
+}
+
+// TestHatanakaUchidaRead: the equation φd = (20·N1)^0.5 + 20 and its range
+// 3.5 ≤ N1 ≤ 30 as printed in the abstract of Hatanaka, M., Uchida, A.
+// (1996), "Empirical correlation between penetration resistance and
+// internal friction angle of sandy soils", Soils and Foundations 36(4),
+// p. 1 (read). The abstract prints no worked value, so the checks are the
+// read equation in closed form at the ends of its range, with ER = 60 %
+// (N1 = (N1)60): √70 + 20 = 28.36660°, √600 + 20 = 44.49490°; and, with
+// the default ER = 78 % (ENV 1997-3:1999, Annex D, Table D.1, Japan,
+// donut with auto-trigger, ERr/60 = 1.3, read), (N1)60 = 26 and 39 give
+// N1 = 20 and 30 exactly: 40° and 44.49490°.
+func TestHatanakaUchidaRead(t *testing.T) {
+	deg := float64(units.Degree)
+	for _, c := range []struct{ er, n160, want float64 }{
+		{60, 3.5, 28.366600265}, {60, 30, 44.494897428}, {60, 20, 40},
+		{0, 26, 40}, {78, 26, 40}, {0, 39, 44.494897428},
+	} {
+		got, err := (PhiN160{ER: c.er}).Phi(&CorrectedSPT{N160: c.n160})
+		if err != nil || !near(float64(got)/deg, c.want, 1e-9) {
+			t.Errorf("PhiN160{ER: %g}((N1)60 = %g) = %.9f°, %v; want %.9f°", c.er, c.n160, float64(got)/deg, err, c.want)
+		}
+	}
+	for _, c := range []struct{ er, n160 float64 }{{60, 3.4}, {60, 30.1}, {0, 4.5}, {0, 39.1}, {40, 20}, {101, 20}} {
+		if _, err := (PhiN160{ER: c.er}).Phi(&CorrectedSPT{N160: c.n160}); err == nil {
+			t.Errorf("PhiN160{ER: %g}((N1)60 = %g): no error", c.er, c.n160)
+		}
+	}
+}
+
+// TestEnergyRatioRead: ENV 1997-3:1999, Eurocode 7 Part 3, clause
+// 5.5.2(2)P (read, as reproduced at geotechnicaldesign.info/ec7p3/g5-5.html):
+// "the value of the blow count N in sands is inversely proportional to the
+// energy ratio ERr, so that Na × ERr,a = Nb × ERr,b", and (4)P: N is
+// adjusted to the reference energy ratio of 60 %. Worked from the printed
+// proportion: N = 15 at ER = 80 % gives N60 = 15·80/60 = 20; N = 20 at
+// ER = 45 % gives 15. The other factors are 1 (rod 12 m, hole 100 mm, no
+// liner; ISRN 2012 Table 1, read).
+func TestEnergyRatioRead(t *testing.T) {
+	tests := []SPT{
+		{Depth: 11, N: 15, EnergyRatio: 80, RodLength: 12, Borehole: 100 * units.Millimetre},
+		{Depth: 11, N: 20, EnergyRatio: 45, RodLength: 12, Borehole: 100 * units.Millimetre},
+	}
+	got, err := CorrectSPT(tests, constStress(200e3, 100e3), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for i, want := range []float64{20, 15} {
+		if !near(got[i].N60, want, 1e-12) || got[i].Flags != 0 {
+			t.Errorf("test %d: N60 = %g (flags %d), want %g", i, got[i].N60, got[i].Flags, want)
+		}
+		// σ′v = 100 kPa = pa: CN = 1, so (N1)60 = N60.
+		if !near(got[i].N160, want, 1e-12) {
+			t.Errorf("test %d: (N1)60 = %g, want %g", i, got[i].N160, want)
+		}
+	}
+}
+
+// TestStroudRead: White, F., Ingram, P., Nicholson, D., Stroud, M., Betru,
+// M. (2019), "An update of the SPT-cu relationship proposed by M. Stroud in
+// 1974", ECSMGE-2019, abstract (read): f1 = cu/N, typically 4.0 to 5.0 for
+// a clay of plasticity index about 50 % such as London Clay. The printed
+// range must be accepted; su = f1·N60 worked by hand: 4.0 × 12.5 = 50 kPa,
+// 5.0 × 12.5 = 62.5 kPa.
+func TestStroudRead(t *testing.T) {
+	c := &CorrectedSPT{N60: 12.5}
+	for _, f := range []struct{ f1, want float64 }{{4.0, 50}, {5.0, 62.5}} {
+		got, err := (StrengthN60{F1: units.Stress(f.f1) * units.Kilopascal}).Su(c)
+		if err != nil || !near(got.KPa(), f.want, 1e-12) {
+			t.Errorf("f1 = %g kPa: su = %g kPa, %v; want %g", f.f1, got.KPa(), err, f.want)
+		}
+	}
+	if _, err := (StrengthN60{F1: 3 * units.Kilopascal}).Su(c); err == nil {
+		t.Error("f1 = 3 kPa: no error")
+	}
+}
+
+// TestNktRead: Mayne, P.W., Peuchen, J. (2018), "Evaluation of CPTU Nkt
+// cone factor for undrained strength of clays", CPT'18, chapter 58,
+// abstract (read): su = qnet/Nkt with qnet = qt − σvo; back-figured Nkt
+// from 8 to 25. The printed range must be accepted; su worked by hand for
+// qnet = 2.0 MPa: 2000/8 = 250 kPa, 2000/25 = 80 kPa.
+func TestNktRead(t *testing.T) {
+	clay := &Point{Depth: 12, Qnet: 2.0e6, Ic: 3.2, Zone: ZoneClay}
+	for _, c := range []struct{ nkt, want float64 }{{8, 250}, {25, 80}} {
+		got, err := (StrengthNkt{Nkt: c.nkt}).Su(clay)
+		if err != nil || !near(got.KPa(), c.want, 1e-12) {
+			t.Errorf("Nkt = %g: su = %g kPa, %v; want %g", c.nkt, got.KPa(), err, c.want)
+		}
+	}
 }

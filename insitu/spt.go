@@ -72,6 +72,7 @@ type CorrectedSPT struct {
 func SPTRefs() []cite.Ref {
 	return []cite.Ref{
 		{Source: cite.Skempton1986, Where: "corrections CE, CB, CS, CR"},
+		{Source: cite.ENV1997Part3, Where: "5.5.2(2)P: N·ER constant, N60 = N·ER/60"},
 		{Source: cite.ISRNCE2012, Where: "Table 1 (values of CB, CS, CR read)"},
 		{Source: cite.LiaoWhitman1986, Where: "CN = (pa/σ′v)^0.5"},
 		{Source: cite.FHWAGEC5, Where: "SPT corrections"},
@@ -132,7 +133,10 @@ func SamplerFactor(s Sampler) (float64, error) {
 
 // OverburdenFactor returns Liao & Whitman's (1986) CN = (pa/σ′v)^0.5.
 // σ′v and pa must be positive; pa is commonly 100 kPa (ReferencePressure)
-// or 1 tsf (units.TSF, 95.76 kPa).
+// or 1 tsf (units.TSF, 95.76 kPa). Read: a published worked answer
+// (University of Nairobi question 14976980) computing CN = √(95.76/σ′v);
+// Hatanaka & Uchida (1996, abstract) normalise N to 98 kPa by the same
+// rule. Liao & Whitman's paper itself was not reached.
 func OverburdenFactor(sigmaVEff, pa units.Stress) (float64, error) {
 	if !(sigmaVEff > 0) || math.IsInf(float64(sigmaVEff), 0) {
 		return 0, fmt.Errorf("insitu: σ′v %g kPa must be positive", sigmaVEff.KPa())
@@ -147,6 +151,12 @@ func OverburdenFactor(sigmaVEff, pa units.Stress) (float64, error) {
 //
 //	N60    = N · (ER/60) · CB · CS · CR       (Skempton 1986)
 //	(N1)60 = CN · N60,  CN = (pa/σ′v)^0.5      (Liao & Whitman 1986), CN ≤ CNMax
+//
+// The energy factor ER/60 was read in ENV 1997-3:1999, 5.5.2(2)P and (4)P:
+// in sands N is inversely proportional to the energy ratio
+// (Na·ERa = Nb·ERb) and N is adjusted to the reference ratio of 60 %. CB,
+// CS and CR are the tabulated values read (see BoreholeFactor); Skempton
+// (1986) himself was not reached.
 //
 // σ′v comes from stresses at the test depth. Defaults taken for values not
 // recorded are flagged on each result; see SPTOptions.

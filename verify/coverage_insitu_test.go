@@ -16,14 +16,10 @@ func init() {
 }
 
 var insituReasons = map[string]string{
-	"insitu.Sounding.Qt":      "qt = qc + u2(1 − a), Robertson (2009) eq. 1; checked through insitu.InterpretCPT's AGS 4.1.1 cases",
-	"insitu.CorrectSPT":       "the product N·(ER/60)·CB·CS·CR and CN·N60 of factors each checked (insitu.RodFactor, BoreholeFactor, SamplerFactor, OverburdenFactor); checked in closed form by hand; no published worked N60 with these factors reached",
-	"insitu.DensityQtn.Dr":    "Dr = √(Qtn/350), equation from memory of Robertson & Cabal (2015); checked in closed form; no printed value reached",
-	"insitu.PhiN160.Phi":      "φ′ = √(20·(N1)60) + 20°, Hatanaka & Uchida (1996), equation from memory; checked in closed form; no printed value reached",
+	"insitu.Sounding.Qt":      "qt = qc + u2(1 − a) (Robertson 2009, eq. 1; the equation number from memory); checked through insitu.InterpretCPT's AGS 4.1.1 cases, whose example values are consistent with it",
+	"insitu.DensityQtn.Dr":    "Dr = √(Qtn/350), equation and K range from memory of Robertson & Cabal (2015); checked in closed form; no printed copy reached",
 	"insitu.PhiN60Stress.Phi": "φ′ = arctan[(N60/(12.2 + 20.3σ′v/pa))^0.34], Kulhawy & Mayne (1990), equation from memory; checked in closed form; no printed value reached",
 	"insitu.PhiQcRatio.Phi":   "tan φ′ = [log(qc/σ′v) + 0.29]/2.68, Robertson & Campanella (1983), equation from memory; checked in closed form; no printed value reached",
-	"insitu.StrengthN60.Su":   "su = f1·N60 with f1 given, Stroud (1974); a product checked in closed form",
-	"insitu.StrengthNkt.Su":   "su = (qt − σv)/Nkt with Nkt given; a quotient checked in closed form",
 	"insitu.MeanOver":         "a depth-weighted mean by the trapezoidal rule; checked against means worked by hand",
 	"insitu.MeansPerLayer":    "insitu.MeanOver for each layer; checked against means worked by hand",
 	"insitu.MeanSPT":          "an arithmetic mean of the tests in a range; checked against a mean worked by hand",

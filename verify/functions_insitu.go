@@ -15,6 +15,10 @@ func addInsituRunners(r map[string]runner) {
 	r["insitu.BoreholeFactor"] = runBoreholeFactor
 	r["insitu.SamplerFactor"] = runSamplerFactor
 	r["insitu.PhiQtn.Phi"] = runPhiQtn
+	r["insitu.PhiN160.Phi"] = runPhiN160
+	r["insitu.CorrectSPT"] = runCorrectSPT
+	r["insitu.StrengthN60.Su"] = runStrengthN60
+	r["insitu.StrengthNkt.Su"] = runStrengthNkt
 }
 
 // runInterpretCPT interprets one reading: qc, fs, u2, area_ratio and the
@@ -108,4 +112,58 @@ func runPhiQtn(a *args) (values, error) {
 	}
 	phi, err := (insitu.PhiQtn{}).Phi(p)
 	return values{"phi": qv(float64(phi), units.DimAngle)}, err
+}
+
+func runPhiN160(a *args) (values, error) {
+	c := &insitu.CorrectedSPT{N160: a.num("n160")}
+	er := a.optNum("er", 0)
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	phi, err := (insitu.PhiN160{ER: er}).Phi(c)
+	return values{"phi": qv(float64(phi), units.DimAngle)}, err
+}
+
+// runCorrectSPT corrects one test: n, energy_ratio (percent), rod_length,
+// borehole (optional), sampler (optional, no-liner by default) and the
+// total and effective vertical stresses at its depth.
+func runCorrectSPT(a *args) (values, error) {
+	t := insitu.SPT{Depth: units.Length(a.optQty("z", units.DimLength)), N: a.num("n"), EnergyRatio: a.num("energy_ratio"),
+		RodLength: units.Length(a.qty("rod_length", units.DimLength)), Borehole: units.Length(a.optQty("borehole", units.DimLength))}
+	name := a.optStr("sampler", "no-liner")
+	s, ok := insitu.ParseSampler(name)
+	if !ok {
+		a.fail("sampler", "%q is not no-liner, liner-dense or liner-loose", name)
+	}
+	t.Sampler = s
+	sv := units.Stress(a.qty("sigma_v", units.DimStress))
+	eff := units.Stress(a.qty("sigma_v_eff", units.DimStress))
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	c, err := insitu.CorrectSPT([]insitu.SPT{t}, func(units.Length) (units.Stress, units.Stress) { return sv, sv - eff }, nil)
+	if err != nil {
+		return nil, err
+	}
+	return values{"n60": num(c[0].N60), "cn": num(c[0].CN), "n160": num(c[0].N160)}, nil
+}
+
+func runStrengthN60(a *args) (values, error) {
+	f1 := units.Stress(a.qty("f1", units.DimStress))
+	c := &insitu.CorrectedSPT{N60: a.num("n60")}
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	su, err := (insitu.StrengthN60{F1: f1}).Su(c)
+	return values{"su": stress(su)}, err
+}
+
+func runStrengthNkt(a *args) (values, error) {
+	nkt := a.num("nkt")
+	p := &insitu.Point{Qnet: units.Stress(a.qty("qnet", units.DimStress)), Ic: a.num("ic")}
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	su, err := (insitu.StrengthNkt{Nkt: nkt}).Su(p)
+	return values{"su": stress(su)}, err
 }
