@@ -47,7 +47,9 @@ func (DrivenN60) Refs() []cite.Ref {
 }
 
 // Range returns the inputs DrivenN60 accepts.
-func (DrivenN60) Range() string { return "N60 above 0 to 200; pa 50 to 150 kPa; driven piles in sand and gravel" }
+func (DrivenN60) Range() string {
+	return "N60 above 0 to 200; pa 50 to 150 kPa; driven piles in sand and gravel"
+}
 
 // Tip returns 4·pa·N60, the unit tip resistance at Lb/D ≥ 10.
 func (m DrivenN60) Tip(in Input) (Result, error) {

@@ -202,10 +202,10 @@ var badCases = []badCase{
 	{file: "600-spt-missing-file", want: []string{"ground.spt.", "(line 17)"}}, // the message from the file: calc TestSPTBadInput
 	{file: "601-spt-unknown-format", want: []string{"ground.spt.format (line 17)", "want csv or ags"}},
 	{file: "602-spt-energy-ratio-out-of-range", want: []string{"ground.spt.energy_ratio (line 17)", "outside 30 to 100"}},
-	{file: "603-spt-wrong-hole", want: []string{"ground.spt.", "(line 17)"}}, // the message from the file: calc TestSPTBadInput
-	{file: "604-spt-which-hole", want: []string{"ground.spt.", "(line 17)"}}, // the message from the file: calc TestSPTBadInput
-	{file: "605-spt-below-ground", want: []string{"ground.spt.", "(line 17)"}}, // the message from the file: calc TestSPTBadInput
-	{file: "606-spt-energy-ratio-not-recorded", want: []string{"ground.spt.", "(line 17)"}}, // the message from the file: calc TestSPTBadInput
+	{file: "603-spt-wrong-hole", want: []string{"ground.spt.", "(line 17)"}},                 // the message from the file: calc TestSPTBadInput
+	{file: "604-spt-which-hole", want: []string{"ground.spt.", "(line 17)"}},                 // the message from the file: calc TestSPTBadInput
+	{file: "605-spt-below-ground", want: []string{"ground.spt.", "(line 17)"}},               // the message from the file: calc TestSPTBadInput
+	{file: "606-spt-energy-ratio-not-recorded", want: []string{"ground.spt.", "(line 17)"}},  // the message from the file: calc TestSPTBadInput
 	{file: "607-spt-record-energy-out-of-range", want: []string{"ground.spt.", "(line 17)"}}, // the message from the file: calc TestSPTBadInput
 	{file: "608-spt-unknown-phi", want: []string{"ground.spt.phi (line 17)", "best-guess"}},
 	{file: "609-spt-f1-out-of-range", want: []string{"ground.spt.f1 (line 17)", "outside 3.5 to 6.5 kPa"}},
