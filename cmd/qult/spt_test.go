@@ -28,3 +28,21 @@ func TestSPTBadMessages(t *testing.T) {
 		}
 	}
 }
+
+// TestSPTExample: the shipped example names its borehole's records beside
+// it, read relative to the calc file's folder; its report, Markdown and
+// JSON are kept as goldens.
+func TestSPTExample(t *testing.T) {
+	path := filepath.Join("..", "..", "examples", "spt-borehole", "pump-station-spt.yaml")
+	for _, c := range []struct{ golden, verb, format string }{
+		{"spt/report.txt", "report", "text"},
+		{"spt/report.md", "report", "md"},
+		{"spt/capacity.json", "capacity", "json"},
+	} {
+		r := runQ(t, badTimeout, "", c.verb, "--format", c.format, path)
+		if r.code != 0 || !strings.Contains(r.stdout, "BH-R2") {
+			t.Fatalf("%s: exit %d, stderr %q, output lacks the borehole", c.golden, r.code, r.stderr)
+		}
+		golden(t, c.golden, []byte(r.stdout))
+	}
+}
