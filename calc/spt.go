@@ -57,10 +57,13 @@ type SPTTest struct {
 	// Phi and Su are the correlated values (zero when not estimated); By
 	// names the correlation that gave the one estimated, Note why none
 	// was where one was asked for.
-	Phi  units.Angle
-	Su   units.Stress
-	By   string
-	Note string
+	Phi units.Angle
+	Su  units.Stress
+	By  string
+	// Source is the correlation's published source, short ("Stroud
+	// (1974)"); "" when none was estimated.
+	Source string
+	Note   string
 }
 
 // SPTLayer is the tests averaged over one layer of the ground (arithmetic
@@ -205,14 +208,14 @@ func runSPT(f *File, in *Inputs, prof *profile.Profile, res *Result, read ReadFi
 				t.Note = strings.TrimPrefix(err.Error(), "insitu: ")
 				break
 			}
-			t.Phi, t.By = phi, phiBy.ID()
+			t.Phi, t.By, t.Source = phi, phiBy.ID(), phiBy.Refs()[0].Source.Short()
 		case l.Drainage == profile.Undrained && f1 > 0:
 			su, err := insitu.StrengthN60{F1: f1}.Su(&cs[i])
 			if err != nil {
 				t.Note = strings.TrimPrefix(err.Error(), "insitu: ")
 				break
 			}
-			t.Su, t.By = su, insitu.StrengthN60{}.ID()
+			t.Su, t.By, t.Source = su, insitu.StrengthN60{}.ID(), insitu.StrengthN60{}.Refs()[0].Source.Short()
 		}
 		out.Tests = append(out.Tests, t)
 	}

@@ -10,8 +10,12 @@ import (
 	"errors"
 	"io/fs"
 	"math"
+	"os"
+	"path/filepath"
 	"strings"
 	"testing"
+
+	"github.com/qultgeo/qult/insitu"
 )
 
 // sptCalc is a calc file of our own: 4 m of clay over sand, water at 1 m,
@@ -160,5 +164,27 @@ func TestSPTBadInput(t *testing.T) {
 	// From standard input: no folder to read from.
 	if _, err := ParseWith([]byte(sptCalc("  spt: {file: b.csv, hole: B1}")), ParseOptions{}); err == nil {
 		t.Error("no ReadFile: want an error")
+	}
+}
+
+// TestSPTFromAGS reads the ISPT group of the AGS4 file in insitu's
+// testdata (records of our own): the rod length, borehole and sampler are
+// not in ISPT, so each test is flagged for them.
+func TestSPTFromAGS(t *testing.T) {
+	read := func(name string) ([]byte, error) { return os.ReadFile(filepath.Join("..", "insitu", "testdata", name)) }
+	r, err := ParseWith([]byte(sptCalc("  spt: {file: cpt-north.ags, energy_ratio: 60}")), ParseOptions{ReadFile: read})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.SPT == nil || r.SPT.Format != "ags" || r.SPT.Hole != "BH-2" || len(r.SPT.Tests) == 0 {
+		t.Fatalf("SPT %+v", r.SPT)
+	}
+	for _, tt := range r.SPT.Tests {
+		if tt.Flags&insitu.FlagRodFromDepth == 0 || tt.Flags&insitu.FlagBoreholeAssumed == 0 {
+			t.Errorf("test at %v: flags %v, want rod and borehole assumed", tt.Test.Depth, tt.Flags)
+		}
+	}
+	if _, err := ParseWith([]byte(sptCalc("  spt: {file: cpt-north.ags, hole: CPT-N1, energy_ratio: 60}")), ParseOptions{ReadFile: read}); err == nil {
+		t.Error("a hole without tests: want an error")
 	}
 }

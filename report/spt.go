@@ -65,6 +65,9 @@ func secSPT(r *calc.Result, c conv) section {
 			su = num(c.S(t.Su))
 		}
 		by := t.By
+		if t.Source != "" {
+			by += ", " + t.Source
+		}
 		if t.Note != "" {
 			by = "none: " + t.Note
 		}
@@ -127,6 +130,7 @@ type jSPTTest struct {
 	Phi         *qty     `json:"friction_angle,omitempty"`
 	Su          *qty     `json:"su,omitempty"`
 	By          string   `json:"by,omitempty"`
+	BySource    string   `json:"by_source,omitempty"`
 	Note        string   `json:"not_estimated,omitempty"`
 	Assumed     []string `json:"assumed"`
 }
@@ -163,7 +167,7 @@ func sptJSON(r *calc.Result, c jconv) *jSPT {
 		j.Tests = append(j.Tests, jSPTTest{Depth: c.L(t.Test.Depth), Layer: t.Layer, N: jnum(t.Test.N), EnergyRatio: jnum(60 * t.CE),
 			RodLength: c.L(t.RodLength), CE: jnum(t.CE), CB: jnum(t.CB), CS: jnum(t.CS), CR: jnum(t.CR), N60: jnum(t.N60),
 			SigmaVEff: c.S(t.SigmaVEff), CN: jnum(t.CN), N160: jnum(t.N160),
-			Phi: opt(c.deg(t.Phi), t.Phi > 0), Su: opt(c.S(t.Su), t.Su > 0), By: t.By, Note: t.Note, Assumed: a})
+			Phi: opt(c.deg(t.Phi), t.Phi > 0), Su: opt(c.S(t.Su), t.Su > 0), By: t.By, BySource: t.Source, Note: t.Note, Assumed: a})
 	}
 	for _, l := range s.Layers {
 		jl := jSPTLayer{Name: l.Name, Top: c.L(l.Top), Bottom: c.L(l.Bottom), Tests: l.Tests, Estimates: l.Estimates}
