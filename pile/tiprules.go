@@ -84,8 +84,9 @@ type weakInfo struct {
 // Embedment ramp (Meyerhof 1976; Das, chapter on pile foundations: qp
 // grows with the embedment Lb in the bearing stratum up to the critical
 // embedment ratio): in a drained top layer, with Lcr = (Lb/D)cr·D, for the
-// tip methods built on bearing factors (not the SPT rules, whose
-// correlation already covers embedment),
+// tip methods built on bearing factors and Meyerhof's driven-pile SPT rule
+// (not the drilled and bored SPT rules, whose correlation already covers
+// embedment),
 //
 //	qp = q·Lb/Lcr   (Lb < Lcr)
 //

@@ -7,13 +7,15 @@
 //     term is 0.02(2)(25)(4.67)L = 4.67L kips (L in ft), that is
 //     fs = 0.02·2·25 = 1 ksf, and L = (300 − 272)/4.67 = 6 ft.
 //   - Closed forms of fs = 0.02·pa·N60 and 0.01·pa·N60 for the other cases
-//     (the rule as the method documents it).
+//     and the property test (the rule as the method documents it).
 
 package shaft
 
 import (
 	"math"
 	"testing"
+
+	"pgregory.net/rapid"
 
 	"github.com/qultgeo/qult/units"
 )
@@ -89,4 +91,24 @@ func TestDrivenN60Catalogue(t *testing.T) {
 			t.Errorf("%+v: %+v, want Low %v", c.v, ch.Unit, c.low)
 		}
 	}
+}
+
+// TestPropDrivenN60: fs is proportional to N60 and to pa, and the
+// small-displacement value is half the displacement one (the rule's closed
+// form), for every accepted input.
+func TestPropDrivenN60(t *testing.T) {
+	rapid.Check(t, func(t *rapid.T) {
+		n := rapid.Float64Range(0.01, 50).Draw(t, "n60")
+		pa := units.Stress(rapid.Float64Range(80, 120).Draw(t, "pa")) * kPa
+		hi, err1 := DrivenN60{}.Unit(Point{N60: n, Pa: pa})
+		hi2, err2 := DrivenN60{}.Unit(Point{N60: 2 * n, Pa: pa})
+		lo, err3 := DrivenN60{Low: true}.Unit(Point{N60: n, Pa: pa})
+		if err1 != nil || err2 != nil || err3 != nil {
+			t.Fatal(err1, err2, err3)
+		}
+		if rel(float64(hi2.Fs), 2*float64(hi.Fs)) > 1e-12 || rel(float64(lo.Fs), float64(hi.Fs)/2) > 1e-12 ||
+			rel(float64(hi.Fs), 0.02*n*float64(pa)) > 1e-12 {
+			t.Fatalf("N60 %g pa %g: fs %g, %g at 2·N60, %g small displacement", n, pa, hi.Fs, hi2.Fs, lo.Fs)
+		}
+	})
 }
