@@ -247,7 +247,22 @@ func runSPT(f *File, in *Inputs, prof *profile.Profile, res *Result, read ReadFi
 		out.Layers = append(out.Layers, sl)
 	}
 	res.SPT = out
+	res.Warnings = append(res.Warnings, sptWarnings(out)...)
 	return nil
+}
+
+// sptWarnings flags each layer whose own n60 (the value an SPT-based
+// method reads) is above the mean N60 of the tests in it: the records do
+// not support it, and the capacity by such a method may be unconservative.
+func sptWarnings(s *SPTResult) []string {
+	var w []string
+	for _, l := range s.Layers {
+		if l.Tests > 0 && l.N60Given > l.N60 {
+			w = append(w, fmt.Sprintf("layer %q: n60 = %.4g is above the mean N60 = %.3g of its %d SPT(s) in %s; a method that reads n60 may overstate the capacity",
+				l.Name, l.N60Given, l.N60, l.Tests, s.File))
+		}
+	}
+	return w
 }
 
 // layerAt returns the layer holding depth z: the upper one at a break.

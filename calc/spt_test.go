@@ -12,6 +12,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"slices"
 	"strings"
 	"testing"
 
@@ -121,6 +122,18 @@ func TestSPTCorrected(t *testing.T) {
 	}
 	if l := s.Layers[1]; l.Tests != 2 || math.Abs(l.N60-(cases[1].n60+cases[2].n60)/2) > 1e-9 || l.N60Given != 20 {
 		t.Errorf("sand layer %+v", l)
+	}
+	// The sand's n60 (20) is below the mean N60 of its tests, (19 + 34.5)/2
+	// = 26.75: no warning; at 30 it is above: warned.
+	above := func(ws []string) bool {
+		return slices.ContainsFunc(ws, func(w string) bool { return strings.Contains(w, `layer "sand": n60 = 30 is above the mean N60 = 26.8`) })
+	}
+	if slices.ContainsFunc(r.Warnings, func(w string) bool { return strings.Contains(w, "is above the mean N60") }) {
+		t.Errorf("warnings %q: n60 20 is below the tests' mean", r.Warnings)
+	}
+	high, err := ParseWith([]byte(strings.Replace(src, "n60: 20", "n60: 30", 1)), ParseOptions{ReadFile: sptFiles})
+	if err != nil || !above(high.Warnings) {
+		t.Errorf("n60 30: err %v, warnings %q lack the n60 above the tests' mean", err, high.Warnings)
 	}
 	// Never used in the capacity: the same file without the key gives the same capacity.
 	plain, err := ParseWith([]byte(sptCalc("")), ParseOptions{})
