@@ -40,8 +40,13 @@ func drivenN60Factor(low bool) float64 {
 }
 
 func (DrivenN60) ID() string { return "driven-n60-shaft" }
-func (DrivenN60) Equation() string {
-	return "fs = 0.02·pa·N60 (displacement), 0.01·pa·N60 (small displacement)"
+// Equation returns the rule as built: the small-displacement factor alone
+// when Low is set; otherwise the displacement factor, with the other named.
+func (m DrivenN60) Equation() string {
+	if m.Low {
+		return "fs = 0.01·pa·N60 (small-displacement pile)"
+	}
+	return "fs = 0.02·pa·N60 (displacement pile; 0.01·pa·N60 for a small-displacement one)"
 }
 func (DrivenN60) Valid() string { return "0 < N60 ≤ 100, pa 80 to 120 kPa; driven piles in sand" }
 func (DrivenN60) Refs() []cite.Ref {
