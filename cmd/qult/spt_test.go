@@ -31,7 +31,7 @@ func TestSPTBadMessages(t *testing.T) {
 
 // TestSPTExample: the shipped example names its borehole's records beside
 // it, read relative to the calc file's folder; its report, Markdown and
-// JSON are kept as goldens.
+// JSON are kept as goldens, and the PDF's structure.
 func TestSPTExample(t *testing.T) {
 	path := filepath.Join("..", "..", "examples", "spt-borehole", "pump-station-spt.yaml")
 	for _, c := range []struct{ golden, verb, format string }{
@@ -45,4 +45,15 @@ func TestSPTExample(t *testing.T) {
 		}
 		golden(t, c.golden, []byte(r.stdout))
 	}
+	// The PDF's structure (pages, images, the text of each page), with the
+	// SPT plot's caption.
+	r := runQ(t, slow, "", "report", "--format", "pdf", path)
+	if r.code != 0 {
+		t.Fatalf("pdf: exit %d, stderr %q", r.code, r.stderr)
+	}
+	_, s := pdfStructure(t, []byte(r.stdout))
+	if !strings.Contains(s, "Standard penetration tests with depth") {
+		t.Error("the PDF lacks the SPT plot")
+	}
+	golden(t, "spt/report.pdftext", []byte(s))
 }
