@@ -40,6 +40,7 @@ func drivenN60Factor(low bool) float64 {
 }
 
 func (DrivenN60) ID() string { return "driven-n60-shaft" }
+
 // Equation returns the rule as built: the small-displacement factor alone
 // when Low is set; otherwise the displacement factor, with the other named.
 func (m DrivenN60) Equation() string {
