@@ -76,14 +76,14 @@ func secSPT(r *calc.Result, c conv) section {
 	}
 	blocks = append(blocks, block{tbl: tt})
 	lt := &table{cols: []column{{"Layer", ""}, {"Top", c.uL()}, {"Bottom", c.uL()}, {"Tests", ""}, {"Mean N60", ""}, {"n60 given", ""},
-		{"Mean (N1)60", ""}, {"Mean φ′", "deg"}, {"Mean su", c.uS()}}}
+		{"Mean (N1)60", ""}, {"Mean φ′", "deg"}, {"Mean su", c.uS()}, {"Of tests", ""}}}
 	for _, l := range s.Layers {
 		given := txt("")
 		if l.N60Given > 0 {
 			given = num(l.N60Given)
 		}
 		if l.Tests == 0 {
-			lt.rows = append(lt.rows, []cell{txt(l.Name), num(c.L(l.Top)), num(c.L(l.Bottom)), num(0), txt("no test"), given, txt(""), txt(""), txt("")})
+			lt.rows = append(lt.rows, []cell{txt(l.Name), num(c.L(l.Top)), num(c.L(l.Bottom)), num(0), txt("no test"), given, txt(""), txt(""), txt(""), txt("")})
 			continue
 		}
 		phi, su := txt(""), txt("")
@@ -93,9 +93,10 @@ func secSPT(r *calc.Result, c conv) section {
 		if l.Su > 0 {
 			su = num(c.S(l.Su))
 		}
-		lt.rows = append(lt.rows, []cell{txt(l.Name), num(c.L(l.Top)), num(c.L(l.Bottom)), num(float64(l.Tests)), num(l.N60), given, num(l.N160), phi, su})
+		lt.rows = append(lt.rows, []cell{txt(l.Name), num(c.L(l.Top)), num(c.L(l.Bottom)), num(float64(l.Tests)), num(l.N60), given, num(l.N160), phi, su,
+			num(float64(l.Estimates))})
 	}
-	blocks = append(blocks, block{para: "Means over each layer of the ground:"}, block{tbl: lt})
+	blocks = append(blocks, block{para: "Means over each layer of the ground (the mean φ′ or su over the tests that gave one: \"of tests\"):"}, block{tbl: lt})
 	blocks = append(blocks, block{para: "The tests are reported beside the calculation: their N60, (N1)60, φ′ and su are not used in the capacity. A method that reads N60 takes the layer's own n60, written by the engineer. Correlations are empirical; compare them with laboratory tests and site-specific experience."})
 	return section{heading: headSPT, blocks: blocks}
 }
