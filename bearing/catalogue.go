@@ -114,6 +114,8 @@ var catalogue = []Descriptor{
 		Scope: "driven open steel piles in very dense sand (API class 4)"},
 	{ID: "drilled-n60-sand", Drainage: DrainedLayers, Method: ShaftSand{}, New: fixed(ShaftSand{}),
 		Scope: "drilled shafts in sand, from the layer's SPT N60; at a base settlement of 5 % of the diameter"},
+	{ID: "driven-n60-sand", Drainage: DrainedLayers, Method: DrivenN60{}, New: fixed(DrivenN60{}),
+		Scope: "driven piles in sand and gravel, from the layer's SPT N60 (Meyerhof 1976); Lb/D by the embedment and layered rules"},
 	{ID: "bored-phi", Drainage: DrainedLayers, Method: BoredPhi{}, New: fixed(BoredPhi{}),
 		Scope: "bored and augered piles in sand without SPT data: one third of Meyerhof's driven value, capped"},
 	{ID: "bored-sand", Drainage: DrainedLayers, Method: BoredSand{}, New: fixed(BoredSand{}),

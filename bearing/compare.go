@@ -14,13 +14,23 @@ type Row struct {
 // that need no given value, built as a calc file builds them with no key
 // beside method:, in the catalogue's order (Methods): Meyerhof, Vesic
 // with Δ by its correlation, Berezantzev, Janbu at η′ = 90 deg, the four
-// API sand classes, the SPT method for drilled shafts and the two
-// bored-pile rules.
+// API sand classes, the SPT methods for drilled shafts and driven piles
+// and the two bored-pile rules.
 func Drained() []Tip { return of(DrainedLayers) }
 
 // Undrained returns the undrained tip methods of the catalogue that need
 // no given value: Skempton's Nc = 9 and Vesic's undrained Nc*.
 func Undrained() []Tip { return of(UndrainedLayers) }
+
+// NeedsN60 reports whether a tip method reads N60 and has no meaning
+// without it (the SPT rules: drilled-n60-sand and driven-n60-sand).
+func NeedsN60(m Tip) bool {
+	switch m.(type) {
+	case ShaftSand, DrivenN60:
+		return true
+	}
+	return false
+}
 
 // Compare evaluates every method that applies to in and returns one row
 // each: the drained methods when φ′ or q′ is given (the SPT method only
@@ -32,13 +42,13 @@ func Compare(in Input) []Row {
 	var methods []Tip
 	if in.Phi != 0 || in.Q != 0 {
 		for _, m := range Drained() {
-			if _, ok := m.(ShaftSand); ok && in.N60 == 0 {
+			if NeedsN60(m) && in.N60 == 0 {
 				continue
 			}
 			methods = append(methods, m)
 		}
 	} else if in.N60 != 0 {
-		methods = append(methods, ShaftSand{})
+		methods = append(methods, ShaftSand{}, DrivenN60{})
 	}
 	if in.Su != 0 {
 		methods = append(methods, Undrained()...)

@@ -20,6 +20,7 @@
 //	api-medium-dense-sand-silt … -4   APISand{Class}          qp = min(q′Nq, q_L) by sand class (api-medium-dense-sand-silt, api-medium-dense-sand,
 //	                                          api-dense-sand, api-very-dense-sand)
 //	drilled-n60-sand    ShaftSand{}             qp = 0.6·N60 tsf ≤ 30 tsf (at 5 % base settlement)
+//	driven-n60-sand   DrivenN60{}             qp = 0.4·pa·N60·Lb/D ≤ 4·pa·N60 (Meyerhof 1976; Lb/D by package pile)
 //	bored-phi         BoredPhi{NoCap}         qp = min(1/3·qp,Meyerhof, 30 tsf)
 //	bored-sand        BoredSand{…}            drilled-n60-sand if N60 given, else bored-phi; × 1.27 m/B for B > 1.27 m
 //	<id>+large-base   LargeBase{Of, Off}      qp(Of) × min(1, 1.27 m/B)

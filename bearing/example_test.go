@@ -56,7 +56,8 @@ func ExampleBerezantzev_Tip() {
 // does. The soil and pile are our own example. Checks by hand: Vesic's
 // Δ = 0.005·(1 − 8/20)·1.2 = 0.0036 gives Irr = 60/1.216 = 49.34 and
 // Nσ* = 49.44 by Vesic's closed form; bored-phi is 3117/3 = 1039 kPa;
-// bored-sand takes the SPT rule, N60 being given.
+// bored-sand takes the SPT rule, N60 being given; driven-n60-sand is
+// 4·pa·N60 = 4·100·28 = 11200 kPa (its Lb/D growth is package pile's).
 func ExampleCompare() {
 	in := bearing.Input{Phi: 33 * units.Degree, Q: 120 * units.Kilopascal, Ir: 60, L: 16, D: 0.6, N60: 28}
 	for _, row := range bearing.Compare(in) {
@@ -76,6 +77,7 @@ func ExampleCompare() {
 	// api-dense-sand             factor   40.00  qp   4800 kPa
 	// api-very-dense-sand        factor   50.00  qp   6000 kPa
 	// drilled-n60-sand           factor    0.00  qp   1609 kPa
+	// driven-n60-sand            factor    0.00  qp  11200 kPa
 	// bored-phi                  factor   96.00  qp   1039 kPa
 	// bored-sand                 factor    0.00  qp   1609 kPa
 }

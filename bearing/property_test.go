@@ -122,7 +122,7 @@ func TestPropLimitHolds(t *testing.T) {
 			N60: rapid.Float64Range(1e-3, 200).Draw(t, "n60"), // 0 means not given
 			D:   units.Length(rapid.Float64Range(0.1, 5).Draw(t, "d")),
 		}
-		for _, m := range []Tip{Meyerhof{}, APISand{Class: 1}, APISand{Class: 4}, ShaftSand{}, BoredPhi{}, BoredSand{}, LargeBase{Of: ShaftSand{}}} {
+		for _, m := range []Tip{Meyerhof{}, APISand{Class: 1}, APISand{Class: 4}, ShaftSand{}, DrivenN60{}, BoredPhi{}, BoredSand{}, LargeBase{Of: ShaftSand{}}} {
 			r, err := m.Tip(in)
 			if err != nil {
 				t.Fatal(err)

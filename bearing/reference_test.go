@@ -571,10 +571,10 @@ func TestCompareRows(t *testing.T) {
 	if rows[10].Factor != 9 {
 		t.Errorf("nc9 factor %g, want 9 (Skempton 1951)", rows[10].Factor)
 	}
-	// An SPT-only input gives the drilled-shaft row alone; an error row
+	// An SPT-only input gives the two SPT rows alone; an error row
 	// keeps its reason.
 	rows = Compare(Input{N60: 20})
-	if len(rows) != 1 || rows[0].ID != "drilled-n60-sand" || rows[0].Err != nil {
+	if len(rows) != 2 || rows[0].ID != "drilled-n60-sand" || rows[1].ID != "driven-n60-sand" || rows[0].Err != nil || rows[1].Err != nil {
 		t.Errorf("N60 only: %+v", rows)
 	}
 	rows = Compare(Input{Phi: deg(50), Q: units.Kilopascal})

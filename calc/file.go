@@ -61,10 +61,11 @@ type Ground struct {
 	// ExcavationDepth and Scour lower the ground to the design ground
 	// line; the soil above it gives no shaft or tip resistance and its
 	// weight leaves σ′v below (package profile).
-	ExcavationDepth Value     `yaml:"excavation_depth,omitempty" json:"excavation_depth,omitempty" q:"length,0," doc:"Depth of an excavation floor below the original ground; the soil above is removed from σ′v, shaft and tip."`
-	Scour           *Scour    `yaml:"scour,omitempty" json:"scour,omitempty" doc:"Design scour: general below the excavation floor (or the ground), local below the general scour line."`
-	Layers          []Layer   `yaml:"layers" json:"layers"`
-	Sounding        *Sounding `yaml:"sounding,omitempty" json:"sounding,omitempty" doc:"A cone sounding (CSV, AGS4 or GEF) to interpret against this ground and report beside the calculation; it changes no capacity."`
+	ExcavationDepth Value       `yaml:"excavation_depth,omitempty" json:"excavation_depth,omitempty" q:"length,0," doc:"Depth of an excavation floor below the original ground; the soil above is removed from σ′v, shaft and tip."`
+	Scour           *Scour      `yaml:"scour,omitempty" json:"scour,omitempty" doc:"Design scour: general below the excavation floor (or the ground), local below the general scour line."`
+	Layers          []Layer     `yaml:"layers" json:"layers"`
+	Sounding        *Sounding   `yaml:"sounding,omitempty" json:"sounding,omitempty" doc:"A cone sounding (CSV, AGS4 or GEF) to interpret against this ground and report beside the calculation; it changes no capacity."`
+	SPT             *SPTRecords `yaml:"spt,omitempty" json:"spt,omitempty" doc:"Standard penetration tests of one borehole (CSV or AGS4) to correct against this ground and report beside the calculation; they change no capacity."`
 }
 
 // Scour is the design scour at a pier or abutment.

@@ -74,6 +74,9 @@ type Result struct {
 	// Sounding is the cone sounding the ground names, interpreted (nil
 	// without ground.sounding).
 	Sounding *SoundingResult
+	// SPT is the borehole's standard penetration tests the ground names,
+	// corrected (nil without ground.spt); never used in the capacity.
+	SPT *SPTResult
 	// Downdrag is the neutral plane, drag load and largest axial force
 	// (nil without a downdrag section).
 	Downdrag *DowndragResult

@@ -174,6 +174,9 @@ func run(f *File, o runOptions) (*Result, error) {
 	if err := runSounding(f, in, prof, res, o.readFile); err != nil {
 		return nil, err
 	}
+	if err := runSPT(f, in, prof, res, o.readFile); err != nil {
+		return nil, err
+	}
 	res.Warnings = append(res.Warnings, downdragWarnings(f, in)...)
 	res.Warnings = append(res.Warnings, warnings(res)...)
 	res.Warnings = append(res.Warnings, settleWarnings(res)...)
@@ -188,6 +191,9 @@ func run(f *File, o runOptions) (*Result, error) {
 	}
 	if res.Sounding != nil {
 		refs = append(refs, cite.Collect(res.Sounding.Refs...)...)
+	}
+	if res.SPT != nil {
+		refs = append(refs, cite.Collect(res.SPT.Refs...)...)
 	}
 	res.Sources = uniqueSources(refs)
 	return res, nil

@@ -49,7 +49,9 @@ type SoundingResult struct {
 	Nkt                                   float64      // 0: su not estimated
 	Layers                                []SoundingLayer
 	Suggested                             []insitu.SuggestedLayer
-	Refs                                  []cite.Ref
+	// Points are the readings interpreted, for the report's plots.
+	Points []insitu.Point
+	Refs   []cite.Ref
 }
 
 // SoundingLayer is the sounding averaged over one layer of the ground
@@ -181,6 +183,7 @@ func runSounding(f *File, in *Inputs, prof *profile.Profile, res *Result, read R
 		return prob(pre+".file", err.Error(), err)
 	}
 	out.Readings = len(pts)
+	out.Points = pts
 	out.Top, out.Bottom = pts[0].Depth, pts[len(pts)-1].Depth
 	for i := range pts {
 		if !pts[i].Valid() {

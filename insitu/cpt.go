@@ -63,6 +63,12 @@ func ZoneOf(ic float64) Zone {
 	}
 }
 
+// ZoneBoundaries returns the values of Ic that separate the zones, from
+// the coarsest: 1.31, 2.05, 2.60, 2.95, 3.60 (Robertson 1990, 2009).
+func ZoneBoundaries() [5]float64 {
+	return [5]float64{zoneBoundaryGravel, zoneBoundarySand, zoneBoundarySandMix, zoneBoundarySiltMix, zoneBoundaryClay}
+}
+
 var zoneNames = map[Zone]string{
 	ZoneOrganic:      "organic soils: clay to peat",
 	ZoneClay:         "clays: silty clay to clay",

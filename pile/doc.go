@@ -97,9 +97,13 @@
 //     0.4·pa·N60·L/D ≤ 4·pa·N60 reaches its limit, and that of his layered
 //     rule); Methods.EmbedmentRatio gives another. It multiplies the whole
 //     unit tip resistance (after the method's own limit). It belongs to
-//     the bearing-factor methods: the SPT rules (the drilled-shaft N60
-//     rule, and the bored-pile rule where N60 is given) are correlations
-//     that already cover embedment, and take no ramp.
+//     the bearing-factor methods: the SPT rules for drilled shafts and
+//     bored piles (the drilled-shaft N60 rule, and the bored-pile rule
+//     where N60 is given) are correlations that already cover embedment,
+//     and take no ramp. Meyerhof's SPT rule for driven piles
+//     (bearing.DrivenN60) is given by its limit 4·pa·N60 and takes the
+//     ramp and the layered rule, which with the default ratio are its own
+//     0.4·pa·N60·Lb/D growth.
 //   - The drilled-shaft zones: the top zone is measured from the pile head
 //     (or the design ground line, where that is deeper);
 //     the bottom one moves with the tip (in capacity with depth too). Both

@@ -200,7 +200,7 @@ func (a *Analysis) buildTipModel(lp *layerPlan) tipModel {
 			return tm
 		}
 		tm.useSu = true
-	case bearing.ShaftSand:
+	case bearing.ShaftSand, bearing.DrivenN60:
 		tm.fixed = -1 // set below
 	default:
 		return tm

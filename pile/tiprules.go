@@ -31,10 +31,7 @@ const DrilledTopZone = 1.5 * units.Metre
 
 // needsN60Tip reports whether a tip method reads N60 and has no meaning
 // without it.
-func needsN60Tip(t bearing.Tip) bool {
-	_, ok := t.(bearing.ShaftSand)
-	return ok
-}
+func needsN60Tip(t bearing.Tip) bool { return bearing.NeedsN60(t) }
 
 // unwrapShaft returns the method inside a capped one.
 func unwrapShaft(m shaft.Unit) shaft.Unit {
@@ -47,8 +44,11 @@ func unwrapShaft(m shaft.Unit) shaft.Unit {
 // needsN60Shaft reports whether a shaft method reads N60 and has no
 // meaning without it.
 func needsN60Shaft(m shaft.Unit) bool {
-	_, ok := unwrapShaft(m).(shaft.DrilledSand)
-	return ok
+	switch unwrapShaft(m).(type) {
+	case shaft.DrilledSand, shaft.DrivenN60:
+		return true
+	}
+	return false
 }
 
 // betaFamily reports whether a shaft method is of the β family (fs
@@ -84,8 +84,9 @@ type weakInfo struct {
 // Embedment ramp (Meyerhof 1976; Das, chapter on pile foundations: qp
 // grows with the embedment Lb in the bearing stratum up to the critical
 // embedment ratio): in a drained top layer, with Lcr = (Lb/D)cr·D, for the
-// tip methods built on bearing factors (not the SPT rules, whose
-// correlation already covers embedment),
+// tip methods built on bearing factors and Meyerhof's driven-pile SPT rule
+// (not the drilled and bored SPT rules, whose correlation already covers
+// embedment),
 //
 //	qp = q·Lb/Lcr   (Lb < Lcr)
 //

@@ -165,6 +165,9 @@ func addFigures(d *doc, r *calc.Result, o Options) error {
 		if err := downdragFigures(s, r, c); err != nil {
 			return err
 		}
+		if err := insituFigures(s, r, c); err != nil {
+			return err
+		}
 	}
 	return nil
 }

@@ -94,6 +94,7 @@ type jResult struct {
 	Group     *jGroup      `json:"group,omitempty"`
 	Cands     *jCandidates `json:"candidates,omitempty"`
 	Sounding  *jSounding   `json:"sounding,omitempty"`
+	SPT       *jSPT        `json:"spt,omitempty"`
 	Downdrag  *jDowndrag   `json:"downdrag,omitempty"`
 	Warnings  []string     `json:"warnings"`
 	Defaults  []defaultRow `json:"defaults"`
@@ -492,6 +493,7 @@ func toJSON(r *calc.Result, o Options) *jResult {
 	j.Group = groupJSON(r, c)
 	j.Cands = candidatesJSON(r, c)
 	j.Sounding = soundingJSON(r, c)
+	j.SPT = sptJSON(r, c)
 	j.Downdrag = downdragJSON(r, c)
 	return j
 }

@@ -143,6 +143,7 @@ func build(r *calc.Result, o Options) *doc {
 		add(secGroup(r, c))
 		add(secCandidates(r, c))
 		add(secSounding(r, c))
+		add(secSPT(r, c))
 		add(secDefaults(r, c))
 	case ViewChoose:
 		add(secCandidates(r, c))

@@ -35,6 +35,7 @@ func benchMethods() []Unit {
 		Burland{},
 		DrilledSand{},
 		DrilledSandK0{},
+		DrivenN60{},
 		APIBeta{Class: DenseSand},
 		AlphaAPI{},
 		AlphaChart{},

@@ -144,6 +144,26 @@ func capped(u Unit, v Values) Choice {
 	return Choice{Unit: u}
 }
 
+// newDrivenN60 builds DrivenN60 from its displacement key, or from the
+// pile's installation; a pile that is not driven is refused.
+func newDrivenN60(v Values) (Choice, error) {
+	if v.Installation != 0 && !v.Installation.Driven() {
+		return Choice{}, &ChoiceError{Field: "installation (a rule for driven piles)", Value: v.Installation.String(), Accepted: []string{"driven-high", "driven-low"}}
+	}
+	var low bool
+	switch w := v.Word["displacement"]; {
+	case w == "low":
+		low = true
+	case w == "high":
+	case v.Installation == DrivenLow:
+		low = true
+	case v.Installation == DrivenHigh:
+	default:
+		return Choice{}, &ChoiceError{Field: "installation (a rule for driven piles)", Value: v.Installation.String(), Accepted: []string{"driven-high", "driven-low"}}
+	}
+	return capped(DrivenN60{Low: low}, v), nil
+}
+
 // newBeta builds the β method from its K and δ keys, with the defaults by
 // the pile's installation and surface.
 func newBeta(v Values) (Choice, error) {
@@ -218,6 +238,15 @@ var catalogue = []Descriptor{
 		Scope: "drilled shafts in sand, β by depth and N60 (O'Neill & Reese 1999)"},
 	{ID: "beta-drilled-k0", Drainage: DrainedLayers, Method: DrilledSandK0{}, New: point(DrilledSandK0{}), Params: []Param{paramLimit},
 		Scope: "drilled shafts in sand, β from K0 with the preconsolidation stress (GEC 10)"},
+	{ID: "driven-n60-shaft", Drainage: DrainedLayers, Method: DrivenN60{},
+		Scope: "driven piles in sand, from the layer's SPT N60 (Meyerhof 1976)",
+		Params: []Param{
+			{Key: "displacement", Dim: "word", Words: []string{"high", "low"},
+				Default: "by the pile's installation: high for driven-high, low for driven-low",
+				Meaning: "high: displacement pile, fs = 0.02·pa·N60; low: small-displacement pile (H, open pipe), 0.01·pa·N60"},
+			paramLimit,
+		},
+		New: newDrivenN60},
 	{ID: "beta-api", Drainage: DrainedLayers, Method: APIBeta{},
 		Scope: "driven open steel pipe piles in siliceous sand and silt, by API sand class, with its limit",
 		Params: []Param{

@@ -36,6 +36,9 @@ var notInCatalogue = map[string]string{
 // first accepted; of each group, only the first key.
 func sample(d Descriptor) Values {
 	v := Values{Num: map[string]float64{}, Word: map[string]string{}, Installation: Bored, Surface: RoughConcrete}
+	if d.ID == "driven-n60-shaft" {
+		v.Installation = DrivenLow // a rule for driven piles only: a bored pile is refused
+	}
 	groups := map[string]bool{}
 	for _, p := range d.Params {
 		if p.Group != "" {

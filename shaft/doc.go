@@ -26,6 +26,7 @@
 //	beta-burland       Burland        β = (1 − sin φ′)·tan φ′·OCR^0.5 (Burland 1973)
 //	beta-drilled-sand  DrilledSand    β = 1.5 − 0.135·√(z/ft), O'Neill & Reese (1999), GEC 10
 //	beta-drilled-k0    DrilledSandK0  β = (1 − sin φ′)(σ′p/σ′v)^sin φ′·tan φ′ ≤ Kp·tan φ′, GEC 10
+//	driven-n60-shaft   DrivenN60      fs = 0.02·pa·N60 (displacement), 0.01·pa·N60 (small displacement), Meyerhof (1976)
 //	beta-api           APIBeta        fs = min(β·σ′v, fL) by API RP 2GEO sand class
 //	alpha-api          AlphaAPI       α = 0.5·ψ^−0.5 or 0.5·ψ^−0.25, α ≤ 1 (API RP 2GEO)
 //	alpha-chart        AlphaChart     α from the α–su/pa table (Das after Terzaghi, Peck & Mesri)
@@ -43,7 +44,7 @@
 //
 // Methods returns the methods a calc file can name as data, one
 // Descriptor per identifier: beta, beta-given, beta-burland,
-// beta-drilled-sand, beta-drilled-k0, beta-api, alpha-api, alpha-chart,
+// beta-drilled-sand, beta-drilled-k0, driven-n60-shaft, beta-api, alpha-api, alpha-chart,
 // alpha-drilled, alpha-given, lambda and none (None: no shaft resistance
 // in the layer). Each gives its drainage class, its Kind (a point method,
 // the whole-pile λ method, or no resistance), its scope, the keys it reads
@@ -61,6 +62,9 @@
 //	              delta_over_phi (above 0 to 1); default δ/φ′ by surface.
 //	beta-given    beta (0 to 3, required)
 //	beta-api      sand_class (an API class, required)
+//	driven-n60-shaft  displacement (high or low; default by the pile's
+//	              installation, driven-high or driven-low; other
+//	              installations are refused)
 //	alpha-given   alpha (0 to 1.5, required)
 //	lambda        lambda (above 0 to 1; default: the λ–L table)
 //	none          no key

@@ -19,6 +19,8 @@ func fuzzMethods(q float64) []Unit {
 		Burland{},
 		DrilledSand{},
 		DrilledSandK0{},
+		DrivenN60{},
+		DrivenN60{Low: q > 0},
 		APIBeta{Class: SandClass(int(math.Abs(math.Mod(q, 6))))},
 		AlphaAPI{},
 		AlphaChart{},

@@ -28,5 +28,6 @@ var insituReasons = map[string]string{
 	"insitu.ReadAGS":          "a reader: checked against files written to the AGS 4.1.1 dictionary (the same sounding as from GEF and CSV) and a table of malformed files",
 	"insitu.ReadGEF":          "a reader: checked against a file written to the GEF-CPT-Report definition (the same sounding as from AGS4 and CSV) and a table of malformed files",
 	"insitu.ReadCPTCSV":       "a reader of our own form: checked by round trip through WriteCPTCSV and a table of malformed files",
+	"insitu.ZoneBoundaries":   "the constants insitu.ZoneOf compares with, whose zones the catalogue checks against a printed Ic zone table; a test checks that ZoneOf changes zone at each",
 	"insitu.ReadSPTCSV":       "a reader of our own form: checked by round trip through WriteSPTCSV and a table of malformed files",
 }

@@ -57,6 +57,8 @@ func init() {
 		"bearing.Skempton.Tip":       runTip(func(*args) bearing.Tip { return bearing.Skempton{} }),
 		"bearing.ShaftSand.Tip":      runTip(func(*args) bearing.Tip { return bearing.ShaftSand{} }),
 		"bearing.BoredSand.Tip":      runTip(func(*args) bearing.Tip { return bearing.BoredSand{} }),
+		"bearing.DrivenN60.Tip":      runTip(func(*args) bearing.Tip { return bearing.DrivenN60{} }),
+		"bearing.DrivenN60Tip":       runDrivenN60Tip,
 		"bearing.GivenNq.Tip": runTip(func(a *args) bearing.Tip {
 			return bearing.GivenNq{Nq: a.num("nq"), Nc: a.optNum("nc", 0), Limit: units.Stress(a.optQty("limit", units.DimStress))}
 		}),
@@ -68,6 +70,7 @@ func init() {
 		"shaft.Burland.Unit":       runUnit(func(*args) shaft.Unit { return shaft.Burland{} }),
 		"shaft.DrilledSand.Unit":   runUnit(func(*args) shaft.Unit { return shaft.DrilledSand{} }),
 		"shaft.DrilledSandK0.Unit": runUnit(func(*args) shaft.Unit { return shaft.DrilledSandK0{} }),
+		"shaft.DrivenN60.Unit":     runUnit(func(a *args) shaft.Unit { return shaft.DrivenN60{Low: a.optNum("low", 0) == 1} }),
 		"shaft.Beta.Unit":          runUnit(betaOf),
 		"shaft.AlphaGiven.Unit":    runUnit(func(a *args) shaft.Unit { return shaft.AlphaGiven{Alpha: a.num("alpha")} }),
 		"shaft.APIBeta.Unit": runUnit(func(a *args) shaft.Unit {
@@ -363,6 +366,19 @@ func vesicOf(a *args) bearing.Tip {
 
 // runTip runs a tip method on the inputs phi, c, su, q, ir, g, delta, k0,
 // l, d, n60, pa; outputs qp, nq, nc, sigma, ir, irr, limit, unlimited.
+// runDrivenN60Tip runs Meyerhof's SPT tip rule for one stratum: n60, the
+// embedment lb, the width d and pa (optional).
+func runDrivenN60Tip(a *args) (values, error) {
+	n60 := a.num("n60")
+	lb, d := units.Length(a.qty("lb", units.DimLength)), units.Length(a.qty("d", units.DimLength))
+	pa := units.Stress(a.optQty("pa", units.DimStress))
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	q, err := bearing.DrivenN60Tip(n60, lb, d, pa)
+	return values{"qp": stress(q)}, err
+}
+
 func runTip(method func(*args) bearing.Tip) runner {
 	return func(a *args) (values, error) {
 		m := method(a)

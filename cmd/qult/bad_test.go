@@ -199,6 +199,16 @@ var badCases = []badCase{
 	{file: "554-sounding-ags-which-location", want: []string{"ground.sounding", "(line 17)"}},
 	{file: "555-sounding-csv-depth-order", want: []string{"ground.sounding.file (line 17)"}},
 	{file: "556-sounding-without-file", want: []string{"ground.sounding.file (line 17)", "missing"}},
+	{file: "600-spt-missing-file", want: []string{"ground.spt.", "(line 17)"}}, // the message from the file: calc TestSPTBadInput
+	{file: "601-spt-unknown-format", want: []string{"ground.spt.format (line 17)", "want csv or ags"}},
+	{file: "602-spt-energy-ratio-out-of-range", want: []string{"ground.spt.energy_ratio (line 17)", "outside 30 to 100"}},
+	{file: "603-spt-wrong-hole", want: []string{"ground.spt.", "(line 17)"}},                 // the message from the file: calc TestSPTBadInput
+	{file: "604-spt-which-hole", want: []string{"ground.spt.", "(line 17)"}},                 // the message from the file: calc TestSPTBadInput
+	{file: "605-spt-below-ground", want: []string{"ground.spt.", "(line 17)"}},               // the message from the file: calc TestSPTBadInput
+	{file: "606-spt-energy-ratio-not-recorded", want: []string{"ground.spt.", "(line 17)"}},  // the message from the file: calc TestSPTBadInput
+	{file: "607-spt-record-energy-out-of-range", want: []string{"ground.spt.", "(line 17)"}}, // the message from the file: calc TestSPTBadInput
+	{file: "608-spt-unknown-phi", want: []string{"ground.spt.phi (line 17)", "best-guess"}},
+	{file: "609-spt-f1-out-of-range", want: []string{"ground.spt.f1 (line 17)", "outside 3.5 to 6.5 kPa"}},
 	{file: "400-downdrag-depth-repeated", want: []string{"downdrag.ground_settlement[2].depth (line 32)", "function of depth"}},
 	{file: "401-downdrag-depths-not-increasing", want: []string{"downdrag.ground_settlement[2].depth (line 32)", "depths must increase"}},
 	{file: "402-downdrag-fill-negative-thickness", want: []string{"downdrag.fill.thickness (line 28)", "outside 0 to 100 m"}},
