@@ -55,6 +55,9 @@ func run(f *File, o runOptions) (*Result, error) {
 	if err != nil {
 		return nil, alsoLibrary(f, in, err)
 	}
+	if err := loadCone(f, in, o.readFile); err != nil {
+		return nil, err
+	}
 	prof, err := profile.New(in.Ground)
 	if err != nil {
 		return nil, translate(f, err)

@@ -105,6 +105,59 @@ func ReadFileIn(dir string, read func(string) ([]byte, error)) ReadFileFunc {
 	}
 }
 
+// loadCone reads the sounding the ground names into the cone the layers'
+// direct CPT methods share, when a layer chooses one. A direct method
+// without a sounding is a problem at the method's key.
+func loadCone(f *File, in *Inputs, read ReadFileFunc) error {
+	if in == nil || len(in.coneUsers) == 0 {
+		return nil
+	}
+	sd := f.Ground.Sounding
+	if sd == nil {
+		var probs Problems
+		for _, p := range in.coneUsers {
+			probs = append(probs, Problem{Path: p, Line: lineOf(f, p),
+				Msg: "a direct CPT method reads the cone sounding, and the file has none: give ground.sounding (file: …) or choose another method"})
+		}
+		return probs
+	}
+	const pre = "ground.sounding"
+	prob := func(path, msg string, err error) error {
+		return Problems{{Path: path, Line: lineOf(f, path), Msg: msg, Err: err}}
+	}
+	if strings.TrimSpace(sd.File) == "" {
+		return prob(pre+".file", "missing: the sounding file, relative to the calc file", nil)
+	}
+	format := strings.ToLower(strings.TrimSpace(sd.Format))
+	if format == "" {
+		format = strings.TrimPrefix(strings.ToLower(filepath.Ext(sd.File)), ".")
+	}
+	if format != "csv" && format != "ags" && format != "gef" {
+		return prob(pre+".format", fmt.Sprintf("%q: want csv, ags or gef (or a file ending .csv, .ags or .gef)", format), nil)
+	}
+	if read == nil {
+		return prob(pre+".file", "the file cannot be read here: a calc file from standard input or a batch line has no folder to read from; run it from a file", nil)
+	}
+	data, err := read(sd.File)
+	if err != nil {
+		return prob(pre+".file", err.Error(), err)
+	}
+	s, err := readSounding(data, sd.File, format, sd.Location)
+	if err != nil {
+		var pe *insitu.ParseError
+		if errors.As(err, &pe) {
+			return prob(pre+".file", err.Error(), err)
+		}
+		return prob(pre+".location", err.Error(), err)
+	}
+	c, err := insitu.NewCone(s)
+	if err != nil {
+		return prob(pre+".file", fmt.Sprintf("%s: %v (the direct CPT methods of %s read it)", sd.File, err, strings.Join(in.coneUsers, ", ")), err)
+	}
+	*in.cone = *c
+	return nil
+}
+
 // runSounding reads and interprets the sounding the ground names.
 func runSounding(f *File, in *Inputs, prof *profile.Profile, res *Result, read ReadFileFunc) error {
 	sd := f.Ground.Sounding

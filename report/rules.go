@@ -227,9 +227,18 @@ func tipSteps(r *calc.Result, c conv) []string {
 		terms = append(terms, "c·Nc")
 		vals = append(vals, fmt.Sprintf("%s × %s", c.ss(res.C), fmtNum(res.Nc, sig)))
 	}
-	if len(terms) > 0 {
+	switch {
+	case res.Cone != nil:
+		cn := res.Cone
+		if cn.Below > 0 || cn.Above > 0 {
+			out = append(out, fmt.Sprintf("q̄c = (qc1 + qc2)/2 = (%s + %s)/2 = %s (zone %s to %s)", c.ss(cn.Below), c.ss(cn.Above), c.ss(cn.Q), c.ls(cn.Top), c.ls(cn.Bottom)))
+		} else {
+			out = append(out, fmt.Sprintf("q̄c = %s, averaged from %s to %s", c.ss(cn.Q), c.ls(cn.Top), c.ls(cn.Bottom)))
+		}
+		out = append(out, fmt.Sprintf("qp = factor·q̄c = %s × %s = %s", fmtNum(cn.Factor, sig), c.ss(cn.Q), c.ss(res.Unlimited)))
+	case len(terms) > 0:
 		out = append(out, fmt.Sprintf("qp = %s = %s = %s", strings.Join(terms, " + "), strings.Join(vals, " + "), c.ss(res.Unlimited)))
-	} else {
+	default:
 		out = append(out, fmt.Sprintf("%s: qp = %s", t.Method, c.ss(res.Unlimited)))
 	}
 	q := res.Unlimited
