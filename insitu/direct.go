@@ -342,7 +342,9 @@ func (LCPCShaft) ID() string { return "lcpc" }
 func (LCPCShaft) Equation() string { return "fs = min(qc/α, fs,max)" }
 
 // Range returns the accepted inputs.
-func (LCPCShaft) Range() string { return "α 10 to 300; fs,max above 0 to 1000 kPa; readings along the shaft" }
+func (LCPCShaft) Range() string {
+	return "α 10 to 300; fs,max above 0 to 1000 kPa; readings along the shaft"
+}
 
 // Refs returns the source.
 func (LCPCShaft) Refs() []cite.Ref {

@@ -8,8 +8,8 @@ import (
 	"strings"
 
 	"github.com/qultgeo/qult/bearing"
-	"github.com/qultgeo/qult/insitu"
 	"github.com/qultgeo/qult/calc"
+	"github.com/qultgeo/qult/insitu"
 	"github.com/qultgeo/qult/pile"
 	"github.com/qultgeo/qult/shaft"
 	"github.com/qultgeo/qult/units"
