@@ -20,8 +20,10 @@ import (
 // from breaks in Ic. The interpretation is reported beside the
 // calculation and changes no capacity: the layering it suggests and the
 // values it correlates are for the engineer to compare with the layers
-// given and, if accepted, to write into them. The sounding's depths are
-// read as the ground's: below the original ground surface.
+// given and, if accepted, to write into them. A layer whose tip or shaft
+// is a direct CPT method (package insitu) reads the sounding's readings
+// themselves (see loadCone). The sounding's depths are read as the
+// ground's: below the original ground surface.
 type Sounding struct {
 	File     string `yaml:"file" json:"file" doc:"The sounding file, relative to the calc file: the CSV form of qult (.csv), AGS4 (.ags) or GEF-CPT-Report (.gef)."`
 	Format   string `yaml:"format,omitempty" json:"format,omitempty" doc:"csv, ags or gef; default from the file's extension."`
@@ -121,41 +123,60 @@ func loadCone(f *File, in *Inputs, read ReadFileFunc) error {
 		}
 		return probs
 	}
+	s, err := readGroundSounding(f, read)
+	if err != nil {
+		return err
+	}
+	c, err := insitu.NewCone(s)
+	if err != nil {
+		const pre = "ground.sounding"
+		return Problems{{Path: pre + ".file", Line: lineOf(f, pre+".file"), Msg: fmt.Sprintf("%s: %v (the direct CPT methods of %s read it)", sd.File, err, strings.Join(in.coneUsers, ", ")), Err: err}}
+	}
+	*in.cone = *c
+	return nil
+}
+
+// readGroundSounding reads the sounding the ground names (f.Ground.Sounding
+// not nil); a problem names the sounding's key.
+func readGroundSounding(f *File, read ReadFileFunc) (*insitu.Sounding, error) {
+	sd := f.Ground.Sounding
 	const pre = "ground.sounding"
 	prob := func(path, msg string, err error) error {
 		return Problems{{Path: path, Line: lineOf(f, path), Msg: msg, Err: err}}
 	}
 	if strings.TrimSpace(sd.File) == "" {
-		return prob(pre+".file", "missing: the sounding file, relative to the calc file", nil)
+		return nil, prob(pre+".file", "missing: the sounding file, relative to the calc file", nil)
 	}
-	format := strings.ToLower(strings.TrimSpace(sd.Format))
-	if format == "" {
-		format = strings.TrimPrefix(strings.ToLower(filepath.Ext(sd.File)), ".")
-	}
+	format := soundingFormat(sd)
 	if format != "csv" && format != "ags" && format != "gef" {
-		return prob(pre+".format", fmt.Sprintf("%q: want csv, ags or gef (or a file ending .csv, .ags or .gef)", format), nil)
+		return nil, prob(pre+".format", fmt.Sprintf("%q: want csv, ags or gef (or a file ending .csv, .ags or .gef)", format), nil)
 	}
 	if read == nil {
-		return prob(pre+".file", "the file cannot be read here: a calc file from standard input or a batch line has no folder to read from; run it from a file", nil)
+		return nil, prob(pre+".file", "the file cannot be read here: a calc file from standard input or a batch line has no folder to read from; run it from a file", nil)
 	}
 	data, err := read(sd.File)
 	if err != nil {
-		return prob(pre+".file", err.Error(), err)
+		return nil, prob(pre+".file", err.Error(), err)
 	}
 	s, err := readSounding(data, sd.File, format, sd.Location)
 	if err != nil {
 		var pe *insitu.ParseError
 		if errors.As(err, &pe) {
-			return prob(pre+".file", err.Error(), err)
+			return nil, prob(pre+".file", err.Error(), err)
 		}
-		return prob(pre+".location", err.Error(), err)
+		return nil, prob(pre+".location", err.Error(), err)
 	}
-	c, err := insitu.NewCone(s)
-	if err != nil {
-		return prob(pre+".file", fmt.Sprintf("%s: %v (the direct CPT methods of %s read it)", sd.File, err, strings.Join(in.coneUsers, ", ")), err)
+	return s, nil
+}
+
+// soundingFormat returns the sounding's format: as given, or from the
+// file's extension.
+func soundingFormat(sd *Sounding) string {
+	format := strings.ToLower(strings.TrimSpace(sd.Format))
+	if format == "" {
+		format = strings.TrimPrefix(strings.ToLower(filepath.Ext(sd.File)), ".")
 	}
-	*in.cone = *c
-	return nil
+	return format
 }
 
 // runSounding reads and interprets the sounding the ground names.
@@ -171,10 +192,7 @@ func runSounding(f *File, in *Inputs, prof *profile.Profile, res *Result, read R
 	if strings.TrimSpace(sd.File) == "" {
 		return prob(pre+".file", "missing: the sounding file, relative to the calc file", nil)
 	}
-	format := strings.ToLower(strings.TrimSpace(sd.Format))
-	if format == "" {
-		format = strings.TrimPrefix(strings.ToLower(filepath.Ext(sd.File)), ".")
-	}
+	format := soundingFormat(sd)
 	if format != "csv" && format != "ags" && format != "gef" {
 		return prob(pre+".format", fmt.Sprintf("%q: want csv, ags or gef (or a file ending .csv, .ags or .gef)", format), nil)
 	}
@@ -190,20 +208,9 @@ func runSounding(f *File, in *Inputs, prof *profile.Profile, res *Result, read R
 	if !sd.MinLayer.IsSet() {
 		minLayer = DefaultMinLayer
 	}
-	if read == nil {
-		return prob(pre+".file", "the file cannot be read here: a calc file from standard input or a batch line has no folder to read from; run it from a file", nil)
-	}
-	data, err := read(sd.File)
+	s, err := readGroundSounding(f, read)
 	if err != nil {
-		return prob(pre+".file", err.Error(), err)
-	}
-	s, err := readSounding(data, sd.File, format, sd.Location)
-	if err != nil {
-		var pe *insitu.ParseError
-		if errors.As(err, &pe) {
-			return prob(pre+".file", err.Error(), err)
-		}
-		return prob(pre+".location", err.Error(), err)
+		return err
 	}
 	out := &SoundingResult{File: sd.File, Format: format, ID: s.ID, AreaRatio: s.AreaRatio, Voids: s.Voids, Nkt: nkt,
 		Refs: insitu.CPTInterpretationRefs()}

@@ -34,6 +34,46 @@
 // layer or a zone about a pile tip; SuggestLayers proposes a layering from
 // breaks in Ic, which is returned as a suggestion and never used silently.
 //
+// # Direct methods of pile capacity
+//
+// The direct CPT methods give a pile's unit tip and shaft resistance from
+// the cone readings themselves, without strength parameters. NewCone
+// prepares a sounding for them (qE = qt − u2, running integrals; the
+// readings vary linearly between one another and are never extrapolated
+// beyond the first and the last). Each method is a value with our own
+// identifier, used as a layer's tip or shaft method in a calc file:
+//
+//	part   identifier        value                       rule
+//	tip    lcpc              LCPCTip{Kc, Limit}          qp = kc·qca, qca the mean of qc over tip ± 1.5B clipped to 0.7…1.3 × its mean
+//	tip    schmertmann       SchmertmannTip{Limit}       qp = (qc1 + qc2)/2 ≤ limit, minimum path over 0.7B to 4B below and 8B above
+//	tip    eslami-fellenius  EslamiFelleniusTip{Ct}      qp = Ct·qEg, geometric mean of qt − u2 over 8B (or 2B) above to 4B below, the lesser
+//	shaft  lcpc              LCPCShaft{Alpha, Limit}     fs = min(qc/α, fs,max)
+//	shaft  eslami-fellenius  EslamiFelleniusShaft{Cs}    fs = Cs·(qt − u2)
+//
+// DirectMethods returns them as a catalogue (DirectDescriptor: part,
+// identifier, scope, the keys read beside method:, the method, and a
+// constructor); LookupDirect finds an entry. The keys:
+//
+//	tip lcpc               kc     0.05 to 1 (required); limit  ≥ 0 kPa (default none)
+//	tip schmertmann        limit  1 to 100000 kPa (required)
+//	tip eslami-fellenius   ct     0.1 to 1 (default 1)
+//	shaft lcpc             alpha  10 to 300 (required); limit  0.001 to 1000 kPa (required)
+//	shaft eslami-fellenius cs     0.001 to 0.1 (required)
+//
+// The factors of the methods' tables (kc and α with fs,max by soil and
+// pile category, Cs by soil type, Schmertmann's limit) are given by the
+// engineer: qult holds no copy of those tables, which could not be read
+// for this release, and no default that could pass unnoticed. A zone or
+// a length of shaft the sounding does not cover is an error (ZoneError),
+// never an extrapolation. Package pile evaluates these methods layer by
+// layer (pile.ConeTip, pile.ConeShaft), the shaft integral exactly over
+// the readings.
+//
+// Not provided: the shaft rules of Schmertmann (1978) (the K factor by
+// depth-to-width in sand, α′ in clay, both read from charts), and the CPT
+// methods for driven piles in sand of API RP 2GEO (UWA-05, Fugro-05,
+// ICP-05, NGI-05), whose published text could not be read.
+//
 // Correlations are empirical: results are for qualified engineers, to be
 // checked against local codes, laboratory testing, site-specific
 // experience and load tests; the governing code and licensed practice
