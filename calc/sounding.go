@@ -125,6 +125,12 @@ func loadCone(f *File, in *Inputs, read ReadFileFunc) error {
 	}
 	s, err := readGroundSounding(f, read)
 	if err != nil {
+		var probs Problems
+		if errors.As(err, &probs) {
+			for i := range probs {
+				probs[i].Msg += " (the direct CPT methods of " + strings.Join(in.coneUsers, ", ") + " read it)"
+			}
+		}
 		return err
 	}
 	c, err := insitu.NewCone(s)
