@@ -467,46 +467,64 @@ func (m SchmertmannTip) Tip(c *Cone, tip, b units.Length) (TipResult, error) {
 	return r, nil
 }
 
+// inside returns the indices lo…hi of the readings strictly inside (a, b)
+// (hi < lo when there is none).
+func (c *Cone) inside(a, b float64) (lo, hi int) {
+	lo = sort.SearchFloat64s(c.z, a)
+	if lo < len(c.z) && c.z[lo] == a {
+		lo++
+	}
+	hi = sort.SearchFloat64s(c.z, b) - 1 // last z[i] < b
+	return lo, hi
+}
+
 // minPathBelow returns (qcI + qcII)/2 from z down to d, and the least qc
-// met on the way.
+// met on the way: the readings inside (z, d) and the values at both ends,
+// taken bottom-up. It allocates nothing.
 func (c *Cone) minPathBelow(z, d float64) (float64, float64) {
-	var zs, vs [64]float64
-	zz, vv := zs[:0], vs[:0]
-	c.nodes(c.qc, z, d, func(x, v float64) { zz, vv = append(zz, x), append(vv, v) })
-	if len(zz) < 2 {
-		return vv[0], vv[0]
+	pz, pv := d, c.interp(c.qc, d)
+	if !(d > z) {
+		return pv, pv
 	}
+	least := pv
 	var sI, sII float64
-	least := vv[len(vv)-1]
-	for k := len(zz) - 1; k > 0; k-- {
-		h := zz[k] - zz[k-1]
-		sI += h * (vv[k] + vv[k-1]) / 2
+	step := func(zk, vk float64) {
+		h := pz - zk
+		sI += h * (pv + vk) / 2
 		hi := least
-		least = min(least, vv[k-1])
+		least = min(least, vk)
 		sII += h * (hi + least) / 2
+		pz, pv = zk, vk
 	}
-	L := zz[len(zz)-1] - zz[0]
+	lo, hi := c.inside(z, d)
+	for i := hi; i >= lo; i-- {
+		step(c.z[i], c.qc[i])
+	}
+	step(z, c.interp(c.qc, z))
+	L := d - z
 	return (sI/L + sII/L) / 2, least
 }
 
 // minPathAbove returns the mean of the minimum path from z up to top,
-// starting from the bound least.
+// starting from the bound least. It allocates nothing.
 func (c *Cone) minPathAbove(z, top, least float64) float64 {
-	var zs, vs [64]float64
-	zz, vv := zs[:0], vs[:0]
-	c.nodes(c.qc, top, z, func(x, v float64) { zz, vv = append(zz, x), append(vv, v) })
-	if len(zz) < 2 {
-		return min(vv[0], least)
+	pz := z
+	cur := min(least, c.interp(c.qc, z))
+	if !(z > top) {
+		return cur
 	}
 	var s float64
-	cur := min(least, vv[len(vv)-1])
-	for k := len(zz) - 1; k > 0; k-- {
-		h := zz[k] - zz[k-1]
-		next := min(cur, vv[k-1])
-		s += h * (cur + next) / 2
-		cur = next
+	step := func(zk, vk float64) {
+		next := min(cur, vk)
+		s += (pz - zk) * (cur + next) / 2
+		pz, cur = zk, next
 	}
-	return s / (zz[len(zz)-1] - zz[0])
+	lo, hi := c.inside(top, z)
+	for i := hi; i >= lo; i-- {
+		step(c.z[i], c.qc[i])
+	}
+	step(top, c.interp(c.qc, top))
+	return s / (z - top)
 }
 
 // EslamiFelleniusTip is Eslami & Fellenius's (1997) tip rule:
