@@ -52,6 +52,9 @@ type SoundingResult struct {
 	Layers                                []SoundingLayer
 	Suggested                             []insitu.SuggestedLayer
 	Refs                                  []cite.Ref
+	// ReadBy lists the calc-file keys of the direct CPT methods that read
+	// the sounding's readings in the capacity (empty: none does).
+	ReadBy []string
 }
 
 // SoundingLayer is the sounding averaged over one layer of the ground
@@ -219,7 +222,7 @@ func runSounding(f *File, in *Inputs, prof *profile.Profile, res *Result, read R
 		return err
 	}
 	out := &SoundingResult{File: sd.File, Format: format, ID: s.ID, AreaRatio: s.AreaRatio, Voids: s.Voids, Nkt: nkt,
-		Refs: insitu.CPTInterpretationRefs()}
+		Refs: insitu.CPTInterpretationRefs(), ReadBy: append([]string(nil), in.coneUsers...)}
 	depth := prof.Depth()
 	keep := len(s.Rows)
 	for keep > 0 && s.Rows[keep-1].Depth > depth {
