@@ -10,6 +10,7 @@ import (
 
 	"github.com/qultgeo/qult/cite"
 	"github.com/qultgeo/qult/insitu"
+	"github.com/qultgeo/qult/pile"
 	"github.com/qultgeo/qult/profile"
 	"github.com/qultgeo/qult/units"
 )
@@ -143,6 +144,35 @@ func loadCone(f *File, in *Inputs, read ReadFileFunc) error {
 	}
 	*in.cone = *c
 	return nil
+}
+
+// coneReach returns the deepest tip depth at which every layer's direct
+// CPT methods find readings: a cone tip's zone reaches 4 diameters below
+// the tip (the deepest zone of the methods), a cone shaft reads down to
+// the tip. ok is false when no layer reaching below the sounding uses one.
+func coneReach(in *Inputs, prof *profile.Profile) (units.Length, bool) {
+	if in == nil || len(in.coneUsers) == 0 || in.cone == nil || in.cone.Readings() == 0 {
+		return 0, false
+	}
+	last := in.cone.Bottom()
+	reach, ok := prof.Depth(), false
+	for i, l := range prof.Layers() {
+		if i >= len(in.Methods.Layers) {
+			break
+		}
+		lm := in.Methods.Layers[i]
+		limit := prof.Depth()
+		if _, cone := lm.Tip.(pile.ConeTip); cone {
+			limit = last - 4*in.Pile.Section.Size()
+		}
+		if _, cone := lm.Shaft.(pile.ConeShaft); cone {
+			limit = min(limit, last)
+		}
+		if l.Bottom > limit {
+			reach, ok = min(reach, max(limit, l.Top)), true
+		}
+	}
+	return reach, ok
 }
 
 // readGroundSounding reads the sounding the ground names (f.Ground.Sounding
