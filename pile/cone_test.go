@@ -13,6 +13,7 @@ import (
 	"github.com/qultgeo/qult/insitu"
 	"github.com/qultgeo/qult/profile"
 	"github.com/qultgeo/qult/units"
+	"pgregory.net/rapid"
 )
 
 // uniformCone is a sounding of our own: qc 10 MPa, u2 0.2 MPa, a = 1
@@ -119,4 +120,79 @@ func TestConeMissing(t *testing.T) {
 	if !errors.As(err, &ze) || !errors.As(err, &pe) || pe.Path != "layers[1].tip" {
 		t.Errorf("short sounding: %v; want a ZoneError at layers[1].tip", err)
 	}
+}
+
+// TestPropConeDepthAndScale: on random soundings (invented), capacity with
+// depth equals the capacity at each tip, and scaling every qc by k scales
+// the tip and the shaft of the cone layers by k (the methods are
+// homogeneous in qc; no limit is reached here).
+func TestPropConeDepthAndScale(t *testing.T) {
+	rapid.Check(t, func(r *rapid.T) {
+		n := rapid.IntRange(150, 400).Draw(r, "n")
+		h := rapid.Float64Range(0.05, 0.2).Draw(r, "h")
+		k := rapid.Float64Range(0.5, 2).Draw(r, "k")
+		s := &insitu.Sounding{ID: "R", AreaRatio: 1}
+		s2 := &insitu.Sounding{ID: "R2", AreaRatio: 1}
+		for i := range n {
+			q := units.Stress(rapid.Float64Range(0.5, 30).Draw(r, "qc")) * units.Megapascal
+			z := units.Length(float64(i) * h)
+			s.Rows = append(s.Rows, insitu.Row{Depth: z, Qc: q})
+			s2.Rows = append(s2.Rows, insitu.Row{Depth: z, Qc: units.Stress(k) * q})
+		}
+		c, err := insitu.NewCone(s)
+		if err != nil {
+			r.Fatal(err)
+		}
+		c2, _ := insitu.NewCone(s2)
+		bottom := float64(n-1) * h
+		d := rapid.Float64Range(0.2, 0.5).Draw(r, "d")
+		top := rapid.Float64Range(0.2*bottom, 0.5*bottom).Draw(r, "layer")
+		prof := mustProfile(t, profile.Spec{NoWater: true, Layers: []profile.LayerSpec{
+			{Name: "upper", Thickness: units.Length(top), Drainage: profile.Drained, Phi: 32 * units.Degree, UnitWeight: 18 * kNm},
+			{Name: "lower", Thickness: units.Length(bottom - top + 10), Drainage: profile.Drained, Phi: 35 * units.Degree, UnitWeight: 19 * kNm},
+		}})
+		tipMethod := []insitu.DirectTip{insitu.LCPCTip{Kc: 0.4}, insitu.SchmertmannTip{Limit: 100 * units.Megapascal}, insitu.EslamiFelleniusTip{}}[rapid.IntRange(0, 2).Draw(r, "tip")]
+		shaftMethod := []insitu.DirectShaft{insitu.LCPCShaft{Alpha: 300, Limit: units.Megapascal}, insitu.EslamiFelleniusShaft{Cs: 0.005}}[rapid.IntRange(0, 1).Draw(r, "shaft")]
+		methods := func(c *insitu.Cone) Methods {
+			ms := DefaultMethods()
+			ms.Layers = []LayerMethods{{NoShaft: true}, {Shaft: ConeShaft{Method: shaftMethod, Cone: c}, Tip: ConeTip{Method: tipMethod, Cone: c}}}
+			return ms
+		}
+		// deepest tip whose zone (8B above, 4B below) the readings cover
+		zmax := bottom - 4*d - 1e-6
+		p := Pile{Section: Section{Shape: Circle, Diameter: units.Length(d)}, Length: units.Length(zmax), Installation: DrivenHigh}
+		a, err := NewAnalysis(prof, p, methods(c), nil)
+		if err != nil {
+			r.Fatal(err)
+		}
+		a2, err := NewAnalysis(prof, p, methods(c2), nil)
+		if err != nil {
+			r.Fatal(err)
+		}
+		from := top + 8*d + 0.01
+		if from >= zmax {
+			r.Skip("no depth with the whole zone in the lower layer")
+		}
+		rows, err := a.WithDepth(DepthGrid{From: units.Length(from), To: units.Length(zmax), Step: units.Length((zmax - from) / 7)}, nil)
+		if err != nil {
+			r.Fatal(err)
+		}
+		for _, w := range rows {
+			at, err := a.CapacityAt(w.TipDepth)
+			if err != nil {
+				r.Fatal(err)
+			}
+			if math.Abs(float64(at.Compression-w.Compression)) > 1e-9*float64(at.Compression) {
+				r.Fatalf("tip %v: with depth %v, at the tip %v", w.TipDepth, w.Compression, at.Compression)
+			}
+			at2, err := a2.CapacityAt(w.TipDepth)
+			if err != nil {
+				r.Fatal(err)
+			}
+			if math.Abs(float64(at2.Tip)-k*float64(at.Tip)) > 1e-9*k*float64(at.Tip) ||
+				math.Abs(float64(at2.Shaft)-k*float64(at.Shaft)) > 1e-9*k*float64(at.Shaft)+1e-6 {
+				r.Fatalf("tip %v: k = %g: Qp %v → %v, Qs %v → %v", w.TipDepth, k, at.Tip, at2.Tip, at.Shaft, at2.Shaft)
+			}
+		}
+	})
 }
