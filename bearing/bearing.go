@@ -129,6 +129,9 @@ type ConeAverage struct {
 	// Below and Above are the means below and above the tip of a
 	// minimum-path rule (qc1, qc2); 0 otherwise.
 	Below, Above units.Stress
+	// Raw is the mean before clipping of a rule that clips the readings
+	// about it (LCPC: to 0.7…1.3 × Raw); 0 otherwise.
+	Raw units.Stress
 }
 
 // Flags are warnings about a Result, as a small bitmask so that the hot

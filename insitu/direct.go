@@ -227,6 +227,9 @@ type TipResult struct {
 	// Qc1 and Qc2 are the means below and above the tip of the minimum
 	// path rule (SchmertmannTip); 0 otherwise.
 	Qc1, Qc2 units.Stress
+	// Raw is the mean over the zone before clipping (LCPCTip, whose clip
+	// bounds are 0.7 and 1.3 times it); 0 otherwise.
+	Raw units.Stress
 }
 
 // DirectTip is a direct CPT method for the unit tip resistance of a pile
@@ -315,7 +318,7 @@ func (m LCPCTip) Tip(c *Cone, tip, b units.Length) (TipResult, error) {
 	}
 	raw := c.mean(c.qc, c.cqc, a, e)
 	qca := c.clippedMean(c.qc, a, e, 0.7*raw, 1.3*raw)
-	r := TipResult{Cone: units.Stress(qca), Factor: m.Kc, Limit: m.Limit, Top: units.Length(a), Bottom: units.Length(e)}
+	r := TipResult{Cone: units.Stress(qca), Factor: m.Kc, Limit: m.Limit, Top: units.Length(a), Bottom: units.Length(e), Raw: units.Stress(raw)}
 	q := m.Kc * qca
 	r.Unlimited = units.Stress(q)
 	q, r.Limited = limitOf(q, float64(m.Limit))

@@ -50,7 +50,7 @@ func (t ConeTip) Tip(in bearing.Input) (bearing.Result, error) {
 		return bearing.Result{}, err
 	}
 	out := bearing.Result{Unlimited: r.Unlimited, Limit: r.Limit, Qp: r.Qp, Rule: "cone sounding " + t.Cone.ID(),
-		Cone: &bearing.ConeAverage{Q: r.Cone, Factor: r.Factor, Top: r.Top, Bottom: r.Bottom, Below: r.Qc1, Above: r.Qc2}}
+		Cone: &bearing.ConeAverage{Q: r.Cone, Factor: r.Factor, Top: r.Top, Bottom: r.Bottom, Below: r.Qc1, Above: r.Qc2, Raw: r.Raw}}
 	if r.Limited {
 		out.Flags |= bearing.LimitGoverns
 	}

@@ -244,6 +244,7 @@ type jCone struct {
 	Factor jnum `json:"factor"`
 	Below  *qty `json:"qc_below,omitempty"`
 	Above  *qty `json:"qc_above,omitempty"`
+	Raw    *qty `json:"mean_before_clipping,omitempty"`
 }
 
 type jEmbedment struct {
@@ -443,7 +444,7 @@ func toJSON(r *calc.Result, o Options) *jResult {
 	}
 	if cn := t.Result.Cone; cn != nil {
 		j.Tip.Cone = &jCone{Top: c.L(cn.Top), Bottom: c.L(cn.Bottom), Q: c.S(cn.Q), Factor: jnum(cn.Factor),
-			Below: opt(c.S(cn.Below), cn.Below > 0), Above: opt(c.S(cn.Above), cn.Above > 0)}
+			Below: opt(c.S(cn.Below), cn.Below > 0), Above: opt(c.S(cn.Above), cn.Above > 0), Raw: opt(c.S(cn.Raw), cn.Raw > 0)}
 	}
 	if t.WeakLayer >= 0 {
 		name := ""

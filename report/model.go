@@ -575,6 +575,10 @@ func secTip(r *calc.Result, c conv) section {
 	if cn := res.Cone; cn != nil {
 		it = append(it, item{"Cone zone averaged, top", num(c.L(cn.Top)), c.uL()},
 			item{"Cone zone averaged, bottom", num(c.L(cn.Bottom)), c.uL()})
+		if cn.Raw > 0 {
+			it = append(it, item{"Mean over the zone before clipping", num(c.S(cn.Raw)), c.uS()},
+				item{"Clipped to", txt(fmt.Sprintf("%s to %s %s", fmtNum(c.S(0.7*cn.Raw), sig), fmtNum(c.S(1.3*cn.Raw), sig), c.uS())), ""})
+		}
 		if cn.Below > 0 || cn.Above > 0 {
 			it = append(it, item{"qc1 (below the tip, minimum path)", num(c.S(cn.Below)), c.uS()},
 				item{"qc2 (above the tip, minimum path)", num(c.S(cn.Above)), c.uS()})
