@@ -23,6 +23,7 @@ type Cone struct {
 	cqe []float64 // running integral of qE, Pa·m
 	cl  []float64 // running integral of ln qE, m
 	id  string
+	u2  bool // u2 was measured (a piezocone sounding)
 }
 
 // NewCone prepares sounding s for the direct methods. Every reading must
@@ -33,7 +34,7 @@ func NewCone(s *Sounding) (*Cone, error) {
 		return nil, fmt.Errorf("insitu: cone: the sounding holds no reading")
 	}
 	n := len(s.Rows)
-	c := &Cone{id: s.ID, z: make([]float64, n), qc: make([]float64, n), qe: make([]float64, n),
+	c := &Cone{id: s.ID, u2: s.HasU2, z: make([]float64, n), qc: make([]float64, n), qe: make([]float64, n),
 		lqe: make([]float64, n), cqc: make([]float64, n), cqe: make([]float64, n), cl: make([]float64, n)}
 	for i, r := range s.Rows {
 		z, qc, qt := float64(r.Depth), float64(r.Qc), float64(s.Qt(i))
@@ -70,6 +71,19 @@ func (c *Cone) Readings() int { return len(c.z) }
 
 // ID returns the sounding's identifier.
 func (c *Cone) ID() string { return c.id }
+
+// HasU2 reports whether the sounding measured u2 (a piezocone).
+func (c *Cone) HasU2() bool { return c.u2 }
+
+// needU2 refuses a sounding without u2 for a method that reads qE =
+// qt − u2: without it qE would be qt, too high wherever the pore pressure
+// is not negligible.
+func (c *Cone) needU2(method string) error {
+	if len(c.z) > 0 && !c.u2 {
+		return fmt.Errorf("insitu: %s: reads qE = qt − u2, and the sounding %q has no u2 measured; use a piezocone sounding or another method", method, c.id)
+	}
+	return nil
+}
 
 func (c *Cone) first() float64 {
 	if len(c.z) == 0 {
@@ -540,7 +554,8 @@ func (c *Cone) minPathAbove(z, top, least float64) float64 {
 // from a stronger; we take the lesser of the two means, so that the
 // engineer need not choose the case (the lower, conservative value; our
 // choice). The mean is that of ln qE, linear between readings. Ct, the
-// toe correlation coefficient, is 1 unless given (0.1 to 1).
+// toe correlation coefficient, is 1 unless given (0.1 to 1). The sounding
+// must have u2 measured (a piezocone): without it qE would be qt.
 type EslamiFelleniusTip struct {
 	Ct float64 // 0 means 1
 }
@@ -584,6 +599,9 @@ func (m EslamiFelleniusTip) Tip(c *Cone, tip, b units.Length) (TipResult, error)
 	if err := c.cover(m.ID(), "tip zone (8B above to 4B below)", top, bot); err != nil {
 		return TipResult{}, err
 	}
+	if err := c.needU2(m.ID()); err != nil {
+		return TipResult{}, err
+	}
 	g8 := math.Exp(c.mean(c.lqe, c.cl, top, bot))
 	g2 := math.Exp(c.mean(c.lqe, c.cl, z-2*bb, bot))
 	g := g8
@@ -603,7 +621,7 @@ func (m EslamiFelleniusTip) Tip(c *Cone, tip, b units.Length) (TipResult, error)
 //
 // with Cs the shaft correlation coefficient of the soil type the engineer
 // reads from the method's soil profiling chart (0.001 to 0.1); qult holds
-// no copy of the chart's table.
+// no copy of the chart's table. The sounding must have u2 measured.
 type EslamiFelleniusShaft struct {
 	Cs float64
 }
@@ -637,6 +655,9 @@ func (m EslamiFelleniusShaft) Unit(c *Cone, z units.Length) (units.Stress, units
 	if err := c.cover(m.ID(), "shaft", float64(z), float64(z)); err != nil {
 		return 0, 0, err
 	}
+	if err := c.needU2(m.ID()); err != nil {
+		return 0, 0, err
+	}
 	f := units.Stress(m.Cs * c.interp(c.qe, float64(z)))
 	return f, f, nil
 }
@@ -648,6 +669,9 @@ func (m EslamiFelleniusShaft) Integral(c *Cone, top, bottom units.Length) (float
 	}
 	a, b := float64(top), float64(bottom)
 	if err := c.cover(m.ID(), "shaft", a, b); err != nil {
+		return 0, false, err
+	}
+	if err := c.needU2(m.ID()); err != nil {
 		return 0, false, err
 	}
 	if !(b > a) {

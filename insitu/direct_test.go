@@ -14,6 +14,7 @@ package insitu
 import (
 	"errors"
 	"math"
+	"strings"
 	"testing"
 
 	"github.com/qultgeo/qult/units"
@@ -22,15 +23,14 @@ import (
 
 const mpa = float64(units.Megapascal)
 
-// soundingOf builds a sounding with readings at the depths zs, qc in MPa,
-// and u2 in MPa (area ratio a; u2 nil for none).
+// soundingOf builds a piezocone sounding with readings at the depths zs,
+// qc in MPa, and u2 in MPa (area ratio a; u2 nil for u2 = 0 throughout).
 func soundingOf(zs, qc, u2 []float64, a float64) *Sounding {
-	s := &Sounding{ID: "T", AreaRatio: a}
+	s := &Sounding{ID: "T", AreaRatio: a, HasU2: true}
 	for i, z := range zs {
 		r := Row{Depth: units.Length(z), Qc: units.Stress(qc[i] * mpa)}
 		if u2 != nil {
 			r.U2 = units.Stress(u2[i] * mpa)
-			s.HasU2 = true
 		}
 		s.Rows = append(s.Rows, r)
 	}
@@ -273,6 +273,18 @@ func TestDirectErrors(t *testing.T) {
 		if err == nil {
 			t.Errorf("bad value %d: no error", i)
 		}
+	}
+	noU2 := soundingOf(zs, qs, nil, 1)
+	noU2.HasU2 = false
+	cu := cone(t, noU2)
+	if _, err := (EslamiFelleniusTip{}).Tip(cu, 5*units.Metre, b); err == nil || !strings.Contains(err.Error(), "no u2") {
+		t.Errorf("eslami-fellenius tip without u2: %v; want an error", err)
+	}
+	if _, _, err := (EslamiFelleniusShaft{Cs: 0.01}).Integral(cu, 2*units.Metre, 5*units.Metre); err == nil {
+		t.Error("eslami-fellenius shaft without u2: no error")
+	}
+	if _, err := (LCPCTip{Kc: 0.4}).Tip(cu, 5*units.Metre, b); err != nil {
+		t.Errorf("lcpc without u2: %v; it reads qc only", err)
 	}
 	for _, s := range []*Sounding{
 		soundingOf([]float64{1, 1}, []float64{1, 1}, nil, 1),             // depth not increasing

@@ -131,8 +131,8 @@ func TestPropConeDepthAndScale(t *testing.T) {
 		n := rapid.IntRange(150, 400).Draw(r, "n")
 		h := rapid.Float64Range(0.05, 0.2).Draw(r, "h")
 		k := rapid.Float64Range(0.5, 2).Draw(r, "k")
-		s := &insitu.Sounding{ID: "R", AreaRatio: 1}
-		s2 := &insitu.Sounding{ID: "R2", AreaRatio: 1}
+		s := &insitu.Sounding{ID: "R", AreaRatio: 1, HasU2: true} // u2 measured, zero
+		s2 := &insitu.Sounding{ID: "R2", AreaRatio: 1, HasU2: true}
 		for i := range n {
 			q := units.Stress(rapid.Float64Range(0.5, 30).Draw(r, "qc")) * units.Megapascal
 			z := units.Length(float64(i) * h)
