@@ -115,9 +115,9 @@ type Result struct {
 	Qp        units.Stress // unit tip resistance after the limit, any Reduction and the Cap
 	Flags     Flags        // warnings
 
-	// Cone is what a direct CPT method averaged about the tip (nil for
-	// every other method): Unlimited = Cone.Factor·Cone.Q.
-	Cone *ConeAverage
+	// Cone is what a direct CPT method averaged about the tip (the zero
+	// value, Q = 0, for every other method): Unlimited = Cone.Factor·Cone.Q.
+	Cone ConeAverage
 }
 
 // ConeAverage is the cone resistance a direct CPT method averaged over its

@@ -23,7 +23,8 @@ type Cone struct {
 	cqe []float64 // running integral of qE, Pa·m
 	cl  []float64 // running integral of ln qE, m
 	id  string
-	u2  bool // u2 was measured (a piezocone sounding)
+	u2  bool   // u2 was measured (a piezocone sounding)
+	lbl string // "cone sounding " + id, for results
 }
 
 // NewCone prepares sounding s for the direct methods. Every reading must
@@ -34,7 +35,7 @@ func NewCone(s *Sounding) (*Cone, error) {
 		return nil, fmt.Errorf("insitu: cone: the sounding holds no reading")
 	}
 	n := len(s.Rows)
-	c := &Cone{id: s.ID, u2: s.HasU2, z: make([]float64, n), qc: make([]float64, n), qe: make([]float64, n),
+	c := &Cone{id: s.ID, u2: s.HasU2, lbl: "cone sounding " + s.ID, z: make([]float64, n), qc: make([]float64, n), qe: make([]float64, n),
 		lqe: make([]float64, n), cqc: make([]float64, n), cqe: make([]float64, n), cl: make([]float64, n)}
 	for i, r := range s.Rows {
 		z, qc, qt := float64(r.Depth), float64(r.Qc), float64(s.Qt(i))
@@ -71,6 +72,9 @@ func (c *Cone) Readings() int { return len(c.z) }
 
 // ID returns the sounding's identifier.
 func (c *Cone) ID() string { return c.id }
+
+// Label returns "cone sounding " and the sounding's identifier.
+func (c *Cone) Label() string { return c.lbl }
 
 // HasU2 reports whether the sounding measured u2 (a piezocone).
 func (c *Cone) HasU2() bool { return c.u2 }
@@ -462,9 +466,15 @@ func (m SchmertmannTip) Tip(c *Cone, tip, b units.Length) (TipResult, error) {
 	}
 	best := math.Inf(1)
 	var bestQ1, bestQ2 float64
+	lastLeast, lastQ2 := math.NaN(), 0.0
 	try := func(d float64) {
 		q1, least := c.minPathBelow(z, d)
-		q2 := c.minPathAbove(z, top, least)
+		// the path above depends on the candidate only through the least
+		// value below, which falls as d grows: work it out when it changes
+		if least != lastLeast {
+			lastLeast, lastQ2 = least, c.minPathAbove(z, top, least)
+		}
+		q2 := lastQ2
 		if q := (q1 + q2) / 2; q < best {
 			best, bestQ1, bestQ2 = q, q1, q2
 		}

@@ -49,8 +49,8 @@ func (t ConeTip) Tip(in bearing.Input) (bearing.Result, error) {
 	if err != nil {
 		return bearing.Result{}, err
 	}
-	out := bearing.Result{Unlimited: r.Unlimited, Limit: r.Limit, Qp: r.Qp, Rule: "cone sounding " + t.Cone.ID(),
-		Cone: &bearing.ConeAverage{Q: r.Cone, Factor: r.Factor, Top: r.Top, Bottom: r.Bottom, Below: r.Qc1, Above: r.Qc2, Raw: r.Raw}}
+	out := bearing.Result{Unlimited: r.Unlimited, Limit: r.Limit, Qp: r.Qp, Rule: t.Cone.Label(),
+		Cone: bearing.ConeAverage{Q: r.Cone, Factor: r.Factor, Top: r.Top, Bottom: r.Bottom, Below: r.Qc1, Above: r.Qc2, Raw: r.Raw}}
 	if r.Limited {
 		out.Flags |= bearing.LimitGoverns
 	}

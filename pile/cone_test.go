@@ -68,7 +68,7 @@ func TestConeMethodsClosedForm(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if b.Tip.Result.Cone == nil || b.Tip.Result.Cone.Factor != 0.45 || b.Tip.Method != "lcpc" {
+	if b.Tip.Result.Cone.Q == 0 || b.Tip.Result.Cone.Factor != 0.45 || b.Tip.Method != "lcpc" {
 		t.Errorf("tip block %+v", b.Tip)
 	}
 	if b.Tip.Flags&(EmbedmentRamp|LayeredTip|WeakLayerReduced) != 0 {

@@ -442,7 +442,7 @@ func toJSON(r *calc.Result, o Options) *jResult {
 			j.Tip.Embedment.CriticalRatio = jnum(float64(t.EmbedLength / d))
 		}
 	}
-	if cn := t.Result.Cone; cn != nil {
+	if cn := t.Result.Cone; cn.Q > 0 {
 		j.Tip.Cone = &jCone{Top: c.L(cn.Top), Bottom: c.L(cn.Bottom), Q: c.S(cn.Q), Factor: jnum(cn.Factor),
 			Below: opt(c.S(cn.Below), cn.Below > 0), Above: opt(c.S(cn.Above), cn.Above > 0), Raw: opt(c.S(cn.Raw), cn.Raw > 0)}
 	}

@@ -532,7 +532,7 @@ func secTip(r *calc.Result, c conv) section {
 	}
 	if d, ok := bearing.Lookup(t.Method); ok && d.Scope != "" {
 		it = append(it, item{"Method's scope", txt(d.Scope), ""}) // from the catalogue of methods
-	} else if d, ok := insitu.LookupDirect(insitu.TipPart, t.Method); ok && res.Cone != nil {
+	} else if d, ok := insitu.LookupDirect(insitu.TipPart, t.Method); ok && res.Cone.Q > 0 {
 		it = append(it, item{"Method's scope", txt(d.Scope), ""})
 	}
 	if res.Rule != "" {
@@ -572,7 +572,7 @@ func secTip(r *calc.Result, c conv) section {
 	if res.Irr > 0 {
 		it = append(it, item{"Irr", num(res.Irr), ""})
 	}
-	if cn := res.Cone; cn != nil {
+	if cn := res.Cone; cn.Q > 0 {
 		it = append(it, item{"Cone zone averaged, top", num(c.L(cn.Top)), c.uL()},
 			item{"Cone zone averaged, bottom", num(c.L(cn.Bottom)), c.uL()})
 		if cn.Raw > 0 {

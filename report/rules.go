@@ -228,7 +228,7 @@ func tipSteps(r *calc.Result, c conv) []string {
 		vals = append(vals, fmt.Sprintf("%s × %s", c.ss(res.C), fmtNum(res.Nc, sig)))
 	}
 	switch {
-	case res.Cone != nil:
+	case res.Cone.Q > 0:
 		cn := res.Cone
 		if cn.Raw > 0 {
 			out = append(out, fmt.Sprintf("mean qc over %s to %s = %s; readings clipped to 0.7 × %s = %s and 1.3 × %s = %s; their mean q̄c = %s",
