@@ -90,7 +90,7 @@ func BenchmarkDirectShaft(b *testing.B) {
 		b.Run(m.ID(), func(b *testing.B) {
 			b.ReportAllocs()
 			for b.Loop() {
-				if _, _, err := m.Integral(c, 40*units.Metre, 60*units.Metre); err != nil {
+				if _, _, err := m.Integral(c, 40*units.Metre, 60*units.Metre, 0.4*units.Metre); err != nil {
 					b.Fatal(err)
 				}
 			}

@@ -21,6 +21,8 @@ type Cone struct {
 	lqe []float64 // ln(qE/1 Pa)
 	cqc []float64 // running integral of qc from z[0], Pa·m
 	cqe []float64 // running integral of qE, Pa·m
+	fs  []float64 // sleeve friction fs, Pa
+	cfs []float64 // running integral of fs, Pa·m
 	cl  []float64 // running integral of ln qE, m
 	id  string
 	u2  bool   // u2 was measured (a piezocone sounding)
@@ -36,7 +38,8 @@ func NewCone(s *Sounding) (*Cone, error) {
 	}
 	n := len(s.Rows)
 	c := &Cone{id: s.ID, u2: s.HasU2, lbl: "cone sounding " + s.ID, z: make([]float64, n), qc: make([]float64, n), qe: make([]float64, n),
-		lqe: make([]float64, n), cqc: make([]float64, n), cqe: make([]float64, n), cl: make([]float64, n)}
+		lqe: make([]float64, n), cqc: make([]float64, n), cqe: make([]float64, n), cl: make([]float64, n),
+		fs: make([]float64, n), cfs: make([]float64, n)}
 	for i, r := range s.Rows {
 		z, qc, qt := float64(r.Depth), float64(r.Qc), float64(s.Qt(i))
 		qe := qt - float64(r.U2)
@@ -50,12 +53,16 @@ func NewCone(s *Sounding) (*Cone, error) {
 		case !(qe > 0) || math.IsInf(qe, 0):
 			return nil, fmt.Errorf("insitu: cone: reading at %g m: qE = qt − u2 = %g kPa is not above 0", z, qe/1e3)
 		}
-		c.z[i], c.qc[i], c.qe[i], c.lqe[i] = z, qc, qe, math.Log(qe)
+		if f := float64(r.Fs); !(f >= 0) || math.IsInf(f, 0) {
+			return nil, fmt.Errorf("insitu: cone: reading at %g m: fs %g kPa is negative or not a number", z, f/1e3)
+		}
+		c.z[i], c.qc[i], c.qe[i], c.lqe[i], c.fs[i] = z, qc, qe, math.Log(qe), float64(r.Fs)
 		if i > 0 {
 			h := z - c.z[i-1]
 			c.cqc[i] = c.cqc[i-1] + h*(qc+c.qc[i-1])/2
 			c.cqe[i] = c.cqe[i-1] + h*(qe+c.qe[i-1])/2
 			c.cl[i] = c.cl[i-1] + h*(c.lqe[i]+c.lqe[i-1])/2
+			c.cfs[i] = c.cfs[i-1] + h*(c.fs[i]+c.fs[i-1])/2
 		}
 	}
 	return c, nil
@@ -260,7 +267,8 @@ type DirectTip interface {
 	Tip(c *Cone, tip, b units.Length) (TipResult, error)
 }
 
-// DirectShaft is a direct CPT method for the unit shaft resistance.
+// DirectShaft is a direct CPT method for the unit shaft resistance of a
+// pile of diameter or width b (a rule that does not read b ignores it).
 // Integral returns ∫ fs dz over [top, bottom] (N/m per metre of
 // perimeter, that is Pa·m), exact for the linear variation between
 // readings, and whether a limit governed anywhere in it.
@@ -269,8 +277,8 @@ type DirectShaft interface {
 	Equation() string
 	Range() string
 	cite.Cited
-	Unit(c *Cone, z units.Length) (fs, unlimited units.Stress, err error)
-	Integral(c *Cone, top, bottom units.Length) (force float64, limited bool, err error)
+	Unit(c *Cone, z, b units.Length) (fs, unlimited units.Stress, err error)
+	Integral(c *Cone, top, bottom, b units.Length) (force float64, limited bool, err error)
 }
 
 // checkSize refuses a pile size outside (0, 10] m.
@@ -383,7 +391,7 @@ func (m LCPCShaft) check() error {
 }
 
 // Unit returns fs at depth z, and qc/α before the limit.
-func (m LCPCShaft) Unit(c *Cone, z units.Length) (units.Stress, units.Stress, error) {
+func (m LCPCShaft) Unit(c *Cone, z, _ units.Length) (units.Stress, units.Stress, error) {
 	if err := m.check(); err != nil {
 		return 0, 0, err
 	}
@@ -396,7 +404,7 @@ func (m LCPCShaft) Unit(c *Cone, z units.Length) (units.Stress, units.Stress, er
 }
 
 // Integral returns ∫ fs dz over [top, bottom].
-func (m LCPCShaft) Integral(c *Cone, top, bottom units.Length) (float64, bool, error) {
+func (m LCPCShaft) Integral(c *Cone, top, bottom, _ units.Length) (float64, bool, error) {
 	if err := m.check(); err != nil {
 		return 0, false, err
 	}
@@ -658,7 +666,7 @@ func (m EslamiFelleniusShaft) check() error {
 }
 
 // Unit returns fs at depth z (twice: the method has no limit).
-func (m EslamiFelleniusShaft) Unit(c *Cone, z units.Length) (units.Stress, units.Stress, error) {
+func (m EslamiFelleniusShaft) Unit(c *Cone, z, _ units.Length) (units.Stress, units.Stress, error) {
 	if err := m.check(); err != nil {
 		return 0, 0, err
 	}
@@ -673,7 +681,7 @@ func (m EslamiFelleniusShaft) Unit(c *Cone, z units.Length) (units.Stress, units
 }
 
 // Integral returns ∫ fs dz over [top, bottom].
-func (m EslamiFelleniusShaft) Integral(c *Cone, top, bottom units.Length) (float64, bool, error) {
+func (m EslamiFelleniusShaft) Integral(c *Cone, top, bottom, _ units.Length) (float64, bool, error) {
 	if err := m.check(); err != nil {
 		return 0, false, err
 	}
@@ -688,4 +696,211 @@ func (m EslamiFelleniusShaft) Integral(c *Cone, top, bottom units.Length) (float
 		return 0, false, nil
 	}
 	return m.Cs * c.integral(c.qe, c.cqe, a, b), false, nil
+}
+
+// taperedIntegral returns ∫ (z/zt)·v dz over [a, b] (0 ≤ a ≤ b ≤ zt), v
+// linear between readings: Simpson's rule on each piece, exact for the
+// product of two linear functions.
+func (c *Cone) taperedIntegral(v []float64, a, b, zt float64) float64 {
+	if !(b > a) {
+		return 0
+	}
+	var sum, z0, v0 float64
+	started := false
+	c.nodes(v, a, b, func(z, x float64) {
+		if started {
+			zm, vm := (z0+z)/2, (v0+x)/2
+			sum += (z - z0) / 6 * (z0*v0 + 4*zm*vm + z*x)
+		}
+		z0, v0, started = z, x, true
+	})
+	return sum / zt
+}
+
+// SchmertmannSandShaft is the shaft rule of Schmertmann (1978) after
+// Nottingham (1975) in sand, from the sleeve friction:
+//
+//	fs,pile = K·w(z)·fs,   w = z/(8B) for z < 8B below the ground surface, 1 below
+//
+// with K, the ratio of the pile's unit friction to the sleeve's for the
+// pile's embedment ratio L/B, pile material and cone, read by the engineer
+// from the method's chart and given (0.1 to 3); qult holds no copy of the
+// chart. Limit, a cap on fs,pile, is optional (0: none).
+type SchmertmannSandShaft struct {
+	K     float64
+	Limit units.Stress
+}
+
+// ID returns "schmertmann-sand".
+func (SchmertmannSandShaft) ID() string { return "schmertmann-sand" }
+
+// Equation returns the rule.
+func (SchmertmannSandShaft) Equation() string {
+	return "fs = K·w·fs,cone ≤ limit, w = z/(8B) over the top 8B, 1 below"
+}
+
+// Range returns the accepted inputs.
+func (SchmertmannSandShaft) Range() string {
+	return "K 0.1 to 3; limit ≥ 0 kPa (0: none); B above 0 to 10 m; readings along the shaft"
+}
+
+// Refs returns the sources.
+func (SchmertmannSandShaft) Refs() []cite.Ref {
+	return []cite.Ref{
+		{Source: cite.Schmertmann1978, Where: "pile friction in sand from the sleeve friction, K by embedment ratio, the top 8B weighted (from memory)"},
+		{Source: cite.Nottingham1975, Where: "friction correction factors (from memory)"},
+	}
+}
+
+func (m SchmertmannSandShaft) check(b units.Length) error {
+	if !(m.K >= 0.1 && m.K <= 3) {
+		return fmt.Errorf("insitu: %s: K %g is outside 0.1 to 3", m.ID(), m.K)
+	}
+	if !(m.Limit >= 0) || math.IsInf(float64(m.Limit), 0) {
+		return fmt.Errorf("insitu: %s: limit %g kPa is negative or not finite", m.ID(), m.Limit.KPa())
+	}
+	return checkSize(m.ID(), b)
+}
+
+// Unit returns fs at depth z for a pile of width b, and the value before
+// the limit.
+func (m SchmertmannSandShaft) Unit(c *Cone, z, b units.Length) (units.Stress, units.Stress, error) {
+	if err := m.check(b); err != nil {
+		return 0, 0, err
+	}
+	if err := c.cover(m.ID(), "shaft", float64(z), float64(z)); err != nil {
+		return 0, 0, err
+	}
+	w := min(float64(z)/(8*float64(b)), 1)
+	u := m.K * w * c.interp(c.fs, float64(z))
+	f, _ := limitOf(u, float64(m.Limit))
+	return units.Stress(f), units.Stress(u), nil
+}
+
+// Integral returns ∫ fs dz over [top, bottom] for a pile of width b,
+// exact for the linear variation between readings; with a limit, the
+// integral is taken by Simpson's rule on each piece between readings of
+// min(K·w·fs, limit) (exact where the limit does not cut a piece).
+func (m SchmertmannSandShaft) Integral(c *Cone, top, bottom, b units.Length) (float64, bool, error) {
+	if err := m.check(b); err != nil {
+		return 0, false, err
+	}
+	a, e := float64(top), float64(bottom)
+	if err := c.cover(m.ID(), "shaft", a, e); err != nil {
+		return 0, false, err
+	}
+	if !(e > a) {
+		return 0, false, nil
+	}
+	zt := 8 * float64(b)
+	if m.Limit == 0 {
+		q := c.taperedIntegral(c.fs, a, min(e, zt), zt)
+		if e > zt {
+			q += c.integral(c.fs, c.cfs, max(a, zt), e)
+		}
+		return m.K * q, false, nil
+	}
+	lim := float64(m.Limit)
+	var sum, z0, v0 float64
+	limited, started := false, false
+	f := func(z, v float64) float64 {
+		u := m.K * min(z/zt, 1) * v
+		if u > lim {
+			limited = true
+			return lim
+		}
+		return u
+	}
+	c.nodes(c.fs, a, e, func(z, x float64) {
+		if started {
+			// split a piece at 8B so that each part is a product of linears
+			parts := [3]float64{z0, z, z}
+			if z0 < zt && zt < z {
+				parts[1] = zt
+			}
+			for k := 0; k < 2; k++ {
+				p0, p1 := parts[k], parts[k+1]
+				if !(p1 > p0) {
+					continue
+				}
+				vp0 := v0 + (x-v0)*(p0-z0)/(z-z0)
+				vp1 := v0 + (x-v0)*(p1-z0)/(z-z0)
+				pm := (p0 + p1) / 2
+				sum += (p1 - p0) / 6 * (f(p0, vp0) + 4*f(pm, (vp0+vp1)/2) + f(p1, vp1))
+			}
+		}
+		z0, v0, started = z, x, true
+	})
+	return sum, limited, nil
+}
+
+// SchmertmannClayShaft is the shaft rule of Schmertmann (1978) in clay:
+//
+//	fs,pile = α′·fs ≤ limit
+//
+// with α′ read by the engineer from the method's chart (by pile material
+// and fs) and given (0.1 to 1.5); Limit optional (0: none).
+type SchmertmannClayShaft struct {
+	Alpha float64
+	Limit units.Stress
+}
+
+// ID returns "schmertmann-clay".
+func (SchmertmannClayShaft) ID() string { return "schmertmann-clay" }
+
+// Equation returns the rule.
+func (SchmertmannClayShaft) Equation() string { return "fs = α′·fs,cone ≤ limit" }
+
+// Range returns the accepted inputs.
+func (SchmertmannClayShaft) Range() string {
+	return "α′ 0.1 to 1.5; limit ≥ 0 kPa (0: none); readings along the shaft"
+}
+
+// Refs returns the source.
+func (SchmertmannClayShaft) Refs() []cite.Ref {
+	return []cite.Ref{{Source: cite.Schmertmann1978, Where: "pile friction in clay from the sleeve friction, α′ (from memory)"}}
+}
+
+func (m SchmertmannClayShaft) check() error {
+	if !(m.Alpha >= 0.1 && m.Alpha <= 1.5) {
+		return fmt.Errorf("insitu: %s: α′ %g is outside 0.1 to 1.5", m.ID(), m.Alpha)
+	}
+	if !(m.Limit >= 0) || math.IsInf(float64(m.Limit), 0) {
+		return fmt.Errorf("insitu: %s: limit %g kPa is negative or not finite", m.ID(), m.Limit.KPa())
+	}
+	return nil
+}
+
+// Unit returns fs at depth z, and the value before the limit.
+func (m SchmertmannClayShaft) Unit(c *Cone, z, _ units.Length) (units.Stress, units.Stress, error) {
+	if err := m.check(); err != nil {
+		return 0, 0, err
+	}
+	if err := c.cover(m.ID(), "shaft", float64(z), float64(z)); err != nil {
+		return 0, 0, err
+	}
+	u := m.Alpha * c.interp(c.fs, float64(z))
+	f, _ := limitOf(u, float64(m.Limit))
+	return units.Stress(f), units.Stress(u), nil
+}
+
+// Integral returns ∫ fs dz over [top, bottom], exact for the linear
+// variation between readings (each piece clipped at the limit exactly).
+func (m SchmertmannClayShaft) Integral(c *Cone, top, bottom, _ units.Length) (float64, bool, error) {
+	if err := m.check(); err != nil {
+		return 0, false, err
+	}
+	a, e := float64(top), float64(bottom)
+	if err := c.cover(m.ID(), "shaft", a, e); err != nil {
+		return 0, false, err
+	}
+	if !(e > a) {
+		return 0, false, nil
+	}
+	full := c.integral(c.fs, c.cfs, a, e)
+	if m.Limit == 0 {
+		return m.Alpha * full, false, nil
+	}
+	clipped := c.clippedMean(c.fs, a, e, math.Inf(-1), float64(m.Limit)/m.Alpha) * (e - a)
+	return m.Alpha * clipped, clipped < full, nil
 }

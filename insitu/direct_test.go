@@ -96,11 +96,11 @@ func TestDirectUniform(t *testing.T) {
 		{EslamiFelleniusShaft{Cs: 0.01}, 117.6},                    // 0.01 × 11760
 	}
 	for _, tc := range shafts {
-		f, _, err := tc.m.Unit(c, 3.3*units.Metre)
+		f, _, err := tc.m.Unit(c, 3.3*units.Metre, 0.4*units.Metre)
 		if err != nil || math.Abs(f.KPa()-tc.want) > 1e-9*tc.want {
 			t.Errorf("%s: fs = %.9g kPa, %v; want %g", tc.m.ID(), f.KPa(), err, tc.want)
 		}
-		q, _, err := tc.m.Integral(c, 2*units.Metre, 9.5*units.Metre)
+		q, _, err := tc.m.Integral(c, 2*units.Metre, 9.5*units.Metre, 0.4*units.Metre)
 		if want := tc.want * 1e3 * 7.5; err != nil || math.Abs(q-want) > 1e-9*want {
 			t.Errorf("%s: ∫fs dz = %.9g N/m, %v; want %g", tc.m.ID(), q, err, want)
 		}
@@ -144,7 +144,7 @@ func TestLCPCClippedLinear(t *testing.T) {
 	if err != nil || math.Abs(r.Qp.KPa()-10000) > 1e-6 {
 		t.Errorf("qp = %.9g kPa, %v; want 10000", r.Qp.KPa(), err)
 	}
-	q, lim, err := LCPCShaft{Alpha: 100, Limit: 100 * units.Kilopascal}.Integral(c, 9.4*units.Metre, 10.6*units.Metre)
+	q, lim, err := LCPCShaft{Alpha: 100, Limit: 100 * units.Kilopascal}.Integral(c, 9.4*units.Metre, 10.6*units.Metre, 0.4*units.Metre)
 	if err != nil || !lim || math.Abs(q-0.102*mpa) > 1e-6 {
 		t.Errorf("∫fs dz = %.9g N/m, limited %v, %v; want %g", q, lim, err, 0.102*mpa)
 	}
@@ -206,7 +206,7 @@ func TestEslamiFelleniusGeometric(t *testing.T) {
 // gives fs = 81.25 kPa (closed form).
 func TestEslamiFelleniusEffective(t *testing.T) {
 	c := cone(t, soundingOf([]float64{1, 2}, []float64{2, 2}, []float64{0.5, 0.5}, 0.75))
-	f, _, err := EslamiFelleniusShaft{Cs: 0.05}.Unit(c, 1.5*units.Metre)
+	f, _, err := EslamiFelleniusShaft{Cs: 0.05}.Unit(c, 1.5*units.Metre, 0.4*units.Metre)
 	if err != nil || math.Abs(f.KPa()-81.25) > 1e-9 {
 		t.Errorf("fs = %.12g kPa, %v; want 81.25", f.KPa(), err)
 	}
@@ -218,12 +218,12 @@ func TestEslamiFelleniusEffective(t *testing.T) {
 func TestLCPCShaftLimitLinear(t *testing.T) {
 	zs, qs := steps(1, 10, 0.25, func(z float64) float64 { return z })
 	c := cone(t, soundingOf(zs, qs, nil, 1))
-	q, lim, err := LCPCShaft{Alpha: 100, Limit: 50 * units.Kilopascal}.Integral(c, 1*units.Metre, 10*units.Metre)
+	q, lim, err := LCPCShaft{Alpha: 100, Limit: 50 * units.Kilopascal}.Integral(c, 1*units.Metre, 10*units.Metre, 0.4*units.Metre)
 	if err != nil || !lim || math.Abs(q-370e3) > 1e-6 {
 		t.Errorf("∫fs dz = %.9g N/m, limited %v, %v; want 370000", q, lim, err)
 	}
 	// from 2.1 to 3.3 m, below the limit: (21 + 33)/2 × 1.2 = 32.4 kPa·m
-	q, lim, err = LCPCShaft{Alpha: 100, Limit: 50 * units.Kilopascal}.Integral(c, 2.1*units.Metre, 3.3*units.Metre)
+	q, lim, err = LCPCShaft{Alpha: 100, Limit: 50 * units.Kilopascal}.Integral(c, 2.1*units.Metre, 3.3*units.Metre, 0.4*units.Metre)
 	if err != nil || lim || math.Abs(q-32.4e3) > 1e-6 {
 		t.Errorf("∫fs dz = %.9g N/m, limited %v, %v; want 32400", q, lim, err)
 	}
@@ -257,7 +257,7 @@ func TestDirectErrors(t *testing.T) {
 		}
 	}
 	for _, m := range []DirectShaft{LCPCShaft{Alpha: 100, Limit: 100 * units.Kilopascal}, EslamiFelleniusShaft{Cs: 0.01}} {
-		if _, _, err := m.Integral(c, 0, 5*units.Metre); !errors.As(err, &ze) {
+		if _, _, err := m.Integral(c, 0, 5*units.Metre, 0.4*units.Metre); !errors.As(err, &ze) {
 			t.Errorf("%s from the surface, sounding from 1 m: %v; want a ZoneError", m.ID(), err)
 		}
 	}
@@ -265,9 +265,15 @@ func TestDirectErrors(t *testing.T) {
 		func() error { _, err := (LCPCTip{Kc: 1.5}).Tip(c, 5*units.Metre, b); return err }(),
 		func() error { _, err := (SchmertmannTip{}).Tip(c, 5*units.Metre, b); return err }(),
 		func() error { _, err := (EslamiFelleniusTip{Ct: 2}).Tip(c, 5*units.Metre, b); return err }(),
-		func() error { _, _, err := (LCPCShaft{Alpha: 5, Limit: 1}).Unit(c, 5*units.Metre); return err }(),
-		func() error { _, _, err := (LCPCShaft{Alpha: 50}).Unit(c, 5*units.Metre); return err }(),
-		func() error { _, _, err := (EslamiFelleniusShaft{}).Unit(c, 5*units.Metre); return err }(),
+		func() error {
+			_, _, err := (LCPCShaft{Alpha: 5, Limit: 1}).Unit(c, 5*units.Metre, 0.4*units.Metre)
+			return err
+		}(),
+		func() error { _, _, err := (LCPCShaft{Alpha: 50}).Unit(c, 5*units.Metre, 0.4*units.Metre); return err }(),
+		func() error {
+			_, _, err := (EslamiFelleniusShaft{}).Unit(c, 5*units.Metre, 0.4*units.Metre)
+			return err
+		}(),
 	}
 	for i, err := range bad {
 		if err == nil {
@@ -280,7 +286,7 @@ func TestDirectErrors(t *testing.T) {
 	if _, err := (EslamiFelleniusTip{}).Tip(cu, 5*units.Metre, b); err == nil || !strings.Contains(err.Error(), "no u2") {
 		t.Errorf("eslami-fellenius tip without u2: %v; want an error", err)
 	}
-	if _, _, err := (EslamiFelleniusShaft{Cs: 0.01}).Integral(cu, 2*units.Metre, 5*units.Metre); err == nil {
+	if _, _, err := (EslamiFelleniusShaft{Cs: 0.01}).Integral(cu, 2*units.Metre, 5*units.Metre, 0.4*units.Metre); err == nil {
 		t.Error("eslami-fellenius shaft without u2: no error")
 	}
 	if _, err := (LCPCTip{Kc: 0.4}).Tip(cu, 5*units.Metre, b); err != nil {
@@ -354,9 +360,9 @@ func TestPropDirectHomogeneousMonotone(t *testing.T) {
 		z0 := units.Length(zs[0])
 		z1 := units.Length(rapid.Float64Range(zs[0], zs[len(zs)-1]).Draw(r, "z1"))
 		for _, m := range []DirectShaft{LCPCShaft{Alpha: 300, Limit: units.Megapascal}, EslamiFelleniusShaft{Cs: 0.01}} {
-			f0, _, _ := m.Integral(c0, z0, z1)
-			fk, _, _ := m.Integral(ck, z0, z1)
-			fr, _, _ := m.Integral(cr, z0, z1)
+			f0, _, _ := m.Integral(c0, z0, z1, 0.4*units.Metre)
+			fk, _, _ := m.Integral(ck, z0, z1, 0.4*units.Metre)
+			fr, _, _ := m.Integral(cr, z0, z1, 0.4*units.Metre)
 			if math.Abs(fk-k*f0) > 1e-9*k*f0+1e-9 || fr < f0*(1-1e-12) {
 				r.Fatalf("%s: ∫ %g, scaled %g (k %g), raised %g", m.ID(), f0, fk, k, fr)
 			}
@@ -391,4 +397,56 @@ func TestPropConeIntegralAdds(t *testing.T) {
 			}
 		}
 	})
+}
+
+// TestSchmertmannShafts: sleeve friction 50 kPa from the surface to 12 m
+// (every 0.1 m; invented). Sand, K = 1.2, B = 0.5 m (8B = 4 m): over 0 to
+// 10 m, ∫ = K·fs·(4/2 + 6) = 1.2 × 50 × 8 = 480 kPa·m; at 2 m, fs = 1.2 ×
+// 0.5 × 50 = 30 kPa. With a limit of 40 kPa, K·w·fs = 15 kPa/m·z reaches
+// it at 8/3 m: ∫ = 0.5 × 8/3 × 40 + 40 × (10 − 8/3) = 346.67 kPa·m (the
+// piece holding the kink is taken by Simpson's rule: within 0.01 %).
+// Clay, α′ = 0.8: 40 kPa, ∫ over 2 to 7 m = 200 kPa·m; limited to 30 kPa:
+// 150 kPa·m (closed forms).
+func TestSchmertmannShafts(t *testing.T) {
+	s := &Sounding{ID: "S", AreaRatio: 1}
+	for i := 0; i <= 120; i++ {
+		s.Rows = append(s.Rows, Row{Depth: units.Length(float64(i) / 10), Qc: 5 * units.Megapascal, Fs: 50 * units.Kilopascal})
+	}
+	c := cone(t, s)
+	b := 0.5 * units.Metre
+	q, lim, err := SchmertmannSandShaft{K: 1.2}.Integral(c, 0, 10*units.Metre, b)
+	if err != nil || lim || math.Abs(q-480e3) > 1e-6 {
+		t.Errorf("sand ∫ = %.9g N/m, %v, %v; want 480000", q, lim, err)
+	}
+	f, _, err := SchmertmannSandShaft{K: 1.2}.Unit(c, 2*units.Metre, b)
+	if err != nil || math.Abs(f.KPa()-30) > 1e-9 {
+		t.Errorf("sand fs at 2 m = %.12g kPa, %v; want 30", f.KPa(), err)
+	}
+	q, lim, err = SchmertmannSandShaft{K: 1.2, Limit: 40 * units.Kilopascal}.Integral(c, 0, 10*units.Metre, b)
+	if want := 0.5*8.0/3*40e3 + 40e3*(10-8.0/3); err != nil || !lim || math.Abs(q-want) > 1e-4*want {
+		t.Errorf("sand ∫ with limit = %.9g N/m, %v, %v; want %g", q, lim, err, want)
+	}
+	// below 8B the taper no longer acts: ∫ over 5 to 9 m = 1.2 × 50 × 4
+	q, _, err = SchmertmannSandShaft{K: 1.2}.Integral(c, 5*units.Metre, 9*units.Metre, b)
+	if err != nil || math.Abs(q-240e3) > 1e-6 {
+		t.Errorf("sand ∫ below 8B = %.9g N/m, %v; want 240000", q, err)
+	}
+	q, lim, err = SchmertmannClayShaft{Alpha: 0.8}.Integral(c, 2*units.Metre, 7*units.Metre, b)
+	if err != nil || lim || math.Abs(q-200e3) > 1e-6 {
+		t.Errorf("clay ∫ = %.9g N/m, %v, %v; want 200000", q, lim, err)
+	}
+	q, lim, err = SchmertmannClayShaft{Alpha: 0.8, Limit: 30 * units.Kilopascal}.Integral(c, 2*units.Metre, 7*units.Metre, b)
+	if err != nil || !lim || math.Abs(q-150e3) > 1e-6 {
+		t.Errorf("clay ∫ with limit = %.9g N/m, %v, %v; want 150000", q, lim, err)
+	}
+	for _, err := range []error{
+		func() error { _, _, err := (SchmertmannSandShaft{K: 5}).Integral(c, 0, units.Metre, b); return err }(),
+		func() error { _, _, err := (SchmertmannSandShaft{K: 1}).Integral(c, 0, units.Metre, 0); return err }(),
+		func() error { _, _, err := (SchmertmannClayShaft{Alpha: 2}).Integral(c, 0, units.Metre, b); return err }(),
+		func() error { _, _, err := (SchmertmannClayShaft{Alpha: 1}).Integral(c, 0, 13*units.Metre, b); return err }(),
+	} {
+		if err == nil {
+			t.Error("bad input: no error")
+		}
+	}
 }

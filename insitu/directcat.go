@@ -87,6 +87,24 @@ var directCatalogue = []DirectDescriptor{
 		NewShaft: func(v map[string]float64) DirectShaft {
 			return LCPCShaft{Alpha: v["alpha"], Limit: units.Stress(v["limit"])}
 		}},
+	{ID: "schmertmann-sand", Part: ShaftPart, Shaft: SchmertmannSandShaft{},
+		Scope: "driven piles in sand, from a cone sounding's sleeve friction: fs = K·w·fs,cone, the top 8B weighted, K given",
+		Params: []DirectParam{
+			{Key: "k", Dim: "number", Min: 0.1, Max: 3, Required: true, Meaning: "ratio K of the pile's unit friction to the sleeve's for the pile's embedment ratio (Schmertmann 1978 chart), given"},
+			{Key: "limit", Dim: "stress", Min: 0, Max: math.Inf(1), Default: "none", Meaning: "limiting unit shaft resistance, given"},
+		},
+		NewShaft: func(v map[string]float64) DirectShaft {
+			return SchmertmannSandShaft{K: v["k"], Limit: units.Stress(v["limit"])}
+		}},
+	{ID: "schmertmann-clay", Part: ShaftPart, Shaft: SchmertmannClayShaft{},
+		Scope: "driven piles in clay, from a cone sounding's sleeve friction: fs = α′·fs,cone, α′ given",
+		Params: []DirectParam{
+			{Key: "alpha", Dim: "number", Min: 0.1, Max: 1.5, Required: true, Meaning: "ratio α′ of the pile's unit friction to the sleeve's (Schmertmann 1978 chart), given"},
+			{Key: "limit", Dim: "stress", Min: 0, Max: math.Inf(1), Default: "none", Meaning: "limiting unit shaft resistance, given"},
+		},
+		NewShaft: func(v map[string]float64) DirectShaft {
+			return SchmertmannClayShaft{Alpha: v["alpha"], Limit: units.Stress(v["limit"])}
+		}},
 	{ID: "eslami-fellenius", Part: ShaftPart, Shaft: EslamiFelleniusShaft{},
 		Scope: "any pile, from a piezocone sounding: fs = Cs·(qt − u2) with Cs of the soil type, given",
 		Params: []DirectParam{

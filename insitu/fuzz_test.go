@@ -123,7 +123,8 @@ func FuzzDirect(f *testing.F) {
 		z := 0.0
 		for i := 0; i+2 < len(b); i += 3 {
 			z += float64(b[i]) / 100
-			s.Rows = append(s.Rows, Row{Depth: units.Length(z), Qc: units.Stress(float64(b[i+1]) * 1e5), U2: units.Stress(float64(b[i+2]) * 1e4)})
+			s.Rows = append(s.Rows, Row{Depth: units.Length(z), Qc: units.Stress(float64(b[i+1]) * 1e5), U2: units.Stress(float64(b[i+2]) * 1e4),
+				Fs: units.Stress(float64(b[i+1]) * 1e3)})
 		}
 		c, err := NewCone(s)
 		if err != nil {
@@ -136,12 +137,12 @@ func FuzzDirect(f *testing.F) {
 				t.Fatalf("%s: qp %v", m.ID(), r.Qp)
 			}
 		}
-		for _, m := range []DirectShaft{LCPCShaft{Alpha: 100, Limit: 100e3}, EslamiFelleniusShaft{Cs: 0.01}} {
-			q, _, err := m.Integral(c, c.Top(), tip)
+		for _, m := range []DirectShaft{LCPCShaft{Alpha: 100, Limit: 100e3}, EslamiFelleniusShaft{Cs: 0.01}, SchmertmannSandShaft{K: 1, Limit: 100e3}, SchmertmannClayShaft{Alpha: 0.8}} {
+			q, _, err := m.Integral(c, c.Top(), tip, bb)
 			if err == nil && (math.IsNaN(q) || math.IsInf(q, 0) || q < 0) {
 				t.Fatalf("%s: ∫ %v", m.ID(), q)
 			}
-			fs, _, err := m.Unit(c, tip)
+			fs, _, err := m.Unit(c, tip, bb)
 			if err == nil && (math.IsNaN(float64(fs)) || fs < 0) {
 				t.Fatalf("%s: fs %v", m.ID(), fs)
 			}

@@ -270,7 +270,7 @@ func (a *Analysis) segment(s *sums, iv *interval, z0, z1 float64) error {
 		s.flags |= shaftFlags(lp.flags)
 	case kindCone:
 		cs, _ := coneShaftOf(lp.shaft)
-		v, limited, err := cs.integral(z0, z1)
+		v, limited, err := cs.integral(z0, z1, a.size)
 		if err != nil {
 			return coneError(iv.layer, "shaft", lp.layer.Name, err)
 		}

@@ -59,7 +59,7 @@ func (t ConeTip) Tip(in bearing.Input) (bearing.Result, error) {
 
 // ConeShaft is a direct CPT shaft method (package insitu) bound to a
 // cone sounding, so that it serves as a layer's shaft method: fs at
-// Point.Depth. Package pile integrates it exactly over the readings
+// Point.Depth for a pile of size Point.Diameter. Package pile integrates it exactly over the readings
 // (Integral) rather than by quadrature.
 type ConeShaft struct {
 	Method insitu.DirectShaft
@@ -83,7 +83,7 @@ func (s ConeShaft) Unit(p shaft.Point) (shaft.Result, error) {
 	if s.Cone == nil || s.Cone.Readings() == 0 {
 		return shaft.Result{}, ErrNoCone
 	}
-	fs, unl, err := s.Method.Unit(s.Cone, p.Depth)
+	fs, unl, err := s.Method.Unit(s.Cone, p.Depth, p.Diameter)
 	if err != nil {
 		return shaft.Result{}, err
 	}
@@ -94,12 +94,13 @@ func (s ConeShaft) Unit(p shaft.Point) (shaft.Result, error) {
 	return r, nil
 }
 
-// integral returns ∫fs dz over [z0, z1] and whether a limit governed.
-func (s ConeShaft) integral(z0, z1 float64) (float64, bool, error) {
+// integral returns ∫fs dz over [z0, z1] for a pile of size b and whether
+// a limit governed.
+func (s ConeShaft) integral(z0, z1, b float64) (float64, bool, error) {
 	if s.Cone == nil || s.Cone.Readings() == 0 {
 		return 0, false, ErrNoCone
 	}
-	return s.Method.Integral(s.Cone, units.Length(z0), units.Length(z1))
+	return s.Method.Integral(s.Cone, units.Length(z0), units.Length(z1), units.Length(b))
 }
 
 // coneShaftOf returns the layer's shaft as a ConeShaft, if it is one.

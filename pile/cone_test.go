@@ -16,12 +16,12 @@ import (
 	"pgregory.net/rapid"
 )
 
-// uniformCone is a sounding of our own: qc 10 MPa, u2 0.2 MPa, a = 1
-// (qt = qc, qE = 9.8 MPa), every 0.05 m from 0 to 40 m.
+// uniformCone is a sounding of our own: qc 10 MPa, fs 60 kPa, u2 0.2 MPa,
+// a = 1 (qt = qc, qE = 9.8 MPa), every 0.05 m from 0 to 40 m.
 func uniformCone(t testing.TB) *insitu.Cone {
 	s := &insitu.Sounding{ID: "U", AreaRatio: 1, HasU2: true}
 	for i := 0; i <= 800; i++ {
-		s.Rows = append(s.Rows, insitu.Row{Depth: units.Length(float64(i) * 0.05), Qc: 10 * units.Megapascal, U2: 0.2 * units.Megapascal})
+		s.Rows = append(s.Rows, insitu.Row{Depth: units.Length(float64(i) * 0.05), Qc: 10 * units.Megapascal, Fs: 60 * kPa, U2: 0.2 * units.Megapascal})
 	}
 	c, err := insitu.NewCone(s)
 	if err != nil {
@@ -89,6 +89,27 @@ func TestConeMethodsClosedForm(t *testing.T) {
 		// Qs = 1.6 × (640 + 49 × (z − 8)) kN (closed form)
 		near(t, "Qs with depth", r.Shaft.KN(), 1.6*(640+49*(r.TipDepth.Metres()-8)), 1e-12)
 	}
+}
+
+// TestConeSleeveTaper: Schmertmann's sand rule with K = 1 in the sand
+// (0 to 8 m) of a 0.4 m square pile, 8B = 3.2 m: ∫ = 60 × (3.2/2 + 4.8)
+// = 384 kPa·m, Qs = 1.6 × 384 = 614.4 kN, the pile's width read from the
+// section (closed form).
+func TestConeSleeveTaper(t *testing.T) {
+	prof := coneProfile(t)
+	c := uniformCone(t)
+	p := Pile{Section: Section{Shape: Square, Width: 0.4 * m}, Length: 8 * m, Installation: DrivenHigh}
+	ms := DefaultMethods()
+	ms.Layers = []LayerMethods{{Shaft: ConeShaft{Method: insitu.SchmertmannSandShaft{K: 1}, Cone: c}}}
+	a, err := NewAnalysis(prof, p, ms, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	got, err := a.Capacity()
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "Qs", got.Shaft.KN(), 1.6*384, 1e-12)
 }
 
 // TestConeMissing: a direct method without a sounding, or with a tip zone

@@ -33,6 +33,8 @@ var insituReasons = map[string]string{
 	"insitu.ReadGEF":                   "a reader: checked against a file written to the GEF-CPT-Report definition (the same sounding as from AGS4 and CSV) and a table of malformed files",
 	"insitu.ReadCPTCSV":                "a reader of our own form: checked by round trip through WriteCPTCSV and a table of malformed files",
 	"insitu.ReadSPTCSV":                "a reader of our own form: checked by round trip through WriteSPTCSV and a table of malformed files",
+	"insitu.SchmertmannSandShaft.Unit": "fs = K·w·fs,cone at one depth, Schmertmann (1978) from memory; checked in closed form; no printed value reached (its integral has a case)",
+	"insitu.SchmertmannClayShaft.Unit": "fs = α′·fs,cone at one depth, Schmertmann (1978) from memory; checked in closed form; no printed value reached (its integral has a case)",
 	"insitu.Cone.Top":                  "the depth of the first reading, as read",
 	"insitu.Cone.Bottom":               "the depth of the last reading, as read",
 	"insitu.NewCone":                   "prepares the readings (qE = qt − u2, running integrals by the trapezoidal rule); checked through the direct methods' cases and a table of bad soundings",
