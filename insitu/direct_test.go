@@ -443,7 +443,10 @@ func TestSchmertmannShafts(t *testing.T) {
 		func() error { _, _, err := (SchmertmannSandShaft{K: 5}).Integral(c, 0, units.Metre, b); return err }(),
 		func() error { _, _, err := (SchmertmannSandShaft{K: 1}).Integral(c, 0, units.Metre, 0); return err }(),
 		func() error { _, _, err := (SchmertmannClayShaft{Alpha: 2}).Integral(c, 0, units.Metre, b); return err }(),
-		func() error { _, _, err := (SchmertmannClayShaft{Alpha: 1}).Integral(c, 0, 13*units.Metre, b); return err }(),
+		func() error {
+			_, _, err := (SchmertmannClayShaft{Alpha: 1}).Integral(c, 0, 13*units.Metre, b)
+			return err
+		}(),
 	} {
 		if err == nil {
 			t.Error("bad input: no error")
