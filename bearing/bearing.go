@@ -114,6 +114,24 @@ type Result struct {
 	Cap       units.Stress // a cap on Qp after any Reduction (bored-pile rules); 0 means none
 	Qp        units.Stress // unit tip resistance after the limit, any Reduction and the Cap
 	Flags     Flags        // warnings
+
+	// Cone is what a direct CPT method averaged about the tip (the zero
+	// value, Q = 0, for every other method): Unlimited = Cone.Factor·Cone.Q.
+	Cone ConeAverage
+}
+
+// ConeAverage is the cone resistance a direct CPT method averaged over its
+// zone about the tip, and the factor it applied.
+type ConeAverage struct {
+	Q           units.Stress // the averaged cone resistance (qca, (qc1 + qc2)/2, qEg)
+	Factor      float64      // the factor on Q (kc, 1, Ct)
+	Top, Bottom units.Length // the zone averaged
+	// Below and Above are the means below and above the tip of a
+	// minimum-path rule (qc1, qc2); 0 otherwise.
+	Below, Above units.Stress
+	// Raw is the mean before clipping of a rule that clips the readings
+	// about it (LCPC: to 0.7…1.3 × Raw); 0 otherwise.
+	Raw units.Stress
 }
 
 // Flags are warnings about a Result, as a small bitmask so that the hot

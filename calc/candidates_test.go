@@ -146,7 +146,8 @@ func TestPropCandidateMatchesRequiredLength(t *testing.T) {
 
 // TestPropLargerDiameterNotLonger: in ground whose strength does not
 // decrease with depth, a larger diameter of the same type never needs a
-// longer pile, and passes wherever a smaller one does.
+// longer pile, and passes wherever a smaller one does (for drilled shafts,
+// once the pile is longer than its zones without side resistance allow).
 func TestPropLargerDiameterNotLonger(t *testing.T) {
 	rapid.Check(t, func(r *rapid.T) {
 		ls, water := drawGround(r)
@@ -178,6 +179,14 @@ func TestPropLargerDiameterNotLonger(t *testing.T) {
 			r.Fatalf("want 2 candidates, got %d", len(out.Rows))
 		}
 		small, large := nearest(d1), nearest(d2)
+		// A drilled shaft's α layers give no side resistance in the top
+		// 1.5 m and the bottom diameter (O'Neill & Reese 1999), so the side
+		// resistance of a diameter D over a length L goes as D·(L − 1.5 m − D),
+		// which falls as D grows while L < 1.5 m + 2D: there a larger diameter
+		// may rightly need a longer pile, and the property is not claimed.
+		if inst != "driven-high" && small.Pass && small.Length.Metres() < 1.5+2*d2/1000 {
+			return
+		}
 		if small.Pass && !large.Pass {
 			r.Fatalf("%g mm passes at %v but %g mm does not: %s", d1, small.Length, d2, large.Why)
 		}

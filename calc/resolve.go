@@ -11,6 +11,7 @@ import (
 	"strings"
 
 	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/insitu"
 	"github.com/qultgeo/qult/phase"
 	"github.com/qultgeo/qult/pile"
 	"github.com/qultgeo/qult/profile"
@@ -43,6 +44,11 @@ type Inputs struct {
 	// candidates is the candidates section; nil when the file has none.
 	candidates *candidatesInputs
 	downdrag   *downdragInputs // the downdrag section; nil without one
+	// cone is the cone sounding the layers' direct CPT methods read,
+	// shared by them: filled by loadCone before any analysis. coneUsers
+	// are the calc-file paths of the methods that read it.
+	cone      *insitu.Cone
+	coneUsers []string
 }
 
 // resolver turns Values into quantities, recording problems.
@@ -50,6 +56,7 @@ type resolver struct {
 	f     *File
 	sys   units.System
 	probs Problems
+	in    *Inputs // for the cone sounding the direct methods share; nil outside Resolve
 }
 
 func (r *resolver) add(path string, line int, format string, args ...any) {
@@ -200,8 +207,8 @@ func (r *resolver) fraction(v Value, path string) float64 {
 // Inputs returned with them hold what could be resolved (Run uses them to
 // report the library's problems with the other sections at once).
 func Resolve(f *File) (*Inputs, error) {
-	r := &resolver{f: f}
-	in := &Inputs{}
+	in := &Inputs{cone: &insitu.Cone{}}
+	r := &resolver{f: f, in: in}
 	if f.Qult != 0 && f.Qult != FormatVersion {
 		r.add("qult", 0, "format version %d is not known; this qult reads version %d", f.Qult, FormatVersion)
 	}
@@ -474,6 +481,24 @@ type param struct {
 	meaning  string
 }
 
+func directParams(d insitu.DirectDescriptor) []param {
+	ps := make([]param, len(d.Params))
+	for i, p := range d.Params {
+		ps[i] = param{key: p.Key, dim: p.Dim, min: p.Min, max: p.Max, required: p.Required, meaning: p.Meaning}
+	}
+	return ps
+}
+
+// cone returns the cone sounding the direct methods share, recording that
+// the method at path reads it.
+func (r *resolver) cone(path string) *insitu.Cone {
+	if r.in == nil {
+		return nil
+	}
+	r.in.coneUsers = append(r.in.coneUsers, path)
+	return r.in.cone
+}
+
 func tipParams(d bearing.Descriptor) []param {
 	ps := make([]param, len(d.Params))
 	for i, p := range d.Params {
@@ -638,10 +663,23 @@ func (r *resolver) tip(id string, given map[string]Value, path, methodPath strin
 		r.add(methodPath, 0, "tip method %q was renamed: write %q", id, nn)
 		return nil
 	}
+	if dd, direct := insitu.LookupDirect(insitu.TipPart, id); !ok && direct {
+		if path == "" {
+			r.add(methodPath, 0, "%q is a direct CPT method, which reads the cone sounding: choose it on a layer, as tip: {method: %s, …}", id, id)
+			return nil
+		}
+		num, _, ok := r.params(id, directParams(dd), given, path, methodPath)
+		if !ok {
+			return nil
+		}
+		return pile.ConeTip{Method: dd.NewTip(num), Cone: r.cone(methodPath)}
+	}
 	if !ok {
 		ids := bearing.IDs()
 		if path == "" {
 			ids = pileTipIDs()
+		} else {
+			ids = append(ids, insitu.DirectIDs(insitu.TipPart)...)
 		}
 		r.unknownMethod(id, methodPath, "tip", ids)
 		return nil
@@ -664,8 +702,23 @@ func (r *resolver) tip(id string, given map[string]Value, path, methodPath strin
 func (r *resolver) shaftMethod(id string, given map[string]Value, path, methodPath string, p pile.Pile, lm *pile.LayerMethods) (shaft.Kind, bool) {
 	id = strings.TrimSpace(id)
 	d, ok := shaft.Lookup(id)
+	if dd, direct := insitu.LookupDirect(insitu.ShaftPart, id); !ok && direct {
+		if path == "" {
+			r.add(methodPath, 0, "%q is a direct CPT method, which reads the cone sounding: choose it on a layer, as shaft: {method: %s, …}", id, id)
+			return shaft.PointMethod, false
+		}
+		num, _, ok := r.params(id, directParams(dd), given, path, methodPath)
+		if !ok {
+			return shaft.PointMethod, false
+		}
+		lm.Shaft = pile.ConeShaft{Method: dd.NewShaft(num), Cone: r.cone(methodPath)}
+		return shaft.PointMethod, true
+	}
 	if !ok {
 		ids := shaft.IDs()
+		if path != "" {
+			ids = append(ids, insitu.DirectIDs(insitu.ShaftPart)...)
+		}
 		switch methodPath {
 		case "methods.shaft_drained":
 			ids = pileShaftIDs(false)
@@ -827,13 +880,13 @@ func (r *resolver) design(f *File, in *Inputs) {
 			r.add("design.preset", 0, "%q: want aashto-driven or aashto-drilled", d.Preset)
 			l = pile.LRFD{Tip: map[string]float64{}, Shaft: map[string]float64{}, Tension: map[string]float64{}}
 		}
-		for k, v := range r.factorMap(d.Tip, "design.tip", bearing.IDs()) {
+		for k, v := range r.factorMap(d.Tip, "design.tip", append(bearing.IDs(), insitu.DirectIDs(insitu.TipPart)...)) {
 			l.Tip[k] = v
 		}
-		for k, v := range r.factorMap(d.Shaft, "design.shaft", shaft.ResistanceIDs()) {
+		for k, v := range r.factorMap(d.Shaft, "design.shaft", append(shaft.ResistanceIDs(), insitu.DirectIDs(insitu.ShaftPart)...)) {
 			l.Shaft[k] = v
 		}
-		for k, v := range r.factorMap(d.Uplift, "design.uplift", shaft.ResistanceIDs()) {
+		for k, v := range r.factorMap(d.Uplift, "design.uplift", append(shaft.ResistanceIDs(), insitu.DirectIDs(insitu.ShaftPart)...)) {
 			l.Tension[k] = v
 		}
 		if d.Permanent.IsSet() {

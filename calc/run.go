@@ -55,6 +55,9 @@ func run(f *File, o runOptions) (*Result, error) {
 	if err != nil {
 		return nil, alsoLibrary(f, in, err)
 	}
+	if err := loadCone(f, in, o.readFile); err != nil {
+		return nil, err
+	}
 	prof, err := profile.New(in.Ground)
 	if err != nil {
 		return nil, translate(f, err)
@@ -92,6 +95,10 @@ func run(f *File, o runOptions) (*Result, error) {
 	}
 	if maxTip == 0 {
 		maxTip = prof.Depth()
+		if z, ok := coneReach(in, prof); ok && z < maxTip && z > in.Pile.Tip() {
+			maxTip = z
+			res.Warnings = append(res.Warnings, fmt.Sprintf("capacity with depth and the required length are searched down to %v only: the direct CPT methods read the sounding, which ends at %v, and are never extrapolated below it (give search.max_tip to choose)", z, in.cone.Bottom()))
+		}
 	}
 	if maxTip > prof.Depth() {
 		return nil, Problems{{Path: "search.max_tip", Line: lineOf(f, "search.max_tip"),

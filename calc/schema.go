@@ -12,6 +12,7 @@ import (
 
 	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/group"
+	"github.com/qultgeo/qult/insitu"
 	"github.com/qultgeo/qult/reliability"
 	"github.com/qultgeo/qult/shaft"
 	"github.com/qultgeo/qult/units"
@@ -67,9 +68,9 @@ var enums = map[string][]string{
 // factorKeys lists the keys of the resistance-factor maps of design: the
 // methods of the catalogues and "*" for any other.
 var factorKeys = map[string][]string{
-	"tip":    append(bearing.IDs(), "*"),
-	"shaft":  append(shaft.ResistanceIDs(), "*"),
-	"uplift": append(shaft.ResistanceIDs(), "*"),
+	"tip":    append(append(bearing.IDs(), insitu.DirectIDs(insitu.TipPart)...), "*"),
+	"shaft":  append(append(shaft.ResistanceIDs(), insitu.DirectIDs(insitu.ShaftPart)...), "*"),
+	"uplift": append(append(shaft.ResistanceIDs(), insitu.DirectIDs(insitu.ShaftPart)...), "*"),
 }
 
 func needsNothing(ps []param) bool {
@@ -112,6 +113,11 @@ func tipEntries() []entry {
 	for _, d := range bearing.Methods() {
 		es = append(es, entry{d.ID, tipParams(d)})
 	}
+	for _, d := range insitu.DirectMethods() {
+		if d.Part == insitu.TipPart {
+			es = append(es, entry{d.ID, directParams(d)})
+		}
+	}
 	return es
 }
 
@@ -119,6 +125,11 @@ func shaftEntries() []entry {
 	var es []entry
 	for _, d := range shaft.Methods() {
 		es = append(es, entry{d.ID, shaftParams(d)})
+	}
+	for _, d := range insitu.DirectMethods() {
+		if d.Part == insitu.ShaftPart {
+			es = append(es, entry{d.ID, directParams(d)})
+		}
 	}
 	return es
 }

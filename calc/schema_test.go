@@ -101,7 +101,8 @@ func TestSchemaAcceptsExamples(t *testing.T) {
 	if len(files) == 0 {
 		t.Fatal("no examples")
 	}
-	for _, f := range files {
+	sub, _ := filepath.Glob("../examples/*/*.yaml") // examples with their own files (soundings)
+	for _, f := range append(files, sub...) {
 		if err := sch.Validate(instance(t, mustRead(t, f))); err != nil {
 			t.Errorf("%s: %v", f, err)
 		}
@@ -123,6 +124,25 @@ func TestSchemaAcceptsExamples(t *testing.T) {
 			t.Errorf("%s: %v", add, err)
 		}
 		if _, err := Parse([]byte(src)); err != nil {
+			t.Errorf("%s: refused by the decoder: %v", add, err)
+		}
+	}
+	// The direct CPT methods: the schema and the resolution of the keys
+	// accept them (running them needs the sounding file).
+	for _, add := range []string{
+		"shaft: {method: lcpc, alpha: 120, limit: 80 kPa}\n      tip: {method: lcpc, kc: 0.45, limit: 12 MPa}",
+		"shaft: {method: eslami-fellenius, cs: 0.008}\n      tip: {method: eslami-fellenius, ct: 0.8}",
+		"tip: {method: schmertmann, limit: 15 MPa}",
+	} {
+		src := strings.Replace(base, "friction_angle: 34 deg", "friction_angle: 34 deg\n      "+add, 1)
+		if err := sch.Validate(instance(t, []byte(src))); err != nil {
+			t.Errorf("%s: %v", add, err)
+		}
+		f, err := Decode([]byte(src))
+		if err == nil {
+			_, err = Resolve(f)
+		}
+		if err != nil {
 			t.Errorf("%s: refused by the decoder: %v", add, err)
 		}
 	}

@@ -10,6 +10,7 @@ import (
 
 	"github.com/qultgeo/qult/cite"
 	"github.com/qultgeo/qult/insitu"
+	"github.com/qultgeo/qult/pile"
 	"github.com/qultgeo/qult/profile"
 	"github.com/qultgeo/qult/units"
 )
@@ -20,8 +21,10 @@ import (
 // from breaks in Ic. The interpretation is reported beside the
 // calculation and changes no capacity: the layering it suggests and the
 // values it correlates are for the engineer to compare with the layers
-// given and, if accepted, to write into them. The sounding's depths are
-// read as the ground's: below the original ground surface.
+// given and, if accepted, to write into them. A layer whose tip or shaft
+// is a direct CPT method (package insitu) reads the sounding's readings
+// themselves (see loadCone). The sounding's depths are read as the
+// ground's: below the original ground surface.
 type Sounding struct {
 	File     string `yaml:"file" json:"file" doc:"The sounding file, relative to the calc file: the CSV form of qult (.csv), AGS4 (.ags) or GEF-CPT-Report (.gef)."`
 	Format   string `yaml:"format,omitempty" json:"format,omitempty" doc:"csv, ags or gef; default from the file's extension."`
@@ -52,6 +55,9 @@ type SoundingResult struct {
 	// Points are the readings interpreted, for the report's plots.
 	Points []insitu.Point
 	Refs   []cite.Ref
+	// ReadBy lists the calc-file keys of the direct CPT methods that read
+	// the sounding's readings in the capacity (empty: none does).
+	ReadBy []string
 }
 
 // SoundingLayer is the sounding averaged over one layer of the ground
@@ -107,6 +113,113 @@ func ReadFileIn(dir string, read func(string) ([]byte, error)) ReadFileFunc {
 	}
 }
 
+// loadCone reads the sounding the ground names into the cone the layers'
+// direct CPT methods share, when a layer chooses one. A direct method
+// without a sounding is a problem at the method's key.
+func loadCone(f *File, in *Inputs, read ReadFileFunc) error {
+	if in == nil || len(in.coneUsers) == 0 {
+		return nil
+	}
+	sd := f.Ground.Sounding
+	if sd == nil {
+		var probs Problems
+		for _, p := range in.coneUsers {
+			probs = append(probs, Problem{Path: p, Line: lineOf(f, p),
+				Msg: "a direct CPT method reads the cone sounding, and the file has none: give ground.sounding (file: …) or choose another method"})
+		}
+		return probs
+	}
+	s, err := readGroundSounding(f, read)
+	if err != nil {
+		var probs Problems
+		if errors.As(err, &probs) {
+			for i := range probs {
+				probs[i].Msg += " (the direct CPT methods of " + strings.Join(in.coneUsers, ", ") + " read it)"
+			}
+		}
+		return err
+	}
+	c, err := insitu.NewCone(s)
+	if err != nil {
+		const pre = "ground.sounding"
+		return Problems{{Path: pre + ".file", Line: lineOf(f, pre+".file"), Msg: fmt.Sprintf("%s: %v (the direct CPT methods of %s read it)", sd.File, err, strings.Join(in.coneUsers, ", ")), Err: err}}
+	}
+	*in.cone = *c
+	return nil
+}
+
+// coneReach returns the deepest tip depth at which every layer's direct
+// CPT methods find readings: a cone tip's zone reaches 4 diameters below
+// the tip (the deepest zone of the methods), a cone shaft reads down to
+// the tip. ok is false when no layer reaching below the sounding uses one.
+func coneReach(in *Inputs, prof *profile.Profile) (units.Length, bool) {
+	if in == nil || len(in.coneUsers) == 0 || in.cone == nil || in.cone.Readings() == 0 {
+		return 0, false
+	}
+	last := in.cone.Bottom()
+	reach, ok := prof.Depth(), false
+	for i, l := range prof.Layers() {
+		if i >= len(in.Methods.Layers) {
+			break
+		}
+		lm := in.Methods.Layers[i]
+		limit := prof.Depth()
+		if _, cone := lm.Tip.(pile.ConeTip); cone {
+			limit = last - 4*in.Pile.Section.Size()
+		}
+		if _, cone := lm.Shaft.(pile.ConeShaft); cone {
+			limit = min(limit, last)
+		}
+		if l.Bottom > limit {
+			reach, ok = min(reach, max(limit, l.Top)), true
+		}
+	}
+	return reach, ok
+}
+
+// readGroundSounding reads the sounding the ground names (f.Ground.Sounding
+// not nil); a problem names the sounding's key.
+func readGroundSounding(f *File, read ReadFileFunc) (*insitu.Sounding, error) {
+	sd := f.Ground.Sounding
+	const pre = "ground.sounding"
+	prob := func(path, msg string, err error) error {
+		return Problems{{Path: path, Line: lineOf(f, path), Msg: msg, Err: err}}
+	}
+	if strings.TrimSpace(sd.File) == "" {
+		return nil, prob(pre+".file", "missing: the sounding file, relative to the calc file", nil)
+	}
+	format := soundingFormat(sd)
+	if format != "csv" && format != "ags" && format != "gef" {
+		return nil, prob(pre+".format", fmt.Sprintf("%q: want csv, ags or gef (or a file ending .csv, .ags or .gef)", format), nil)
+	}
+	if read == nil {
+		return nil, prob(pre+".file", "the file cannot be read here: a calc file from standard input or a batch line has no folder to read from; run it from a file", nil)
+	}
+	data, err := read(sd.File)
+	if err != nil {
+		return nil, prob(pre+".file", err.Error(), err)
+	}
+	s, err := readSounding(data, sd.File, format, sd.Location)
+	if err != nil {
+		var pe *insitu.ParseError
+		if errors.As(err, &pe) {
+			return nil, prob(pre+".file", err.Error(), err)
+		}
+		return nil, prob(pre+".location", err.Error(), err)
+	}
+	return s, nil
+}
+
+// soundingFormat returns the sounding's format: as given, or from the
+// file's extension.
+func soundingFormat(sd *Sounding) string {
+	format := strings.ToLower(strings.TrimSpace(sd.Format))
+	if format == "" {
+		format = strings.TrimPrefix(strings.ToLower(filepath.Ext(sd.File)), ".")
+	}
+	return format
+}
+
 // runSounding reads and interprets the sounding the ground names.
 func runSounding(f *File, in *Inputs, prof *profile.Profile, res *Result, read ReadFileFunc) error {
 	sd := f.Ground.Sounding
@@ -120,10 +233,7 @@ func runSounding(f *File, in *Inputs, prof *profile.Profile, res *Result, read R
 	if strings.TrimSpace(sd.File) == "" {
 		return prob(pre+".file", "missing: the sounding file, relative to the calc file", nil)
 	}
-	format := strings.ToLower(strings.TrimSpace(sd.Format))
-	if format == "" {
-		format = strings.TrimPrefix(strings.ToLower(filepath.Ext(sd.File)), ".")
-	}
+	format := soundingFormat(sd)
 	if format != "csv" && format != "ags" && format != "gef" {
 		return prob(pre+".format", fmt.Sprintf("%q: want csv, ags or gef (or a file ending .csv, .ags or .gef)", format), nil)
 	}
@@ -139,23 +249,12 @@ func runSounding(f *File, in *Inputs, prof *profile.Profile, res *Result, read R
 	if !sd.MinLayer.IsSet() {
 		minLayer = DefaultMinLayer
 	}
-	if read == nil {
-		return prob(pre+".file", "the file cannot be read here: a calc file from standard input or a batch line has no folder to read from; run it from a file", nil)
-	}
-	data, err := read(sd.File)
+	s, err := readGroundSounding(f, read)
 	if err != nil {
-		return prob(pre+".file", err.Error(), err)
-	}
-	s, err := readSounding(data, sd.File, format, sd.Location)
-	if err != nil {
-		var pe *insitu.ParseError
-		if errors.As(err, &pe) {
-			return prob(pre+".file", err.Error(), err)
-		}
-		return prob(pre+".location", err.Error(), err)
+		return err
 	}
 	out := &SoundingResult{File: sd.File, Format: format, ID: s.ID, AreaRatio: s.AreaRatio, Voids: s.Voids, Nkt: nkt,
-		Refs: insitu.CPTInterpretationRefs()}
+		Refs: insitu.CPTInterpretationRefs(), ReadBy: append([]string(nil), in.coneUsers...)}
 	depth := prof.Depth()
 	keep := len(s.Rows)
 	for keep > 0 && s.Rows[keep-1].Depth > depth {

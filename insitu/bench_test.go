@@ -59,3 +59,41 @@ func BenchmarkSuggestLayers(b *testing.B) {
 		}
 	}
 }
+
+// BenchmarkDirectTip evaluates each direct tip method at one depth in a
+// 10 000-row sounding (0.5 m pile): a point evaluation must not allocate.
+func BenchmarkDirectTip(b *testing.B) {
+	c, err := NewCone(benchSounding(10000))
+	if err != nil {
+		b.Fatal(err)
+	}
+	for _, m := range []DirectTip{LCPCTip{Kc: 0.4}, SchmertmannTip{Limit: 15 * units.Megapascal}, EslamiFelleniusTip{}} {
+		b.Run(m.ID(), func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, err := m.Tip(c, 100*units.Metre, 0.5*units.Metre); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+}
+
+// BenchmarkDirectShaft integrates each direct shaft method over 20 m of a
+// 10 000-row sounding (1000 readings): no allocation.
+func BenchmarkDirectShaft(b *testing.B) {
+	c, err := NewCone(benchSounding(10000))
+	if err != nil {
+		b.Fatal(err)
+	}
+	for _, m := range []DirectShaft{LCPCShaft{Alpha: 120, Limit: 80 * units.Kilopascal}, EslamiFelleniusShaft{Cs: 0.01}} {
+		b.Run(m.ID(), func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, _, err := m.Integral(c, 40*units.Metre, 60*units.Metre, 0.4*units.Metre); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+}

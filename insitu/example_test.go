@@ -66,3 +66,35 @@ depth_m,qc_MPa,fs_kPa,u2_kPa
 	// suggested: 2.0 to 4.5 m, 4: silt mixtures: clayey silt to silty clay
 	// suggested: 4.5 to 8.0 m, 6: sands: clean sand to silty sand
 }
+
+// A piezocone sounding of our own (clay over sand at 8 m, readings every
+// 0.1 m) prepared for the direct methods, and the tip of a 0.4 m pile at
+// 12 m by each: the factors kc and Ct are the engineer's, given.
+func ExampleNewCone() {
+	s := &insitu.Sounding{ID: "CPT-X", AreaRatio: 0.8, HasU2: true}
+	for i := 1; i <= 200; i++ {
+		z := float64(i) / 10
+		qc, u2 := 0.6+0.03*z, 0.03*z // MPa: clay with excess pore pressure
+		if z > 8 {
+			qc, u2 = 12+0.4*(z-8), 0.0098*z // sand
+		}
+		s.Rows = append(s.Rows, insitu.Row{Depth: units.Length(z), Qc: units.Stress(qc) * units.Megapascal, U2: units.Stress(u2) * units.Megapascal})
+	}
+	c, err := insitu.NewCone(s)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	for _, m := range []insitu.DirectTip{insitu.LCPCTip{Kc: 0.4}, insitu.SchmertmannTip{Limit: 15 * units.Megapascal}, insitu.EslamiFelleniusTip{}} {
+		r, err := m.Tip(c, 12*units.Metre, 0.4*units.Metre)
+		if err != nil {
+			fmt.Println(err)
+			continue
+		}
+		fmt.Printf("%-16s averaged %.0f kPa over %.2f to %.2f m, qp = %.0f kPa\n", m.ID(), r.Cone.KPa(), r.Top.Metres(), r.Bottom.Metres(), r.Qp.KPa())
+	}
+	// Output:
+	// lcpc             averaged 13600 kPa over 11.40 to 12.60 m, qp = 5440 kPa
+	// schmertmann      averaged 13308 kPa over 8.80 to 13.60 m, qp = 13308 kPa
+	// eslami-fellenius averaged 13181 kPa over 8.80 to 13.60 m, qp = 13181 kPa
+}

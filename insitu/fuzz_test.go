@@ -10,6 +10,8 @@ import (
 	"math"
 	"os"
 	"testing"
+
+	"github.com/qultgeo/qult/units"
 )
 
 func seedFile(f *testing.F, name string) {
@@ -106,6 +108,44 @@ func FuzzReadGEF(f *testing.F) {
 		checkErr(t, err)
 		if err == nil {
 			checkSounding(t, s)
+		}
+	})
+}
+
+// FuzzDirect builds a sounding from the input's bytes (depth steps, qc and
+// u2 from pairs of bytes) and runs every direct method on it: no panic, and
+// no NaN or Inf without an error.
+func FuzzDirect(f *testing.F) {
+	f.Add([]byte{10, 50, 3, 10, 60, 4, 10, 200, 5, 10, 180, 6, 10, 90, 2, 10, 70, 1, 10, 255, 0, 10, 40, 9}, uint8(20), uint8(3))
+	f.Add([]byte{1, 1, 0, 255, 255, 255, 1, 0, 0}, uint8(1), uint8(1))
+	f.Fuzz(func(t *testing.T, b []byte, tipByte, bByte uint8) {
+		s := &Sounding{ID: "fuzz", AreaRatio: 0.8, HasU2: true}
+		z := 0.0
+		for i := 0; i+2 < len(b); i += 3 {
+			z += float64(b[i]) / 100
+			s.Rows = append(s.Rows, Row{Depth: units.Length(z), Qc: units.Stress(float64(b[i+1]) * 1e5), U2: units.Stress(float64(b[i+2]) * 1e4),
+				Fs: units.Stress(float64(b[i+1]) * 1e3)})
+		}
+		c, err := NewCone(s)
+		if err != nil {
+			return
+		}
+		tip, bb := units.Length(float64(tipByte)/10), units.Length(float64(bByte)/100)
+		for _, m := range []DirectTip{LCPCTip{Kc: 0.4, Limit: 5 * units.Megapascal}, SchmertmannTip{Limit: 15 * units.Megapascal}, EslamiFelleniusTip{}} {
+			r, err := m.Tip(c, tip, bb)
+			if err == nil && (math.IsNaN(float64(r.Qp)) || math.IsInf(float64(r.Qp), 0) || r.Qp < 0) {
+				t.Fatalf("%s: qp %v", m.ID(), r.Qp)
+			}
+		}
+		for _, m := range []DirectShaft{LCPCShaft{Alpha: 100, Limit: 100e3}, EslamiFelleniusShaft{Cs: 0.01}, SchmertmannSandShaft{K: 1, Limit: 100e3}, SchmertmannClayShaft{Alpha: 0.8}} {
+			q, _, err := m.Integral(c, c.Top(), tip, bb)
+			if err == nil && (math.IsNaN(q) || math.IsInf(q, 0) || q < 0) {
+				t.Fatalf("%s: ∫ %v", m.ID(), q)
+			}
+			fs, _, err := m.Unit(c, tip, bb)
+			if err == nil && (math.IsNaN(float64(fs)) || fs < 0) {
+				t.Fatalf("%s: fs %v", m.ID(), fs)
+			}
 		}
 	})
 }

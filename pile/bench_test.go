@@ -4,9 +4,11 @@ package pile
 // published source is involved and nothing is checked against one.
 
 import (
+	"math"
 	"testing"
 
 	"github.com/qultgeo/qult/bearing"
+	"github.com/qultgeo/qult/insitu"
 	"github.com/qultgeo/qult/profile"
 	"github.com/qultgeo/qult/shaft"
 	"github.com/qultgeo/qult/units"
@@ -103,5 +105,42 @@ func TestCapacityAllocatesNothing(t *testing.T) {
 	}
 	if n := testing.AllocsPerRun(100, func() { _, _ = a.Capacity() }); n != 0 {
 		t.Errorf("Capacity allocates %v times per run", n)
+	}
+}
+
+// BenchmarkWithDepthCone: capacity with depth at 60 tip depths (0.5 m
+// apart) of a 0.4 m pile whose lower layer takes the LCPC shaft and the
+// minimum-path tip from a 2000-row sounding (20 mm readings, invented).
+func BenchmarkWithDepthCone(b *testing.B) {
+	s := &insitu.Sounding{ID: "B", AreaRatio: 0.8, HasU2: true}
+	for i := 1; i <= 2000; i++ {
+		z := 0.02 * float64(i)
+		s.Rows = append(s.Rows, insitu.Row{Depth: units.Length(z), Qc: units.Stress(4e6 + 4e5*z + 1e6*math.Sin(z*3)), U2: units.Stress(9.81e3 * z)})
+	}
+	c, err := insitu.NewCone(s)
+	if err != nil {
+		b.Fatal(err)
+	}
+	prof, err := profile.New(profile.Spec{NoWater: true, Layers: []profile.LayerSpec{
+		{Name: "clay", Thickness: 5 * m, Drainage: profile.Undrained, Su: 40 * kPa, UnitWeight: 18 * kNm},
+		{Name: "sand", Thickness: 40 * m, Drainage: profile.Drained, Phi: 34 * units.Degree, UnitWeight: 19 * kNm},
+	}})
+	if err != nil {
+		b.Fatal(err)
+	}
+	ms := DefaultMethods()
+	ms.Layers = []LayerMethods{{}, {Shaft: ConeShaft{Method: insitu.LCPCShaft{Alpha: 150, Limit: 120 * kPa}, Cone: c},
+		Tip: ConeTip{Method: insitu.SchmertmannTip{Limit: 15 * units.Megapascal}, Cone: c}}}
+	p := Pile{Section: Section{Shape: Square, Width: 0.4 * m}, Length: 30 * m, Installation: DrivenHigh}
+	a, err := NewAnalysis(prof, p, ms, nil)
+	if err != nil {
+		b.Fatal(err)
+	}
+	dst := make([]Capacity, 0, 64)
+	b.ReportAllocs()
+	for b.Loop() {
+		if dst, err = a.WithDepth(DepthGrid{From: 5.5 * m, To: 35 * m, Step: 0.5 * m}, dst[:0]); err != nil {
+			b.Fatal(err)
+		}
 	}
 }

@@ -268,6 +268,16 @@ func (a *Analysis) segment(s *sums, iv *interval, z0, z1 float64) error {
 			s.flags |= ShaftLimit
 		}
 		s.flags |= shaftFlags(lp.flags)
+	case kindCone:
+		cs, _ := coneShaftOf(lp.shaft)
+		v, limited, err := cs.integral(z0, z1, a.size)
+		if err != nil {
+			return coneError(iv.layer, "shaft", lp.layer.Name, err)
+		}
+		q = v
+		if limited {
+			s.flags |= ShaftLimit
+		}
 	case kindAlphaAPI:
 		v, fl, err := shaft.AlphaAPI{}.Integral(lp.su0, units.Stress(s0), units.Stress(s1), units.Length(h))
 		if err != nil {

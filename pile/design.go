@@ -9,6 +9,7 @@ import (
 
 	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/cite"
+	"github.com/qultgeo/qult/insitu"
 	"github.com/qultgeo/qult/profile"
 	"github.com/qultgeo/qult/shaft"
 	"github.com/qultgeo/qult/units"
@@ -494,13 +495,13 @@ func (l LRFD) ID() string {
 func (l LRFD) Refs() []cite.Ref { return l.Sources }
 
 // knownTips and knownShafts are the method identifiers a factor map may
-// name: those of the catalogues of packages bearing and shaft (a shaft
-// method capped by a limit, "beta-api+limit-given", is found under its
-// method, the part before "+"). "none" gives no resistance and takes no
-// factor.
+// name: those of the catalogues of packages bearing and shaft, and the
+// direct CPT methods of package insitu (a shaft method capped by a limit,
+// "beta-api+limit-given", is found under its method, the part before
+// "+"). "none" gives no resistance and takes no factor.
 var (
-	knownTips   = bearing.IDs()
-	knownShafts = shaft.ResistanceIDs()
+	knownTips   = append(bearing.IDs(), insitu.DirectIDs(insitu.TipPart)...)
+	knownShafts = append(shaft.ResistanceIDs(), insitu.DirectIDs(insitu.ShaftPart)...)
 )
 
 // checkFactorMap checks a map of resistance factors: every key a known

@@ -91,6 +91,15 @@
 //     boundary and the edge of every zone (tests check it). A layer whose
 //     tip resistance cannot be evaluated is an error where one of these
 //     rules needs it.
+//   - Direct CPT methods (package insitu) serve as a layer's tip or shaft
+//     through ConeTip and ConeShaft, bound to a cone sounding. A cone tip
+//     takes none of the rules above: its averaging zone about the tip
+//     already reads the layers there, qp is not continuous at its layer's
+//     boundaries, and a layer above applying the weak-layer rule reads the
+//     cone tip's value at its top. A cone shaft is integrated exactly over
+//     the readings (linear between them). A zone or length of shaft the
+//     sounding does not cover is an error at the layer's field (ErrNoCone
+//     when there is no sounding).
 //   - The embedment ramp is Meyerhof's growth of the point resistance with
 //     the embedment in the bearing stratum up to the critical embedment
 //     ratio; (Lb/D)cr = 10 by default (the ratio at which his SPT rule

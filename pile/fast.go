@@ -34,8 +34,8 @@ func (a *Analysis) markRanges() {
 	for k := range a.iv {
 		iv := &a.iv[k]
 		lp := &a.plans[iv.layer]
-		if lp.lambda || lp.noShaft || iv.noShaft || lp.kind == kindGeneral {
-			continue
+		if lp.lambda || lp.noShaft || iv.noShaft || lp.kind == kindGeneral || lp.kind == kindCone {
+			continue // a cone shaft's integral checks its own range
 		}
 		for _, z := range endPoints(iv.top, iv.bot) {
 			if _, err := lp.shaft.Unit(a.point(lp, units.Length(z), units.Stress(iv.sigma(z)))); err != nil {

@@ -21,6 +21,9 @@ const (
 	// kindAlphaAPI: the API α with su constant in the layer, integrated
 	// in closed form by shaft.AlphaAPI.Integral.
 	kindAlphaAPI
+	// kindCone: a direct CPT shaft method (ConeShaft), integrated exactly
+	// over the sounding's readings.
+	kindCone
 )
 
 // classify decides the layer's kind from the method's type. Only methods
@@ -39,6 +42,10 @@ func (a *Analysis) classify(i int, lp *layerPlan) error {
 			return pathErrorf(fmt.Sprintf("layers[%d].shaft", i), "layer %q: %w", lp.layer.Name, err)
 		}
 		capv, m = v, c.Method
+	}
+	if _, ok := coneShaftOf(lp.shaft); ok {
+		lp.kind = kindCone
+		return nil
 	}
 	if _, ok := lp.shaft.(shaft.AlphaAPI); ok && lp.su0 == lp.su1 {
 		lp.kind = kindAlphaAPI

@@ -315,6 +315,10 @@ type layerPlan struct {
 	// whose calibration already covers embedment, so Meyerhof's
 	// embedment ramp, a rule of his bearing-factor method, does not apply.
 	spt bool
+	// cone: the tip method is a direct CPT method (ConeTip), to which
+	// Meyerhof's tip rules (embedment ramp, layered, weak layer) do not
+	// apply.
+	cone bool
 	// closed-form integration (see classify)
 	kind  int
 	coef  float64
@@ -593,6 +597,8 @@ func (a *Analysis) plan(i int) (layerPlan, error) {
 		lp.tip = bearing.Skempton{}
 	}
 	switch lp.tip.(type) {
+	case ConeTip:
+		lp.cone = true
 	case bearing.ShaftSand:
 		lp.spt = true
 	case bearing.BoredSand:

@@ -98,6 +98,9 @@ type weakInfo struct {
 // rules, so that qp is continuous in depth.
 func (a *Analysis) baseRules(li int, z, q float64, fl *Flags) (qp, upper, embed float64, err error) {
 	lp := &a.plans[li]
+	if lp.cone {
+		return q, 0, 1, nil
+	}
 	d := a.size
 	// Below an excavation or scour the bearing stratum starts at the
 	// design ground line, and a layer wholly above it is gone.
@@ -145,6 +148,9 @@ func (a *Analysis) baseRules(li int, z, q float64, fl *Flags) (qp, upper, embed 
 // least result governs. A layer whose tip resistance cannot be evaluated is
 // an error here, since the rule cannot be checked without it.
 func (a *Analysis) weakRule(li int, z, q float64, fl *Flags, w *weakInfo) (float64, error) {
+	if a.plans[li].cone {
+		return q, nil
+	}
 	d := a.size
 	lim := z + WeakZoneRatio*d
 	best := q

@@ -2,9 +2,12 @@ package report
 
 import (
 	"fmt"
+	"slices"
 	"strings"
 
 	"github.com/qultgeo/qult/calc"
+	"github.com/qultgeo/qult/insitu"
+	"github.com/qultgeo/qult/units"
 )
 
 // headCompared is the heading of the methods compared.
@@ -24,9 +27,18 @@ func secCompared(r *calc.Result, c conv) section {
 	}
 	for _, g := range cm.Shaft {
 		blocks = append(blocks, compareBlocks(g, c, "Shaft", "Qs", "Qs, all layers")...)
+		if n := directShaftNote(r, g, c); n != "" {
+			blocks = append(blocks, block{para: n})
+		}
 	}
 	for _, g := range cm.Tip {
 		blocks = append(blocks, compareBlocks(g, c, "Tip", "Qp", "Rc")...)
+		if t := r.Breakdown.Tip; slices.Contains(g.Layers, t.LayerName) {
+			if _, ok := insitu.LookupDirect(insitu.TipPart, t.Method); ok {
+				blocks = append(blocks, block{para: fmt.Sprintf("The file's choice, %s, is a direct CPT method and is not among the methods compared: Qp = %s, Rc = %s.",
+					t.Method, c.fs(r.Breakdown.Capacity.Tip), c.fs(r.Breakdown.Capacity.Compression))})
+			}
+		}
 	}
 	return section{heading: headCompared, blocks: blocks}
 }
@@ -56,6 +68,28 @@ func compareBlocks(g calc.CompareGroup, c conv, what, force, total string) []blo
 		out = append(out, block{para: "Not applied:"}, block{list: not})
 	}
 	return out
+}
+
+// directShaftNote names the direct CPT shaft methods the file chose in a
+// group's layers, which are not among the methods compared, with the shaft
+// resistance of those layers as chosen.
+func directShaftNote(r *calc.Result, g calc.CompareGroup, c conv) string {
+	var ids []string
+	var qs units.Force
+	for _, row := range r.Breakdown.Rows {
+		if !slices.Contains(g.Layers, row.LayerName) {
+			continue
+		}
+		qs += row.Force
+		if _, ok := insitu.LookupDirect(insitu.ShaftPart, row.Method); ok && !slices.Contains(ids, row.Method) {
+			ids = append(ids, row.Method)
+		}
+	}
+	if len(ids) == 0 {
+		return ""
+	}
+	return fmt.Sprintf("The file chooses direct CPT methods (%s) in some of these layers, which are not among the methods compared; Qs of these layers as chosen = %s.",
+		strings.Join(ids, ", "), c.fs(qs))
 }
 
 // spreadText states the spread of a group: least and greatest value and

@@ -232,8 +232,20 @@ type jTip struct {
 	MethodQp        qty         `json:"qp_method"`
 	Embedment       *jEmbedment `json:"embedment,omitempty"`
 	WeakLayer       *jWeak      `json:"weak_layer,omitempty"`
+	Cone            *jCone      `json:"cone,omitempty"`
 	MethodFlags     []string    `json:"method_flags"`
 	Steps           []string    `json:"worked_equations"`
+}
+
+// jCone is what a direct CPT tip method averaged about the tip.
+type jCone struct {
+	Top    qty  `json:"zone_top"`
+	Bottom qty  `json:"zone_bottom"`
+	Q      qty  `json:"cone_resistance"`
+	Factor jnum `json:"factor"`
+	Below  *qty `json:"qc_below,omitempty"`
+	Above  *qty `json:"qc_above,omitempty"`
+	Raw    *qty `json:"mean_before_clipping,omitempty"`
 }
 
 type jEmbedment struct {
@@ -430,6 +442,10 @@ func toJSON(r *calc.Result, o Options) *jResult {
 		if d := r.Pile.Section.Size(); d > 0 {
 			j.Tip.Embedment.CriticalRatio = jnum(float64(t.EmbedLength / d))
 		}
+	}
+	if cn := t.Result.Cone; cn.Q > 0 {
+		j.Tip.Cone = &jCone{Top: c.L(cn.Top), Bottom: c.L(cn.Bottom), Q: c.S(cn.Q), Factor: jnum(cn.Factor),
+			Below: opt(c.S(cn.Below), cn.Below > 0), Above: opt(c.S(cn.Above), cn.Above > 0), Raw: opt(c.S(cn.Raw), cn.Raw > 0)}
 	}
 	if t.WeakLayer >= 0 {
 		name := ""

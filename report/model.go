@@ -9,6 +9,7 @@ import (
 
 	"github.com/qultgeo/qult/bearing"
 	"github.com/qultgeo/qult/calc"
+	"github.com/qultgeo/qult/insitu"
 	"github.com/qultgeo/qult/pile"
 	"github.com/qultgeo/qult/shaft"
 	"github.com/qultgeo/qult/units"
@@ -436,6 +437,9 @@ func secShaft(r *calc.Result, c conv) section {
 		if d, ok := shaft.Lookup(row.Method); ok && d.Scope != "" && !seen[row.Method] {
 			seen[row.Method] = true
 			scopes = append(scopes, row.Method+": "+d.Scope)
+		} else if d, ok := insitu.LookupDirect(insitu.ShaftPart, row.Method); ok && !seen[row.Method] {
+			seen[row.Method] = true
+			scopes = append(scopes, row.Method+": "+d.Scope)
 		}
 	}
 	if len(scopes) > 0 {
@@ -529,6 +533,8 @@ func secTip(r *calc.Result, c conv) section {
 	}
 	if d, ok := bearing.Lookup(t.Method); ok && d.Scope != "" {
 		it = append(it, item{"Method's scope", txt(d.Scope), ""}) // from the catalogue of methods
+	} else if d, ok := insitu.LookupDirect(insitu.TipPart, t.Method); ok && res.Cone.Q > 0 {
+		it = append(it, item{"Method's scope", txt(d.Scope), ""})
 	}
 	if res.Rule != "" {
 		it = append(it, item{"Rule used by the method", txt(res.Rule), ""})
@@ -566,6 +572,20 @@ func secTip(r *calc.Result, c conv) section {
 	}
 	if res.Irr > 0 {
 		it = append(it, item{"Irr", num(res.Irr), ""})
+	}
+	if cn := res.Cone; cn.Q > 0 {
+		it = append(it, item{"Cone zone averaged, top", num(c.L(cn.Top)), c.uL()},
+			item{"Cone zone averaged, bottom", num(c.L(cn.Bottom)), c.uL()})
+		if cn.Raw > 0 {
+			it = append(it, item{"Mean over the zone before clipping", num(c.S(cn.Raw)), c.uS()},
+				item{"Clipped to", txt(fmt.Sprintf("%s to %s %s", fmtNum(c.S(0.7*cn.Raw), sig), fmtNum(c.S(1.3*cn.Raw), sig), c.uS())), ""})
+		}
+		if cn.Below > 0 || cn.Above > 0 {
+			it = append(it, item{"qc1 (below the tip, minimum path)", num(c.S(cn.Below)), c.uS()},
+				item{"qc2 (above the tip, minimum path)", num(c.S(cn.Above)), c.uS()})
+		}
+		it = append(it, item{"Cone resistance averaged", num(c.S(cn.Q)), c.uS()},
+			item{"Factor on it", num(cn.Factor), ""})
 	}
 	it = append(it, item{"qp before limit", num(c.S(res.Unlimited)), c.uS()})
 	if res.Limit > 0 {

@@ -227,9 +227,21 @@ func tipSteps(r *calc.Result, c conv) []string {
 		terms = append(terms, "c·Nc")
 		vals = append(vals, fmt.Sprintf("%s × %s", c.ss(res.C), fmtNum(res.Nc, sig)))
 	}
-	if len(terms) > 0 {
+	switch {
+	case res.Cone.Q > 0:
+		cn := res.Cone
+		if cn.Raw > 0 {
+			out = append(out, fmt.Sprintf("mean qc over %s to %s = %s; readings clipped to 0.7 × %s = %s and 1.3 × %s = %s; their mean q̄c = %s",
+				c.ls(cn.Top), c.ls(cn.Bottom), c.ss(cn.Raw), c.ss(cn.Raw), c.ss(0.7*cn.Raw), c.ss(cn.Raw), c.ss(1.3*cn.Raw), c.ss(cn.Q)))
+		} else if cn.Below > 0 || cn.Above > 0 {
+			out = append(out, fmt.Sprintf("q̄c = (qc1 + qc2)/2 = (%s + %s)/2 = %s (zone %s to %s)", c.ss(cn.Below), c.ss(cn.Above), c.ss(cn.Q), c.ls(cn.Top), c.ls(cn.Bottom)))
+		} else {
+			out = append(out, fmt.Sprintf("q̄c = %s, averaged from %s to %s", c.ss(cn.Q), c.ls(cn.Top), c.ls(cn.Bottom)))
+		}
+		out = append(out, fmt.Sprintf("qp = factor·q̄c = %s × %s = %s", fmtNum(cn.Factor, sig), c.ss(cn.Q), c.ss(res.Unlimited)))
+	case len(terms) > 0:
 		out = append(out, fmt.Sprintf("qp = %s = %s = %s", strings.Join(terms, " + "), strings.Join(vals, " + "), c.ss(res.Unlimited)))
-	} else {
+	default:
 		out = append(out, fmt.Sprintf("%s: qp = %s", t.Method, c.ss(res.Unlimited)))
 	}
 	q := res.Unlimited

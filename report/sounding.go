@@ -2,6 +2,7 @@ package report
 
 import (
 	"fmt"
+	"strings"
 
 	"github.com/qultgeo/qult/calc"
 	"github.com/qultgeo/qult/insitu"
@@ -66,6 +67,9 @@ func secSounding(r *calc.Result, c conv) section {
 		blocks = append(blocks, block{para: "Layering suggested by breaks in Ic (zones of Robertson 1990 and 2009):"}, block{tbl: st})
 	}
 	blocks = append(blocks, block{para: "The sounding is reported beside the calculation: its means, su, φ′ and the suggested layering are not used in the capacity. Compare them with the layers given and the borehole logs; correlations are empirical and site-specific experience governs."})
+	if len(s.ReadBy) > 0 {
+		blocks = append(blocks, block{para: "The readings themselves (qc, and qt − u2) are read in the capacity by the direct CPT methods of " + strings.Join(s.ReadBy, ", ") + "."})
+	}
 	return section{heading: headSounding, blocks: blocks}
 }
 
@@ -91,6 +95,7 @@ type jSounding struct {
 	Layers        []jSoundingLayer `json:"layers"`
 	Suggested     []jSuggested     `json:"suggested_layers"`
 	Note          string           `json:"note"`
+	ReadBy        []string         `json:"read_by,omitempty"`
 }
 
 type jSoundingLayer struct {
@@ -124,7 +129,7 @@ func soundingJSON(r *calc.Result, c jconv) *jSounding {
 	j := &jSounding{File: s.File, Format: s.Format, ID: s.ID, AreaRatio: jnum(s.AreaRatio), Readings: s.Readings,
 		NotNormalised: s.NotNormalised, Voids: s.Voids, Below: s.Below, Top: c.L(s.Top), Bottom: c.L(s.Bottom),
 		Layers: []jSoundingLayer{}, Suggested: []jSuggested{},
-		Note: "reported beside the calculation: not used in the capacity"}
+		Note: "reported beside the calculation: not used in the capacity", ReadBy: s.ReadBy}
 	if s.Nkt > 0 {
 		j.Nkt = jn(s.Nkt)
 	}

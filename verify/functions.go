@@ -118,6 +118,7 @@ func init() {
 		"settle.Downdrag.Solve":      runDowndrag,
 	}
 	addInsituRunners(runners)
+	addDirectRunners(runners)
 }
 
 // Functions returns the names of the functions the catalogue can run,
