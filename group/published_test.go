@@ -116,8 +116,8 @@ func tomlinsonEx51(t *testing.T) *profile.Profile {
 //
 // Part 1 runs qult's consolidation integral with the source's stresses:
 // the printed values to their rounding (±0.05 mm). Part 2 runs qult's
-// equivalent raft, whose stress is the 2:1 spread (Das's convention, the
-// average over the spread area, not the centre): its closed form worked by
+// equivalent raft, whose stress is the 2:1 spread (common practice, as
+// Murthy 2002 draws it; the mean over the spread area, not the centre): its closed form worked by
 // hand below, and the difference from the source's figure logged.
 func TestRaftTomlinsonEx51(t *testing.T) {
 	p := tomlinsonEx51(t)
