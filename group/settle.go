@@ -264,6 +264,9 @@ func RaftSettlement(prof *profile.Profile, in RaftInput) (Raft, error) {
 	}
 	sortRaftLayers(r.Layers)
 	r.Consolidation = units.Length(float64(r.Oedometer) * md * mg)
+	if md*mg < 1 && r.Oedometer > 0 {
+		r.Warnings = append(r.Warnings, fmt.Sprintf("the equivalent raft's consolidation settlement is reduced by the factors given, μd = %g and μg = %g (%.3g of the oedometer value): check them for the site", md, mg, md*mg))
+	}
 	r.Total = r.Elastic + r.Consolidation
 	return r, nil
 }
