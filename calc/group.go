@@ -33,7 +33,7 @@ type Group struct {
 	RaftDepth       Value  `yaml:"raft_depth,omitempty" json:"raft_depth,omitempty" q:"length,0," doc:"Depth of the equivalent raft below ground; absent: two-thirds of the embedded length below the top of the embedded pile."`
 	RaftBottom      Value  `yaml:"raft_bottom,omitempty" json:"raft_bottom,omitempty" q:"length,0," doc:"Deepest level counted below the equivalent raft; absent: the bottom of the ground profile."`
 	RaftMethod      string `yaml:"raft_method,omitempty" json:"raft_method,omitempty" doc:"Equivalent raft: two-to-one (default; the group's plan at the raft, load spread 2 vertical to 1 horizontal) or tomlinson (Tomlinson & Woodward: plan widened 1 in 4 from the pile heads, elastic stress below it)."`
-	RaftStress      string `yaml:"raft_stress,omitempty" json:"raft_stress,omitempty" doc:"Tomlinson raft only: the elastic stress below the raft's centre (centre, default, conservative) or averaged over its plan (average, as Tomlinson & Woodward's Example 5.1)."`
+	RaftStress      string `yaml:"raft_stress,omitempty" json:"raft_stress,omitempty" doc:"Tomlinson raft only: the elastic stress below the raft's centre (centre, default, conservative), averaged over its plan (average, as Tomlinson & Woodward's Example 5.1), or the 2:1 spread below the widened raft (two-to-one)."`
 	RaftSpreadTop   Value  `yaml:"raft_spread_top,omitempty" json:"raft_spread_top,omitempty" q:"length,0," doc:"Tomlinson raft only: depth where the 1 in 4 spread starts (the top of the bearing stratum); absent: the top of the embedded pile."`
 	RaftDepthFactor Value  `yaml:"raft_depth_factor,omitempty" json:"raft_depth_factor,omitempty" q:"number,0,1" doc:"Depth factor μd (Fox) on the raft's consolidation settlement, more than 0 and at most 1; absent: 1, no reduction."`
 	// RaftGeologicalFactor μg multiplies the raft's consolidation settlement.
@@ -180,8 +180,8 @@ func (r *resolver) groupSection(f *File, in *Inputs) {
 	switch {
 	case o.RaftStress != "" && !tomlinson:
 		r.add("group.raft_stress", 0, "%q: only raft_method: %s reads it (the two-to-one spread has its own stress)", o.RaftStress, group.RaftTomlinson)
-	case o.RaftStress != "" && o.RaftStress != group.StressCentre && o.RaftStress != group.StressAverage:
-		r.add("group.raft_stress", 0, "%q: want %s or %s", o.RaftStress, group.StressCentre, group.StressAverage)
+	case o.RaftStress != "" && o.RaftStress != group.StressCentre && o.RaftStress != group.StressAverage && o.RaftStress != group.StressSpread:
+		r.add("group.raft_stress", 0, "%q: want %s, %s or %s", o.RaftStress, group.StressCentre, group.StressAverage, group.StressSpread)
 	}
 	o.RaftSpreadTop = r.length(g.RaftSpreadTop, "group.raft_spread_top")
 	if g.RaftSpreadTop.IsSet() && !tomlinson {

@@ -48,7 +48,7 @@ var enums = map[string][]string{
 	// group
 	"efficiency":  group.RuleIDs(),
 	"raft_method": {group.RaftTwoToOne, group.RaftTomlinson},
-	"raft_stress": {group.StressCentre, group.StressAverage},
+	"raft_stress": {group.StressCentre, group.StressAverage, group.StressSpread},
 	// reliability
 	"distribution": {"normal", "lognormal", "truncated-normal", "uniform"},
 	"key":          append(slices.Clone(reliability.LayerKeys), reliability.GlobalKeys...),

@@ -104,7 +104,9 @@
 // and the stress below it is Boussinesq's for a flexible loaded rectangle
 // in Newmark's closed form (NewmarkCorner), either below the raft's
 // centre (the default, the largest on any vertical: conservative) or
-// averaged over the raft's plan (group.raft_stress: average). Tomlinson
+// averaged over the raft's plan (group.raft_stress: average); or, as some
+// teaching texts combine them, the 2:1 spread below the widened raft
+// (raft_stress: two-to-one, Q/((Br + z′)(Lr + z′))). Tomlinson
 // & Woodward read their stress factors from a chart; the factors printed
 // in their Example 5.1 agree with the plan average within the chart's
 // reading (0.804, 0.513, 0.332, 0.223, 0.157 against 0.80, 0.51, 0.33,

@@ -16,6 +16,9 @@ package group_test
 //     factors 0.80, 0.51, 0.33, 0.22, 0.15 × 174 kN/m² at the centres of
 //     five 4 m layers below a 13.8 × 10.5 m raft, the oedometer total
 //     96.7 mm, and the corrected 0.5 × 0.78 × 96.7 = 37.7 mm;
+//   - the slides of NPTEL course 105101083 (module 5, lecture 25, section
+//     25.4, read on archive.nptel.ac.in): an equivalent mat widened 1H:4V
+//     and the 2:1 stresses below it;
 //   - closed forms worked by hand (the centre of a square at z = B; the
 //     point load's stress far below the raft) and an oracle (a much finer
 //     quadrature of the average stress).
@@ -242,4 +245,49 @@ func TestRaftFactorsAndMethodsRefused(t *testing.T) {
 	if r.DepthFactor != 1 || r.GeologicalFactor != 1 || r.Consolidation != r.Oedometer || r.Method != group.RaftTwoToOne {
 		t.Errorf("defaults: μd %g, μg %g, %v vs %v, method %q", r.DepthFactor, r.GeologicalFactor, r.Consolidation, r.Oedometer, r.Method)
 	}
+}
+
+// TestRaftWidenedTwoToOneNPTEL: the worked problem of the NPTEL course
+// 105101083 on foundation design (its slides), module 5, lecture 25
+// "Pile groups", section 25.4 (slides 16-17 of lecture 27's folder, read
+// on archive.nptel.ac.in): a group 3 m × 2.1 m of 9 m piles, the load
+// spread 1H:4V to the equivalent mat at two-thirds of the length (6 m):
+// "width 3 + 2 × (6/4) = 6 m, length 2.1 + 2 × (6/4) = 5.1 m"; below it the
+// stress spreads 2:1, printed at the centres of four layers (1.5, 4.5,
+// 7.25 and 9.75 m below the mat) as 30.3, 14.88, 9.17 and 6.14 kN/m².
+// The printed values follow Q = 1500 kN (the slide's "150/(6 × 5.1) =
+// 4.902" writes it in tonnes and t/m², with g taken as 10): 1500/(7.5 ×
+// 6.6) = 30.30. The fourth, 6.14, is 1500/(15.75 × 14.85) = 6.41 with two
+// digits transposed: it is logged, not compared. The settlement of the
+// layers (38.94, 16.62, 6.58, 4.1 mm; 66.24 mm) needs the compression
+// indices of the slide's figure, which were not read: not compared.
+func TestRaftWidenedTwoToOneNPTEL(t *testing.T) {
+	p, err := profile.New(profile.Spec{Layers: []profile.LayerSpec{
+		// a ground of our own below the mat; only the stress is compared
+		{Name: "clay", Thickness: 30 * m, Drainage: profile.Undrained, Su: 50 * kPa, SaturatedUnitWeight: 19 * kNm, E: 20e6},
+	}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	in := group.RaftInput{Load: 1500 * kN, Bg: 3 * m, Lg: 2.1 * m, Depth: 6 * m, Method: group.RaftTomlinson, SpreadTop: 0, Stress: group.StressSpread}
+	r, err := group.RaftSettlement(p, in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "mat width (m)", float64(r.Bg), 6, 1e-12)
+	near(t, "mat length (m)", float64(r.Lg), 5.1, 1e-12)
+	// The 2:1 stress below the widened mat, as group.SpreadStress gives it.
+	for _, c := range []struct{ z, printed, tol float64 }{{1.5, 30.3, 0.05}, {4.5, 14.88, 0.005}, {7.25, 9.17, 0.005}} {
+		got := group.SpreadStress(in.Load, r.Bg, r.Lg, units.Length(c.z)).KPa()
+		if math.Abs(got-c.printed) > c.tol {
+			t.Errorf("Δσ at %g m below the mat = %.4f kN/m², printed %g", c.z, got, c.printed)
+		}
+	}
+	t.Logf("fourth layer: %.3f kN/m² (printed 6.14, digits transposed)", group.SpreadStress(in.Load, r.Bg, r.Lg, 9.75*m).KPa())
+	// The raft's elastic compression is the closed form of the 2:1 spread
+	// over the widened plan: Q/E·[ln((B + z′)/(L + z′))]/(L − B) from 0 to
+	// 24 m below the mat (B = 5.1, L = 6), worked here.
+	b, l := 5.1, 6.0
+	want := 1500e3 / 20e6 * (math.Log((b+24)/(l+24)) - math.Log(b/l)) / (l - b)
+	near(t, "elastic compression (m)", float64(r.Elastic), want, 1e-9)
 }

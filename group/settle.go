@@ -76,6 +76,11 @@ const (
 	// it reproduces the stress factors printed in Tomlinson & Woodward's
 	// Example 5.1 (p. 294).
 	StressAverage = "average"
+	// StressSpread is the 2:1 spread below the widened raft,
+	// Q/((Br + z′)(Lr + z′)), the mean over the spread area, as some
+	// teaching texts combine the 1:4 raft with the 2:1 spread (NPTEL
+	// course 105101083, module 5, lecture 25, "Pile groups").
+	StressSpread = "two-to-one"
 )
 
 // MaxGeologicalFactor is the largest geological factor μg accepted: 1.2,
@@ -97,7 +102,8 @@ type RaftInput struct {
 	// pile heads, or the top of the stratum the piles bear in); it must
 	// not be below Depth. Ignored by the two-to-one method.
 	SpreadTop units.Length
-	// Stress is StressCentre ("" too) or StressAverage (Tomlinson only).
+	// Stress is StressCentre ("" too), StressAverage or StressSpread
+	// (Tomlinson only).
 	Stress string
 	// DepthFactor μd (Fox's correction for the raft's depth) and
 	// GeologicalFactor μg multiply the consolidation (oedometer)
@@ -122,7 +128,7 @@ type RaftLayer struct {
 // Raft is the settlement of the equivalent raft.
 type Raft struct {
 	Method string // RaftTwoToOne or RaftTomlinson
-	Stress string // StressCentre or StressAverage (Tomlinson); "" for two-to-one
+	Stress string // StressCentre, StressAverage or StressSpread (Tomlinson); "" for two-to-one
 	Depth  units.Length
 	Bottom units.Length
 	// GroupBg × GroupLg is the group's plan; Bg × Lg the raft's, widened
@@ -214,8 +220,13 @@ func RaftSettlement(prof *profile.Profile, in RaftInput) (Raft, error) {
 			r.Stress, at = StressCentre, CentreStress
 		case StressAverage:
 			r.Stress, at = StressAverage, AverageStress
+		case StressSpread:
+			r.Stress = StressSpread
+			at = func(q units.Stress, b, l, zp units.Length) units.Stress {
+				return units.Stress(float64(q) * float64(b) * float64(l) / (float64(b+zp) * float64(l+zp)))
+			}
 		default:
-			return Raft{}, &FieldError{"raft_stress", fmt.Sprintf("%q: want %s or %s", in.Stress, StressCentre, StressAverage)}
+			return Raft{}, &FieldError{"raft_stress", fmt.Sprintf("%q: want %s, %s or %s", in.Stress, StressCentre, StressAverage, StressSpread)}
 		}
 		r.Refs = append(r.Refs, raftTomlinson, raftNewmark)
 		ds = func(z units.Length) units.Stress {
@@ -241,7 +252,7 @@ func RaftSettlement(prof *profile.Profile, in RaftInput) (Raft, error) {
 		r.Layers = append(r.Layers, RaftLayer{Layer: prof.Layer(p.Layer).Name, Top: p.Top, Bottom: p.Bottom, Kind: "consolidation", Settlement: p.Settlement})
 		r.Oedometer += p.Settlement
 	}
-	b, l := float64(in.Bg), float64(in.Lg)
+	b, l := float64(r.Bg), float64(r.Lg) // the raft's plan (the group's for two-to-one)
 	for i := range prof.NumLayers() {
 		lay := prof.Layer(i)
 		top, bot := max(lay.Top, in.Depth, prof.DesignGround()), min(lay.Bottom, bottom)
@@ -251,7 +262,7 @@ func RaftSettlement(prof *profile.Profile, in RaftInput) (Raft, error) {
 		row := RaftLayer{Layer: lay.Name, Top: top, Bottom: bot, Kind: "none"}
 		if lay.E > 0 {
 			row.Kind, row.E = "elastic", lay.E
-			if r.Method == RaftTwoToOne {
+			if r.Method == RaftTwoToOne || r.Stress == StressSpread {
 				row.Settlement = units.Length(float64(in.Load) / float64(lay.E) * spreadIntegral(b, l, float64(top-in.Depth), float64(bot-in.Depth)))
 			} else {
 				row.Settlement = units.Length(integrateStress(ds, float64(top), float64(bot)) / float64(lay.E))

@@ -107,11 +107,14 @@ func secGroup(r *calc.Result, c conv) section {
 	}
 	if rf := g.Raft; rf != nil {
 		if rf.Method == group.RaftTomlinson {
-			where := "below its centre"
-			if rf.Stress == group.StressAverage {
-				where = "averaged over its plan"
+			where := "elastic stress (Boussinesq, Newmark) below its centre"
+			switch rf.Stress {
+			case group.StressAverage:
+				where = "elastic stress (Boussinesq, Newmark) averaged over its plan"
+			case group.StressSpread:
+				where = "stress spread 2:1 below it"
 			}
-			st = append(st, item{"Equivalent raft (Tomlinson & Woodward)", txt(fmt.Sprintf("the group's %s × %s widened 1 in 4 from %s to the raft at %s depth: %s × %s under %s (%s); elastic stress (Boussinesq, Newmark) %s, counted to %s",
+			st = append(st, item{"Equivalent raft (Tomlinson & Woodward)", txt(fmt.Sprintf("the group's %s × %s widened 1 in 4 from %s to the raft at %s depth: %s × %s under %s (%s); %s, counted to %s",
 				c.ls(rf.GroupBg), c.ls(rf.GroupLg), c.ls(rf.SpreadTop), c.ls(rf.Depth), c.ls(rf.Bg), c.ls(rf.Lg), c.fs(rf.Load), c.ss(rf.Pressure), where, c.ls(rf.Bottom))), ""})
 		} else {
 			st = append(st, item{"Equivalent raft", txt(fmt.Sprintf("%s × %s at %s depth under %s (%s), spread 2:1, counted to %s",
@@ -135,7 +138,9 @@ func secGroup(r *calc.Result, c conv) section {
 			rt.rows = append(rt.rows, []cell{txt(l.Layer), num(c.L(l.Top)), num(c.L(l.Bottom)), txt(l.Kind), num(c.sm(l.Settlement))})
 		}
 		eq := "Δσ(z) = Q/((Bg + z′)(Lg + z′)), z′ below the raft; elastic: s = ∫ Δσ/E dz; consolidation: the layer's compressibility, times μd·μg"
-		if rf.Method == group.RaftTomlinson {
+		if rf.Method == group.RaftTomlinson && rf.Stress == group.StressSpread {
+			eq = "Br = Bg + (zr − zs)/2, Lr = Lg + (zr − zs)/2; Δσ(z) = Q/((Br + z′)(Lr + z′)), z′ below the raft; elastic: s = ∫ Δσ/E dz; consolidation: the layer's compressibility (before μd·μg)"
+		} else if rf.Method == group.RaftTomlinson {
 			eq = "Br = Bg + (zr − zs)/2, Lr = Lg + (zr − zs)/2; Δσ(z) = q·4·I(Br/2, Lr/2, z′) at the centre, or q·(4/(Br·Lr))∬I dx dy averaged, I = Newmark's corner factor; elastic: s = ∫ Δσ/E dz; consolidation: the layer's compressibility (before μd·μg)"
 		}
 		blocks = append(blocks, block{eqs: []string{eq}}, block{tbl: rt})

@@ -19,6 +19,7 @@ func init() {
 	runners["group.RaftSettlement"] = runRaft
 	runners["group.PracticeEfficiency"] = runPracticeEfficiency
 	runners["group.NewmarkCorner"] = runNewmarkCorner
+	runners["group.SpreadStress"] = runSpreadStress
 	runners["group.CentreStress"] = runRectStress(group.CentreStress)
 	runners["group.AverageStress"] = runRectStress(group.AverageStress)
 }
@@ -147,6 +148,21 @@ func runRaft(a *args) (values, error) {
 	}
 	return values{"settlement": length(r.Total), "oedometer": length(r.Oedometer), "consolidation": length(r.Consolidation),
 		"width": length(r.Bg), "length": length(r.Lg)}, nil
+}
+
+// runSpreadStress: the 2:1 stress at depth below a raft carrying a load.
+func runSpreadStress(a *args) (values, error) {
+	q := units.Force(a.qty("load", units.DimForce))
+	b := units.Length(a.qty("width", units.DimLength))
+	l := units.Length(a.qty("length", units.DimLength))
+	z := units.Length(a.qty("depth", units.DimLength))
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	if !(b > 0) || !(l > 0) || !(z >= 0) || !(q >= 0) {
+		return nil, errBad("width and length must be positive, depth and load zero or more")
+	}
+	return values{"stress": stress(group.SpreadStress(q, b, l, z))}, nil
 }
 
 // runNewmarkCorner: Newmark's corner factor at m = b/z and n = l/z.
