@@ -121,11 +121,13 @@
 // modulus, our simplification; it understates the compression of a
 // laterally confined layer). A layer with neither adds nothing, with a
 // warning. The consolidation (oedometer) settlement is multiplied by the
-// depth factor μd (Fox's correction for a raft below the surface, read
-// from Tomlinson & Woodward's Fig. 5.23) and the geological factor μg
-// (Skempton & Bjerrum's, about 0.5 for London Clay as their Example 5.1
-// takes it): both are the engineer's inputs, μd in (0, 1] and μg in
-// (0, 1.2], and both default to 1, no reduction, the conservative choice.
+// depth factor μd (the correction for a raft below the surface, which
+// Tomlinson & Woodward read from their Fig. 5.23; Fox's, from memory) and
+// the geological factor μg (about 0.5 for London Clay as their Example
+// 5.1 takes it; Skempton & Bjerrum's, from memory): both are the
+// engineer's inputs, μd in (0, 1] and μg in (0, 1.2] (the upper end of
+// Skempton & Bjerrum's range, for very sensitive clays, from memory), and
+// both default to 1, no reduction, the conservative choice.
 // The elastic compression is not multiplied. Where the piles pass through
 // soft ground into a firm stratum, Tomlinson & Woodward place the raft at
 // two-thirds of the length in the firm stratum and start the spread at
