@@ -13,4 +13,6 @@ var (
 		Title: "Geotechnical Engineering: Principles and Practices of Soil Mechanics and Foundation Engineering", Publication: "Marcel Dekker, New York (the section on the settlement of pile groups in clay, Fig. 15.31, read in a web reproduction; the book's details from memory)"}
 	Newmark1935 = Source{Key: "newmark1935", Authors: "Newmark, N.M.", Year: 1935,
 		Title: "Simplified computation of vertical pressures in elastic foundations", Publication: "University of Illinois Engineering Experiment Station, Circular 24, Urbana (from memory); the closed form read in a page reproduction of a soil mechanics textbook (issuhub.com, book 4772, p. 371, Eq. 10.45) and checked against the printed table of a textbook problem (transtutors.com, Table P20.27)"}
+	NPTEL105101083 = Source{Key: "nptel-105101083", Authors: "NPTEL (National Programme on Technology Enhanced Learning)", Year: 2009,
+		Title: "Foundation design course 105101083, module 5: design of deep foundations, lecture 25: pile groups", Publication: "course slides, archive.nptel.ac.in (the slides read give no year; 2009 is our estimate)"}
 )

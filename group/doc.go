@@ -85,7 +85,7 @@
 // Vesic (1969): sg = s·√(Bg/D), s the single pile's settlement at the same
 // load per pile. Equivalent raft: the group's service load on a raft at
 // two-thirds of the embedded length below the head (Tomlinson & Woodward
-// 2008, §5.4), by one of two methods (RaftInput.Method; calc file:
+// 2008, Fig. 5.4, p. 243), by one of two methods (RaftInput.Method; calc file:
 // group.raft_method).
 //
 // two-to-one (the default): the raft is the group's plan Bg × Lg and the

@@ -105,7 +105,7 @@ type RaftInput struct {
 	// Stress is StressCentre ("" too), StressAverage or StressSpread
 	// (Tomlinson only).
 	Stress string
-	// DepthFactor μd (Fox's correction for the raft's depth) and
+	// DepthFactor μd (the correction for the raft's depth, Fox's) and
 	// GeologicalFactor μg multiply the consolidation (oedometer)
 	// settlement; 0 means 1, no reduction (the conservative default).
 	// μd is in (0, 1], μg in (0, MaxGeologicalFactor].
@@ -152,10 +152,11 @@ type Raft struct {
 
 // Sources of the equivalent raft.
 var (
-	raftDepthRef  = cite.Ref{Source: cite.TomlinsonWoodward2008, Where: "§5.4, Fig. 5.4 (p. 243): equivalent raft at two-thirds of the embedded length"}
+	raftDepthRef  = cite.Ref{Source: cite.TomlinsonWoodward2008, Where: "Fig. 5.4 (p. 243): equivalent raft at two-thirds of the embedded length"}
 	raftTwoToOne  = cite.Ref{Source: cite.Murthy2002, Where: "settlement of pile groups in clay, Fig. 15.31: load at 2/3 L on the group's area, spread 2 vertical : 1 horizontal (common practice)"}
-	raftTomlinson = cite.Ref{Source: cite.TomlinsonWoodward2008, Where: "§5.4, Fig. 5.4 (p. 243) and Example 5.1 (pp. 292-294): 1:4 spread from the pile heads, elastic stress below the raft, ρc = μd·μg·Σ mv·Δσ·H"}
+	raftTomlinson = cite.Ref{Source: cite.TomlinsonWoodward2008, Where: "Fig. 5.4 (p. 243) and Example 5.1 (pp. 292-294): 1:4 spread from the pile heads, elastic stress below the raft, ρc = μd·μg·Σ mv·Δσ·H"}
 	raftNewmark   = cite.Ref{Source: cite.Newmark1935, Where: "vertical stress below a corner of a uniformly loaded rectangle (Boussinesq)"}
+	raftSpreadRef = cite.Ref{Source: cite.NPTEL105101083, Where: "lecture 25, section 25.4: the mat widened 1H:4V, the 2:1 spread below it"}
 )
 
 // RaftSettlement returns the settlement of an equivalent raft in profile
@@ -228,7 +229,12 @@ func RaftSettlement(prof *profile.Profile, in RaftInput) (Raft, error) {
 		default:
 			return Raft{}, &FieldError{"raft_stress", fmt.Sprintf("%q: want %s, %s or %s", in.Stress, StressCentre, StressAverage, StressSpread)}
 		}
-		r.Refs = append(r.Refs, raftTomlinson, raftNewmark)
+		r.Refs = append(r.Refs, raftTomlinson)
+		if r.Stress == StressSpread {
+			r.Refs = append(r.Refs, raftSpreadRef)
+		} else {
+			r.Refs = append(r.Refs, raftNewmark)
+		}
 		ds = func(z units.Length) units.Stress {
 			if z < in.Depth {
 				return 0
