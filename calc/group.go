@@ -32,7 +32,13 @@ type Group struct {
 	ServiceLoad     Value  `yaml:"service_load,omitempty" json:"service_load,omitempty" q:"force,0," doc:"Load on the cap for the group's settlement; absent: the cap's characteristic compression (permanent + variable)."`
 	RaftDepth       Value  `yaml:"raft_depth,omitempty" json:"raft_depth,omitempty" q:"length,0," doc:"Depth of the equivalent raft below ground; absent: two-thirds of the embedded length below the top of the embedded pile."`
 	RaftBottom      Value  `yaml:"raft_bottom,omitempty" json:"raft_bottom,omitempty" q:"length,0," doc:"Deepest level counted below the equivalent raft; absent: the bottom of the ground profile."`
-	Allowable       Value  `yaml:"allowable,omitempty" json:"allowable,omitempty" q:"length,0," doc:"Allowable settlement of the group; absent: no serviceability check of the group."`
+	RaftMethod      string `yaml:"raft_method,omitempty" json:"raft_method,omitempty" doc:"Equivalent raft: two-to-one (default; the group's plan at the raft, load spread 2 vertical to 1 horizontal) or tomlinson (Tomlinson & Woodward: plan widened 1 in 4 from the pile heads, elastic stress below it)."`
+	RaftStress      string `yaml:"raft_stress,omitempty" json:"raft_stress,omitempty" doc:"Tomlinson raft only: the elastic stress below the raft's centre (centre, default, conservative), averaged over its plan (average, as Tomlinson & Woodward's Example 5.1), or the 2:1 spread below the widened raft (two-to-one)."`
+	RaftSpreadTop   Value  `yaml:"raft_spread_top,omitempty" json:"raft_spread_top,omitempty" q:"length,0," doc:"Tomlinson raft only: depth where the 1 in 4 spread starts (the top of the bearing stratum); absent: the top of the embedded pile."`
+	RaftDepthFactor Value  `yaml:"raft_depth_factor,omitempty" json:"raft_depth_factor,omitempty" q:"number,0,1" doc:"Depth factor μd (Fox) on the raft's consolidation settlement, more than 0 and at most 1; absent: 1, no reduction."`
+	// RaftGeologicalFactor μg multiplies the raft's consolidation settlement.
+	RaftGeologicalFactor Value `yaml:"raft_geological_factor,omitempty" json:"raft_geological_factor,omitempty" q:"number,0,1.2" doc:"Geological factor μg (Skempton & Bjerrum) on the raft's consolidation settlement, more than 0 and at most 1.2; absent: 1, no reduction."`
+	Allowable            Value `yaml:"allowable,omitempty" json:"allowable,omitempty" q:"length,0," doc:"Allowable settlement of the group; absent: no serviceability check of the group."`
 }
 
 // groupInputs is the group section resolved.
@@ -161,6 +167,35 @@ func (r *resolver) groupSection(f *File, in *Inputs) {
 		{"group.raft_bottom", g.RaftBottom, float64(o.RaftBottom)}} {
 		if c.v.IsSet() && !(c.x > 0) {
 			r.add(c.path, c.v.Line, "%q: want more than 0", c.v.Raw)
+		}
+	}
+	o.RaftMethod = strings.TrimSpace(g.RaftMethod)
+	o.RaftStress = strings.TrimSpace(g.RaftStress)
+	switch o.RaftMethod {
+	case "", group.RaftTwoToOne, group.RaftTomlinson:
+	default:
+		r.add("group.raft_method", 0, "%q: want %s or %s", o.RaftMethod, group.RaftTwoToOne, group.RaftTomlinson)
+	}
+	tomlinson := o.RaftMethod == group.RaftTomlinson
+	switch {
+	case o.RaftStress != "" && !tomlinson:
+		r.add("group.raft_stress", 0, "%q: only raft_method: %s reads it (the two-to-one spread has its own stress)", o.RaftStress, group.RaftTomlinson)
+	case o.RaftStress != "" && o.RaftStress != group.StressCentre && o.RaftStress != group.StressAverage && o.RaftStress != group.StressSpread:
+		r.add("group.raft_stress", 0, "%q: want %s, %s or %s", o.RaftStress, group.StressCentre, group.StressAverage, group.StressSpread)
+	}
+	o.RaftSpreadTop = r.length(g.RaftSpreadTop, "group.raft_spread_top")
+	if g.RaftSpreadTop.IsSet() && !tomlinson {
+		r.add("group.raft_spread_top", g.RaftSpreadTop.Line, "only raft_method: %s reads it", group.RaftTomlinson)
+	}
+	o.RaftDepthFactor = r.num(g.RaftDepthFactor, "group.raft_depth_factor", 0, 1)
+	o.RaftGeologicalFactor = r.num(g.RaftGeologicalFactor, "group.raft_geological_factor", 0, group.MaxGeologicalFactor)
+	for _, c := range []struct {
+		path string
+		v    Value
+		hi   float64
+	}{{"group.raft_depth_factor", g.RaftDepthFactor, 1}, {"group.raft_geological_factor", g.RaftGeologicalFactor, group.MaxGeologicalFactor}} {
+		if c.v.IsSet() && zeroValue(c.v) {
+			r.add(c.path, c.v.Line, "%q: want more than 0 and at most %g", c.v.Raw, c.hi)
 		}
 	}
 	if g.Allowable.IsSet() {

@@ -117,3 +117,56 @@ func TestGroupVesic(t *testing.T) {
 		t.Errorf("settlement pass %v with %v against %v", g.SettlementPass, worst, g.Allowable)
 	}
 }
+
+// TestGroupTomlinsonRaft: raft_method tomlinson widens the raft 1 in 4
+// from the top of the embedded pile (the cap at the ground, 0 m) to the
+// raft at 14.667 m: 5.2 + 14.667/2 by 3.2 + 14.667/2; the depth and
+// geological factors multiply the consolidation and nothing else; the
+// two-to-one raft of the same file is untouched by the new keys' absence.
+func TestGroupTomlinsonRaft(t *testing.T) {
+	base := string(readGroupExample(t))
+	plain, err := Parse([]byte(base))
+	if err != nil {
+		t.Fatal(err)
+	}
+	src := strings.Replace(base, "  allowable: 50 mm\n", "  allowable: 50 mm\n  raft_method: tomlinson\n  raft_stress: average\n  raft_depth_factor: 0.8\n  raft_geological_factor: 0.7\n", 1)
+	r, err := Parse([]byte(src))
+	if err != nil {
+		t.Fatal(err)
+	}
+	rf := r.Group.Raft
+	d := 22.0 * 2 / 3
+	if rf.Method != "tomlinson" || rf.Stress != "average" || math.Abs(float64(rf.Bg)-(5.2+d/2)) > 1e-9 || math.Abs(float64(rf.Lg)-(3.2+d/2)) > 1e-9 {
+		t.Errorf("raft %s/%s %v × %v, want tomlinson/average %.4f × %.4f", rf.Method, rf.Stress, rf.Bg, rf.Lg, 5.2+d/2, 3.2+d/2)
+	}
+	if math.Abs(float64(rf.Consolidation)-0.56*float64(rf.Oedometer)) > 1e-15 || rf.Total != rf.Elastic+rf.Consolidation {
+		t.Errorf("consolidation %v, oedometer %v, elastic %v, total %v", rf.Consolidation, rf.Oedometer, rf.Elastic, rf.Total)
+	}
+	p := plain.Group.Raft
+	if p.Method != "two-to-one" || p.DepthFactor != 1 || p.GeologicalFactor != 1 || p.Consolidation != p.Oedometer || p.Bg != plain.Group.Geometry.Bg {
+		t.Errorf("two-to-one raft %+v", p)
+	}
+}
+
+// TestGroupRaftKeysRefused: the raft's new keys out of range or on the
+// wrong method are problems naming the key and its line.
+func TestGroupRaftKeysRefused(t *testing.T) {
+	base := string(readGroupExample(t))
+	for _, c := range []struct{ add, path string }{
+		{"  raft_method: one-in-three\n", "group.raft_method"},
+		{"  raft_stress: average\n", "group.raft_stress"},
+		{"  raft_method: tomlinson\n  raft_stress: edge\n", "group.raft_stress"},
+		{"  raft_spread_top: 2 m\n", "group.raft_spread_top"},
+		{"  raft_depth_factor: 0\n", "group.raft_depth_factor"},
+		{"  raft_depth_factor: 1.1\n", "group.raft_depth_factor"},
+		{"  raft_geological_factor: 1.3\n", "group.raft_geological_factor"},
+		{"  raft_geological_factor: 0\n", "group.raft_geological_factor"},
+		{"  raft_method: tomlinson\n  raft_spread_top: 20 m\n", "group.raft_spread_top"},
+	} {
+		_, err := Parse([]byte(strings.Replace(base, "  allowable: 50 mm\n", "  allowable: 50 mm\n"+c.add, 1)))
+		var ps Problems
+		if !errors.As(err, &ps) || len(ps) == 0 || ps[0].Path != c.path || ps[0].Line == 0 {
+			t.Errorf("%q: %v, want a problem at %s with its line", c.add, err, c.path)
+		}
+	}
+}

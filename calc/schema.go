@@ -47,7 +47,9 @@ var enums = map[string][]string{
 	"form":     {"elastic", "empirical"},
 	"criteria": LoadTestCriteria,
 	// group
-	"efficiency": group.RuleIDs(),
+	"efficiency":  group.RuleIDs(),
+	"raft_method": {group.RaftTwoToOne, group.RaftTomlinson},
+	"raft_stress": {group.StressCentre, group.StressAverage, group.StressSpread},
 	// reliability
 	"distribution": {"normal", "lognormal", "truncated-normal", "uniform"},
 	"key":          append(slices.Clone(reliability.LayerKeys), reliability.GlobalKeys...),

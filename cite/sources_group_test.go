@@ -13,7 +13,7 @@ func TestGroupSourcesComplete(t *testing.T) {
 	for _, s := range shared {
 		seen[s.Key] = true
 	}
-	for _, s := range []Source{TerzaghiPeck1967, Vesic1969, GATE2023CE} {
+	for _, s := range []Source{TerzaghiPeck1967, Vesic1969, GATE2023CE, Murthy2002, Newmark1935, NPTEL105101083} {
 		if s.Key == "" || s.Authors == "" || s.Year == 0 || s.Title == "" || s.Publication == "" {
 			t.Errorf("source %+v is incomplete", s)
 		}

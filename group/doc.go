@@ -83,21 +83,56 @@
 // # Settlement
 //
 // Vesic (1969): sg = s·√(Bg/D), s the single pile's settlement at the same
-// load per pile. Equivalent raft (Tomlinson & Woodward 2008, §5.4): the
-// group's service load on a raft Bg × Lg at two-thirds of the embedded
-// length below the head, spread 2:1 below it,
+// load per pile. Equivalent raft: the group's service load on a raft at
+// two-thirds of the embedded length below the head (Tomlinson & Woodward
+// 2008, Fig. 5.4, p. 243), by one of two methods (RaftInput.Method; calc file:
+// group.raft_method).
+//
+// two-to-one (the default): the raft is the group's plan Bg × Lg and the
+// load spreads 2 vertical to 1 horizontal below it (common practice, as
+// Murthy 2002 draws it), the mean stress over the spread area:
 //
 //	Δσ(z) = Q/((Bg + z′)(Lg + z′)),  z′ = z − zr
 //
-// with the consolidation of layers with compressibility (Cc, Cr, e0 and
-// σ′p, or a constrained modulus; profile.Profile.Consolidation) and the
-// compression ∫ Δσ/E dz of layers that have only a Young's modulus (E
-// taken as a one-dimensional modulus, our simplification; it understates
-// the compression of a laterally confined layer). A layer with neither
-// adds nothing, with a warning. Where the piles pass through soft ground
-// into a firm stratum, Tomlinson & Woodward place the raft at two-thirds
-// of the length in the firm stratum: give the raft's depth (calc file:
-// group.raft_depth).
+// tomlinson: Tomlinson & Woodward's procedure (Fig. 5.4, p. 243;
+// Example 5.1, pp. 292-294). The raft is the group's plan widened by a
+// spread of 1 horizontal in 4 vertical from the pile heads (or the top of
+// the bearing stratum, group.raft_spread_top) down to the raft,
+//
+//	Br = Bg + (zr − zs)/2,  Lr = Lg + (zr − zs)/2,  q = Q/(Br·Lr)
+//
+// and the stress below it is Boussinesq's for a flexible loaded rectangle
+// in Newmark's closed form (NewmarkCorner), either below the raft's
+// centre (the default, the largest on any vertical: conservative) or
+// averaged over the raft's plan (group.raft_stress: average); or, as some
+// teaching texts combine them, the 2:1 spread below the widened raft
+// (raft_stress: two-to-one, Q/((Br + z′)(Lr + z′))). Tomlinson
+// & Woodward read their stress factors from a chart; the factors printed
+// in their Example 5.1 agree with the plan average within the chart's
+// reading (0.804, 0.513, 0.332, 0.223, 0.157 against 0.80, 0.51, 0.33,
+// 0.22, 0.15), not with the centre (0.97 at the first layer), so the
+// average reproduces their figures and the centre gives some 25 % more.
+//
+// Below either raft: the consolidation of layers with compressibility
+// (Cc, Cr, e0 and σ′p, or a constrained modulus M = 1/mv;
+// profile.Profile.Consolidation, which integrates over each layer where
+// the textbook sums mv·Δσ·H at mid-layer) and the compression ∫ Δσ/E dz of
+// layers that have only a Young's modulus (E taken as a one-dimensional
+// modulus, our simplification; it understates the compression of a
+// laterally confined layer). A layer with neither adds nothing, with a
+// warning. The consolidation (oedometer) settlement is multiplied by the
+// depth factor μd (the correction for a raft below the surface, which
+// Tomlinson & Woodward read from their Fig. 5.23; Fox's, from memory) and
+// the geological factor μg (about 0.5 for London Clay as their Example
+// 5.1 takes it; Skempton & Bjerrum's, from memory): both are the
+// engineer's inputs, μd in (0, 1] and μg in (0, 1.2] (the upper end of
+// Skempton & Bjerrum's range, for very sensitive clays, from memory), and
+// both default to 1, no reduction, the conservative choice.
+// The elastic compression is not multiplied. Where the piles pass through
+// soft ground into a firm stratum, Tomlinson & Woodward place the raft at
+// two-thirds of the length in the firm stratum and start the spread at
+// its top: give the raft's depth (group.raft_depth) and, for the
+// tomlinson method, the spread's top (group.raft_spread_top).
 //
 // These routines are aids for qualified engineers; check them against the
 // governing code, the site investigation and load tests.

@@ -46,7 +46,7 @@ func FuzzGroup(f *testing.F) {
 		r, err := group.Analyse(group.Input{Profile: prof, Pile: pile.Pile{Section: pile.Section{Shape: pile.Circle, Diameter: units.Length(d)},
 			Length: units.Length(length), Installation: pile.DrivenHigh}, Methods: pile.DefaultMethods(), Basis: pile.SafetyFactor{Global: 2.5},
 			Loads: pile.Loads{Compression: pile.Action{Permanent: 1e6}}, Layout: l,
-			Options: group.Options{Rule: ids[((rule%len(ids))+len(ids))%len(ids)], Value: 0.8}})
+			Options: raftOptions(group.Options{Rule: ids[((rule%len(ids))+len(ids))%len(ids)], Value: 0.8}, rule)})
 		if err != nil {
 			return
 		}
@@ -56,4 +56,16 @@ func FuzzGroup(f *testing.F) {
 			}
 		}
 	})
+}
+
+// raftOptions picks the equivalent raft's method and stress from the rule
+// drawn (every third a Tomlinson raft, averaged on odd draws).
+func raftOptions(o group.Options, rule int) group.Options {
+	if rule%3 == 0 {
+		o.RaftMethod = group.RaftTomlinson
+		if rule%2 != 0 {
+			o.RaftStress = group.StressAverage
+		}
+	}
+	return o
 }

@@ -28,6 +28,12 @@ type Options struct {
 	// length below the top of the embedded pile); RaftBottom is the
 	// deepest level counted (0: the profile's bottom).
 	RaftDepth, RaftBottom units.Length
+	// RaftMethod is RaftTwoToOne (default) or RaftTomlinson; RaftStress,
+	// RaftSpreadTop (0: the top of the embedded pile), RaftDepthFactor and
+	// RaftGeologicalFactor are as in RaftInput.
+	RaftMethod, RaftStress                string
+	RaftSpreadTop                         units.Length
+	RaftDepthFactor, RaftGeologicalFactor float64
 	// ServiceLoad is the load on the cap for settlement (0: the
 	// characteristic compression of Loads, permanent + variable).
 	ServiceLoad units.Force
@@ -227,7 +233,12 @@ func equivalentRaft(in Input, res *Result, top units.Length) error {
 	if depth == 0 {
 		depth = top + units.Length(RaftDepthRatio)*(in.Pile.Tip()-top)
 	}
-	r, err := RaftSettlement(in.Profile, RaftInput{Load: load, Bg: res.Geometry.Bg, Lg: res.Geometry.Lg, Depth: depth, Bottom: o.RaftBottom})
+	spreadTop := o.RaftSpreadTop
+	if spreadTop == 0 {
+		spreadTop = min(top, depth)
+	}
+	r, err := RaftSettlement(in.Profile, RaftInput{Load: load, Bg: res.Geometry.Bg, Lg: res.Geometry.Lg, Depth: depth, Bottom: o.RaftBottom,
+		Method: o.RaftMethod, SpreadTop: spreadTop, Stress: o.RaftStress, DepthFactor: o.RaftDepthFactor, GeologicalFactor: o.RaftGeologicalFactor})
 	if err != nil {
 		return err
 	}

@@ -1,7 +1,8 @@
 // Source of the numbers in this file: randomly drawn grids and grounds; the
 // properties (efficiency rises with spacing and stays at most 1; a 1 × 1
-// group is the single pile) are closed-form facts of the formulas, no
-// published value.
+// group is the single pile; the elastic stress below a loaded rectangle
+// lies between 0 and the load, is largest below the centre and falls with
+// depth) are closed-form facts of the formulas, no published value.
 
 package group_test
 
@@ -177,6 +178,31 @@ func TestPropGroupNeverAboveSum(t *testing.T) {
 		}
 		if r.Capacity != r.Reduced && (r.Block == nil || r.Capacity != r.Block.Capacity) {
 			t.Fatalf("capacity %v is neither mode", r.Capacity)
+		}
+	})
+}
+
+// TestPropRectangleStress: below any loaded rectangle, 0 < average ≤
+// centre ≤ q at any depth, and both fall as the depth grows.
+func TestPropRectangleStress(t *testing.T) {
+	rapid.Check(t, func(t *rapid.T) {
+		b := units.Length(rapid.Float64Range(0.5, 60).Draw(t, "b"))
+		l := units.Length(rapid.Float64Range(0.5, 60).Draw(t, "l"))
+		z1 := units.Length(rapid.Float64Range(0.01, 100).Draw(t, "z1"))
+		z2 := z1 * units.Length(rapid.Float64Range(1.01, 10).Draw(t, "z2/z1"))
+		const q = 100e3
+		c1, c2 := group.CentreStress(q, b, l, z1), group.CentreStress(q, b, l, z2)
+		a1, a2 := group.AverageStress(q, b, l, z1), group.AverageStress(q, b, l, z2)
+		for _, v := range []units.Stress{c1, c2, a1, a2} {
+			if !(v > 0) || v > q*(1+1e-12) {
+				t.Fatalf("stress %v outside (0, q]: centre %v, %v; average %v, %v", v, c1, c2, a1, a2)
+			}
+		}
+		if a1 > c1*(1+1e-9) || a2 > c2*(1+1e-9) {
+			t.Fatalf("average above the centre: %v > %v or %v > %v", a1, c1, a2, c2)
+		}
+		if c2 > c1 || a2 > a1*(1+1e-9) {
+			t.Fatalf("stress grew with depth: centre %v → %v, average %v → %v", c1, c2, a1, a2)
 		}
 	})
 }

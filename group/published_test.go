@@ -108,17 +108,20 @@ func tomlinsonEx51(t *testing.T) *profile.Profile {
 
 // TestRaftTomlinsonEx51: the equivalent raft of Example 5.1 is 13.8 m ×
 // 10.5 m at 9.3 m below ground under 174 kN/m². The source takes the
-// stress at the centre of each 4 m layer from its Figure 5.13 (the elastic
-// solution under the centre of the raft: 0.80, 0.51, 0.33, 0.22 and 0.15
-// × 174 kN/m² at 2, 6, 10, 14 and 18 m below it) and prints the oedometer
+// stress at the centre of each 4 m layer from its Figure 5.13 (an elastic
+// solution: 0.80, 0.51, 0.33, 0.22 and 0.15 × 174 kN/m² at 2, 6, 10, 14
+// and 18 m below the raft; these agree with the stress averaged over the
+// raft's plan, not with the stress under its centre, see
+// TestRaftTomlinsonEx51Whole) and prints the oedometer
 // settlement mv·Δσ·H of each layer, 50.1, 24.8, 11.5, 6.1 and 4.2 mm, in
 // all 96.7 mm (before its depth and geological factors).
 //
 // Part 1 runs qult's consolidation integral with the source's stresses:
 // the printed values to their rounding (±0.05 mm). Part 2 runs qult's
-// equivalent raft, whose stress is the 2:1 spread (Das's convention, the
-// average over the spread area, not the centre): its closed form worked by
-// hand below, and the difference from the source's figure logged.
+// equivalent raft by its default method, the 2:1 spread (common practice,
+// as Murthy 2002 draws it; the mean over the spread area): its closed
+// form worked by hand below, and the difference from the source's figure
+// logged.
 func TestRaftTomlinsonEx51(t *testing.T) {
 	p := tomlinsonEx51(t)
 	const q = 174e3 // Pa on the raft
@@ -169,6 +172,6 @@ func TestRaftTomlinsonEx51(t *testing.T) {
 		t.Fatal(err)
 	}
 	near(t, "2:1 raft (m)", float64(r.Consolidation), want, 1e-9)
-	t.Logf("2:1 spread %.1f mm against the source's centre stress %.1f mm (%+.1f %%)",
+	t.Logf("2:1 spread %.1f mm against the source's elastic stress %.1f mm (%+.1f %%)",
 		r.Consolidation.Millimetres(), 96.7, 100*(r.Consolidation.Millimetres()/96.7-1))
 }

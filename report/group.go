@@ -106,8 +106,22 @@ func secGroup(r *calc.Result, c conv) section {
 		st = append(st, item{"Vesic (1969), sg = s·√(Bg/D)", txt(fmt.Sprintf("%s × √(%s/%s) = %s", c.sms(v.Single), fmtNum(c.L(geo.Bg), sig), fmtNum(c.L(g.Width), sig), c.sms(v.Group))), ""})
 	}
 	if rf := g.Raft; rf != nil {
-		st = append(st, item{"Equivalent raft", txt(fmt.Sprintf("%s × %s at %s depth under %s (%s), spread 2:1, counted to %s: %s",
-			c.ls(rf.Bg), c.ls(rf.Lg), c.ls(rf.Depth), c.fs(rf.Load), c.ss(rf.Pressure), c.ls(rf.Bottom), c.sms(rf.Total))), ""})
+		if rf.Method == group.RaftTomlinson {
+			where := "elastic stress (Boussinesq, Newmark) below its centre"
+			switch rf.Stress {
+			case group.StressAverage:
+				where = "elastic stress (Boussinesq, Newmark) averaged over its plan"
+			case group.StressSpread:
+				where = "stress spread 2:1 below it"
+			}
+			st = append(st, item{"Equivalent raft (Tomlinson & Woodward)", txt(fmt.Sprintf("the group's %s × %s widened 1 in 4 from %s to the raft at %s depth: %s × %s under %s (%s); %s, counted to %s",
+				c.ls(rf.GroupBg), c.ls(rf.GroupLg), c.ls(rf.SpreadTop), c.ls(rf.Depth), c.ls(rf.Bg), c.ls(rf.Lg), c.fs(rf.Load), c.ss(rf.Pressure), where, c.ls(rf.Bottom))), ""})
+		} else {
+			st = append(st, item{"Equivalent raft", txt(fmt.Sprintf("%s × %s at %s depth under %s (%s), spread 2:1, counted to %s",
+				c.ls(rf.Bg), c.ls(rf.Lg), c.ls(rf.Depth), c.fs(rf.Load), c.ss(rf.Pressure), c.ls(rf.Bottom))), ""})
+		}
+		st = append(st, item{"Raft settlement", txt(fmt.Sprintf("elastic %s + consolidation %s × μd %s × μg %s = %s",
+			c.sms(rf.Elastic), c.sms(rf.Oedometer), fmtNum(rf.DepthFactor, 3), fmtNum(rf.GeologicalFactor, 3), c.sms(rf.Total))), ""})
 	}
 	switch {
 	case g.HasAllowable && g.Raft == nil && g.Vesic == nil:
@@ -123,7 +137,13 @@ func secGroup(r *calc.Result, c conv) section {
 		for _, l := range rf.Layers {
 			rt.rows = append(rt.rows, []cell{txt(l.Layer), num(c.L(l.Top)), num(c.L(l.Bottom)), txt(l.Kind), num(c.sm(l.Settlement))})
 		}
-		blocks = append(blocks, block{eqs: []string{"Δσ(z) = Q/((Bg + z′)(Lg + z′)), z′ below the raft; elastic: s = ∫ Δσ/E dz; consolidation: the layer's compressibility"}}, block{tbl: rt})
+		eq := "Δσ(z) = Q/((Bg + z′)(Lg + z′)), z′ below the raft; elastic: s = ∫ Δσ/E dz; consolidation: the layer's compressibility, times μd·μg"
+		if rf.Method == group.RaftTomlinson && rf.Stress == group.StressSpread {
+			eq = "Br = Bg + (zr − zs)/2, Lr = Lg + (zr − zs)/2; Δσ(z) = Q/((Br + z′)(Lr + z′)), z′ below the raft; elastic: s = ∫ Δσ/E dz; consolidation: the layer's compressibility (before μd·μg)"
+		} else if rf.Method == group.RaftTomlinson {
+			eq = "Br = Bg + (zr − zs)/2, Lr = Lg + (zr − zs)/2; Δσ(z) = q·4·I(Br/2, Lr/2, z′) at the centre, or q·(4/(Br·Lr))∬I dx dy averaged, I = Newmark's corner factor; elastic: s = ∫ Δσ/E dz; consolidation: the layer's compressibility (before μd·μg)"
+		}
+		blocks = append(blocks, block{eqs: []string{eq}}, block{tbl: rt})
 	}
 	return section{heading: headGroup, blocks: blocks}
 }
@@ -304,14 +324,24 @@ type jGroupCheck struct {
 }
 
 type jGroupRaft struct {
-	Depth         qty           `json:"depth"`
-	Bottom        qty           `json:"bottom"`
-	Load          qty           `json:"load"`
-	Pressure      qty           `json:"pressure"`
-	Elastic       qty           `json:"elastic"`
-	Consolidation qty           `json:"consolidation"`
-	Total         qty           `json:"total"`
-	Layers        []jGroupRaftL `json:"layers"`
+	Method           string        `json:"method"`
+	Stress           *string       `json:"stress"`
+	Depth            qty           `json:"depth"`
+	Bottom           qty           `json:"bottom"`
+	GroupWidth       qty           `json:"group_width"`
+	GroupLength      qty           `json:"group_length"`
+	SpreadTop        *qty          `json:"spread_top"`
+	Width            qty           `json:"width"`
+	Length           qty           `json:"length"`
+	Load             qty           `json:"load"`
+	Pressure         qty           `json:"pressure"`
+	Elastic          qty           `json:"elastic"`
+	Oedometer        qty           `json:"oedometer"`
+	DepthFactor      jnum          `json:"depth_factor"`
+	GeologicalFactor jnum          `json:"geological_factor"`
+	Consolidation    qty           `json:"consolidation"`
+	Total            qty           `json:"total"`
+	Layers           []jGroupRaftL `json:"layers"`
 }
 
 type jGroupRaftL struct {
@@ -382,8 +412,14 @@ func groupJSON(r *calc.Result, c jconv) *jGroup {
 		j.Vesic = &q
 	}
 	if rf := g.Raft; rf != nil {
-		jr := &jGroupRaft{Depth: c.L(rf.Depth), Bottom: c.L(rf.Bottom), Load: c.F(rf.Load), Pressure: c.S(rf.Pressure),
-			Elastic: c.sm(rf.Elastic), Consolidation: c.sm(rf.Consolidation), Total: c.sm(rf.Total), Layers: []jGroupRaftL{}}
+		jr := &jGroupRaft{Method: rf.Method, Depth: c.L(rf.Depth), Bottom: c.L(rf.Bottom), GroupWidth: c.L(rf.GroupBg), GroupLength: c.L(rf.GroupLg),
+			Width: c.L(rf.Bg), Length: c.L(rf.Lg), Load: c.F(rf.Load), Pressure: c.S(rf.Pressure), Elastic: c.sm(rf.Elastic),
+			Oedometer: c.sm(rf.Oedometer), DepthFactor: jnum(rf.DepthFactor), GeologicalFactor: jnum(rf.GeologicalFactor),
+			Consolidation: c.sm(rf.Consolidation), Total: c.sm(rf.Total), Layers: []jGroupRaftL{}}
+		if rf.Method == group.RaftTomlinson {
+			st, top := rf.Stress, c.L(rf.SpreadTop)
+			jr.Stress, jr.SpreadTop = &st, &top
+		}
 		for _, l := range rf.Layers {
 			jr.Layers = append(jr.Layers, jGroupRaftL{l.Layer, c.L(l.Top), c.L(l.Bottom), l.Kind, c.sm(l.Settlement)})
 		}

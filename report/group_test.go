@@ -77,3 +77,36 @@ func TestGroupFigureInside(t *testing.T) {
 		}
 	}
 }
+
+// TestGroupTomlinsonRaftShown: a Tomlinson raft is named with its spread,
+// stress and factors in text, and the JSON carries its method, plan and
+// factors; the two-to-one raft's JSON says so and has no stress.
+func TestGroupTomlinsonRaftShown(t *testing.T) {
+	data, err := os.ReadFile("../examples/footbridge-pier-group.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	src := strings.Replace(string(data), "  allowable: 50 mm\n", "  allowable: 50 mm\n  raft_method: tomlinson\n  raft_depth_factor: 0.8\n", 1)
+	r, err := calc.Parse([]byte(src))
+	if err != nil {
+		t.Fatal(err)
+	}
+	out := strings.Join(strings.Fields(render(t, r, Text, Options{View: ViewReport})), " ") // unwrapped
+	for _, want := range []string{"Equivalent raft (Tomlinson & Woodward)", "widened 1 in 4", "below its centre", "× μd 0.8 × μg 1 =", "Newmark's corner factor"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("text: no %q", want)
+		}
+	}
+	js := render(t, r, JSON, Options{View: ViewCheck})
+	for _, want := range []string{`"method": "tomlinson"`, `"stress": "centre"`, `"depth_factor": 0.8`, `"geological_factor": 1`, `"spread_top": {`, `"oedometer": {`} {
+		if !strings.Contains(js, want) {
+			t.Errorf("JSON: no %s", want)
+		}
+	}
+	js = render(t, groupExample(t), JSON, Options{View: ViewCheck})
+	for _, want := range []string{`"method": "two-to-one"`, `"stress": null`, `"spread_top": null`} {
+		if !strings.Contains(js, want) {
+			t.Errorf("two-to-one JSON: no %s", want)
+		}
+	}
+}

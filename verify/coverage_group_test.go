@@ -10,7 +10,6 @@ func init() {
 		"group.FeldEfficiency":         "Feld's rule of 1/16 per neighbour, from memory; checked by counting neighbours by hand (group tests)",
 		"group.GroupEfficiency":        "dispatches to the efficiency equations, each checked on its own",
 		"group.MinSpacingRule":         "AASHTO LRFD minimum spacing, from memory; a rule, not a computation",
-		"group.SpreadStress":           "Q/((B + z)(L + z)), checked through group.RaftSettlement",
 		"group.Analyse":                "combines the single pile (package pile), the efficiency, the block and the raft, each checked on its own; property: a 1 × 1 group is the single pile",
 		"group.Layout.Measure":         "geometry of the layout (outer faces, least spacing); checked by hand in the group tests",
 		"group.Grid":                   "builds a layout of rows × columns; its positions checked by hand in the group tests",

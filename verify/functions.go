@@ -949,7 +949,8 @@ func runAASHTO(preset func() pile.LRFD, inst pile.Installation) runner {
 // default 0) and the ground settles (a profile falling from 0.1 m at the
 // head to 0 at the tip), so that the neutral plane is the force
 // equilibrium; or, with tip_capacity, the tip force is found by settlement
-// compatibility on a rigid pile (see below).
+// compatibility on a rigid pile (see below). With piles (n, default 1) it
+// also gives group_drag_load = n·Qn.
 func runDowndrag(a *args) (values, error) {
 	L := a.qty("length", units.DimLength)
 	d := a.qty("diameter", units.DimLength)
@@ -986,8 +987,12 @@ func runDowndrag(a *args) (values, error) {
 		dd.Ground = []settle.SettlementPoint{{Depth: 0, Settlement: units.Length(a.qty("ground_settlement_head", units.DimLength))},
 			{Depth: units.Length(a.qty("ground_settlement_depth", units.DimLength)), Settlement: 0}}
 	}
+	piles := a.optNum("piles", 1) // n·Qn for a group of n piles, each with the same drag
 	if err := a.done(); err != nil {
 		return nil, err
+	}
+	if !(piles >= 1) {
+		return nil, fmt.Errorf("settle: piles %g: want 1 or more", piles)
 	}
 	r, err := dd.Solve()
 	if err != nil {
@@ -995,5 +1000,5 @@ func runDowndrag(a *args) (values, error) {
 	}
 	return values{"neutral_plane": length(r.NeutralPlane), "neutral_depth_below_fill": length(r.NeutralPlane - units.Length(hf)),
 		"drag_load": force(r.DragLoad), "max_force": force(r.MaxForce), "tip_force": force(r.TipForce),
-		"ground_settlement_at_np": length(r.GroundAtNP)}, nil
+		"ground_settlement_at_np": length(r.GroundAtNP), "group_drag_load": force(units.Force(piles) * r.DragLoad)}, nil
 }

@@ -2,6 +2,7 @@ package verify
 
 import (
 	"errors"
+	"strconv"
 
 	"github.com/qultgeo/qult/group"
 	"github.com/qultgeo/qult/profile"
@@ -17,6 +18,10 @@ func init() {
 	runners["group.VesicSettlement"] = runVesicGroup
 	runners["group.RaftSettlement"] = runRaft
 	runners["group.PracticeEfficiency"] = runPracticeEfficiency
+	runners["group.NewmarkCorner"] = runNewmarkCorner
+	runners["group.SpreadStress"] = runSpreadStress
+	runners["group.CentreStress"] = runRectStress(group.CentreStress)
+	runners["group.AverageStress"] = runRectStress(group.AverageStress)
 }
 
 func runConverseLabarre(a *args) (values, error) {
@@ -100,18 +105,40 @@ func runVesicGroup(a *args) (values, error) {
 }
 
 // runRaft: an equivalent raft in one elastic layer (Young's modulus,
-// unit weight, thickness, dry).
+// unit weight, thickness, dry), or, with mv (a list of coefficients of
+// volume compressibility in m²/MN, one per layer of layer_thickness below
+// the raft), in those layers under an incompressible cover down to the
+// raft (M = 1/mv). method, stress, spread_top, depth_factor and
+// geological_factor as group.RaftInput takes them.
 func runRaft(a *args) (values, error) {
-	e := units.Stress(a.qty("modulus", units.DimStress))
-	h := units.Length(a.qty("thickness", units.DimLength))
 	in := group.RaftInput{Load: units.Force(a.qty("load", units.DimForce)), Bg: units.Length(a.qty("bg", units.DimLength)),
 		Lg: units.Length(a.qty("lg", units.DimLength)), Depth: units.Length(a.qty("depth", units.DimLength)),
-		Bottom: units.Length(a.optQty("bottom", units.DimLength))}
+		Bottom: units.Length(a.optQty("bottom", units.DimLength)), Method: a.optStr("method", ""), Stress: a.optStr("stress", ""),
+		SpreadTop: units.Length(a.optQty("spread_top", units.DimLength)), DepthFactor: a.optNum("depth_factor", 0),
+		GeologicalFactor: a.optNum("geological_factor", 0)}
+	var spec profile.Spec
+	if a.has("mv") {
+		h := units.Length(a.qty("layer_thickness", units.DimLength))
+		spec.Layers = []profile.LayerSpec{{Name: "cover", Thickness: in.Depth, Drainage: profile.Undrained, Su: 100 * units.Kilopascal,
+			SaturatedUnitWeight: 20 * units.KilonewtonPerCubicMetre}}
+		for i, v := range a.list("mv") {
+			mv := a.toNum("mv", v)
+			if !(mv > 0) {
+				return nil, errBad("mv must be positive")
+			}
+			spec.Layers = append(spec.Layers, profile.LayerSpec{Name: "layer " + strconv.Itoa(i+1), Thickness: h, Drainage: profile.Undrained,
+				Su: 100 * units.Kilopascal, SaturatedUnitWeight: 20 * units.KilonewtonPerCubicMetre, M: units.Stress(1e6 / mv)})
+		}
+	} else {
+		e := units.Stress(a.qty("modulus", units.DimStress))
+		h := units.Length(a.qty("thickness", units.DimLength))
+		spec = profile.Spec{NoWater: true, Layers: []profile.LayerSpec{{Name: "soil", Thickness: h, Drainage: profile.Drained,
+			Phi: 30 * units.Degree, UnitWeight: 19 * units.KilonewtonPerCubicMetre, E: e}}}
+	}
 	if err := a.done(); err != nil {
 		return nil, err
 	}
-	p, err := profile.New(profile.Spec{NoWater: true, Layers: []profile.LayerSpec{{Name: "soil", Thickness: h, Drainage: profile.Drained,
-		Phi: 30 * units.Degree, UnitWeight: 19 * units.KilonewtonPerCubicMetre, E: e}}})
+	p, err := profile.New(spec)
 	if err != nil {
 		return nil, err
 	}
@@ -119,7 +146,52 @@ func runRaft(a *args) (values, error) {
 	if err != nil {
 		return nil, err
 	}
-	return values{"settlement": length(r.Total)}, nil
+	return values{"settlement": length(r.Total), "oedometer": length(r.Oedometer), "consolidation": length(r.Consolidation),
+		"width": length(r.Bg), "length": length(r.Lg)}, nil
+}
+
+// runSpreadStress: the 2:1 stress at depth below a raft carrying a load.
+func runSpreadStress(a *args) (values, error) {
+	q := units.Force(a.qty("load", units.DimForce))
+	b := units.Length(a.qty("width", units.DimLength))
+	l := units.Length(a.qty("length", units.DimLength))
+	z := units.Length(a.qty("depth", units.DimLength))
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	if !(b > 0) || !(l > 0) || !(z >= 0) || !(q >= 0) {
+		return nil, errBad("width and length must be positive, depth and load zero or more")
+	}
+	return values{"stress": stress(group.SpreadStress(q, b, l, z))}, nil
+}
+
+// runNewmarkCorner: Newmark's corner factor at m = b/z and n = l/z.
+func runNewmarkCorner(a *args) (values, error) {
+	mm, n := a.num("m"), a.num("n")
+	if err := a.done(); err != nil {
+		return nil, err
+	}
+	if !(mm > 0) || !(n > 0) {
+		return nil, errBad("m and n must be positive")
+	}
+	return values{"factor": num(group.NewmarkCorner(units.Length(mm), units.Length(n), units.Metre))}, nil
+}
+
+// runRectStress: the stress factor Δσ/q at a depth below the centre of a
+// loaded rectangle, or averaged over its plan (group.AverageStress).
+func runRectStress(f func(units.Stress, units.Length, units.Length, units.Length) units.Stress) runner {
+	return func(a *args) (values, error) {
+		b := units.Length(a.qty("width", units.DimLength))
+		l := units.Length(a.qty("length", units.DimLength))
+		z := units.Length(a.qty("depth", units.DimLength))
+		if err := a.done(); err != nil {
+			return nil, err
+		}
+		if !(b > 0) || !(l > 0) || !(z >= 0) {
+			return nil, errBad("width and length must be positive, depth zero or more")
+		}
+		return values{"factor": num(float64(f(1, b, l, z)))}, nil
+	}
 }
 
 func errBad(msg string) error { return errors.New("group: " + msg) }
