@@ -78,7 +78,10 @@
 // below the ground surface by z/(8B) (depth below the ground, wherever the
 // pile's head is). Not provided: the CPT methods for driven piles in sand
 // of API RP 2GEO (UWA-05, Fugro-05, ICP-05, NGI-05), whose published text
-// could not be read.
+// could not be read. Schneider, Xu & Lehane (2008, J. Geotech. Geoenviron.
+// Eng. 134(9), abstract p. 1227) say the four are presented in the
+// commentary of the 22nd edition of the API recommendations; their
+// equations are not restated here from memory.
 //
 // Correlations are empirical: results are for qualified engineers, to be
 // checked against local codes, laboratory testing, site-specific
