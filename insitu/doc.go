@@ -74,6 +74,11 @@
 // layer (pile.ConeTip, pile.ConeShaft), the shaft integral exactly over
 // the readings.
 //
+// The schmertmann tip rule's minimum-path averaging is checked against
+// the Dutch method as printed in ENV 1997-3 Annex B.4(3) and Tomlinson &
+// Woodward (2008, Eq. 4.19); see SchmertmannTip for what was recalled and
+// for a caution where qc drops sharply below the tip.
+//
 // Schmertmann's sand rule weights the sleeve friction over the top 8B
 // below the ground surface by z/(8B) (depth below the ground, wherever the
 // pile's head is). Not provided: the CPT methods for driven piles in sand
