@@ -434,6 +434,16 @@ func (m LCPCShaft) Integral(c *Cone, top, bottom, _ units.Length) (float64, bool
 // ends (linear between readings) by the trapezoidal rule; y runs over
 // 0.7, 4 and every reading between. Limit, the published cap on qp, is
 // given by the engineer (the report could not be read here).
+//
+// The averaging is the Dutch method's, as read in ENV 1997-3 Annex B.4(3)
+// (the zones, the critical depth at the least resistance, the minimum path
+// up from it, the path above starting from the least value below) and in
+// Tomlinson & Woodward (2008, Eq. 4.19, p. 178: qp = (qc1 + qc2)/2, and
+// qc1 over 0.7B alone where qc rises below the tip). The split qc1 =
+// (qcI + qcII)/2 is recalled, not read. Caution: where qc drops sharply
+// between 0.7B and 4B below the tip, Tomlinson & Woodward take the least
+// value in that range as qc1, which is lower than (qcI + qcII)/2; an
+// engineer who follows that reading should check the tip by hand.
 type SchmertmannTip struct {
 	Limit units.Stress
 }
@@ -456,6 +466,8 @@ func (SchmertmannTip) Refs() []cite.Ref {
 	return []cite.Ref{
 		{Source: cite.Schmertmann1978, Where: "pile tip from qc1 and qc2 (from memory)"},
 		{Source: cite.Nottingham1975, Where: "averaging of qc about the tip (from memory)"},
+		{Source: cite.ENV1997Part3, Where: "Annex B.4(3), the averaging zones and the minimum path (read in a transcription)"},
+		{Source: cite.TomlinsonWoodward2008, Where: "Eq. 4.19, qp = (qc1 + qc2)/2, p. 178"},
 	}
 }
 

@@ -74,11 +74,19 @@
 // layer (pile.ConeTip, pile.ConeShaft), the shaft integral exactly over
 // the readings.
 //
+// The schmertmann tip rule's minimum-path averaging is checked against
+// the Dutch method as printed in ENV 1997-3 Annex B.4(3) and Tomlinson &
+// Woodward (2008, Eq. 4.19); see SchmertmannTip for what was recalled and
+// for a caution where qc drops sharply below the tip.
+//
 // Schmertmann's sand rule weights the sleeve friction over the top 8B
 // below the ground surface by z/(8B) (depth below the ground, wherever the
 // pile's head is). Not provided: the CPT methods for driven piles in sand
 // of API RP 2GEO (UWA-05, Fugro-05, ICP-05, NGI-05), whose published text
-// could not be read.
+// could not be read. Schneider, Xu & Lehane (2008, J. Geotech. Geoenviron.
+// Eng. 134(9), abstract p. 1227) say the four are presented in the
+// commentary of the 22nd edition of the API recommendations; their
+// equations are not restated here from memory.
 //
 // Correlations are empirical: results are for qualified engineers, to be
 // checked against local codes, laboratory testing, site-specific
