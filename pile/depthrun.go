@@ -482,11 +482,12 @@ func (a *Analysis) spanSetup(c *spanConst, s *sums, k int, openFrom, from, step,
 // closed form from openFrom, the tip model, the rules of the tip zone that
 // sg says can apply, and the assembly, as runSpan computes them.
 func (c *spanConst) spanRows(rows []Capacity, i int, weight, prev float64, sg spanSeg) (float64, float64) {
+	if w, z, ok := c.spanQuick(rows, i, weight, prev, sg); ok {
+		return w, z
+	}
 	from, step, to := c.from, c.step, c.to
 	ivTop, openFrom := c.ivTop, c.openFrom
 	flags0 := c.flags0 | sg.near
-	// Each row in two steps, a and b below, so that each holds few values
-	// at a time; the row's fields carry q, qp and the flags between them.
 	for j := range rows {
 		z := from + float64(i+j)*step
 		if z > to {
@@ -626,6 +627,140 @@ func (c *spanConst) spanRows(rows []Capacity, i int, weight, prev float64, sg sp
 		r.Plugged, r.Flags = true, fl
 	}
 	return weight, prev
+}
+
+// spanQuick is spanRows for the common case, where one loop suffices and
+// the assembly can be multiplied out: β, or α with su constant in the
+// layer (g = g0 + dg·(z − ivTop), with or without a cap); a tip model with
+// a fixed value or with factors and nc·cv the same at every depth, and no
+// limit that depends on the depth; the pile's weight ignored in
+// compression (Methods.SelfWeight). The depth, the shaft integral, the
+// unit tip resistance and every flag are computed by the same operations
+// as in spanRows, so they are the same to the bit; the forces are
+// assembled from products worked out once per interval (aOuter·uplift0,
+// aOuter·t, …), which moves them by a few units in the last place from
+// assemble's order (the oracle comparison holds every field to 1e-12).
+// ok is false, and nothing done, where the case is not the common one.
+func (c *spanConst) spanQuick(rows []Capacity, i int, weight, prev float64, sg spanSeg) (w, zPrev float64, ok bool) {
+	if c.net || c.gross || c.kind == kindAlphaAPI || c.kind == kindAlpha && c.suVaries {
+		return weight, prev, false
+	}
+	// The tip model: qp = ncv + k·σ′v·Nq, or ncv with k = 0 for a fixed
+	// value (ncv + 0 is ncv itself), with its limit applied once.
+	ncv, kq, nq := 0.0, c.kq, c.nq
+	tipFlag := Flags(0)
+	switch {
+	case c.fixed != 0:
+		ncv, kq = c.fixed, 0
+		if c.limit > 0 && ncv > c.limit {
+			ncv, tipFlag = c.limit, TipLimit
+		}
+	case c.limit <= 0 && !(c.useSu && c.tmSu && c.suVaries):
+		cv := c.cc
+		if c.useSu {
+			cv = 0
+			if c.tmSu {
+				cv = c.su0
+			}
+		}
+		ncv = c.nc * cv
+	default:
+		return weight, prev, false
+	}
+	from, step, to := c.from, c.step, c.to
+	ivTop, openFrom := c.ivTop, c.openFrom
+	flags0 := c.flags0 | sg.near | tipFlag
+	// The shaft: g, the integrand's variable (σ′v for β, su for α), is
+	// g0 + dg·(z − ivTop); for α with su constant in the layer, dg is 0 and
+	// g0 + 0 is su itself. Without a cap, capv is +Inf: f ≤ capv holds.
+	f0, coef, capv := c.f0, c.coef, c.capv
+	g0, dg := c.sS0, c.sDs
+	if c.kind == kindAlpha {
+		g0, dg = c.su0, 0
+	}
+	if capv <= 0 {
+		capv = math.Inf(1)
+	}
+	eE0, eDe := c.eE0, c.eDe
+	rules := sg.early || sg.weak || sg.below
+	// The assembly, multiplied out: with S = q (the shaft integral from
+	// openFrom) and qp,
+	//	Shaft             = (outer0 + S)·aOuter
+	//	TensionShaft      = aOuter·uplift0 + aOuter·t·S
+	//	DesignCompression = aOuter·design0 + fTip·aGross·qp + aOuter·fShaft·S
+	//	DesignTension     = aOuter·tension0 + aOuter·fTen·S + upW·W′
+	aGross, aOuter, outer0 := c.aGross, c.aOuter, c.outer0
+	t0, tq := aOuter*c.uplift0, aOuter*c.t
+	d0, dp, dq := aOuter*c.design0, c.fTip*aGross, aOuter*c.fShaft
+	e0, eq, upW := aOuter*c.tension0, aOuter*c.fTen, c.upW
+	weighted := c.weighted
+	for j := range rows {
+		z := from + float64(i+j)*step
+		if z > to { // min(z, to): z is never NaN
+			z = to
+		}
+		if weighted {
+			weight = addWeight(weight, c.wDry, c.wWet, c.zw, prev, z)
+		}
+		prev = z
+		dz := z - ivTop
+		fl := flags0
+		// The shaft, as closedIntegral.
+		var q float64
+		if f1 := coef * (g0 + dg*dz); f0 <= capv && f1 <= capv {
+			q = (f0 + f1) / 2 * (z - openFrom)
+		} else {
+			q = cappedIntegral(f0, f1, c.capv, z-openFrom)
+			fl |= ShaftLimit
+		}
+		// The tip model.
+		qp := ncv + kq*(eE0+eDe*dz)*nq
+		if rules {
+			// baseRules, decided in advance.
+			if sg.early {
+				lb := z - c.zoneTop
+				switch {
+				case c.ramp && qp > 0:
+					if c.noEmbed {
+						fl |= EmbedmentOff
+					} else {
+						qp *= lb * c.invZone
+						fl |= EmbedmentRamp
+					}
+				case c.layered:
+					switch {
+					case !c.layeredOn:
+						if c.upErr || c.upBase < qp {
+							fl |= LayeredTipOff
+						}
+					case c.upBase < qp: // upErr with the rule on is not fast
+						qp = c.upBase + (qp-c.upBase)*lb*c.inv10d
+						fl |= LayeredTip
+					}
+				}
+			}
+			// weakRule with its one candidate, the next layer.
+			if sg.weak && c.nextEff < qp {
+				if c.noWeak {
+					fl |= WeakLayerOff
+				} else if v := c.nextEff + (qp-c.nextEff)*(c.nextTop-z)*c.invWeak; v < qp {
+					qp = v
+					fl |= WeakLayerReduced
+				}
+			}
+			if sg.below && (c.nextWeaker || c.nextQp < qp) {
+				fl |= WeakBelow
+			}
+		}
+		tip, shf := units.Force(qp*aGross), units.Force((outer0+q)*aOuter)
+		tenShaft, w := units.Force(t0+tq*q), units.Force(weight)
+		r := &rows[j]
+		r.TipDepth, r.UnitTip, r.Tip, r.Shaft, r.Weight = units.Length(z), units.Stress(qp), tip, shf, w
+		r.Compression, r.TensionShaft, r.Tension = tip+shf, tenShaft, tenShaft+w
+		r.DesignCompression, r.DesignTension = units.Force(d0+dp*qp+dq*q), units.Force(e0+eq*q+upW*weight)
+		r.Plugged, r.Flags = true, fl
+	}
+	return weight, prev, true
 }
 
 // addWeight adds to w the pile's weight from z0 to z1 as pileWeight
