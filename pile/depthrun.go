@@ -645,13 +645,13 @@ func (c *spanConst) spanQuick(rows []Capacity, i int, weight, prev float64, sg s
 	if c.net || c.gross || c.kind == kindAlphaAPI || c.kind == kindAlpha && c.suVaries {
 		return weight, prev, false
 	}
-	// The tip model: qp = ncv + k·σ′v·Nq, or ncv with k = 0 for a fixed
-	// value (ncv + 0 is ncv itself), with its limit applied once.
+	// The tip model: qp = ncv + k·σ′v·Nq, or ncv with k = Nq = 0 for a
+	// fixed value (ncv + 0 is ncv itself), with its limit applied once.
 	ncv, kq, nq := 0.0, c.kq, c.nq
 	tipFlag := Flags(0)
 	switch {
 	case c.fixed != 0:
-		ncv, kq = c.fixed, 0
+		ncv, kq, nq = c.fixed, 0, 0
 		if c.limit > 0 && ncv > c.limit {
 			ncv, tipFlag = c.limit, TipLimit
 		}
