@@ -245,8 +245,10 @@ func (a *Analysis) runSpan(s *sums, k int, openFrom, prev, from, step, to float6
 // constants of the interval are read once (spanSetup). Values are computed
 // by the same operations as in runSpan, except the API α's closed form and
 // the rules of the tip zone, which multiply by reciprocals worked out once
-// (see alphaAPIConst and spanConst): a few units in the last place. It
-// returns the first depth it did not take, prev and dst.
+// (see alphaAPIConst and spanConst), and the forces of the common case,
+// assembled from products worked out once (see spanQuick): a few units in
+// the last place. It returns the first depth it did not take, prev and
+// dst.
 func (a *Analysis) spanFast(s *sums, k int, openFrom, prev, from, step, to float64, i, n int, dst []Capacity) (int, float64, []Capacity) {
 	if cap(dst)-len(dst) < n-i {
 		dst = slices.Grow(dst, n-i)
@@ -480,7 +482,10 @@ func (a *Analysis) spanSetup(c *spanConst, s *sums, k int, openFrom, from, step,
 // with the pile's weight w to prev before the first; it returns the weight
 // and prev after the last. For each depth: the pile's weight, the shaft's
 // closed form from openFrom, the tip model, the rules of the tip zone that
-// sg says can apply, and the assembly, as runSpan computes them.
+// sg says can apply, and the assembly, as runSpan computes them. The
+// common case goes to spanQuick's leaner loop; this one takes the others
+// (the API α, su varying in the layer, a tip limit that depends on the
+// depth, the pile's weight in compression).
 func (c *spanConst) spanRows(rows []Capacity, i int, weight, prev float64, sg spanSeg) (float64, float64) {
 	if w, z, ok := c.spanQuick(rows, i, weight, prev, sg); ok {
 		return w, z
