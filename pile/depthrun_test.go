@@ -80,3 +80,30 @@ func TestWithDepthTinyStepMatchesOracle(t *testing.T) {
 		withDepthAgainstOracle(t, a, 10*m, 10*m+200*step, step)
 	}
 }
+
+// TestWithDepthFlagsOnlyMatchesOracle: the rules of the tip zone switched
+// off, so that they only add flags, some of which change along a layer (the
+// lower sand's qp passes the upper one's; the clay below is weaker), and a
+// shaft whose cap is reached inside a layer; weightless and with weight.
+func TestWithDepthFlagsOnlyMatchesOracle(t *testing.T) {
+	prof := twoSandsOverClay(t)
+	capped := shaft.Capped{Method: shaft.BetaGiven{Beta: 0.8}, Limit: shaft.LimitGiven{Fs: 40 * kPa}}
+	for _, gp := range []units.UnitWeight{0, 24 * kNm} {
+		p := Pile{Section: Section{Shape: Circle, Diameter: 0.5 * m}, Length: 24 * m, Installation: DrivenHigh, UnitWeight: gp}
+		for _, meth := range []Methods{
+			{TipDrained: bearing.GivenNq{Nq: 40}, ShaftDrained: shaft.BetaGiven{Beta: 0.5}, NoEmbedment: true, NoWeakLayer: true},
+			{TipDrained: bearing.GivenNq{Nq: 40}, ShaftDrained: capped, NoEmbedment: true, NoWeakLayer: true},
+			{TipDrained: bearing.GivenNq{Nq: 40}, ShaftDrained: capped, LayeredTip: true},
+			// The lower sand's qp passes the upper one's near 11 m, inside
+			// the zone of the layered rule (switched off: a flag only).
+			{Layers: []LayerMethods{{Tip: bearing.GivenNq{Nq: 60}, Shaft: shaft.BetaGiven{Beta: 0.5}},
+				{Tip: bearing.GivenNq{Nq: 45}, Shaft: shaft.BetaGiven{Beta: 0.6}}, {}}, NoEmbedment: true, NoWeakLayer: true},
+		} {
+			a, err := NewAnalysis(prof, p, meth, nil)
+			if err != nil {
+				t.Fatal(err)
+			}
+			withDepthAgainstOracle(t, a, 0.05*m, 24*m, 0.05*m)
+		}
+	}
+}
