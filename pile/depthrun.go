@@ -234,140 +234,669 @@ func (a *Analysis) runSpan(s *sums, k int, openFrom, prev, from, step, to float6
 	return i, prev, dst, nil
 }
 
-// spanFast is runSpan for a fast interval (depthPlan.fast), in three
-// passes over the rows, each with few values live so that they stay in
-// registers and no pass calls a function: spanShaft takes the depths
-// inside the interval and stores with each its depth, the pile's weight
-// and the shaft's closed form from openFrom (kept in the row's Shaft field
-// until the last pass); spanTip adds the unit tip resistance (the tip
-// model and the rules of the tip zone, whose choices depthPlan made once;
-// kept in UnitTip); spanAssemble assembles the row as assemble does.
-// Values are computed by the same operations as in runSpan, except the API
-// α's closed form and the rules of the tip zone, which multiply by
-// reciprocals worked out once (see alphaAPIConst and spanTip): a few units
-// in the last place. It returns the first depth it did not take, prev and
+// spanFast is runSpan for a fast interval (depthPlan.fast): one pass over
+// the rows, with every choice that does not change from one depth to the
+// next made before it. It counts the depths that lie inside the interval
+// (spanLen), cuts them into stretches over which no test of the tip-zone
+// rules that depends on the depth alone changes its answer (spanCuts),
+// and hands each stretch to spanRows, whose loop then holds only the
+// arithmetic of the shaft, the tip and the assembly and the tests that
+// depend on the values (qp against the neighbouring layers' values). The
+// constants of the interval are read once (spanSetup). Values are computed
+// by the same operations as in runSpan, except the API α's closed form and
+// the rules of the tip zone, which multiply by reciprocals worked out once
+// (see alphaAPIConst and spanConst), and the forces of the common case,
+// assembled from products worked out once (see spanQuick): a few units in
+// the last place. It returns the first depth it did not take, prev and
 // dst.
 func (a *Analysis) spanFast(s *sums, k int, openFrom, prev, from, step, to float64, i, n int, dst []Capacity) (int, float64, []Capacity) {
 	if cap(dst)-len(dst) < n-i {
 		dst = slices.Grow(dst, n-i)
 	}
+	m := spanLen(from, step, to, prev, a.iv[k].bot, i, n)
+	if m == 0 {
+		return i, prev, dst
+	}
 	base := len(dst)
-	rows := dst[base : base+n-i]
-	m, weight := a.spanShaft(k, openFrom, prev, from, step, to, i, s.weight, rows)
-	rows = rows[:m]
-	if m > 0 {
-		prev = float64(rows[m-1].TipDepth)
+	rows := dst[base : base+m]
+	var c spanConst
+	a.spanSetup(&c, s, k, openFrom, from, step, to)
+	at, seg := c.spanCuts(i, m)
+	weight := s.weight
+	for q := range seg {
+		if j0, j1 := at[q], at[q+1]; j0 < j1 {
+			weight, prev = c.spanRows(rows[j0:j1], i+j0, weight, prev, seg[q])
+		}
 	}
 	s.weight = weight
-	a.spanTip(s, k, rows)
 	return i + m, prev, dst[:base+m]
 }
 
-// spanShaft is spanFast's first pass: from depth i, while the depth lies
-// inside interval k, it stores in rows the depth, the pile's weight (w0 to
-// prev before), the shaft integral from openFrom in Shaft and the flag of
-// the closed form in Flags. It returns the number of rows and the weight.
-func (a *Analysis) spanShaft(k int, openFrom, prev, from, step, to float64, i int, w0 float64, rows []Capacity) (int, float64) {
+// spanAt is the depth of row i of the grid, as withDepth makes it.
+func spanAt(from, step, to float64, i int) float64 {
+	z := from + float64(i)*step
+	if z > to { // min(z, to): z is never NaN
+		z = to
+	}
+	return z
+}
+
+// spanLen returns how many of the depths i, i+1, … (below n) follow one
+// another inside the interval: each below ivBot and above the one before
+// (prev for the first), where runSpan stops at the first that is not.
+// When the step is more than a few units in the last place of the depths,
+// the depths of the grid increase strictly (only the last, i = n−1, can be
+// clamped to `to`, and it still lies above the one before), so only the
+// test against ivBot can end the stretch, and it is monotone: a binary
+// search finds the end. Otherwise the depths are walked one by one.
+func spanLen(from, step, to, prev, ivBot float64, i, n int) int {
+	m := n - i
+	if m <= 0 {
+		return 0
+	}
+	if z := spanAt(from, step, to, i); !(z > prev && z < ivBot) {
+		return 0
+	}
+	if step > 1e-9*max(math.Abs(from), math.Abs(to)) {
+		return sort.Search(m, func(j int) bool { return !(spanAt(from, step, to, i+j) < ivBot) })
+	}
+	j := 1
+	for ; j < m; j++ {
+		z, zp := spanAt(from, step, to, i+j), spanAt(from, step, to, i+j-1)
+		if !(z > zp && z < ivBot) {
+			break
+		}
+	}
+	return j
+}
+
+// spanSeg is what spanRows holds fixed over a stretch of rows: which tests
+// of the tip-zone rules that depend on the depth alone are true there.
+type spanSeg struct {
+	early bool  // z − zoneTop < zoneLen: the embedment ramp or the layered rule can apply
+	weak  bool  // nextTop < z + 10·D: the weak-layer rule's one candidate lies within reach
+	below bool  // nextTop < z + weakBelow·D: the check of a weaker layer below applies
+	near  Flags // TipNearBoundary where the tip lies within D of a boundary of its layer
+}
+
+// spanCuts cuts the rows i to i+m−1 into stretches: rows at[q] to at[q+1]
+// (counted from the span's first) share seg[q]; some may be empty. Five
+// tests each change their answer at most once along the span, so there are
+// at most six stretches. Each test is the one
+// that spanRows would make at every row, and each is monotone in the depth
+// (the depths increase; z − c, c − z and z + c are monotone in z when
+// rounded), so it is true over a prefix of the rows or over a suffix; the
+// row where it changes is found by binary search on the rows' own depths,
+// after a look at both ends (most tests hold or fail over the whole span).
+func (c *spanConst) spanCuts(i, m int) (at [7]int, seg [6]spanSeg) {
+	z := func(j int) float64 { return spanAt(c.from, c.step, c.to, i+j) }
+	// firstTrue is the first row where f holds, f false then true.
+	firstTrue := func(f func(z float64) bool) int {
+		switch {
+		case f(z(0)):
+			return 0
+		case !f(z(m - 1)):
+			return m
+		}
+		return sort.Search(m, func(j int) bool { return f(z(j)) })
+	}
+	zoneTop, zoneLen := c.zoneTop, c.zoneLen
+	layerTop, layerBot, d := c.layerTop, c.layerBot, c.d
+	nearTop, nearBot := c.nearTop, c.nearBot
+	nextTop, weakZone, weakBelow := c.nextTop, c.weakZone, c.weakBelow
+	// Prefixes: the tip zone of the rules and the top of the layer.
+	eEnd := firstTrue(func(z float64) bool { return !(z-zoneTop < zoneLen) })
+	tEnd := firstTrue(func(z float64) bool { return !(z-layerTop < d && nearTop) })
+	// Suffixes: the bottom of the layer, the weak-layer rule, the check below.
+	bStart := firstTrue(func(z float64) bool { return layerBot-z < d && nearBot })
+	wStart := firstTrue(func(z float64) bool { return nextTop < z+weakZone })
+	lStart := firstTrue(func(z float64) bool { return nextTop < z+weakBelow })
+	at = [7]int{0, eEnd, tEnd, bStart, wStart, lStart, m}
+	slices.Sort(at[1:6])
+	for q := range seg {
+		j := at[q]
+		sg := &seg[q]
+		sg.early, sg.weak, sg.below = j < eEnd, j >= wStart, j >= lStart
+		sg.near = 0
+		if j < tEnd || j >= bStart {
+			sg.near = TipNearBoundary
+		}
+	}
+	return at, seg
+}
+
+// spanConst is what spanRows reads of the analysis for one fast interval,
+// gathered once by spanSetup.
+type spanConst struct {
+	from, step, to float64
+	// The shaft's closed form from openFrom (see closedIntegral): σ′v for
+	// the shaft along the interval, the integrand's factor and cap and its
+	// value at openFrom; su along the layer for α; the API α's
+	// antiderivative with its value at openFrom.
+	kind                int
+	ivTop, openFrom     float64
+	sS0, sDs            float64
+	coef, capv, f0      float64
+	su0, dsu, lTop, lH  float64
+	suVaries            bool
+	api                 alphaAPIConst
+	apiF0, invDs, su4   float64
+	bound0              bool
+	weighted            bool
+	wDry, wWet, zw      float64
+	eE0, eDe            float64 // σ′v itself
+	fixed, nc, kq, nq   float64 // the tip model (see tipModel.eval)
+	cc, limit           float64
+	limFric, useSu      bool
+	tmSu                bool
+	lTopL, lBotL        units.Length
+	zoneTop, zoneLen    float64 // the rules of the tip zone (see depthPlan)
+	ramp, layered       bool
+	upBase              float64
+	upErr               bool
+	nextTop, nextEff    float64
+	weakZone, weakBelow float64
+	// The rules' divisions as products: a few ulps from baseRules and
+	// weakRule (the oracle comparison holds them to 1e-12).
+	invZone, inv10d, invWeak   float64
+	nextWeaker                 bool
+	nextQp                     float64
+	noEmbed, layeredOn, noWeak bool
+	nearTop, nearBot           bool
+	layerTop, layerBot, d      float64
+	// The assembly (see assemble, for a section that cannot plug).
+	flags0                             Flags
+	t, fShaft, fTen, fTip              float64
+	outer0, design0, tension0, uplift0 float64
+	net, gross                         bool
+	aGross, aOuter, upW                float64
+	// spanQuick's (see quickSetup): whether it takes the interval; its
+	// products aOuter·uplift0, aOuter·t, aOuter·design0, fTip·aGross,
+	// aOuter·fShaft, aOuter·tension0, aOuter·fTen; its shaft's g0, dg and
+	// cap (+Inf for none); its tip model's nc·cv, k, Nq and flag.
+	quick                      bool
+	t0, tq, d0, dp, dq, e0, eq float64
+	g0, dg, capQ               float64
+	ncv, kqQ, nqQ              float64
+	tipFlag                    Flags
+}
+
+// spanSetup fills c for fast interval k, entered at openFrom, with the
+// committed sums s.
+func (a *Analysis) spanSetup(c *spanConst, s *sums, k int, openFrom, from, step, to float64) {
 	iv := &a.iv[k]
 	p := &a.dp[k]
 	lp := &a.plans[iv.layer]
-	ivTop, ivBot := iv.top, iv.bot
-	sS0, sDs := iv.s0, iv.ds
+	li := iv.layer
+	d := a.size
+	c.from, c.step, c.to = from, step, to
+	c.kind = lp.kind
+	c.ivTop, c.openFrom = iv.top, openFrom
+	c.sS0, c.sDs = iv.s0, iv.ds
 	s0 := iv.sigma(openFrom)
-	kind := lp.kind
-	coef, capv := lp.coef, float64(lp.cap)
+	c.coef, c.capv = lp.coef, float64(lp.cap)
 	// su in the layer, as suAt: su0 + (su1 − su0)·((z − top)/(bottom − top)).
-	su0, dsu := float64(lp.su0), float64(lp.su1-lp.su0)
-	lTop, lH := float64(lp.layer.Top), float64(lp.layer.Bottom-lp.layer.Top)
-	suVaries := lp.su0 != lp.su1 && lp.layer.Bottom > lp.layer.Top
-	var g0, apiF0, su4, invDs float64
-	var api alphaAPIConst
-	switch kind {
+	c.su0, c.dsu = float64(lp.su0), float64(lp.su1-lp.su0)
+	c.lTop, c.lH = float64(lp.layer.Top), float64(lp.layer.Bottom-lp.layer.Top)
+	c.suVaries = lp.su0 != lp.su1 && lp.layer.Bottom > lp.layer.Top
+	var g0 float64
+	switch lp.kind {
 	case kindBeta:
 		g0 = s0
 	case kindAlpha:
 		g0 = float64(lp.suAt(units.Length(openFrom)))
 	case kindAlphaAPI:
-		api = p.alphaAPIFast()
-		apiF0 = api.f(s0)
-		su4 = 4 * p.su
-		invDs = 1 / sDs
+		c.api = p.alphaAPIFast()
+		c.apiF0 = c.api.f(s0)
+		c.su4 = 4 * p.su
+		c.invDs = 1 / iv.ds
 	}
-	bound0 := s0 > su4
-	f0 := coef * g0
+	c.bound0 = s0 > c.su4
+	c.f0 = c.coef * g0
 	// The pile's weight per metre dry and wet, as pileWeight.
-	var wDry, wWet float64
-	zw := math.Inf(1)
-	weighted := a.pile.UnitWeight != 0
-	if weighted {
+	c.zw = math.Inf(1)
+	c.weighted = a.pile.UnitWeight != 0
+	if c.weighted {
 		g := float64(a.pile.UnitWeight)
 		gw := float64(a.prof.WaterUnitWeight())
 		if z, wet := a.prof.WaterDepth(); wet {
-			zw = float64(z)
+			c.zw = float64(z)
 		}
-		wDry, wWet = g*a.mat, (g-gw)*a.mat
+		c.wDry, c.wWet = g*a.mat, (g-gw)*a.mat
 	}
-	weight := w0
-	j := 0
-	// One loop per kind, so that each holds only its own values.
-	switch kind {
-	case kindBeta, kindAlpha:
-		for ; j < len(rows); j++ {
-			z := from + float64(i+j)*step
-			if z > to { // min(z, to): z is never NaN
-				z = to
-			}
-			if !(z > prev && z < ivBot) {
-				break
-			}
-			if weighted {
-				weight = addWeight(weight, wDry, wWet, zw, prev, z)
-			}
-			prev = z
-			g1 := sS0 + sDs*(z-ivTop)
-			if kind == kindAlpha {
-				g1 = su0
-				if suVaries {
-					g1 = su0 + dsu*((z-lTop)/lH)
+	c.eE0, c.eDe = iv.e0, iv.de
+	tm := &lp.tm
+	c.fixed, c.nc, c.kq, c.nq, c.cc, c.limit, c.limFric = tm.fixed, tm.nc, tm.k, tm.nq, tm.c, tm.limit, tm.limFric
+	c.useSu, c.tmSu = tm.useSu, tm.useSu && lp.layer.HasSu
+	c.lTopL, c.lBotL = lp.layer.Top, lp.layer.Bottom
+	c.zoneTop, c.zoneLen = p.zoneTop, p.zoneLen
+	c.ramp, c.layered, c.upBase, c.upErr = p.ramp, p.layered, p.upBase, p.upErr
+	c.nextTop, c.nextEff = p.nextTop, p.nextEff
+	c.weakZone, c.weakBelow = WeakZoneRatio*d, a.weakBelow*d
+	c.invZone, c.inv10d, c.invWeak = 1/p.zoneLen, 1/(10*d), 1/c.weakZone
+	c.nextWeaker, c.nextQp = p.nextErrTop, p.nextQpTop
+	c.noEmbed, c.layeredOn, c.noWeak = a.methods.NoEmbedment, a.methods.LayeredTip, a.methods.NoWeakLayer
+	c.nearTop, c.nearBot = li > 0, li < len(a.plans)-1
+	c.layerTop, c.layerBot, c.d = float64(lp.layer.Top), float64(lp.layer.Bottom), d
+	c.flags0 = s.flags | p.shaftFlags | p.tipFlags
+	c.t = p.tension
+	c.fShaft, c.fTen, c.fTip = lp.fShaft, lp.fTension*c.t, lp.fTip
+	c.outer0, c.design0, c.tension0, c.uplift0 = s.outer, s.design, s.tension, s.uplift
+	c.net, c.gross = a.methods.SelfWeight == WeightNet, a.methods.SelfWeight == WeightGross
+	c.aGross, c.aOuter = a.gross, a.outer
+	c.upW = a.upliftWeight()
+	c.quickSetup()
+}
+
+// spanRows fills rows, the depths i, i+1, … of one stretch (see spanCuts),
+// with the pile's weight w to prev before the first; it returns the weight
+// and prev after the last. For each depth: the pile's weight, the shaft's
+// closed form from openFrom, the tip model, the rules of the tip zone that
+// sg says can apply, and the assembly, as runSpan computes them. The
+// common case goes to spanQuick's leaner loop; this one takes the others
+// (the API α, su varying in the layer, a tip limit that depends on the
+// depth, the pile's weight in compression).
+func (c *spanConst) spanRows(rows []Capacity, i int, weight, prev float64, sg spanSeg) (float64, float64) {
+	if w, z, ok := c.spanQuick(rows, i, weight, prev, sg); ok {
+		return w, z
+	}
+	from, step, to := c.from, c.step, c.to
+	ivTop, openFrom := c.ivTop, c.openFrom
+	flags0 := c.flags0 | sg.near
+	for j := range rows {
+		z := from + float64(i+j)*step
+		if z > to {
+			z = to
+		}
+		if c.weighted {
+			weight = addWeight(weight, c.wDry, c.wWet, c.zw, prev, z)
+		}
+		prev = z
+		dz := z - ivTop
+		h := z - openFrom
+		// The shaft, as closedIntegral.
+		var q float64
+		fl := flags0
+		switch c.kind {
+		case kindBeta, kindAlpha:
+			g1 := c.sS0 + c.sDs*dz
+			if c.kind == kindAlpha {
+				g1 = c.su0
+				if c.suVaries {
+					g1 = c.su0 + c.dsu*((z-c.lTop)/c.lH)
 				}
 			}
-			f1 := coef * g1
-			h := z - openFrom
-			var q float64
-			var fl Flags
-			if capv <= 0 || (f0 <= capv && f1 <= capv) {
-				q = (f0 + f1) / 2 * h
+			f1 := c.coef * g1
+			if capv := c.capv; capv <= 0 || (c.f0 <= capv && f1 <= capv) {
+				q = (c.f0 + f1) / 2 * h
 			} else {
-				q = cappedIntegral(f0, f1, capv, h)
-				fl = ShaftLimit
+				q = cappedIntegral(c.f0, f1, capv, h)
+				fl |= ShaftLimit
 			}
-			c := &rows[j]
-			c.TipDepth, c.Weight, c.Shaft, c.Flags = units.Length(z), units.Force(weight), units.Force(q), fl
+		case kindAlphaAPI:
+			s1 := c.sS0 + c.sDs*dz
+			q = (c.api.f(s1) - c.apiF0) * c.invDs
+			if c.bound0 || s1 > c.su4 { // max(s0, s1) > su4
+				fl |= BoundApplied
+			}
 		}
-	case kindAlphaAPI:
-		for ; j < len(rows); j++ {
-			z := from + float64(i+j)*step
-			if z > to {
-				z = to
+		// The tip model (see tipModel.eval).
+		sv := c.eE0 + c.eDe*dz
+		var qp float64
+		if c.fixed != 0 {
+			qp = c.fixed
+			if c.limit > 0 && qp > c.limit {
+				qp = c.limit
+				fl |= TipLimit
 			}
-			if !(z > prev && z < ivBot) {
-				break
+		} else {
+			cv := c.cc
+			if c.useSu {
+				cv = 0
+				if c.tmSu {
+					// The clamp of tipQuick, with plain comparisons (z is
+					// a depth, never NaN).
+					zz := units.Length(z)
+					if zz < c.lTopL {
+						zz = c.lTopL
+					}
+					if zz > c.lBotL {
+						zz = c.lBotL
+					}
+					cv = c.su0
+					if c.suVaries {
+						cv = c.su0 + c.dsu*((float64(zz)-c.lTop)/c.lH)
+					}
+				}
 			}
-			if weighted {
-				weight = addWeight(weight, wDry, wWet, zw, prev, z)
+			fric := c.kq * sv * c.nq
+			qp = c.nc*cv + fric
+			if limit := c.limit; limit > 0 {
+				if c.limFric {
+					if fric > limit {
+						qp = c.nc*cv + limit
+						fl |= TipLimit
+					}
+				} else if qp > limit {
+					qp = limit
+					fl |= TipLimit
+				}
 			}
-			prev = z
-			s1 := sS0 + sDs*(z-ivTop)
-			q := (api.f(s1) - apiF0) * invDs
-			var fl Flags
-			if bound0 || s1 > su4 { // max(s0, s1) > su4
-				fl = BoundApplied
+		}
+		// baseRules, decided in advance.
+		if sg.early {
+			lb := z - c.zoneTop
+			switch {
+			case c.ramp && qp > 0:
+				if c.noEmbed {
+					fl |= EmbedmentOff
+				} else {
+					qp *= lb * c.invZone
+					fl |= EmbedmentRamp
+				}
+			case c.layered:
+				switch {
+				case !c.layeredOn:
+					if c.upErr || c.upBase < qp {
+						fl |= LayeredTipOff
+					}
+				case c.upBase < qp: // upErr with the rule on is not fast
+					qp = c.upBase + (qp-c.upBase)*lb*c.inv10d
+					fl |= LayeredTip
+				}
 			}
-			c := &rows[j]
-			c.TipDepth, c.Weight, c.Shaft, c.Flags = units.Length(z), units.Force(weight), units.Force(q), fl
+		}
+		// weakRule with its one candidate, the next layer.
+		if sg.weak && c.nextEff < qp {
+			if c.noWeak {
+				fl |= WeakLayerOff
+			} else if v := c.nextEff + (qp-c.nextEff)*(c.nextTop-z)*c.invWeak; v < qp {
+				qp = v
+				fl |= WeakLayerReduced
+			}
+		}
+		if sg.below && (c.nextWeaker || c.nextQp < qp) {
+			fl |= WeakBelow
+		}
+		// The assembly, as assemble for a section that cannot plug.
+		outer, design, tension, uplift := c.outer0+q, c.design0+c.fShaft*q, c.tension0+c.fTen*q, c.uplift0+c.t*q
+		if c.net {
+			qp = max(0, qp-sv)
+		}
+		tip, shf := units.Force(qp*c.aGross), units.Force(outer*c.aOuter)
+		desC := c.fTip*qp*c.aGross + design*c.aOuter
+		comp := tip + shf
+		w := units.Force(weight)
+		if c.gross {
+			comp -= w
+			desC -= weight
+			if comp < 0 {
+				fl |= WeightExceedsResistance
+			}
+		}
+		tenShaft := units.Force(uplift * c.aOuter)
+		r := &rows[j]
+		r.TipDepth, r.UnitTip, r.Tip, r.Shaft, r.Weight = units.Length(z), units.Stress(qp), tip, shf, w
+		r.Compression, r.TensionShaft, r.Tension = comp, tenShaft, tenShaft+w
+		r.DesignCompression, r.DesignTension = units.Force(desC), units.Force(tension*c.aOuter+c.upW*weight)
+		r.Plugged, r.Flags = true, fl
+	}
+	return weight, prev
+}
+
+// quickSetup decides whether spanQuick can take the interval (c.quick)
+// and works out its constants: the common case, where one loop suffices
+// and the assembly can be multiplied out, is β, or α with su constant in
+// the layer (g = g0 + dg·(z − ivTop), with or without a cap); a tip model
+// with a fixed value or with factors and nc·cv the same at every depth,
+// and no limit that depends on the depth; the pile's weight ignored in
+// compression (Methods.SelfWeight).
+func (c *spanConst) quickSetup() {
+	c.quick = false
+	if c.net || c.gross || c.kind == kindAlphaAPI || c.kind == kindAlpha && c.suVaries {
+		return
+	}
+	// The tip model: qp = ncv + k·σ′v·Nq, or ncv with k = Nq = 0 for a
+	// fixed value (ncv + 0 is ncv itself), with its limit applied once.
+	c.ncv, c.kqQ, c.nqQ, c.tipFlag = 0, c.kq, c.nq, 0
+	switch {
+	case c.fixed != 0:
+		c.ncv, c.kqQ, c.nqQ = c.fixed, 0, 0
+		if c.limit > 0 && c.ncv > c.limit {
+			c.ncv, c.tipFlag = c.limit, TipLimit
+		}
+	case c.limit <= 0 && !(c.useSu && c.tmSu && c.suVaries):
+		cv := c.cc
+		if c.useSu {
+			cv = 0
+			if c.tmSu {
+				cv = c.su0
+			}
+		}
+		c.ncv = c.nc * cv
+	default:
+		return
+	}
+	c.quick = true
+	// The shaft: g, the integrand's variable (σ′v for β, su for α), is
+	// g0 + dg·(z − ivTop); for α with su constant in the layer, dg is 0 and
+	// g0 + 0 is su itself. Without a cap, capQ is +Inf: f ≤ capQ holds.
+	c.g0, c.dg, c.capQ = c.sS0, c.sDs, c.capv
+	if c.kind == kindAlpha {
+		c.g0, c.dg = c.su0, 0
+	}
+	if c.capQ <= 0 {
+		c.capQ = math.Inf(1)
+	}
+	// The assembly, multiplied out: with S = q (the shaft integral from
+	// openFrom) and qp,
+	//	Shaft             = (outer0 + S)·aOuter
+	//	TensionShaft      = aOuter·uplift0 + aOuter·t·S
+	//	DesignCompression = aOuter·design0 + fTip·aGross·qp + aOuter·fShaft·S
+	//	DesignTension     = aOuter·tension0 + aOuter·fTen·S + upW·W′
+	c.t0, c.tq = c.aOuter*c.uplift0, c.aOuter*c.t
+	c.d0, c.dp, c.dq = c.aOuter*c.design0, c.fTip*c.aGross, c.aOuter*c.fShaft
+	c.e0, c.eq = c.aOuter*c.tension0, c.aOuter*c.fTen
+}
+
+// spanQuick is spanRows for the common case (c.quick, see quickSetup). The
+// depth, the shaft integral, the unit tip resistance and every flag are
+// computed by the same operations as in spanRows, so they are the same to
+// the bit; the forces are assembled from products worked out once per
+// interval (aOuter·uplift0, aOuter·t, …), which moves them by a few units
+// in the last place from assemble's order (the oracle comparison holds
+// every field to 1e-12). The loop reads the interval's constants through
+// c rather than copying them into locals: with fewer values live, Go
+// spills less (measured: a few per cent to 10 % faster). ok is false, and
+// nothing done, where the case is not the common one.
+func (c *spanConst) spanQuick(rows []Capacity, i int, weight, prev float64, sg spanSeg) (w, zPrev float64, ok bool) {
+	switch {
+	case !c.quick:
+		return weight, prev, false
+	case !(sg.early || sg.weak || sg.below):
+		w, zPrev = c.quickRows(rows, i, weight, prev, sg, 0, false)
+	case c.flagsOnly(sg):
+		w, zPrev = c.quickFlagged(rows, i, weight, prev, sg)
+	default:
+		w, zPrev = c.quickRows(rows, i, weight, prev, sg, 0, true)
+	}
+	return w, zPrev, true
+}
+
+// flagsOnly reports whether the rules of the tip zone that sg says can
+// apply only add flags on the stretch, changing no value: the embedment
+// ramp or the layered rule switched off, the weak-layer rule switched off,
+// the check of a weaker layer below. Each then adds its flag where the tip
+// model's value exceeds a threshold (see ruleFlags).
+func (c *spanConst) flagsOnly(sg spanSeg) bool {
+	if sg.early && (c.ramp && !c.noEmbed || c.layered && c.layeredOn) {
+		return false
+	}
+	return !sg.weak || c.noWeak
+}
+
+// ruleFlags is the flags that the rules of the tip zone add, on a stretch
+// where they only add flags (flagsOnly), for the tip model's value qp, as
+// quickRows adds them. Each flag is added where qp exceeds a threshold.
+func (c *spanConst) ruleFlags(sg spanSeg, qp float64) Flags {
+	var fl Flags
+	if sg.early {
+		switch {
+		case c.ramp && qp > 0:
+			fl |= EmbedmentOff
+		case c.layered && (c.upErr || c.upBase < qp):
+			fl |= LayeredTipOff
 		}
 	}
-	return j, weight
+	if sg.weak && c.nextEff < qp {
+		fl |= WeakLayerOff
+	}
+	if sg.below && (c.nextWeaker || c.nextQp < qp) {
+		fl |= WeakBelow
+	}
+	return fl
+}
+
+// quickFlagged is spanQuick on a stretch whose rules only add flags
+// (flagsOnly): the stretch is cut where the flags change, and each piece
+// goes through quickRows with its flags and no test of the rules. The tip
+// model's value is monotone in the depth (each rounded operation of
+// ncv + k·(eE0 + eDe·(z − ivTop))·Nq is monotone in its operand, and the
+// depths increase), so each flag, added where qp exceeds a threshold,
+// changes at most once along the stretch: where the flags at both ends of
+// a piece agree, they hold over the whole piece; else the piece is halved.
+// qp is computed as quickRows computes it, so the flags are the same.
+func (c *spanConst) quickFlagged(rows []Capacity, i int, weight, prev float64, sg spanSeg) (float64, float64) {
+	qpAt := func(j int) float64 {
+		dz := spanAt(c.from, c.step, c.to, i+j) - c.ivTop
+		return c.ncv + c.kqQ*(c.eE0+c.eDe*dz)*c.nqQ
+	}
+	// Pieces [j0, j1) still to take, the next on top: at most two a level
+	// of halving, and len(rows) < 2⁶³.
+	var stack [2 * 66]int
+	n := 0
+	push := func(j0, j1 int) { stack[n], stack[n+1] = j0, j1; n += 2 }
+	push(0, len(rows))
+	for n > 0 {
+		n -= 2
+		j0, j1 := stack[n], stack[n+1]
+		fa, fb := c.ruleFlags(sg, qpAt(j0)), c.ruleFlags(sg, qpAt(j1-1))
+		if fa == fb {
+			weight, prev = c.quickRows(rows[j0:j1], i+j0, weight, prev, sg, fa, false)
+			continue
+		}
+		mid := j0 + (j1-j0)/2
+		push(mid, j1) // taken after [j0, mid): the rows go in order
+		push(j0, mid)
+	}
+	return weight, prev
+}
+
+// quickRows is spanQuick's loop over rows i, i+1, … with the flags extra
+// added to every row; rules says whether the rules of the tip zone that sg
+// says can apply are tested at each depth. Without them, for a pile
+// without weight and a shaft without a cap (the common case of the common
+// case), quickLean takes the rows.
+func (c *spanConst) quickRows(rows []Capacity, i int, weight, prev float64, sg spanSeg, extra Flags, rules bool) (float64, float64) {
+	from, step, to := c.from, c.step, c.to
+	ivTop, openFrom := c.ivTop, c.openFrom
+	flags0 := c.flags0 | sg.near | c.tipFlag | extra
+	if !rules && !c.weighted && math.IsInf(c.capQ, 1) {
+		c.quickLean(rows, i, weight, flags0)
+		return weight, spanAt(from, step, to, i+len(rows)-1)
+	}
+	weighted := c.weighted
+	for j := range rows {
+		z := from + float64(i+j)*step
+		if z > to { // min(z, to): z is never NaN
+			z = to
+		}
+		if weighted {
+			weight = addWeight(weight, c.wDry, c.wWet, c.zw, prev, z)
+		}
+		prev = z
+		dz := z - ivTop
+		fl := flags0
+		// The shaft, as closedIntegral.
+		var q float64
+		if f1 := c.coef * (c.g0 + c.dg*dz); c.f0 <= c.capQ && f1 <= c.capQ {
+			q = (c.f0 + f1) / 2 * (z - openFrom)
+		} else {
+			q = cappedIntegral(c.f0, f1, c.capv, z-openFrom)
+			fl |= ShaftLimit
+		}
+		// The tip model.
+		qp := c.ncv + c.kqQ*(c.eE0+c.eDe*dz)*c.nqQ
+		if rules {
+			// baseRules, decided in advance.
+			if sg.early {
+				lb := z - c.zoneTop
+				switch {
+				case c.ramp && qp > 0:
+					if c.noEmbed {
+						fl |= EmbedmentOff
+					} else {
+						qp *= lb * c.invZone
+						fl |= EmbedmentRamp
+					}
+				case c.layered:
+					switch {
+					case !c.layeredOn:
+						if c.upErr || c.upBase < qp {
+							fl |= LayeredTipOff
+						}
+					case c.upBase < qp: // upErr with the rule on is not fast
+						qp = c.upBase + (qp-c.upBase)*lb*c.inv10d
+						fl |= LayeredTip
+					}
+				}
+			}
+			// weakRule with its one candidate, the next layer.
+			if sg.weak && c.nextEff < qp {
+				if c.noWeak {
+					fl |= WeakLayerOff
+				} else if v := c.nextEff + (qp-c.nextEff)*(c.nextTop-z)*c.invWeak; v < qp {
+					qp = v
+					fl |= WeakLayerReduced
+				}
+			}
+			if sg.below && (c.nextWeaker || c.nextQp < qp) {
+				fl |= WeakBelow
+			}
+		}
+		tip, shf := units.Force(qp*c.aGross), units.Force((c.outer0+q)*c.aOuter)
+		tenShaft, w := units.Force(c.t0+c.tq*q), units.Force(weight)
+		r := &rows[j]
+		r.TipDepth, r.UnitTip, r.Tip, r.Shaft, r.Weight = units.Length(z), units.Stress(qp), tip, shf, w
+		r.Compression, r.TensionShaft, r.Tension = tip+shf, tenShaft, tenShaft+w
+		r.DesignCompression, r.DesignTension = units.Force(c.d0+c.dp*qp+c.dq*q), units.Force(c.e0+c.eq*q+c.upW*weight)
+		r.Plugged, r.Flags = true, fl
+	}
+	return weight, prev
+}
+
+// quickLean is quickRows's loop with nothing to test but the depths' own
+// clamp: no rule of the tip zone, the pile's weight w the same at every
+// depth, no cap on the shaft. Every value is computed as in quickRows.
+func (c *spanConst) quickLean(rows []Capacity, i int, w float64, flags Flags) {
+	from, step, to := c.from, c.step, c.to
+	ivTop, openFrom := c.ivTop, c.openFrom
+	for j := range rows {
+		z := from + float64(i+j)*step
+		if z > to { // min(z, to): z is never NaN
+			z = to
+		}
+		dz := z - ivTop
+		q := (c.f0 + c.coef*(c.g0+c.dg*dz)) / 2 * (z - openFrom)
+		qp := c.ncv + c.kqQ*(c.eE0+c.eDe*dz)*c.nqQ
+		tip, shf := units.Force(qp*c.aGross), units.Force((c.outer0+q)*c.aOuter)
+		tenShaft := units.Force(c.t0 + c.tq*q)
+		r := &rows[j]
+		r.TipDepth, r.UnitTip, r.Tip, r.Shaft, r.Weight = units.Length(z), units.Stress(qp), tip, shf, units.Force(w)
+		r.Compression, r.TensionShaft, r.Tension = tip+shf, tenShaft, tenShaft+units.Force(w)
+		r.DesignCompression, r.DesignTension = units.Force(c.d0+c.dp*qp+c.dq*q), units.Force(c.e0+c.eq*q+c.upW*w)
+		r.Plugged, r.Flags = true, flags
+	}
 }
 
 // addWeight adds to w the pile's weight from z0 to z1 as pileWeight
@@ -396,237 +925,6 @@ func cappedIntegral(f0, f1, capv, h float64) float64 {
 		return (f0+capv)/2*t*h + capv*(1-t)*h
 	}
 	return capv*t*h + (capv+f1)/2*(1-t)*h
-}
-
-// spanTip is spanFast's second pass: the unit tip resistance at each
-// row's depth, as runSpan computes it (the rules' divisions as products
-// by reciprocals), left in UnitTip with the row's flags; then it calls
-// spanAssemble with the committed sums s.
-func (a *Analysis) spanTip(s *sums, k int, rows []Capacity) {
-	iv := &a.iv[k]
-	p := &a.dp[k]
-	lp := &a.plans[iv.layer]
-	li := iv.layer
-	d := a.size
-	ivTop := iv.top
-	eE0, eDe := iv.e0, iv.de
-	// The tip model (see tipModel.eval).
-	tm := &lp.tm
-	fixed, nc, kq, nq, cc, limit, limFric := tm.fixed, tm.nc, tm.k, tm.nq, tm.c, tm.limit, tm.limFric
-	tmSu := tm.useSu && lp.layer.HasSu
-	useSu := tm.useSu
-	lTopL, lBotL := lp.layer.Top, lp.layer.Bottom
-	su0, dsu := float64(lp.su0), float64(lp.su1-lp.su0)
-	lTop, lH := float64(lp.layer.Top), float64(lp.layer.Bottom-lp.layer.Top)
-	suVaries := lp.su0 != lp.su1 && lp.layer.Bottom > lp.layer.Top
-	// The rules of the tip zone.
-	zoneTop, zoneLen := p.zoneTop, p.zoneLen
-	ramp, layered, upBase, upErr := p.ramp, p.layered, p.upBase, p.upErr
-	nextTop, nextEff := p.nextTop, p.nextEff
-	weakZone := WeakZoneRatio * d
-	// The rules' divisions as products: a few ulps from baseRules and
-	// weakRule (the oracle comparison holds them to 1e-12).
-	invZone, inv10d, invWeak := 1/zoneLen, 1/(10*d), 1/weakZone
-	weakBelow := a.weakBelow * d
-	nextWeaker, nextQp := p.nextErrTop, p.nextQpTop
-	noEmbed, layeredOn, noWeak := a.methods.NoEmbedment, a.methods.LayeredTip, a.methods.NoWeakLayer
-	nearTop, nearBot := li > 0, li < len(a.plans)-1
-	layerTop, layerBot := float64(lp.layer.Top), float64(lp.layer.Bottom)
-	flags0 := s.flags | p.shaftFlags | p.tipFlags
-	full := func(j0, j1 int) {
-		for j := j0; j < j1; j++ {
-			c := &rows[j]
-			z := float64(c.TipDepth)
-			fl := flags0 | c.Flags
-			// The tip model.
-			sv := eE0 + eDe*(z-ivTop)
-			var qp float64
-			if fixed != 0 {
-				qp = fixed
-				if limit > 0 && qp > limit {
-					qp = limit
-					fl |= TipLimit
-				}
-			} else {
-				cv := cc
-				if useSu {
-					cv = 0
-					if tmSu {
-						// The clamp of tipQuick, with plain comparisons
-						// (z is a depth, never NaN).
-						zz := units.Length(z)
-						if zz < lTopL {
-							zz = lTopL
-						}
-						if zz > lBotL {
-							zz = lBotL
-						}
-						cv = su0
-						if suVaries {
-							cv = su0 + dsu*((float64(zz)-lTop)/lH)
-						}
-					}
-				}
-				fric := kq * sv * nq
-				qp = nc*cv + fric
-				if limit > 0 {
-					if limFric {
-						if fric > limit {
-							qp = nc*cv + limit
-							fl |= TipLimit
-						}
-					} else if qp > limit {
-						qp = limit
-						fl |= TipLimit
-					}
-				}
-			}
-			// baseRules, decided in advance.
-			if lb := z - zoneTop; lb < zoneLen {
-				switch {
-				case ramp && qp > 0:
-					if noEmbed {
-						fl |= EmbedmentOff
-					} else {
-						qp *= lb * invZone
-						fl |= EmbedmentRamp
-					}
-				case layered:
-					switch {
-					case !layeredOn:
-						if upErr || upBase < qp {
-							fl |= LayeredTipOff
-						}
-					case upBase < qp: // upErr with the rule on is not fast
-						qp = upBase + (qp-upBase)*lb*inv10d
-						fl |= LayeredTip
-					}
-				}
-			}
-			// weakRule with its one candidate, the next layer.
-			if nextTop < z+weakZone && nextEff < qp {
-				if noWeak {
-					fl |= WeakLayerOff
-				} else if v := nextEff + (qp-nextEff)*(nextTop-z)*invWeak; v < qp {
-					qp = v
-					fl |= WeakLayerReduced
-				}
-			}
-			if z-layerTop < d && nearTop || layerBot-z < d && nearBot {
-				fl |= TipNearBoundary
-			}
-			if nextTop < z+weakBelow && (nextWeaker || nextQp < qp) {
-				fl |= WeakBelow
-			}
-			c.UnitTip, c.Flags = units.Stress(qp), fl
-		}
-	}
-	// The rows from lo to hi lie where no rule of the tip zone and no
-	// flag that depends on the depth alone applies: there the tip model
-	// alone acts (the same operations). Each test is the loop's own and
-	// monotone in z, and the rows' depths increase (spanShaft keeps
-	// z > prev), so a binary search finds lo and hi exactly.
-	early := func(z float64) bool { return z-zoneTop < zoneLen || z-layerTop < d && nearTop }
-	late := func(z float64) bool {
-		return nextTop < z+weakZone || layerBot-z < d && nearBot || nextTop < z+weakBelow
-	}
-	lo := sort.Search(len(rows), func(j int) bool { return !early(float64(rows[j].TipDepth)) })
-	hi := lo + sort.Search(len(rows)-lo, func(j int) bool { return late(float64(rows[lo+j].TipDepth)) })
-	full(0, lo)
-	for j := lo; j < hi; j++ {
-		c := &rows[j]
-		z := float64(c.TipDepth)
-		fl := flags0 | c.Flags
-		// The tip model.
-		sv := eE0 + eDe*(z-ivTop)
-		var qp float64
-		if fixed != 0 {
-			qp = fixed
-			if limit > 0 && qp > limit {
-				qp = limit
-				fl |= TipLimit
-			}
-		} else {
-			cv := cc
-			if useSu {
-				cv = 0
-				if tmSu {
-					// The clamp of tipQuick, with plain comparisons
-					// (z is a depth, never NaN).
-					zz := units.Length(z)
-					if zz < lTopL {
-						zz = lTopL
-					}
-					if zz > lBotL {
-						zz = lBotL
-					}
-					cv = su0
-					if suVaries {
-						cv = su0 + dsu*((float64(zz)-lTop)/lH)
-					}
-				}
-			}
-			fric := kq * sv * nq
-			qp = nc*cv + fric
-			if limit > 0 {
-				if limFric {
-					if fric > limit {
-						qp = nc*cv + limit
-						fl |= TipLimit
-					}
-				} else if qp > limit {
-					qp = limit
-					fl |= TipLimit
-				}
-			}
-		}
-		c.UnitTip, c.Flags = units.Stress(qp), fl
-	}
-	full(hi, len(rows))
-	a.spanAssemble(s, k, rows)
-}
-
-// spanAssemble is spanFast's third pass: each row assembled as assemble
-// does for a section that cannot plug, from the committed sums s, the
-// shaft integral that spanShaft left in Shaft and the unit tip resistance
-// that spanTip left in UnitTip.
-func (a *Analysis) spanAssemble(s *sums, k int, rows []Capacity) {
-	iv := &a.iv[k]
-	p := &a.dp[k]
-	lp := &a.plans[iv.layer]
-	ivTop := iv.top
-	eE0, eDe := iv.e0, iv.de
-	t := p.tension
-	fShaft, fTen, fTip := lp.fShaft, lp.fTension*t, lp.fTip
-	outer0, design0, tension0, uplift0 := s.outer, s.design, s.tension, s.uplift
-	net, gross := a.methods.SelfWeight == WeightNet, a.methods.SelfWeight == WeightGross
-	aGross, aOuter := a.gross, a.outer
-	upW := a.upliftWeight()
-	for j := range rows {
-		c := &rows[j]
-		q, qp, weight, fl := float64(c.Shaft), float64(c.UnitTip), float64(c.Weight), c.Flags
-		outer, design, tension, uplift := outer0+q, design0+fShaft*q, tension0+fTen*q, uplift0+t*q
-		if net {
-			sv := eE0 + eDe*(float64(c.TipDepth)-ivTop)
-			qp = max(0, qp-sv)
-		}
-		tip, shf := units.Force(qp*aGross), units.Force(outer*aOuter)
-		desC := fTip*qp*aGross + design*aOuter
-		comp := tip + shf
-		w := units.Force(weight)
-		if gross {
-			comp -= w
-			desC -= weight
-			if comp < 0 {
-				fl |= WeightExceedsResistance
-			}
-		}
-		tenShaft := units.Force(uplift * aOuter)
-		c.UnitTip, c.Tip, c.Shaft = units.Stress(qp), tip, shf
-		c.Compression, c.TensionShaft, c.Tension = comp, tenShaft, tenShaft+w
-		c.DesignCompression, c.DesignTension = units.Force(desC), units.Force(tension*aOuter+upW*weight)
-		c.Plugged, c.Flags = true, fl
-	}
 }
 
 // alphaAPIConst is the API α's antiderivative (see alphaAPIF) with its
