@@ -140,8 +140,16 @@ func MonteCarlo(p Problem, opt Options) (*MCResult, error) {
 		wg.Add(1)
 		go func(ev Evaluator) {
 			defer wg.Done()
-			u := make([]float64, pp.n)
-			x := make([]float64, pp.n)
+			// A chunk of samples at a time: the draws of sample after
+			// sample, parameter j of sample s at j*chunk+s.
+			u := make([]float64, pp.n*chunk)
+			x := make([]float64, pp.n*chunk)
+			row := make([]float64, pp.n)
+			xlo, xhi := make([]float64, pp.n), make([]float64, pp.n)
+			var fc *fastChunk
+			if f, ok := ev.(*fastModel); ok {
+				fc = f.newChunk(x)
+			}
 			var pcg rand.PCG
 			rng := rand.New(&pcg)
 			for {
@@ -150,27 +158,45 @@ func MonteCarlo(p Problem, opt Options) (*MCResult, error) {
 					return
 				}
 				pcg.Seed(opt.Seed, uint64(b))
-				lo, hi := b*BlockSize, min((b+1)*BlockSize, n)
-				for i := lo; i < hi; i++ {
-					for j := range u {
-						u[j] = rng.NormFloat64()
-					}
-					pp.transform(u, x)
-					o, err := ev.Capacity(x)
-					if err == nil && (!finite(o.Compression) || !finite(o.Tension)) {
-						err = errors.New("the model gave no finite capacity")
-					}
-					if err != nil {
-						errs[b] = sampleError(i, p.Params, x, err)
-						for {
-							cur := errBlock.Load()
-							if int64(b) >= cur || errBlock.CompareAndSwap(cur, int64(b)) {
-								break
-							}
+			chunks:
+				for lo, hi := b*BlockSize, min((b+1)*BlockSize, n); lo < hi; lo += chunk {
+					c := min(chunk, hi-lo)
+					for s := range c {
+						for j := range pp.n {
+							u[j*chunk+s] = rng.NormFloat64()
 						}
-						break
 					}
-					comp[i], tens[i] = o.Compression, o.Tension
+					if fc != nil {
+						pp.transformChunk(u, x, c, xlo, xhi)
+						if fc.capacity(c, comp[lo:lo+c], tens[lo:lo+c], xlo, xhi) {
+							continue
+						}
+					} else {
+						pp.transformChunk(u, x, c, nil, nil)
+					}
+					// One sample at a time: the general model, or a chunk
+					// with a sample the closed form may refuse.
+					for s := range c {
+						for j := range row {
+							row[j] = x[j*chunk+s]
+						}
+						i := lo + s
+						o, err := ev.Capacity(row)
+						if err == nil && (!finite(o.Compression) || !finite(o.Tension)) {
+							err = errors.New("the model gave no finite capacity")
+						}
+						if err != nil {
+							errs[b] = sampleError(i, p.Params, row, err)
+							for {
+								cur := errBlock.Load()
+								if int64(b) >= cur || errBlock.CompareAndSwap(cur, int64(b)) {
+									break
+								}
+							}
+							break chunks
+						}
+						comp[i], tens[i] = o.Compression, o.Tension
+					}
 				}
 			}
 		}(evals[w])

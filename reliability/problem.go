@@ -155,6 +155,87 @@ func (p *prepared) transform(u, x []float64) {
 	}
 }
 
+// transformChunk is transform for the first c samples of a chunk: u and
+// x hold parameter j of sample s at j*chunk+s. Each value gets the bits
+// transform gives it (the same operations in the same order). If lo is
+// not nil, lo[j] and hi[j] are set to bounds on parameter j's values (u
+// holds no NaN, as NormFloat64 never gives one).
+func (p *prepared) transformChunk(u, x []float64, c int, lo, hi []float64) {
+	n := p.n
+	if p.chol == nil {
+		for i := range n {
+			m := &p.m[i]
+			us, xs := u[i*chunk:i*chunk+c], x[i*chunk:i*chunk+c]
+			// The least and greatest normal score, tracked where the
+			// bounds depend on them.
+			zlo, zhi := math.Inf(-1), math.Inf(1)
+			switch m.direct {
+			case directNormal:
+				mu, sigma := m.mu, m.sigma
+				zlo, zhi = math.Inf(1), math.Inf(-1)
+				for s, z := range us {
+					xs[s] = mu + sigma*z
+					if z < zlo {
+						zlo = z
+					}
+					if z > zhi {
+						zhi = z
+					}
+				}
+			case directLogNormal:
+				mu, sigma := m.mu, m.sigma
+				zlo, zhi = math.Inf(1), math.Inf(-1)
+				for s, z := range us {
+					xs[s] = math.Exp(mu + sigma*z)
+					if z < zlo {
+						zlo = z
+					}
+					if z > zhi {
+						zhi = z
+					}
+				}
+			default:
+				for s, z := range us {
+					xs[s] = m.fromNormal(z)
+				}
+			}
+			if lo != nil {
+				lo[i], hi[i] = m.bounds(zlo, zhi)
+			}
+		}
+		return
+	}
+	for i := range n {
+		row := p.chol[i*n : i*n+i+1]
+		xs := x[i*chunk : i*chunk+c]
+		for s := range xs {
+			z := 0.0
+			for j, l := range row {
+				z += l * u[j*chunk+s]
+			}
+			xs[s] = p.m[i].fromNormal(z)
+		}
+	}
+	if lo == nil {
+		return
+	}
+	// Each score is a sum over the independent normals: bounded by the
+	// greatest |u| times the sum of |l| (widened for the rounding of the
+	// sums).
+	um := 0.0
+	for _, v := range u[:n*chunk] {
+		um = max(um, math.Abs(v))
+	}
+	for i := range n {
+		s := 0.0
+		for _, l := range p.chol[i*n : i*n+i+1] {
+			s += math.Abs(l)
+		}
+		zm := um * s * (1 + 1e-12)
+		lo[i], hi[i] = p.m[i].bounds(-zm, zm)
+	}
+}
+
 // means returns the parameters' means.
 func (p *prepared) means() []float64 {
 	x := make([]float64, p.n)
