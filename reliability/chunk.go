@@ -462,12 +462,13 @@ func (fc *fastChunk) layer(cl *chunkLayer, isTip bool, c int) {
 		fc.wholeLayer(cl, isTip, c, gsat, gw)
 		return
 	}
+	dry := f.dry
 	for s := range sv {
 		zw := zwc[s]
 		for part := 0; part < 2; part++ {
 			var a, b, g float64
 			switch {
-			case f.dry:
+			case dry:
 				if part == 1 {
 					continue
 				}
@@ -635,38 +636,50 @@ func (fc *fastChunk) finish(c int, comp, tens []float64) {
 	zwc, ftc, fsc := fc.zw[:c], fc.ft[:c], fc.fs[:c]
 	out, tn, svTip, qpc := fc.out[:c], fc.tens[:c], fc.svTip[:c], fc.qp[:c]
 	comp, tens = comp[:c], tens[:c]
-	zt := f.tip
+	// The model's constants out of the loop (the compiler reloads fields
+	// through a pointer after every store).
+	zt, head, gp, gw, mat, gross := f.tip, f.head, f.gp, f.gw, f.mat, f.gross
+	outer, inner, dry, canPlug, plug := f.outer, f.inner, f.dry, f.canPlug, f.plug
+	net, gross2 := f.selfWeight == pile.WeightNet, f.selfWeight == pile.WeightGross
+	if !net && !gross2 && gp == 0 && !canPlug {
+		// No weight and no plug: the common case, the same operations.
+		for s := range comp {
+			fs := fsc[s]
+			comp[s], tens[s] = ftc[s]*(qpc[s]*gross)+fs*(out[s]*outer), fs*(tn[s]*outer)+0
+		}
+		return
+	}
 	for s := range comp {
 		zw, qp := zwc[s], qpc[s]
-		if f.selfWeight == pile.WeightNet {
+		if net {
 			qp = max(0, qp-svTip[s])
 		}
 		var wt float64
-		if f.gp != 0 {
-			h0, h1 := f.head, zt
+		if gp != 0 {
+			h0, h1 := head, zt
 			switch {
-			case f.dry || zw >= h1:
-				wt = f.gp * f.mat * (h1 - h0)
+			case dry || zw >= h1:
+				wt = gp * mat * (h1 - h0)
 			case zw <= h0:
-				wt = (f.gp - f.gw) * f.mat * (h1 - h0)
+				wt = (gp - gw) * mat * (h1 - h0)
 			default:
-				wt = f.gp*f.mat*(zw-h0) + (f.gp-f.gw)*f.mat*(h1-zw)
+				wt = gp*mat*(zw-h0) + (gp-gw)*mat*(h1-zw)
 			}
 		}
-		tip, sh := qp*f.gross, out[s]*f.outer
-		tenShaft := tn[s] * f.outer
-		if f.canPlug {
-			unTip, unShaft := qp*f.mat, out[s]*(f.outer+f.inner)
-			if f.plug == pile.Unplugged || (f.plug == pile.PlugLesser && unTip+unShaft < tip+sh) {
+		tip, sh := qp*gross, out[s]*outer
+		tenShaft := tn[s] * outer
+		if canPlug {
+			unTip, unShaft := qp*mat, out[s]*(outer+inner)
+			if plug == pile.Unplugged || (plug == pile.PlugLesser && unTip+unShaft < tip+sh) {
 				tip, sh = unTip, unShaft
 			}
-			if f.plug == pile.Unplugged {
-				tenShaft = tn[s] * (f.outer + f.inner)
+			if plug == pile.Unplugged {
+				tenShaft = tn[s] * (outer + inner)
 			}
 		}
 		ft, fs := ftc[s], fsc[s]
 		cp := ft*tip + fs*sh
-		if f.selfWeight == pile.WeightGross {
+		if gross2 {
 			cp -= wt
 		}
 		comp[s], tens[s] = cp, fs*tenShaft+wt

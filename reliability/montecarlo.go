@@ -246,40 +246,30 @@ func (e *SampleError) Error() string {
 
 func (e *SampleError) Unwrap() error { return e.Err }
 
-// summarise sorts r in place and describes it.
+// summarise describes r (and may sort it in place). It reads the samples
+// in three passes where it can: the sum for the mean with the least and
+// greatest value; the sum of squares with the count below the load, the
+// histogram and the buckets of orderStats; and orderStats' gathering.
 func summarise(r []float64, load float64, bins int) Summary {
 	n := len(r)
 	// Mean as r[0] + mean of the deviations from it: exact when every
-	// sample is equal, and less rounding for a narrow spread.
+	// sample is equal, and less rounding for a narrow spread. The least
+	// and greatest value by the order sortFloats sorts in.
 	var s float64
+	r0 := r[0]
+	klo, khi := floatKey(r0), floatKey(r0)
 	for _, v := range r {
-		s += v - r[0]
-	}
-	mean := r[0] + s/float64(n)
-	var ss float64
-	below := 0
-	for _, v := range r {
-		d := v - mean
-		ss += d * d
-		if v < load {
-			below++
+		s += v - r0
+		k := floatKey(v)
+		if k < klo {
+			klo = k
+		}
+		if k > khi {
+			khi = k
 		}
 	}
-	sd := 0.0
-	if n > 1 {
-		sd = math.Sqrt(ss / float64(n-1))
-	}
-	// The least and greatest value, and the order statistics the
-	// quantiles read: from buckets where that is quicker than sorting.
-	lo, hi := r[0], r[0]
-	if n >= 4096 {
-		klo, khi := floatKey(r[0]), floatKey(r[0])
-		for _, v := range r {
-			k := floatKey(v)
-			klo, khi = min(klo, k), max(khi, k)
-		}
-		lo, hi = keyFloat(klo), keyFloat(khi)
-	}
+	mean := r0 + s/float64(n)
+	lo, hi := keyFloat(klo), keyFloat(khi)
 	var ranks []int
 	for _, p := range summaryProbs() {
 		h := float64(n-1) * p
@@ -289,17 +279,74 @@ func summarise(r []float64, load float64, bins int) Summary {
 			ranks = append(ranks, k, k+1)
 		}
 	}
+	// The order statistics the quantiles read: from buckets where that
+	// is quicker than sorting (at least 4096 samples, not all equal).
+	var ob *orderBuckets
+	if n >= 4096 && lo < hi {
+		ob = new(orderBuckets)
+		if !ob.init(lo, hi) {
+			ob = nil
+		}
+	}
+	var hist []Bin
+	w := (hi - lo) / float64(bins)
+	if hi == lo {
+		hist = []Bin{{From: lo, To: hi, Count: n}}
+	} else {
+		hist = make([]Bin, bins)
+		for k := range hist {
+			hist[k] = Bin{From: lo + float64(k)*w, To: lo + float64(k+1)*w}
+		}
+		hist[bins-1].To = hi
+	}
+	var ss float64
+	below := 0
+	switch {
+	case ob != nil && hi != lo:
+		// The common case in one loop.
+		for _, v := range r {
+			d := v - mean
+			ss += d * d
+			if v < load {
+				below++
+			}
+			ob.start[ob.bucket(v)+1]++
+			hist[min(int((v-lo)/w), bins-1)].Count++
+		}
+	default:
+		for _, v := range r {
+			d := v - mean
+			ss += d * d
+			if v < load {
+				below++
+			}
+			if ob != nil {
+				ob.start[ob.bucket(v)+1]++
+			}
+			if hi != lo {
+				hist[min(int((v-lo)/w), bins-1)].Count++
+			}
+		}
+	}
+	sd := 0.0
+	if n > 1 {
+		sd = math.Sqrt(ss / float64(n-1))
+	}
 	at := func(k int) float64 { return r[k] }
-	if vals, ok := orderStatsIf(r, lo, hi, ranks); ok {
+	var vals map[int]float64
+	ok := false
+	if ob != nil {
+		vals, ok = ob.stats(r, ranks)
+	}
+	if ok {
 		at = func(k int) float64 { return vals[k] }
 	} else {
 		sortFloats(r)
-		lo, hi = r[0], r[n-1]
 	}
 	q := func(p float64) float64 { return quantileAt(n, at, p) }
 	out := Summary{Mean: mean, SD: sd, Min: lo, Max: hi,
 		P5: q(0.05), P50: q(0.5), P95: q(0.95),
-		SEMean: sd / math.Sqrt(float64(n))}
+		SEMean: sd / math.Sqrt(float64(n)), Histogram: hist}
 	if n > 1 {
 		out.SESD = sd / math.Sqrt(2*float64(n-1))
 	}
@@ -320,20 +367,6 @@ func summarise(r []float64, load float64, bins int) Summary {
 	for k := 0; k <= 100; k++ {
 		pk := float64(k) / 100
 		out.CDF = append(out.CDF, Quantile{P: pk, Value: q(pk)})
-	}
-	if hi == lo {
-		out.Histogram = []Bin{{From: lo, To: hi, Count: n}}
-		return out
-	}
-	w := (hi - lo) / float64(bins)
-	out.Histogram = make([]Bin, bins)
-	for k := range out.Histogram {
-		out.Histogram[k] = Bin{From: lo + float64(k)*w, To: lo + float64(k+1)*w}
-	}
-	out.Histogram[bins-1].To = hi
-	for _, v := range r {
-		k := min(int((v-lo)/w), bins-1)
-		out.Histogram[k].Count++
 	}
 	return out
 }
@@ -420,13 +453,4 @@ func summaryProbs() []float64 {
 		ps = append(ps, float64(k)/100)
 	}
 	return ps
-}
-
-// orderStatsIf is orderStats for at least 4096 samples not all equal;
-// below that, or where they are, sorting is as quick (ok false).
-func orderStatsIf(r []float64, lo, hi float64, ranks []int) (map[int]float64, bool) {
-	if len(r) < 4096 || !(lo < hi) {
-		return nil, false
-	}
-	return orderStats(r, lo, hi, ranks)
 }
