@@ -542,56 +542,72 @@ func (fc *fastChunk) wholeLayer(cl *chunkLayer, isTip bool, c int, gcol []float6
 	if f.tip < zb {
 		zb = f.tip
 	}
-	sv, out, tn := fc.sv[:c], fc.out[:c], fc.tens[:c]
+	sv, out, tn, svTip := fc.sv[:c], fc.out[:c], fc.tens[:c], fc.svTip[:c]
 	gcol = gcol[:c]
-	if zb > za && L.kind != fNone {
-		dza, dzb, dz, tension := za-a, zb-a, zb-za, L.tension
-		switch L.kind {
-		case fBetaGiven:
-			beta := cl.beta[:c]
-			for s := range sv {
-				s0, g := sv[s], gcol[s]-sub
-				sa, sb := s0+g*dza, s0+g*dzb
-				q := beta[s] * (sa + sb) / 2 * dz
-				out[s] += q
-				tn[s] += tension * q
-			}
-		case fBetaKD:
-			kc, tanD := cl.k[:c], cl.tanDelta[:c]
-			for s := range sv {
-				s0, g := sv[s], gcol[s]-sub
-				sa, sb := s0+g*dza, s0+g*dzb
-				q := kc[s] * tanD[s] * (sa + sb) / 2 * dz
-				out[s] += q
-				tn[s] += tension * q
-			}
-		case fAlphaGiven:
-			alpha, su0c, su1c := cl.alpha[:c], cl.su0[:c], cl.su1[:c]
-			h := L.bot - L.top
-			for s := range sv {
-				su0, su1 := su0c[s], su1c[s]
-				var q float64
-				if su0 == su1 {
-					q = alpha[s] * su0 * dz
-				} else {
-					sua := su0 + (su1-su0)*(za-L.top)/h
-					sub2 := su0 + (su1-su0)*(zb-L.top)/h
-					q = alpha[s] * (sua + sub2) / 2 * dz
-				}
-				out[s] += q
-				tn[s] += tension * q
-			}
-		}
+	// The effective stress at the tip, where it lies in the layer, and at
+	// the layer's bottom, in the loop that sums the shaft.
+	tipHere, dt, h := isTip && f.tip >= a && f.tip <= b, f.tip-a, b-a
+	kind := L.kind
+	if !(zb > za) {
+		kind = fNone
 	}
-	if isTip && f.tip >= a && f.tip <= b {
-		svTip, dt := fc.svTip[:c], f.tip-a
+	dza, dzb, dz, tension := za-a, zb-a, zb-za, L.tension
+	switch kind {
+	case fBetaGiven:
+		beta := cl.beta[:c]
 		for s := range sv {
-			svTip[s] = sv[s] + (gcol[s]-sub)*dt
+			s0, g := sv[s], gcol[s]-sub
+			sa, sb := s0+g*dza, s0+g*dzb
+			q := beta[s] * (sa + sb) / 2 * dz
+			out[s] += q
+			tn[s] += tension * q
+			if tipHere {
+				svTip[s] = s0 + g*dt
+			}
+			sv[s] = s0 + g*h
 		}
-	}
-	h := b - a
-	for s := range sv {
-		sv[s] += (gcol[s] - sub) * h
+	case fBetaKD:
+		kc, tanD := cl.k[:c], cl.tanDelta[:c]
+		for s := range sv {
+			s0, g := sv[s], gcol[s]-sub
+			sa, sb := s0+g*dza, s0+g*dzb
+			q := kc[s] * tanD[s] * (sa + sb) / 2 * dz
+			out[s] += q
+			tn[s] += tension * q
+			if tipHere {
+				svTip[s] = s0 + g*dt
+			}
+			sv[s] = s0 + g*h
+		}
+	case fAlphaGiven:
+		alpha, su0c, su1c := cl.alpha[:c], cl.su0[:c], cl.su1[:c]
+		hl := L.bot - L.top
+		for s := range sv {
+			su0, su1 := su0c[s], su1c[s]
+			var q float64
+			if su0 == su1 {
+				q = alpha[s] * su0 * dz
+			} else {
+				sua := su0 + (su1-su0)*(za-L.top)/hl
+				sub2 := su0 + (su1-su0)*(zb-L.top)/hl
+				q = alpha[s] * (sua + sub2) / 2 * dz
+			}
+			out[s] += q
+			tn[s] += tension * q
+			s0, g := sv[s], gcol[s]-sub
+			if tipHere {
+				svTip[s] = s0 + g*dt
+			}
+			sv[s] = s0 + g*h
+		}
+	default:
+		for s := range sv {
+			s0, g := sv[s], gcol[s]-sub
+			if tipHere {
+				svTip[s] = s0 + g*dt
+			}
+			sv[s] = s0 + g*h
+		}
 	}
 }
 

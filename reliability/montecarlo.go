@@ -141,7 +141,7 @@ func MonteCarlo(p Problem, opt Options) (*MCResult, error) {
 		go func(ev Evaluator) {
 			defer wg.Done()
 			// A chunk of samples at a time: the draws of sample after
-			// sample, parameter j of sample s at j*chunk+s.
+			// sample in u, parameter j of sample s at x[j*chunk+s].
 			u := make([]float64, pp.n*chunk)
 			x := make([]float64, pp.n*chunk)
 			row := make([]float64, pp.n)
@@ -161,10 +161,8 @@ func MonteCarlo(p Problem, opt Options) (*MCResult, error) {
 			chunks:
 				for lo, hi := b*BlockSize, min((b+1)*BlockSize, n); lo < hi; lo += chunk {
 					c := min(chunk, hi-lo)
-					for s := range c {
-						for j := range pp.n {
-							u[j*chunk+s] = rng.NormFloat64()
-						}
+					for k := range u[:c*pp.n] {
+						u[k] = rng.NormFloat64()
 					}
 					if fc != nil {
 						pp.transformChunk(u, x, c, xlo, xhi)

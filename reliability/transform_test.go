@@ -89,10 +89,8 @@ func TestPropBounds(t *testing.T) {
 		c := rapid.IntRange(1, chunk).Draw(rt, "samples")
 		u, x := make([]float64, n*chunk), make([]float64, n*chunk)
 		scale := rapid.SampledFrom([]float64{1, 3, 8}).Draw(rt, "scale")
-		for s := range c {
-			for j := range n {
-				u[j*chunk+s] = scale * rapid.Float64Range(-1, 1).Draw(rt, "u")
-			}
+		for k := range u[:c*n] {
+			u[k] = scale * rapid.Float64Range(-1, 1).Draw(rt, "u")
 		}
 		lo, hi := make([]float64, n), make([]float64, n)
 		pp.transformChunk(u, x, c, lo, hi)
