@@ -19,23 +19,21 @@ const chunk = 256
 // Each value the sums read is a column of chunk samples: a column of the
 // parameter values, one derived from them, or the base value repeated.
 type chunkLayer struct {
-	L                    *fastLayer
-	gamma, gsat          []float64
-	k, tanDelta, beta    []float64
-	alpha, su0, su1      []float64
-	phi, delta           []float64 // read by tan δ where one of them is sampled
-	xSu                  []float64 // the sampled su (mid-layer), or nil
-	scaleSu              bool      // su linear in the layer: su0 and su1 scaled from xSu
-	tanFrom              int       // 0: tanDelta fixed; tanRatio: tan(δ/φ′·φ′); tanDirect: tan δ
-	sampled              [nFields]bool
-	param                [nFields]int // the parameter of each sampled value
-	check                bool         // the layer is checked in every sample
-	fixedOK              [2][2]bool   // the clauses on values not sampled, by γ needed above and γsat below the water table
-	fixedAlways          bool         // every entry of fixedOK is true
-	sampledLayer         bool         // a target of the layer (the scalar path then checks it in every sample)
-	nqCol, ncCol         []float64    // tip layer: Nq, Nc
-	nqSampled, ncSampled bool
-	nqParam, ncParam     int
+	L                 *fastLayer
+	gamma, gsat       []float64
+	k, tanDelta, beta []float64
+	alpha, su0, su1   []float64
+	phi, delta        []float64    // read by tan δ where one of them is sampled
+	xSu               []float64    // the sampled su (mid-layer), or nil
+	scaleSu           bool         // su linear in the layer: su0 and su1 scaled from xSu
+	tanFrom           int          // 0: tanDelta fixed; tanRatio: tan(δ/φ′·φ′); tanDirect: tan δ
+	param             [nFields]int // the parameter of each sampled value, −1: not sampled
+	check             bool         // the layer is checked in every sample
+	fixedOK           [2][2]bool   // the clauses on values not sampled, by γ needed above and γsat below the water table
+	fixedAlways       bool         // every entry of fixedOK is true
+	sampledLayer      bool         // a target of the layer (the scalar path then checks it in every sample)
+	nqCol, ncCol      []float64    // tip layer: Nq, Nc
+	nqParam, ncParam  int          // their parameters, −1: not sampled
 }
 
 // The values of a layer a target can set.
@@ -64,18 +62,17 @@ var fieldClauses = [nFields]uint16{
 
 // fastChunk computes chunks of samples of a fastModel for one worker.
 type fastChunk struct {
-	f                    *fastModel
-	lay                  []chunkLayer
-	zw, ft, fs           []float64
-	zwSampled            bool
-	ftSampled, fsSampled bool
-	sv, out, tens        []float64
-	svTip, qp            []float64
-	zmin, zmax           float64 // bounds on the chunk's water depths
-	zExact               bool    // zmin and zmax are the least and greatest
-	x                    []float64
-	ftParam, fsParam     int
-	zwParam              int
+	f                *fastModel
+	lay              []chunkLayer
+	zw, ft, fs       []float64
+	zwSampled        bool
+	sv, out, tens    []float64
+	svTip, qp        []float64
+	zmin, zmax       float64 // bounds on the chunk's water depths
+	zExact           bool    // zmin and zmax are the least and greatest
+	x                []float64
+	ftParam, fsParam int // the parameters of the model factors, −1: not sampled
+	zwParam          int // of the water depth
 	// lo and hi bound each parameter's values in the chunk (nil: not
 	// known; then the values themselves are read).
 	lo, hi []float64
@@ -104,9 +101,9 @@ func (f *fastModel) newChunk(x []float64) *fastChunk {
 		case cWaterDepth:
 			fc.zw, fc.zwSampled, fc.zwParam = col(i), true, i
 		case cTipFactor:
-			fc.ft, fc.ftSampled, fc.ftParam = col(i), true, i
+			fc.ft, fc.ftParam = col(i), i
 		case cShaftFactor:
-			fc.fs, fc.fsSampled, fc.fsParam = col(i), true, i
+			fc.fs, fc.fsParam = col(i), i
 		}
 	}
 	if !fc.zwSampled && (!(f.zw >= -12e3) || !finite(f.zw)) {
@@ -157,7 +154,6 @@ func (f *fastModel) newChunk(x []float64) *fastChunk {
 		var sampledClauses uint16
 		for fd, c := range xs {
 			if c != nil {
-				cl.sampled[fd] = true
 				sampledClauses |= fieldClauses[fd]
 			}
 		}
@@ -192,8 +188,7 @@ func (f *fastModel) newChunk(x []float64) *fastChunk {
 			fc.usable = false
 		}
 		if li == f.tipLayer {
-			cl.nqCol, cl.nqSampled = or(nq, f.tipNq), nq != nil
-			cl.ncCol, cl.ncSampled = or(nc, f.tipNc), nc != nil
+			cl.nqCol, cl.ncCol = or(nq, f.tipNq), or(nc, f.tipNc)
 			if f.checkTip(li, f.tipNq, f.tipNc) != nil && (nq == nil || nc == nil) {
 				// A fixed factor may be out of range: leave it to the
 				// scalar path, which says which.
@@ -616,12 +611,12 @@ func (fc *fastChunk) wholeLayer(cl *chunkLayer, isTip bool, c int, gcol []float6
 func (fc *fastChunk) tip(cl *chunkLayer, c int) bool {
 	f, L := fc.f, cl.L
 	nq, nc := cl.nqCol[:c], cl.ncCol[:c]
-	if cl.ncSampled && !fc.within(cl.ncParam, c, func(lo, hi float64) bool {
+	if cl.ncParam >= 0 && !fc.within(cl.ncParam, c, func(lo, hi float64) bool {
 		return f.tipUndrained && lo >= 1 && hi <= 100 || !f.tipUndrained && lo >= 0 && hi <= 1e4
 	}) {
 		return false
 	}
-	if cl.nqSampled && !f.tipUndrained && !fc.within(cl.nqParam, c, func(lo, hi float64) bool { return lo >= 1 && hi <= 1e4 }) {
+	if cl.nqParam >= 0 && !f.tipUndrained && !fc.within(cl.nqParam, c, func(lo, hi float64) bool { return lo >= 1 && hi <= 1e4 }) {
 		return false
 	}
 	qp, svTip := fc.qp[:c], fc.svTip[:c]

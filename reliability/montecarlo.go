@@ -247,7 +247,7 @@ func (e *SampleError) Unwrap() error { return e.Err }
 // summarise describes r (and may sort it in place). It reads the samples
 // in three passes where it can: the sum for the mean with the least and
 // greatest value; the sum of squares with the count below the load, the
-// histogram and the buckets of orderStats; and orderStats' gathering.
+// histogram and the buckets of the order statistics; and their gathering.
 func summarise(r []float64, load float64, bins int) Summary {
 	n := len(r)
 	// Mean as r[0] + mean of the deviations from it: exact when every

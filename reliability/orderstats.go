@@ -25,33 +25,18 @@ func keyFloat(k uint64) float64 {
 	return math.Float64frombits(^k)
 }
 
-// orderStatBuckets is the number of buckets orderStats spreads the
+// orderStatBuckets is the number of buckets orderBuckets spreads the
 // samples over.
 const orderStatBuckets = 1 << 14
 
-// orderStats returns the values that r would hold at the given ranks
-// (0-based) once sorted by sortFloats, without sorting r: the samples are
-// counted into buckets of equal width between their least and greatest
-// value lo and hi (lo < hi; the bucket of v, ⌊(v − lo)·scale⌋, never
-// decreases as v grows, so a bucket holds every rank from its first to its
-// last), and only the buckets that hold a rank asked for are gathered and
-// sorted. ok is false, and nothing is returned, where those buckets hold
-// more than a quarter of the samples (a few outliers stretching the
-// range): then a full sort is the quicker way.
-func orderStats(r []float64, lo, hi float64, ranks []int) (vals map[int]float64, ok bool) {
-	var ob orderBuckets
-	if !ob.init(lo, hi) {
-		return nil, false
-	}
-	for _, v := range r {
-		ob.start[ob.bucket(v)+1]++
-	}
-	return ob.stats(r, ranks)
-}
-
-// orderBuckets holds the counts of orderStats, so that a caller can count
-// in a pass of its own (start[bucket(v)+1]++ for every sample) and then
-// call stats.
+// orderBuckets finds the values that samples r would hold at given
+// ranks (0-based) once sorted by sortFloats, without sorting r: the
+// samples are counted into buckets of equal width between their least and
+// greatest value lo and hi (lo < hi; the bucket of v, ⌊(v − lo)·scale⌋,
+// never decreases as v grows, so a bucket holds every rank from its first
+// to its last), and only the buckets that hold a rank asked for are
+// gathered and sorted. The caller counts in a pass of its own
+// (start[bucket(v)+1]++ for every sample), then calls stats.
 type orderBuckets struct {
 	lo, scale float64
 	start     [orderStatBuckets + 1]int32
@@ -70,7 +55,10 @@ func (ob *orderBuckets) bucket(v float64) int {
 	return min(int((v-ob.lo)*ob.scale), orderStatBuckets-1)
 }
 
-// stats is the rest of orderStats once the samples r are counted.
+// stats returns the values at the ranks once the samples r are counted.
+// ok is false, and nothing is returned, where the buckets holding them hold
+// more than a quarter of the samples (a few outliers stretching the
+// range): then a full sort is the quicker way.
 func (ob *orderBuckets) stats(r []float64, ranks []int) (vals map[int]float64, ok bool) {
 	const nb = orderStatBuckets
 	n := len(r)
