@@ -14,8 +14,8 @@ import (
 	"pgregory.net/rapid"
 )
 
-// TestTransformMatchesFromNormal: transform, which writes the normal and
-// the lognormal out for independent parameters, gives each parameter the
+// TestTransformMatchesFromNormal: transform and transformChunk, which
+// write the maps out for independent parameters, give each parameter the
 // bits fromNormal gives it, for every kind (degenerate ones included).
 func TestTransformMatchesFromNormal(t *testing.T) {
 	ds := []Distribution{
@@ -34,15 +34,26 @@ func TestTransformMatchesFromNormal(t *testing.T) {
 		pp.m = append(pp.m, newMarginal(d))
 	}
 	rng := rand.New(rand.NewPCG(5, 6))
-	u, x := make([]float64, len(ds)), make([]float64, len(ds))
-	for range 10000 {
+	n := len(ds)
+	u, x := make([]float64, n), make([]float64, n)
+	uc, xc := make([]float64, n*chunk), make([]float64, n*chunk)
+	for k := range 10000 {
 		for i := range u {
 			u[i] = 3 * rng.NormFloat64()
 		}
 		pp.transform(u, x)
+		// transformChunk, the same sample at s of a chunk of c.
+		c := 1 + k%chunk
+		s := k % c
+		copy(uc[s*n:], u)
+		pp.transformChunk(uc, xc, c, nil, nil)
 		for i := range u {
-			if want := pp.m[i].fromNormal(u[i]); math.Float64bits(x[i]) != math.Float64bits(want) {
+			want := pp.m[i].fromNormal(u[i])
+			if math.Float64bits(x[i]) != math.Float64bits(want) {
 				t.Fatalf("%v at z = %v: transform %v, fromNormal %v", ds[i], u[i], x[i], want)
+			}
+			if got := xc[i*chunk+s]; math.Float64bits(got) != math.Float64bits(want) {
+				t.Fatalf("%v at z = %v: transformChunk %v, fromNormal %v", ds[i], u[i], got, want)
 			}
 		}
 	}
