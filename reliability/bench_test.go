@@ -5,6 +5,7 @@ package reliability
 
 import (
 	"fmt"
+	"math/rand/v2"
 	"testing"
 
 	"github.com/qultgeo/qult/bearing"
@@ -184,4 +185,32 @@ func BenchmarkMonteCarloCompare(b *testing.B) {
 		}
 	}
 	b.ReportMetric(float64(n)*float64(b.N)/b.Elapsed().Seconds(), "samples/s")
+}
+
+// TestChunkAllocatesNothing guards the chunked hot loop: drawing a chunk,
+// mapping it and computing it in closed form allocate nothing.
+func TestChunkAllocatesNothing(t *testing.T) {
+	for _, p := range []Problem{benchProblem(t), benchCompareProblem(t)} {
+		pp, err := p.prepare()
+		if err != nil {
+			t.Fatal(err)
+		}
+		ev, _ := p.Model.NewEvaluator()
+		u, x := make([]float64, pp.n*chunk), make([]float64, pp.n*chunk)
+		lo, hi := make([]float64, pp.n), make([]float64, pp.n)
+		comp, tens := make([]float64, chunk), make([]float64, chunk)
+		fc := ev.(*fastModel).newChunk(x)
+		rng := rand.New(rand.NewPCG(1, 2))
+		if n := testing.AllocsPerRun(20, func() {
+			for k := range u {
+				u[k] = rng.NormFloat64()
+			}
+			pp.transformChunk(u, x, chunk, lo, hi)
+			if !fc.capacity(chunk, comp, tens, lo, hi) {
+				t.Fatal("the chunk was refused")
+			}
+		}); n != 0 {
+			t.Errorf("a chunk allocates %v times", n)
+		}
+	}
 }
