@@ -158,6 +158,13 @@ func (f *fastModel) newChunk(x []float64) *fastChunk {
 			}
 		}
 		cl.gamma, cl.gsat = or(xs[fdGamma], L.gamma), or(xs[fdGsat], L.gsat)
+		if L.gammaFromGsat {
+			// γ is γsat, sampled or not (no target sets γ itself).
+			cl.gamma = cl.gsat
+			if xs[fdGsat] != nil {
+				sampledClauses |= clGamma
+			}
+		}
 		cl.k, cl.beta, cl.alpha = or(xs[fdK], L.k), or(xs[fdBeta], L.beta), or(xs[fdAlpha], L.alpha)
 		cl.phi, cl.delta = or(xs[fdPhi], L.phi), or(xs[fdDelta], L.delta)
 		cl.xSu = xs[fdSu]
@@ -331,7 +338,7 @@ func (fc *fastChunk) checkLayer(cl *chunkLayer, c int) bool {
 		return false
 	}
 	if gsatS && !fc.within(cl.param[fdGsat], c, func(lo, hi float64) bool {
-		return lo > 0 && hi <= maxGamma && lo > f.gw && (gammaS || L.gamma == 0 || lo >= L.gamma)
+		return lo > 0 && hi <= maxGamma && lo > f.gw && (gammaS || L.gammaFromGsat || L.gamma == 0 || lo >= L.gamma)
 	}) {
 		return false
 	}

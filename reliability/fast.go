@@ -32,6 +32,10 @@ type fastLayer struct {
 	tanDelta       float64 // tan δ of the values as given; recomputed when δ or φ′ is sampled
 	alpha          float64
 	tension        float64 // the layer's tension factor
+	// gammaFromGsat: the layer gives γsat and neither γ nor phase data, so
+	// that above the water table γ is γsat (profile.New's rule), sampled
+	// or not.
+	gammaFromGsat bool
 }
 
 // fastModel is the closed form of PileModel (see there for when it
@@ -83,6 +87,16 @@ func (pm *PileModel) newFast() (*fastModel, bool) {
 		fl := fastLayer{top: float64(l.Top), bot: float64(l.Bottom), drained: l.Drainage == profile.Drained,
 			gamma: float64(l.UnitWeight), gsat: float64(l.SaturatedUnitWeight), phi: float64(l.Phi), c: float64(l.Cohesion),
 			su0: float64(l.SuTop), su1: float64(l.SuBottom), tension: tf.For(l.Drainage)}
+		ls := &g.Layers[i]
+		phaseGiven := ls.DryUnitWeight != 0 || ls.VoidRatio != 0 || ls.WaterContent != 0 || ls.Gs != 0 || ls.Saturation != 0
+		if phaseGiven && slices.ContainsFunc(pm.targets, func(t Target) bool {
+			return t.Layer == i && (t.Key == KeyUnitWeight || t.Key == KeySaturatedUnitWeight)
+		}) {
+			return nil, false // the phase relations tie the weights together
+		}
+		if !phaseGiven && ls.UnitWeight == 0 && ls.SaturatedUnitWeight != 0 {
+			fl.gamma, fl.gammaFromGsat = fl.gsat, true
+		}
 		lm := m.Layers[i]
 		// The layer's shaft factor. NewAnalysis checks every layer's method,
 		// on the pile or not: a layer with a sampled value must have one
@@ -227,6 +241,9 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 					L.gamma = v
 				} else {
 					L.gsat = v
+					if L.gammaFromGsat {
+						L.gamma = v
+					}
 				}
 			case cK:
 				L.k = v

@@ -141,7 +141,7 @@ func drawFastCase(rt *rapid.T, some bool) (*PileModel, []float64) {
 // the samples the full computation refuses.
 func TestPropFastMatchesFull(t *testing.T) {
 	rapid.Check(t, func(rt *rapid.T) {
-		pm, base := drawFastCase(rt, false)
+		pm, base := drawFastCase(rt, rapid.Bool().Draw(rt, "some"))
 		nl := len(pm.ground.Layers)
 		g := &general{pm: pm, layers: make([]profile.LayerSpec, nl), lm: make([]pile.LayerMethods, nl)}
 		x := make([]float64, len(base))
@@ -290,4 +290,37 @@ func TestPropChunkMatchesScalar(t *testing.T) {
 			rt.Fatalf("the chunk was refused, but the scalar path takes every sample")
 		}
 	})
+}
+
+// A layer that gives γsat alone weighs γsat above the water table in the
+// closed form as in the full computation (profile.New's rule), whether
+// γsat is sampled (the layer above the water table) or the water table is
+// sampled below the layer's top. Invented scenario; the full computation
+// is the oracle.
+func TestGammaFromSaturated(t *testing.T) {
+	spec := profile.Spec{WaterDepth: 8 * m, Layers: []profile.LayerSpec{
+		{Thickness: 6 * m, Drainage: profile.Drained, Phi: 32 * deg, SaturatedUnitWeight: 20 * kNm},
+		{Thickness: 30 * m, Drainage: profile.Drained, Phi: 34 * deg, SaturatedUnitWeight: 20 * kNm},
+	}}
+	lm := pile.LayerMethods{Shaft: shaft.BetaGiven{Beta: 0.3}, Tip: bearing.GivenNq{Nq: 40}}
+	p := pile.Pile{Section: pile.Section{Shape: pile.Circle, Diameter: 0.6 * m}, Length: 21 * m, Installation: pile.DrivenHigh}
+	targets := []Target{{0, KeySaturatedUnitWeight}, {1, KeySaturatedUnitWeight}, {-1, KeyWaterDepth}}
+	pm, err := NewPileModel(spec, p, pile.Methods{Layers: []pile.LayerMethods{lm, lm}}, targets)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !pm.Fast() {
+		t.Fatal("the closed form was not taken")
+	}
+	g := &general{pm: pm, layers: make([]profile.LayerSpec, 2), lm: make([]pile.LayerMethods, 2)}
+	for _, x := range [][]float64{{22e3, 20e3, 8}, {20e3, 21e3, 12}, {19e3, 21e3, 3}} {
+		want, werr := g.Capacity(x)
+		got, gerr := pm.fast.capacity(x)
+		if werr != nil || gerr != nil {
+			t.Fatalf("%v: full %v, closed form %v", x, werr, gerr)
+		}
+		if math.Abs(got.Compression-want.Compression) > 1e-9*want.Compression || math.Abs(got.Tension-want.Tension) > 1e-9*want.Tension {
+			t.Errorf("%v: closed form %+v, full %+v", x, got, want)
+		}
+	}
 }
