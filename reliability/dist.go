@@ -218,6 +218,29 @@ func (m *marginal) fromNormal(z float64) float64 {
 	panic("reliability: unknown distribution kind")
 }
 
+// bounds returns bounds on fromNormal's values (and transform's) for
+// normal scores z from zlo to zhi. The map never decreases, so the bounds
+// are the images of zlo and zhi: exact for μ + σz, a clamp (truncated
+// normal) and the quantile of a uniform (an affine map of Φ(z), which lies
+// in [0, 1]); widened by 1e-12 of the value where the map goes through exp,
+// whose rounding need not keep the order of neighbouring arguments.
+func (m *marginal) bounds(zlo, zhi float64) (lo, hi float64) {
+	switch {
+	case m.degenerate:
+		return m.mean, m.mean
+	case m.kind == Normal:
+		return m.mu + m.sigma*zlo, m.mu + m.sigma*zhi
+	case m.kind == LogNormal:
+		return math.Exp(m.mu+m.sigma*zlo) * (1 - 1e-12), math.Exp(m.mu+m.sigma*zhi) * (1 + 1e-12)
+	case m.kind == TruncatedNormal:
+		return m.lo, m.hi
+	case m.kind == Uniform:
+		u := distuv.Uniform{Min: m.lo, Max: m.hi}
+		return u.Quantile(0), u.Quantile(1)
+	}
+	return math.Inf(-1), math.Inf(1)
+}
+
 // FieldError is a bad input: the field path within the problem
 // ("params[2].sd", "correlation") and what is wrong with it.
 type FieldError struct {

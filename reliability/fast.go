@@ -32,6 +32,10 @@ type fastLayer struct {
 	tanDelta       float64 // tan δ of the values as given; recomputed when δ or φ′ is sampled
 	alpha          float64
 	tension        float64 // the layer's tension factor
+	// gammaFromGsat: the layer gives γsat and neither γ nor phase data, so
+	// that above the water table γ is γsat (profile.New's rule), sampled
+	// or not.
+	gammaFromGsat bool
 }
 
 // fastModel is the closed form of PileModel (see there for when it
@@ -83,6 +87,16 @@ func (pm *PileModel) newFast() (*fastModel, bool) {
 		fl := fastLayer{top: float64(l.Top), bot: float64(l.Bottom), drained: l.Drainage == profile.Drained,
 			gamma: float64(l.UnitWeight), gsat: float64(l.SaturatedUnitWeight), phi: float64(l.Phi), c: float64(l.Cohesion),
 			su0: float64(l.SuTop), su1: float64(l.SuBottom), tension: tf.For(l.Drainage)}
+		ls := &g.Layers[i]
+		phaseGiven := ls.DryUnitWeight != 0 || ls.VoidRatio != 0 || ls.WaterContent != 0 || ls.Gs != 0 || ls.Saturation != 0
+		if phaseGiven && slices.ContainsFunc(pm.targets, func(t Target) bool {
+			return t.Layer == i && (t.Key == KeyUnitWeight || t.Key == KeySaturatedUnitWeight)
+		}) {
+			return nil, false // the phase relations tie the weights together
+		}
+		if !phaseGiven && ls.UnitWeight == 0 && ls.SaturatedUnitWeight != 0 {
+			fl.gamma, fl.gammaFromGsat = fl.gsat, true
+		}
 		lm := m.Layers[i]
 		// The layer's shaft factor. NewAnalysis checks every layer's method,
 		// on the pile or not: a layer with a sampled value must have one
@@ -227,6 +241,9 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 					L.gamma = v
 				} else {
 					L.gsat = v
+					if L.gammaFromGsat {
+						L.gamma = v
+					}
 				}
 			case cK:
 				L.k = v
@@ -375,41 +392,71 @@ func (f *fastModel) capacity(x []float64) (Outcome, error) {
 
 // valid reports whether check passes, without building its message.
 func (f *fastModel) valid(L *fastLayer, zw float64) bool {
+	return f.clauses(L, f.dry || L.top < zw, !f.dry && L.bot > zw) == 0
+}
+
+// The clauses of valid, each a bit of what clauses returns, and the
+// values each reads: φ′; su; γ (and whether it is needed above the water
+// table); γsat (and whether it is needed below); γsat against γw; γ
+// against γsat; β; K; δ or δ/φ′; α.
+const (
+	clPhi = 1 << iota
+	clSu
+	clGamma
+	clGsat
+	clGsatWater
+	clGammaGsat
+	clBeta
+	clK
+	clDelta
+	clAlpha
+)
+
+// clauses returns the clauses of check that L fails, with γ needed above
+// the water table (needAbove) and γsat below it (needBelow).
+func (f *fastModel) clauses(L *fastLayer, needAbove, needBelow bool) uint16 {
 	const deg = math.Pi / 180
 	const maxGamma = 35e3
+	var bad uint16
 	if L.drained && !(L.phi > 0 && L.phi <= 50*deg) {
-		return false
+		bad |= clPhi
 	}
 	if L.su0 != 0 || L.su1 != 0 || !L.drained {
-		if !(L.su0 > 0) || !(L.su1 > 0) || !finite(L.su0) || !finite(L.su1) {
-			return false
-		}
-		if L.kind == fAlphaGiven && (L.su0 > 5e6 || L.su1 > 5e6) {
-			return false
+		if !(L.su0 > 0) || !(L.su1 > 0) || !finite(L.su0) || !finite(L.su1) ||
+			L.kind == fAlphaGiven && (L.su0 > 5e6 || L.su1 > 5e6) {
+			bad |= clSu
 		}
 	}
-	needAbove := f.dry || L.top < zw
-	needBelow := !f.dry && L.bot > zw
-	if (L.gamma != 0 || needAbove) && !(L.gamma > 0 && L.gamma <= maxGamma) ||
-		(L.gsat != 0 || needBelow) && !(L.gsat > 0 && L.gsat <= maxGamma) ||
-		L.gsat != 0 && L.gsat <= f.gw || L.gamma != 0 && L.gsat != 0 && L.gamma > L.gsat {
-		return false
+	if (L.gamma != 0 || needAbove) && !(L.gamma > 0 && L.gamma <= maxGamma) {
+		bad |= clGamma
+	}
+	if (L.gsat != 0 || needBelow) && !(L.gsat > 0 && L.gsat <= maxGamma) {
+		bad |= clGsat
+	}
+	if L.gsat != 0 && L.gsat <= f.gw {
+		bad |= clGsatWater
+	}
+	if L.gamma != 0 && L.gsat != 0 && L.gamma > L.gsat {
+		bad |= clGammaGsat
 	}
 	switch L.kind {
 	case fBetaGiven:
-		return L.beta >= 0 && L.beta <= 3
+		if !(L.beta >= 0 && L.beta <= 3) {
+			bad |= clBeta
+		}
 	case fBetaKD:
 		if !(L.k >= 0 && L.k <= 10) {
-			return false
+			bad |= clK
 		}
-		if L.deltaRatio {
-			return L.delta > 0 && L.delta <= 1
+		if L.deltaRatio && !(L.delta > 0 && L.delta <= 1) || !L.deltaRatio && !(L.delta >= 0 && L.delta <= 50*deg) {
+			bad |= clDelta
 		}
-		return L.delta >= 0 && L.delta <= 50*deg
 	case fAlphaGiven:
-		return L.alpha >= 0 && L.alpha <= 1.5
+		if !(L.alpha >= 0 && L.alpha <= 1.5) {
+			bad |= clAlpha
+		}
 	}
-	return true
+	return bad
 }
 
 // check refuses a sampled layer value that profile.New or the layer's

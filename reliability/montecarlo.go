@@ -140,8 +140,16 @@ func MonteCarlo(p Problem, opt Options) (*MCResult, error) {
 		wg.Add(1)
 		go func(ev Evaluator) {
 			defer wg.Done()
-			u := make([]float64, pp.n)
-			x := make([]float64, pp.n)
+			// A chunk of samples at a time: the draws of sample after
+			// sample in u, parameter j of sample s at x[j*chunk+s].
+			u := make([]float64, pp.n*chunk)
+			x := make([]float64, pp.n*chunk)
+			row := make([]float64, pp.n)
+			xlo, xhi := make([]float64, pp.n), make([]float64, pp.n)
+			var fc *fastChunk
+			if f, ok := ev.(*fastModel); ok {
+				fc = f.newChunk(x)
+			}
 			var pcg rand.PCG
 			rng := rand.New(&pcg)
 			for {
@@ -150,27 +158,43 @@ func MonteCarlo(p Problem, opt Options) (*MCResult, error) {
 					return
 				}
 				pcg.Seed(opt.Seed, uint64(b))
-				lo, hi := b*BlockSize, min((b+1)*BlockSize, n)
-				for i := lo; i < hi; i++ {
-					for j := range u {
-						u[j] = rng.NormFloat64()
+			chunks:
+				for lo, hi := b*BlockSize, min((b+1)*BlockSize, n); lo < hi; lo += chunk {
+					c := min(chunk, hi-lo)
+					for k := range u[:c*pp.n] {
+						u[k] = rng.NormFloat64()
 					}
-					pp.transform(u, x)
-					o, err := ev.Capacity(x)
-					if err == nil && (!finite(o.Compression) || !finite(o.Tension)) {
-						err = errors.New("the model gave no finite capacity")
-					}
-					if err != nil {
-						errs[b] = sampleError(i, p.Params, x, err)
-						for {
-							cur := errBlock.Load()
-							if int64(b) >= cur || errBlock.CompareAndSwap(cur, int64(b)) {
-								break
-							}
+					if fc != nil {
+						pp.transformChunk(u, x, c, xlo, xhi)
+						if fc.capacity(c, comp[lo:lo+c], tens[lo:lo+c], xlo, xhi) {
+							continue
 						}
-						break
+					} else {
+						pp.transformChunk(u, x, c, nil, nil)
 					}
-					comp[i], tens[i] = o.Compression, o.Tension
+					// One sample at a time: the general model, or a chunk
+					// with a sample the closed form may refuse.
+					for s := range c {
+						for j := range row {
+							row[j] = x[j*chunk+s]
+						}
+						i := lo + s
+						o, err := ev.Capacity(row)
+						if err == nil && (!finite(o.Compression) || !finite(o.Tension)) {
+							err = errors.New("the model gave no finite capacity")
+						}
+						if err != nil {
+							errs[b] = sampleError(i, p.Params, row, err)
+							for {
+								cur := errBlock.Load()
+								if int64(b) >= cur || errBlock.CompareAndSwap(cur, int64(b)) {
+									break
+								}
+							}
+							break chunks
+						}
+						comp[i], tens[i] = o.Compression, o.Tension
+					}
 				}
 			}
 		}(evals[w])
@@ -220,40 +244,30 @@ func (e *SampleError) Error() string {
 
 func (e *SampleError) Unwrap() error { return e.Err }
 
-// summarise sorts r in place and describes it.
+// summarise describes r (and may sort it in place). It reads the samples
+// in three passes where it can: the sum for the mean with the least and
+// greatest value; the sum of squares with the count below the load, the
+// histogram and the buckets of the order statistics; and their gathering.
 func summarise(r []float64, load float64, bins int) Summary {
 	n := len(r)
 	// Mean as r[0] + mean of the deviations from it: exact when every
-	// sample is equal, and less rounding for a narrow spread.
+	// sample is equal, and less rounding for a narrow spread. The least
+	// and greatest value by the order sortFloats sorts in.
 	var s float64
+	r0 := r[0]
+	klo, khi := floatKey(r0), floatKey(r0)
 	for _, v := range r {
-		s += v - r[0]
-	}
-	mean := r[0] + s/float64(n)
-	var ss float64
-	below := 0
-	for _, v := range r {
-		d := v - mean
-		ss += d * d
-		if v < load {
-			below++
+		s += v - r0
+		k := floatKey(v)
+		if k < klo {
+			klo = k
+		}
+		if k > khi {
+			khi = k
 		}
 	}
-	sd := 0.0
-	if n > 1 {
-		sd = math.Sqrt(ss / float64(n-1))
-	}
-	// The least and greatest value, and the order statistics the
-	// quantiles read: from buckets where that is quicker than sorting.
-	lo, hi := r[0], r[0]
-	if n >= 4096 {
-		klo, khi := floatKey(r[0]), floatKey(r[0])
-		for _, v := range r {
-			k := floatKey(v)
-			klo, khi = min(klo, k), max(khi, k)
-		}
-		lo, hi = keyFloat(klo), keyFloat(khi)
-	}
+	mean := r0 + s/float64(n)
+	lo, hi := keyFloat(klo), keyFloat(khi)
 	var ranks []int
 	for _, p := range summaryProbs() {
 		h := float64(n-1) * p
@@ -263,17 +277,74 @@ func summarise(r []float64, load float64, bins int) Summary {
 			ranks = append(ranks, k, k+1)
 		}
 	}
+	// The order statistics the quantiles read: from buckets where that
+	// is quicker than sorting (at least 4096 samples, not all equal).
+	var ob *orderBuckets
+	if n >= 4096 && lo < hi {
+		ob = new(orderBuckets)
+		if !ob.init(lo, hi) {
+			ob = nil
+		}
+	}
+	var hist []Bin
+	w := (hi - lo) / float64(bins)
+	if hi == lo {
+		hist = []Bin{{From: lo, To: hi, Count: n}}
+	} else {
+		hist = make([]Bin, bins)
+		for k := range hist {
+			hist[k] = Bin{From: lo + float64(k)*w, To: lo + float64(k+1)*w}
+		}
+		hist[bins-1].To = hi
+	}
+	var ss float64
+	below := 0
+	switch {
+	case ob != nil && hi != lo:
+		// The common case in one loop.
+		for _, v := range r {
+			d := v - mean
+			ss += d * d
+			if v < load {
+				below++
+			}
+			ob.start[ob.bucket(v)+1]++
+			hist[min(int((v-lo)/w), bins-1)].Count++
+		}
+	default:
+		for _, v := range r {
+			d := v - mean
+			ss += d * d
+			if v < load {
+				below++
+			}
+			if ob != nil {
+				ob.start[ob.bucket(v)+1]++
+			}
+			if hi != lo {
+				hist[min(int((v-lo)/w), bins-1)].Count++
+			}
+		}
+	}
+	sd := 0.0
+	if n > 1 {
+		sd = math.Sqrt(ss / float64(n-1))
+	}
 	at := func(k int) float64 { return r[k] }
-	if vals, ok := orderStatsIf(r, lo, hi, ranks); ok {
+	var vals map[int]float64
+	ok := false
+	if ob != nil {
+		vals, ok = ob.stats(r, ranks)
+	}
+	if ok {
 		at = func(k int) float64 { return vals[k] }
 	} else {
 		sortFloats(r)
-		lo, hi = r[0], r[n-1]
 	}
 	q := func(p float64) float64 { return quantileAt(n, at, p) }
 	out := Summary{Mean: mean, SD: sd, Min: lo, Max: hi,
 		P5: q(0.05), P50: q(0.5), P95: q(0.95),
-		SEMean: sd / math.Sqrt(float64(n))}
+		SEMean: sd / math.Sqrt(float64(n)), Histogram: hist}
 	if n > 1 {
 		out.SESD = sd / math.Sqrt(2*float64(n-1))
 	}
@@ -294,20 +365,6 @@ func summarise(r []float64, load float64, bins int) Summary {
 	for k := 0; k <= 100; k++ {
 		pk := float64(k) / 100
 		out.CDF = append(out.CDF, Quantile{P: pk, Value: q(pk)})
-	}
-	if hi == lo {
-		out.Histogram = []Bin{{From: lo, To: hi, Count: n}}
-		return out
-	}
-	w := (hi - lo) / float64(bins)
-	out.Histogram = make([]Bin, bins)
-	for k := range out.Histogram {
-		out.Histogram[k] = Bin{From: lo + float64(k)*w, To: lo + float64(k+1)*w}
-	}
-	out.Histogram[bins-1].To = hi
-	for _, v := range r {
-		k := min(int((v-lo)/w), bins-1)
-		out.Histogram[k].Count++
 	}
 	return out
 }
@@ -394,13 +451,4 @@ func summaryProbs() []float64 {
 		ps = append(ps, float64(k)/100)
 	}
 	return ps
-}
-
-// orderStatsIf is orderStats for at least 4096 samples not all equal;
-// below that, or where they are, sorting is as quick (ok false).
-func orderStatsIf(r []float64, lo, hi float64, ranks []int) (map[int]float64, bool) {
-	if len(r) < 4096 || !(lo < hi) {
-		return nil, false
-	}
-	return orderStats(r, lo, hi, ranks)
 }

@@ -1,6 +1,7 @@
 // Source of the numbers in this file: drawn samples of our own; the expected
-// values are the same samples sorted (the oracle sortFloats, then quantile),
-// so no published value is involved.
+// values are the same samples sorted (the oracle sortFloats, then quantile)
+// and plain loops over them for the moments and the bins, so no published
+// value is involved.
 
 package reliability
 
@@ -65,6 +66,30 @@ func TestSummariseOrderStats(t *testing.T) {
 			}
 			if count != n || got.Histogram[0].From != s[0] || got.Histogram[len(got.Histogram)-1].To != s[n-1] {
 				t.Fatalf("%s, n %d: histogram %v", name, n, got.Histogram)
+			}
+			// The moments and the bins, each in a plain loop of its own
+			// over the samples in their order.
+			var sum, ss float64
+			for _, v := range r {
+				sum += v - r[0]
+			}
+			mean := r[0] + sum/float64(n)
+			for _, v := range r {
+				ss += (v - mean) * (v - mean)
+			}
+			same("mean", got.Mean, mean)
+			same("sd", got.SD, math.Sqrt(ss/float64(n-1)))
+			if lo, hi := s[0], s[n-1]; lo != hi {
+				w := (hi - lo) / 40
+				bins := make([]int, 40)
+				for _, v := range r {
+					bins[min(int((v-lo)/w), 39)]++
+				}
+				for k, b := range got.Histogram {
+					if b.Count != bins[k] {
+						t.Fatalf("%s, n %d: bin %d holds %d, want %d", name, n, k, b.Count, bins[k])
+					}
+				}
 			}
 		}
 	}

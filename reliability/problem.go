@@ -155,6 +155,85 @@ func (p *prepared) transform(u, x []float64) {
 	}
 }
 
+// transformChunk is transform for the first c samples of a chunk: u holds
+// the normals of sample s at u[s*n:(s+1)*n] (in the order they are
+// drawn), x parameter j of sample s at x[j*chunk+s]. Each value gets the
+// bits transform gives it (the same operations in the same order). If lo
+// is not nil, lo[j] and hi[j] are set to bounds on parameter j's values (a
+// NaN in u, which NormFloat64 never gives, makes them NaN, which fails
+// every check).
+func (p *prepared) transformChunk(u, x []float64, c int, lo, hi []float64) {
+	n := p.n
+	if p.chol == nil {
+		for i := range n {
+			m := &p.m[i]
+			xs := x[i*chunk : i*chunk+c]
+			us := u[i:] // u[s*n+i], sample s
+			// The greatest |z|, tracked where the bounds depend on it: on
+			// the bits of |z|, whose order as integers is that of the
+			// values (and a maximum of integers needs no branch).
+			var zbits uint64 = 0x7ff << 52 // +Inf: no bound
+			switch m.direct {
+			case directNormal:
+				mu, sigma := m.mu, m.sigma
+				zbits = 0
+				for s := range xs {
+					z := us[s*n]
+					xs[s] = mu + sigma*z
+					zbits = max(zbits, math.Float64bits(z)&^(1<<63))
+				}
+			case directLogNormal:
+				mu, sigma := m.mu, m.sigma
+				zbits = 0
+				for s := range xs {
+					z := us[s*n]
+					xs[s] = math.Exp(mu + sigma*z)
+					zbits = max(zbits, math.Float64bits(z)&^(1<<63))
+				}
+			default:
+				for s := range xs {
+					xs[s] = m.fromNormal(us[s*n])
+				}
+			}
+			zm := math.Float64frombits(zbits)
+			if lo != nil {
+				lo[i], hi[i] = m.bounds(-zm, zm)
+			}
+		}
+		return
+	}
+	for i := range n {
+		row := p.chol[i*n : i*n+i+1]
+		xs := x[i*chunk : i*chunk+c]
+		for s := range xs {
+			z := 0.0
+			us := u[s*n : s*n+n]
+			for j, l := range row {
+				z += l * us[j]
+			}
+			xs[s] = p.m[i].fromNormal(z)
+		}
+	}
+	if lo == nil {
+		return
+	}
+	// Each score is a sum over the independent normals: bounded by the
+	// greatest |u| times the sum of |l| (widened for the rounding of the
+	// sums).
+	um := 0.0
+	for _, v := range u[:n*c] {
+		um = max(um, math.Abs(v))
+	}
+	for i := range n {
+		s := 0.0
+		for _, l := range p.chol[i*n : i*n+i+1] {
+			s += math.Abs(l)
+		}
+		zm := um * s * (1 + 1e-12)
+		lo[i], hi[i] = p.m[i].bounds(-zm, zm)
+	}
+}
+
 // means returns the parameters' means.
 func (p *prepared) means() []float64 {
 	x := make([]float64, p.n)
