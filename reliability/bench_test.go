@@ -202,9 +202,7 @@ func TestChunkAllocatesNothing(t *testing.T) {
 		fc := ev.(*fastModel).newChunk(x)
 		rng := rand.New(rand.NewPCG(1, 2))
 		if n := testing.AllocsPerRun(20, func() {
-			for k := range u {
-				u[k] = rng.NormFloat64()
-			}
+			pp.draw(rng, u)
 			pp.transformChunk(u, x, chunk, lo, hi)
 			if !fc.capacity(chunk, comp, tens, lo, hi) {
 				t.Fatal("the chunk was refused")

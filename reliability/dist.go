@@ -157,14 +157,27 @@ type marginal struct {
 	pa, dp     float64 // truncated normal: Φ(a) and Φ(b) − Φ(a)
 	mean, sd   float64 // moments of the variable
 	degenerate bool    // σ = 0: always mean
-	direct     int     // directNormal, directLogNormal: transform maps z itself; 0: through fromNormal
+	direct     int     // directNormal, directLogNormal: transform maps z itself; directUniform, directTruncated: a probability; 0: through fromNormal
 }
 
-// The marginals transform maps without calling fromNormal.
+// The marginals transform maps without calling fromNormal. Those of
+// directUniform and directTruncated (set only where no correlation is
+// given, see prepare) are drawn as a probability v, uniform on [0, 1),
+// instead of a normal score z, and mapped by fromProb: the same
+// distribution as F⁻¹(Φ(z)) without computing Φ, which costs more than
+// the rest of the sample's arithmetic for such a parameter.
 const (
 	directNormal = iota + 1
 	directLogNormal
+	directUniform
+	directTruncated
 )
+
+// drawsProb reports whether the marginal's draw is a probability (see
+// directUniform) rather than a standard normal score.
+func (m *marginal) drawsProb() bool {
+	return m.direct == directUniform || m.direct == directTruncated
+}
 
 func newMarginal(d Distribution) marginal {
 	m := marginal{kind: d.Kind, mu: d.Mean, sigma: d.SD, lo: d.Lower, hi: d.Upper}
@@ -216,6 +229,21 @@ func (m *marginal) fromNormal(z float64) float64 {
 		return distuv.Uniform{Min: m.lo, Max: m.hi}.Quantile(phi(z))
 	}
 	panic("reliability: unknown distribution kind")
+}
+
+// fromProb maps a probability v in [0, 1) onto a uniform or truncated
+// normal marginal: its quantile at v, as fromNormal computes it at v =
+// Φ(z). Other kinds are not drawn this way.
+func (m *marginal) fromProb(v float64) float64 {
+	switch m.kind {
+	case TruncatedNormal:
+		u := m.pa + v*m.dp
+		x := distuv.Normal{Mu: m.mu, Sigma: m.sigma}.Quantile(min(max(u, 1e-300), 1-1e-16))
+		return min(max(x, m.lo), m.hi)
+	case Uniform:
+		return distuv.Uniform{Min: m.lo, Max: m.hi}.Quantile(v)
+	}
+	panic("reliability: fromProb of a distribution drawn as a normal score")
 }
 
 // bounds returns bounds on fromNormal's values (and transform's) for

@@ -161,9 +161,7 @@ func MonteCarlo(p Problem, opt Options) (*MCResult, error) {
 			chunks:
 				for lo, hi := b*BlockSize, min((b+1)*BlockSize, n); lo < hi; lo += chunk {
 					c := min(chunk, hi-lo)
-					for k := range u[:c*pp.n] {
-						u[k] = rng.NormFloat64()
-					}
+					pp.draw(rng, u[:c*pp.n])
 					if fc != nil {
 						pp.transformChunk(u, x, c, xlo, xhi)
 						if fc.capacity(c, comp[lo:lo+c], tens[lo:lo+c], xlo, xhi) {

@@ -3,6 +3,7 @@ package reliability
 import (
 	"fmt"
 	"math"
+	"math/rand/v2"
 
 	"gonum.org/v1/gonum/mat"
 )
@@ -46,9 +47,10 @@ type Problem struct {
 // prepared is a validated problem: its marginals and the Cholesky factor
 // of its correlation matrix (nil for independent parameters).
 type prepared struct {
-	m    []marginal
-	chol []float64 // lower triangle, row-major n×n; nil: identity
-	n    int
+	m     []marginal
+	chol  []float64 // lower triangle, row-major n×n; nil: identity
+	n     int
+	probs int // the parameters drawn as a probability (marginal.drawsProb)
 }
 
 func (p *Problem) prepare() (*prepared, error) {
@@ -79,6 +81,21 @@ func (p *Problem) prepare() (*prepared, error) {
 		out.m = append(out.m, newMarginal(pr.Dist))
 	}
 	if p.Correlation == nil {
+		// Independent parameters: a uniform or truncated normal one is
+		// drawn as its probability (directUniform).
+		for i := range out.m {
+			m := &out.m[i]
+			switch {
+			case m.degenerate:
+			case m.kind == Uniform:
+				m.direct = directUniform
+			case m.kind == TruncatedNormal:
+				m.direct = directTruncated
+			}
+			if m.drawsProb() {
+				out.probs++
+			}
+		}
 		return out, nil
 	}
 	c := p.Correlation
@@ -121,9 +138,30 @@ func (p *Problem) prepare() (*prepared, error) {
 	return out, nil
 }
 
+// draw fills u with the draws of len(u)/n samples, sample after sample,
+// parameter after parameter: a standard normal score, or, for a parameter
+// drawn as a probability (marginal.drawsProb), a value uniform on [0, 1).
+func (p *prepared) draw(rng *rand.Rand, u []float64) {
+	if p.probs == 0 {
+		for k := range u {
+			u[k] = rng.NormFloat64()
+		}
+		return
+	}
+	for k := range u {
+		if p.m[k%p.n].drawsProb() {
+			u[k] = rng.Float64()
+		} else {
+			u[k] = rng.NormFloat64()
+		}
+	}
+}
+
 // transform maps independent standard normals u into the parameter
-// values x: z = L·u (correlated normal scores), x = F⁻¹(Φ(z)). It does
-// not allocate.
+// values x: z = L·u (correlated normal scores), x = F⁻¹(Φ(z)); where no
+// correlation is given, u[i] of a parameter drawn as a probability
+// (marginal.drawsProb) is that probability v, and x = F⁻¹(v). It does not
+// allocate.
 func (p *prepared) transform(u, x []float64) {
 	n := p.n
 	if p.chol == nil {
@@ -136,6 +174,8 @@ func (p *prepared) transform(u, x []float64) {
 				x[i] = m.mu + m.sigma*z
 			case directLogNormal:
 				x[i] = math.Exp(m.mu + m.sigma*z)
+			case directUniform, directTruncated:
+				x[i] = m.fromProb(z)
 			default:
 				x[i] = m.fromNormal(z)
 			}
@@ -156,8 +196,8 @@ func (p *prepared) transform(u, x []float64) {
 }
 
 // transformChunk is transform for the first c samples of a chunk: u holds
-// the normals of sample s at u[s*n:(s+1)*n] (in the order they are
-// drawn), x parameter j of sample s at x[j*chunk+s]. Each value gets the
+// the draws of sample s at u[s*n:(s+1)*n] (in the order they are drawn:
+// normal scores, or probabilities as transform says), x parameter j of sample s at x[j*chunk+s]. Each value gets the
 // bits transform gives it (the same operations in the same order). If lo
 // is not nil, lo[j] and hi[j] are set to bounds on parameter j's values (a
 // NaN in u, which NormFloat64 never gives, makes them NaN, which fails
@@ -189,6 +229,10 @@ func (p *prepared) transformChunk(u, x []float64, c int, lo, hi []float64) {
 					z := us[s*n]
 					xs[s] = math.Exp(mu + sigma*z)
 					zbits = max(zbits, math.Float64bits(z)&^(1<<63))
+				}
+			case directUniform, directTruncated:
+				for s := range xs {
+					xs[s] = m.fromProb(us[s*n])
 				}
 			default:
 				for s := range xs {

@@ -16,7 +16,9 @@ import (
 
 // TestTransformMatchesFromNormal: transform and transformChunk, which
 // write the maps out for independent parameters, give each parameter the
-// bits fromNormal gives it, for every kind (degenerate ones included).
+// bits fromNormal gives it, for every kind (degenerate ones included); a
+// parameter drawn as a probability v gives at v = Φ(z) the bits
+// fromNormal gives at z.
 func TestTransformMatchesFromNormal(t *testing.T) {
 	ds := []Distribution{
 		{Kind: Normal, Mean: 1.2, SD: 0.3},
@@ -26,12 +28,16 @@ func TestTransformMatchesFromNormal(t *testing.T) {
 		{Kind: TruncatedNormal, Mean: 0.6, SD: 0.05, Lower: 0.5, Upper: 0.7},
 		{Kind: Uniform, Lower: 0.5, Upper: 2.5},
 	}
-	pp := &prepared{n: len(ds)}
+	pr := Problem{Model: linear{1}}
 	for _, d := range ds {
-		if err := d.Validate(); err != nil {
-			t.Fatal(err)
-		}
-		pp.m = append(pp.m, newMarginal(d))
+		pr.Params = append(pr.Params, Param{Dist: d})
+	}
+	pp, err := pr.prepare()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if pp.probs != 2 {
+		t.Fatalf("%d parameters drawn as a probability, want the truncated normal and the uniform", pp.probs)
 	}
 	rng := rand.New(rand.NewPCG(5, 6))
 	n := len(ds)
@@ -41,11 +47,20 @@ func TestTransformMatchesFromNormal(t *testing.T) {
 		for i := range u {
 			u[i] = 3 * rng.NormFloat64()
 		}
-		pp.transform(u, x)
+		// A parameter drawn as a probability gets v = Φ(z): its value must
+		// be the bits fromNormal gives at z.
+		d := make([]float64, n)
+		for i, z := range u {
+			d[i] = z
+			if pp.m[i].drawsProb() {
+				d[i] = phi(z)
+			}
+		}
+		pp.transform(d, x)
 		// transformChunk, the same sample at s of a chunk of c.
 		c := 1 + k%chunk
 		s := k % c
-		copy(uc[s*n:], u)
+		copy(uc[s*n:], d)
 		pp.transformChunk(uc, xc, c, nil, nil)
 		for i := range u {
 			want := pp.m[i].fromNormal(u[i])
@@ -101,7 +116,11 @@ func TestPropBounds(t *testing.T) {
 		u, x := make([]float64, n*chunk), make([]float64, n*chunk)
 		scale := rapid.SampledFrom([]float64{1, 3, 8}).Draw(rt, "scale")
 		for k := range u[:c*n] {
-			u[k] = scale * rapid.Float64Range(-1, 1).Draw(rt, "u")
+			if pp.m[k%n].drawsProb() {
+				u[k] = rapid.Float64Range(0, 1-0x1p-53).Draw(rt, "v")
+			} else {
+				u[k] = scale * rapid.Float64Range(-1, 1).Draw(rt, "u")
+			}
 		}
 		lo, hi := make([]float64, n), make([]float64, n)
 		pp.transformChunk(u, x, c, lo, hi)
